@@ -1,0 +1,190 @@
+package org.strandbook.samplesite;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.OptionalDouble;
+
+import org.strandbook.site.Analyzer;
+import org.strandbook.site.Bend;
+import org.strandbook.site.CableSegment;
+import org.strandbook.site.ConnectorType;
+import org.strandbook.site.DetectorType;
+import org.strandbook.site.FiberType;
+import org.strandbook.site.InspectionGrade;
+import org.strandbook.site.Joint;
+import org.strandbook.site.LossBasis;
+import org.strandbook.site.MeasurementPoint;
+import org.strandbook.site.OhGrade;
+import org.strandbook.site.PathDirection;
+import org.strandbook.site.PathElement;
+import org.strandbook.site.PathLeg;
+import org.strandbook.site.ProbeKind;
+import org.strandbook.site.ProbeType;
+import org.strandbook.site.Site;
+import org.strandbook.site.WavelengthBand;
+
+/**
+ * The invented demo plant: "Saltmarsh Ridge Works", a polyol and solvent plant that exists nowhere.
+ * Every name, tag and number here is made up for the demonstration.
+ *
+ * <p>Ten measurement points on two analyzers, 2 m to 300 m of fiber each way, with the faults the
+ * generator injects: {@link Fault}.
+ */
+public final class DemoPlant {
+
+    public static final String SITE_NAME = "Saltmarsh Ridge Works";
+
+    /** What the generator does to a point's scans. */
+    public enum Fault {
+        NONE,
+        DIRTY_CONNECTOR,
+        TIGHT_BEND,
+        HIGH_OH_FIBER,
+        HYDROGEN_DARKENING,
+        BROKEN_FIBER
+    }
+
+    /** One demo point: its record, its two legs, and the fault its scans carry. */
+    public record DemoPoint(MeasurementPoint point, PathLeg send, PathLeg ret, Fault fault, String faultyElement) {
+    }
+
+    private final Site site = new Site(SITE_NAME, "Unit 40 – Polyols and solvent recovery", "A", 1.0);
+    private final List<Analyzer> analyzers = List.of(
+            new Analyzer("AZ-41", "Fourier-transform NIR analyzer, shelter S1", 1000, 2500, 8, 20.0,
+                    DetectorType.EXTENDED_INGAAS),
+            new Analyzer("AZ-42", "Short-wave NIR diode-array analyzer, shelter S1", 600, 1100, 4, 18.0,
+                    DetectorType.SILICON));
+
+    private final List<FiberType> fiberTypes = List.of(
+            new FiberType("LOH-200", "200/220 µm step-index silica, low OH", 200, 220, 245, 0.22,
+                    "FUSED_SILICA", OhGrade.LOW_OH, 0.5, List.of()),
+            new FiberType("LOH-400", "400/440 µm step-index silica, low OH", 400, 440, 480, 0.22,
+                    "FUSED_SILICA", OhGrade.LOW_OH, 0.5, List.of()),
+            new FiberType("LOH-600", "600/660 µm step-index silica, low OH", 600, 660, 710, 0.22,
+                    "FUSED_SILICA", OhGrade.LOW_OH, 0.5, List.of()),
+            new FiberType("HOH-200", "200/220 µm step-index silica, high OH (UV-visible grade)", 200, 220, 245,
+                    0.22, "FUSED_SILICA", OhGrade.HIGH_OH, 700, List.of()));
+
+    private final List<ConnectorType> connectorTypes = List.of(
+            new ConnectorType("SMA-A", "SMA 905 stainless ferrule, air gap", "SMA 905", 1.0, true),
+            new ConnectorType("SMA-B", "SMA 905 ceramic ferrule, air gap", "SMA 905", 0.8, true),
+            new ConnectorType("FC-X", "FC/PC ceramic ferrule", "FC", 0.5, false));
+
+    private final List<ProbeType> probeTypes = List.of(
+            new ProbeType("PT-TX5", "Transmission probe, 5 mm gap, sapphire windows", ProbeKind.TRANSMISSION,
+                    "SAPPHIRE", 4, 5.0, 3.0),
+            new ProbeType("PT-TF2", "Transflectance probe, 2 mm path, sapphire window and mirror",
+                    ProbeKind.TRANSFLECTANCE, "SAPPHIRE", 2, 4.0, 4.5),
+            new ProbeType("PT-DR", "Diffuse reflectance probe, sapphire window", ProbeKind.DIFFUSE_REFLECTANCE,
+                    "SAPPHIRE", 2, 0.0, 9.0));
+
+    private final List<DemoPoint> points = new ArrayList<>();
+
+    public DemoPlant() {
+        WavelengthBand ch2 = new WavelengthBand("C-H 1st overtone", 1650, 1780);
+        WavelengthBand comb = new WavelengthBand("C-H combination", 2250, 2380);
+        WavelengthBand ch3 = new WavelengthBand("C-H 2nd overtone", 1150, 1230);
+        WavelengthBand oh1 = new WavelengthBand("O-H 1st overtone", 1420, 1520);
+        WavelengthBand sw = new WavelengthBand("C-H 3rd overtone", 860, 940);
+
+        add(point("FT-4101", "Reactor R-410 feed", "R-410 inlet, level 2", "AZ-41", 1, "PT-TX5",
+                List.of(ch3, ch2), false, false, 40), 25, 25, "LOH-200", Fault.NONE);
+        add(point("FT-4102", "Reactor R-410 outlet", "R-410 outlet, level 1", "AZ-41", 2, "PT-TX5",
+                List.of(ch3, ch2), false, false, 85), 60, 60, "LOH-200", Fault.DIRTY_CONNECTOR);
+        add(point("FT-4103", "Column C-420 overhead", "C-420 top platform", "AZ-41", 3, "PT-TF2",
+                List.of(ch3, oh1), true, false, 95), 120, 120, "LOH-400", Fault.TIGHT_BEND);
+        add(point("FT-4104", "Blender M-430 discharge", "Shelter S1 wall, sample loop", "AZ-41", 4, "PT-TX5",
+                List.of(ch2, comb), false, false, 30), 2, 2, "LOH-200", Fault.NONE);
+        add(point("FT-4105", "Hydrogenator R-440", "R-440 bottom nozzle", "AZ-41", 5, "PT-TX5",
+                List.of(ch3, ch2), true, true, 165), 45, 45, "LOH-200", Fault.HYDROGEN_DARKENING);
+        add(point("FT-4106", "Tank T-450 rundown", "T-450 roof", "AZ-41", 6, "PT-TF2",
+                List.of(ch3, oh1, ch2), false, false, 25), 35, 35, "LOH-200", Fault.HIGH_OH_FIBER);
+        add(point("FT-4107", "Stripper C-460 bottoms", "C-460 skirt", "AZ-41", 7, "PT-TX5",
+                List.of(ch3, ch2), true, false, 140), 150, 150, "LOH-400", Fault.NONE);
+        add(point("FT-4108", "Dryer D-470 product", "D-470 discharge chute", "AZ-41", 8, "PT-DR",
+                List.of(ch3, oh1), false, false, 60), 80, 80, "LOH-600", Fault.BROKEN_FIBER);
+        add(point("SW-4201", "Solvent recovery tank T-480", "T-480 pipe rack, far end", "AZ-42", 1, "PT-TX5",
+                List.of(sw), true, false, 30), 300, 300, "LOH-200", Fault.NONE);
+        add(point("SW-4202", "Crystalliser K-490 slurry", "K-490 side wall", "AZ-42", 2, "PT-DR",
+                List.of(sw), false, false, 20), 70, 70, "LOH-600", Fault.NONE);
+    }
+
+    private static MeasurementPoint point(String tag, String service, String location, String analyzer, int channel,
+                                          String probe, List<WavelengthBand> bands, boolean hazardous,
+                                          boolean hydrogen, double processC) {
+        return new MeasurementPoint(tag, service, location, analyzer, channel, probe, bands, OptionalDouble.empty(),
+                hazardous, hydrogen, OptionalDouble.of(processC));
+    }
+
+    /**
+     * Each leg: a patch cord in the shelter panel (SMA joints at both ends), the field trunk to a
+     * junction box, and a short probe tail. The fault decides which element is spoiled.
+     */
+    private void add(MeasurementPoint p, double sendM, double returnM, String fiber, Fault fault) {
+        String t = p.tag().substring(p.tag().indexOf('-') + 1);
+        String faulty = switch (fault) {
+            case DIRTY_CONNECTOR -> "J2";
+            case TIGHT_BEND -> "C" + t + "-R2";
+            case HIGH_OH_FIBER -> "C" + t + "-S1";
+            case HYDROGEN_DARKENING -> "C" + t + "-S2";
+            case BROKEN_FIBER -> "C" + t + "-R2";
+            case NONE -> "";
+        };
+        PathLeg send = leg(p.tag(), PathDirection.SEND, t, "S", sendM, fiber, fault, faulty, 1);
+        PathLeg ret = leg(p.tag(), PathDirection.RETURN, t, "R", returnM, fiber, fault, faulty, 4);
+        points.add(new DemoPoint(p, send, ret, fault, faulty));
+    }
+
+    private static PathLeg leg(String tag, PathDirection dir, String t, String side, double lengthM, String fiber,
+                               Fault fault, String faulty, int firstJoint) {
+        double patchM = Math.min(2.0, lengthM / 4);
+        double tailM = Math.min(3.0, lengthM / 4);
+        double trunkM = lengthM - patchM - tailM;
+        String patchFiber = fault == Fault.HIGH_OH_FIBER && faulty.equals("C" + t + "-" + side + "1")
+                ? "HOH-200" : fiber;
+        List<PathElement> e = new ArrayList<>();
+        e.add(joint("J" + firstJoint, faulty));
+        e.add(segment("C" + t + "-" + side + "1", patchFiber, patchM, List.of()));
+        e.add(joint("J" + (firstJoint + 1), faulty));
+        List<Bend> trunkBends = faulty.equals("C" + t + "-" + side + "2") && fault == Fault.TIGHT_BEND
+                ? List.of(new Bend(18, 3), new Bend(150, 6))
+                : List.of(new Bend(150, 6));
+        e.add(segment("C" + t + "-" + side + "2", fiber, trunkM, trunkBends));
+        e.add(joint("J" + (firstJoint + 2), faulty));
+        e.add(segment("C" + t + "-" + side + "3", fiber, tailM, List.of()));
+        return new PathLeg(tag, dir, e);
+    }
+
+    private static Joint joint(String label, String faulty) {
+        InspectionGrade grade = label.equals(faulty) ? InspectionGrade.DIRTY : InspectionGrade.CLEAN;
+        return new Joint(label, "SMA-A", "SMA-A", grade, OptionalDouble.empty(), LossBasis.ASSUMED);
+    }
+
+    private static CableSegment segment(String id, String fiber, double lengthM, List<Bend> bends) {
+        return new CableSegment(id, fiber, lengthM, bends);
+    }
+
+    public Site site() {
+        return site;
+    }
+
+    public List<Analyzer> analyzers() {
+        return analyzers;
+    }
+
+    public List<FiberType> fiberTypes() {
+        return fiberTypes;
+    }
+
+    public List<ConnectorType> connectorTypes() {
+        return connectorTypes;
+    }
+
+    public List<ProbeType> probeTypes() {
+        return probeTypes;
+    }
+
+    public List<DemoPoint> points() {
+        return List.copyOf(points);
+    }
+}
