@@ -1,0 +1,130 @@
+package org.strandbook.evaluation;
+
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+
+import org.strandbook.site.ScanKind;
+import org.strandbook.site.ScanRecord;
+
+/**
+ * Which reference and dark scans belong to which loop scan. The rule is explicit and printed with
+ * every result, because a wrong pairing silently shifts the whole loss spectrum:
+ *
+ * <ul>
+ *   <li>only scans of the same measurement point are paired;</li>
+ *   <li>the reference is the reference scan nearest in time to the loop, within the window
+ *       (default 12 h, one visit), an earlier one winning a tie;</li>
+ *   <li>each of loop and reference gets the dark scan nearest in time to it within the window,
+ *       preferring a dark of the same integration time when integration times are recorded;</li>
+ *   <li>a loop scan with no reference or no dark in the window is not evaluated: it is reported
+ *       as unpaired, never guessed.</li>
+ * </ul>
+ */
+public final class ScanPairing {
+
+    /** Common practice: reference and dark belong to the same visit as the loop scan. */
+    public static final Duration DEFAULT_WINDOW = Duration.ofHours(12);
+
+    private final Duration window;
+
+    private ScanPairing(Duration window) {
+        if (window.isNegative() || window.isZero()) {
+            throw new IllegalArgumentException("pairing window must be positive, was " + window);
+        }
+        this.window = window;
+    }
+
+    public static ScanPairing withDefaults() {
+        return new ScanPairing(DEFAULT_WINDOW);
+    }
+
+    public ScanPairing withWindow(Duration newWindow) {
+        return new ScanPairing(newWindow);
+    }
+
+    public Duration window() {
+        return window;
+    }
+
+    /** The rule in one line, for reports. */
+    public String describe() {
+        return String.format(Locale.ROOT, "same point; nearest reference and nearest dark within %d h of each scan;"
+                + " darks of equal integration time preferred", window.toHours());
+    }
+
+    /** Pairs every loop scan of one point; {@code scans} may hold all kinds, in any order. */
+    public Pairings pair(List<ScanRecord> scans) {
+        List<ScanRecord> loops = ofKind(scans, ScanKind.LOOP);
+        List<ScanRecord> refs = ofKind(scans, ScanKind.REFERENCE);
+        List<ScanRecord> darks = ofKind(scans, ScanKind.DARK);
+        List<ScanPair> paired = new ArrayList<>();
+        List<UnpairedScan> unpaired = new ArrayList<>();
+        for (ScanRecord loop : loops) {
+            Optional<ScanRecord> ref = nearest(refs, loop, false);
+            if (ref.isEmpty()) {
+                unpaired.add(new UnpairedScan(loop, "no reference scan of " + loop.pointTag() + " within "
+                        + window.toHours() + " h of the loop scan taken " + loop.takenAt()));
+                continue;
+            }
+            Optional<ScanRecord> loopDark = nearest(darks, loop, true);
+            Optional<ScanRecord> refDark = nearest(darks, ref.get(), true);
+            if (loopDark.isEmpty() || refDark.isEmpty()) {
+                ScanRecord lacking = loopDark.isEmpty() ? loop : ref.get();
+                unpaired.add(new UnpairedScan(loop, "no dark scan of " + loop.pointTag() + " within "
+                        + window.toHours() + " h of the " + lacking.kind().word() + " scan taken " + lacking.takenAt()));
+                continue;
+            }
+            paired.add(new ScanPair(loop, ref.get(), loopDark.get(), refDark.get(), describe()));
+        }
+        return new Pairings(paired, unpaired);
+    }
+
+    private Optional<ScanRecord> nearest(List<ScanRecord> candidates, ScanRecord to, boolean matchIntegration) {
+        Comparator<ScanRecord> order = Comparator.comparing((ScanRecord c) -> distance(c, to))
+                .thenComparing(ScanRecord::takenAt);
+        if (matchIntegration) {
+            order = Comparator.comparing((ScanRecord c) -> !sameIntegration(c, to)).thenComparing(order);
+        }
+        return candidates.stream()
+                .filter(c -> c.pointTag().equals(to.pointTag()))
+                .filter(c -> distance(c, to).compareTo(window) <= 0)
+                .min(order);
+    }
+
+    private static boolean sameIntegration(ScanRecord a, ScanRecord b) {
+        double ia = a.conditions().integrationMs();
+        double ib = b.conditions().integrationMs();
+        return ia == 0 || ib == 0 || Math.abs(ia - ib) <= 1e-9 * Math.max(ia, ib);
+    }
+
+    private static Duration distance(ScanRecord a, ScanRecord b) {
+        return Duration.between(a.takenAt(), b.takenAt()).abs();
+    }
+
+    private static List<ScanRecord> ofKind(List<ScanRecord> scans, ScanKind kind) {
+        return scans.stream().filter(s -> s.kind() == kind)
+                .sorted(Comparator.comparing(ScanRecord::takenAt)).toList();
+    }
+
+    /** A loop scan that could not be paired, and why. */
+    public record UnpairedScan(ScanRecord loop, String reason) {
+    }
+
+    /** Every loop scan of a point, paired or not, in time order. */
+    public record Pairings(List<ScanPair> paired, List<UnpairedScan> unpaired) {
+
+        public Pairings {
+            paired = List.copyOf(paired);
+            unpaired = List.copyOf(unpaired);
+        }
+
+        /** The most recent paired loop scan, if any. */
+        public Optional<ScanPair> latest() {
+            return paired.isEmpty() ? Optional.empty() : Optional.of(paired.get(paired.size() - 1));
+        }
+    }
+}
