@@ -15,6 +15,8 @@ import picocli.CommandLine.Command;
         description = "Commissioning and maintenance workbook for the fiber-optic light paths of process spectrometers.",
         subcommands = {
             CommandLine.HelpCommand.class,
+            FiberCommand.class,
+            BenchCommand.class,
         })
 public final class StrandbookCommand implements Runnable {
 

@@ -1,0 +1,28 @@
+package org.strandbook.app.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+
+import org.junit.jupiter.api.Test;
+
+class BenchCommandTest {
+
+    @Test
+    void opticsBenchEndsWithTheRatioLine() {
+        // every bench prints `ratio: R` last (Strandbook benchmark rule); tiny run, no speed asserted
+        CliRun run = CliRun.of("bench", "optics", "--paths", "5", "--trial-ms", "5");
+        assertEquals(0, run.exitCode(), run.err());
+        List<String> lines = run.out().lines().toList();
+        assertTrue(lines.get(lines.size() - 1).matches("ratio: \\d+\\.\\d\\d"), run.out());
+    }
+
+    @Test
+    void benchWithoutABenchmarkIsWrongUsage() {
+        // a parent command needs a subcommand
+        CliRun run = CliRun.of("bench");
+        assertEquals(2, run.exitCode());
+        assertTrue(run.err().contains("optics"), run.err());
+    }
+}

@@ -1,0 +1,143 @@
+package org.strandbook.app.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+
+class FiberCommandTest {
+
+    private static final String[] EXAMPLE = {"fiber", "--core-um", "200", "--clad-um", "220", "--na", "0.22",
+        "--oh-ppm", "5", "--length-m", "30", "--wavelengths-nm", "1000,1383,2350", "--json"};
+
+    private static final List<String> FIELDS = List.of("wavelength_nm", "attenuation_db_per_km", "fiber_loss_db",
+            "fresnel_loss_db_per_face", "bend_loss_db", "total_loss_db", "transmittance");
+
+    @Test
+    void jsonHasEveryFieldForEveryWavelength() {
+        // the output contract of `strandbook fiber --json`
+        CliRun run = CliRun.of(EXAMPLE);
+        assertEquals(0, run.exitCode(), run.err());
+        assertTrue(run.out().startsWith("{\"points\":[{"), run.out());
+        for (String field : FIELDS) {
+            assertEquals(3, values(run.out(), field).size(), field);
+        }
+        assertEquals(List.of(1000.0, 1383.0, 2350.0), values(run.out(), "wavelength_nm"));
+    }
+
+    @Test
+    void totalIsTwoFacesPlusFiberPlusBendAndTransmittanceFollowsFromIt() {
+        // one pass = entry face + fiber + exit face + bend; T = 10^(−L/10) (definition of the decibel)
+        CliRun run = CliRun.of("fiber", "--core-um", "200", "--clad-um", "220", "--na", "0.22", "--oh-ppm", "5",
+                "--length-m", "30", "--bend-radius-mm", "60", "--bend-count", "2", "--wavelengths-nm", "850,1300", "--json");
+        assertEquals(0, run.exitCode(), run.err());
+        for (int i = 0; i < 2; i++) {
+            double face = values(run.out(), "fresnel_loss_db_per_face").get(i);
+            double fiber = values(run.out(), "fiber_loss_db").get(i);
+            double bend = values(run.out(), "bend_loss_db").get(i);
+            double total = values(run.out(), "total_loss_db").get(i);
+            assertTrue(bend > 0);
+            assertEquals(2 * face + fiber + bend, total, 1e-8);
+            assertEquals(Math.pow(10, -total / 10), values(run.out(), "transmittance").get(i), 1e-9);
+            assertEquals(values(run.out(), "attenuation_db_per_km").get(i) * 30 / 1000, fiber, 1e-8);
+        }
+    }
+
+    @Test
+    void silicaFaceLossIsAboutOneAndAHalfTenthsOfADecibel() {
+        // R ≈ 3.38 % at 1000 nm (Malitson 1965 index, Fresnel) → −10·log10(1 − R) ≈ 0.149 dB
+        CliRun run = CliRun.of(EXAMPLE);
+        assertEquals(0.149, values(run.out(), "fresnel_loss_db_per_face").get(0), 0.001);
+    }
+
+    @Test
+    void infraredEdgeMakesThirtyMetresCostTensOfDecibelsAt2350() {
+        // ~1 dB/m near 2350 nm (common practice): 30 m → on the order of 30 dB
+        CliRun run = CliRun.of(EXAMPLE);
+        double fiber = values(run.out(), "fiber_loss_db").get(2);
+        assertTrue(fiber > 10 && fiber < 90, "fiber loss " + fiber);
+    }
+
+    @Test
+    void wavenumbersGiveTheSameResultAsTheirWavelengths() {
+        // 10000 cm-1 = 1000 nm (ISO 80000-7)
+        CliRun nm = CliRun.of("fiber", "--core-um", "200", "--clad-um", "220", "--na", "0.22", "--length-m", "30",
+                "--wavelengths-nm", "1000", "--json");
+        CliRun cm = CliRun.of("fiber", "--core-um", "200", "--clad-um", "220", "--na", "0.22", "--length-m", "30",
+                "--wavenumbers-cm", "10000", "--json");
+        assertEquals(values(nm.out(), "total_loss_db").get(0), values(cm.out(), "total_loss_db").get(0), 1e-9);
+    }
+
+    @Test
+    void tableShowsUnitsAndTheUsableWindows() {
+        // a technician reads units in every header and the windows for the stated allowance
+        CliRun run = CliRun.of("fiber", "--core-um", "200", "--clad-um", "220", "--na", "0.22", "--oh-ppm", "5",
+                "--length-m", "30", "--wavelengths-nm", "1000,1383,2350");
+        assertEquals(0, run.exitCode(), run.err());
+        assertTrue(run.out().contains("(nm)") && run.out().contains("(dB/km)") && run.out().contains("(dB)"), run.out());
+        assertTrue(run.out().contains("Usable windows (total ≤ 3 dB, 1 nm grid over 400-2500 nm): "), run.out());
+        // the 1383 nm OH band at 5 ppm costs ~9 dB over 30 m, so it splits the windows around it
+        assertTrue(run.out().matches("(?s).*\\d+–13\\d\\d nm, 1[34]\\d\\d–\\d+ nm.*"), run.out());
+    }
+
+    // Bad input: one line on stderr, exit status 2, never a stack trace (Strandbook CLI rules).
+    @ParameterizedTest
+    @CsvSource(delimiter = '|', textBlock = """
+            --length-m|-3
+            --na|1.0
+            --na|0
+            --na|abc
+            --core-um|-200
+            --clad-um|150
+            --oh-ppm|-1
+            --allowed-loss-db|-1
+            --bend-radius-mm|0
+            --length-m|NaN
+            --wavelengths-nm|3500
+            --wavelengths-nm|1000,x
+            --wavelengths-nm|150
+            --frobnicate|1
+            """)
+    void badInputExitsWithUsageStatusAndOneLineWithoutStackTrace(String option, String value) {
+        List<String> args = new ArrayList<>(List.of("fiber", "--core-um", "200", "--clad-um", "220", "--na", "0.22",
+                "--length-m", "30", "--wavelengths-nm", "1000"));
+        int at = args.indexOf(option);
+        if (at >= 0) {
+            args.set(at + 1, value);
+        } else {
+            args.add(option);
+            args.add(value);
+        }
+        CliRun run = CliRun.of(args.toArray(String[]::new));
+        assertEquals(2, run.exitCode(), run.err());
+        assertTrue(run.err().startsWith("strandbook: "), run.err());
+        assertFalse(run.err().contains("Exception") || run.err().contains("\tat "), run.err());
+        assertTrue(run.err().lines().count() <= 2, run.err());
+        assertEquals("", run.out());
+    }
+
+    @Test
+    void wavelengthsAndWavenumbersTogetherAreWrongUsage() {
+        // the two axes exclude each other
+        CliRun run = CliRun.of("fiber", "--core-um", "200", "--clad-um", "220", "--na", "0.22", "--length-m", "30",
+                "--wavelengths-nm", "1000", "--wavenumbers-cm", "10000");
+        assertEquals(2, run.exitCode());
+    }
+
+    private static List<Double> values(String json, String field) {
+        Matcher m = Pattern.compile("\"" + field + "\":(-?[0-9.]+(?:[eE][-+]?[0-9]+)?)").matcher(json);
+        List<Double> out = new ArrayList<>();
+        while (m.find()) {
+            out.add(Double.parseDouble(m.group(1)));
+        }
+        return out;
+    }
+}

@@ -1,0 +1,176 @@
+package org.strandbook.optics.attenuation;
+
+import java.util.List;
+
+import org.strandbook.optics.WavelengthGrid;
+import org.strandbook.optics.Wavenumber;
+
+/**
+ * The individual spectral shapes that make up silica fiber attenuation, as public pure functions so
+ * that fault diagnosis can fit them to a measured excess-loss spectrum.
+ *
+ * <p>Band shapes: OH and H₂ bands are Gaussians in wavenumber (vibrational overtones and
+ * combinations are nearly symmetric on an energy axis); radiation-induced colour-centre bands are
+ * Gaussians in photon energy. Gaussian wings fall faster than real band wings, which keeps
+ * neighbouring bands from leaking into each other's windows; widths are modelling choices.
+ */
+public final class AttenuationShapes {
+
+    // declared first: the radiation normalisation below is computed during class initialisation
+    private static final double FOUR_LN2 = 4.0 * Math.log(2.0);
+
+    /** hc in eV·nm, for photon energy E = hc/λ (CODATA 2018 exact SI value, 1239.841984… eV·nm). */
+    public static final double HC_EV_NM = 1239.8419843320026;
+
+    /**
+     * The OH bands of silica with peak dB/km per ppm OH (by weight) and widths. Peak sources:
+     * 945 nm ≈ 1 dB/km/ppm (Keck, Maurer and Schultz, Appl. Phys. Lett. 22, 307 (1973));
+     * 1383 nm 62.7 dB/km/ppm (Humbach et al., J. Non-Cryst. Solids 203, 19 (1996));
+     * 1240 nm ≈ 3 (from memory, 2.5–4 quoted); 2210 nm 150 (from memory, "order 10²");
+     * 2720 nm ≈ 10,000 (derived from ε = 77.5 L·mol⁻¹·cm⁻¹, Stevenson and Jack, Appl. Spectrosc. 25,
+     * 378). Widths (FWHM, cm⁻¹) are from memory of published spectra and serve the shape only.
+     */
+    public static final List<OhBand> SILICA_OH_BANDS = List.of(
+            new OhBand(945, 1.0, 220),
+            new OhBand(1240, 3.0, 230),
+            new OhBand(1383, 62.7, 160),
+            new OhBand(2210, 150.0, 120),
+            new OhBand(2720, 10_000.0, 110));
+
+    /** Centre of the first-overtone H₂ band (nm). */
+    public static final double HYDROGEN_BAND_1240_NM = 1240;
+    /** Centre of the fundamental H₂ band (nm). */
+    public static final double HYDROGEN_BAND_2420_NM = 2420;
+    private static final double HYDROGEN_1240_FWHM_CM = 150;
+    private static final double HYDROGEN_2420_FWHM_CM = 100;
+
+    /** Photon energy (eV) of the non-bridging oxygen hole centre band, ≈ 630 nm. */
+    public static final double NBOHC_BAND_EV = 1.97;
+    /** Reference wavelength at which {@link #radiationDarkeningShape(double)} equals 1. */
+    public static final double RADIATION_REFERENCE_NM = HC_EV_NM / NBOHC_BAND_EV;
+
+    // visible/NIR colour-centre bands (energy eV, FWHM eV, relative amplitude): NBOHC 1.97 eV and
+    // self-trapped holes 1.63 and 1.88 eV (energies from memory: Girard et al., IEEE Trans. Nucl.
+    // Sci. 60 (2013)); amplitudes and widths are a modelling choice
+    private static final double[][] RADIATION_BANDS = {
+        {1.63, 0.35, 0.4},
+        {1.88, 0.35, 0.4},
+        {NBOHC_BAND_EV, 0.17, 1.0},
+    };
+    // the visible tails of the UV bands (E′ 5.8 eV, NBOHC 4.8 eV) as an exponential in energy
+    private static final double RADIATION_TAIL_WIDTH_EV = 0.4;
+    private static final double RADIATION_NORMALISATION = 1.0 / rawRadiationShape(NBOHC_BAND_EV);
+
+
+    private AttenuationShapes() {
+    }
+
+    /** Photon energy in eV of a vacuum wavelength in nm. */
+    public static double photonEnergyEv(double wavelengthNm) {
+        return HC_EV_NM / wavelengthNm;
+    }
+
+    /** Unit-peak Gaussian in wavenumber centred on {@code centerNm} with FWHM {@code fwhmCm}. */
+    public static double gaussianInWavenumber(double wavelengthNm, double centerNm, double fwhmCm) {
+        double d = (Wavenumber.wavenumberCmFromNm(wavelengthNm) - Wavenumber.wavenumberCmFromNm(centerNm)) / fwhmCm;
+        return Math.exp(-FOUR_LN2 * d * d);
+    }
+
+    /** Unit-peak Gaussian in photon energy centred on {@code centerEv} with FWHM {@code fwhmEv}. */
+    public static double gaussianInPhotonEnergy(double wavelengthNm, double centerEv, double fwhmEv) {
+        double d = (photonEnergyEv(wavelengthNm) - centerEv) / fwhmEv;
+        return Math.exp(-FOUR_LN2 * d * d);
+    }
+
+    /**
+     * Rayleigh scattering α = A/λ⁴ in dB/km, λ in µm, A in dB·km⁻¹·µm⁴ (≈ 0.75 for a pure-silica
+     * core, from memory: Ohashi et al., J. Lightwave Technol. 10, 539 (1992)).
+     */
+    public static double rayleighDbPerKm(double wavelengthNm, double coefficientDbKmUm4) {
+        double um = wavelengthNm * 1e-3;
+        double um2 = um * um;
+        return coefficientDbKmUm4 / (um2 * um2);
+    }
+
+    /** Infrared multiphonon edge α = A·exp(−B/λ) in dB/km, λ and B in µm. */
+    public static double infraredEdgeDbPerKm(double wavelengthNm, double aDbPerKm, double bUm) {
+        return aDbPerKm * Math.exp(-bUm / (wavelengthNm * 1e-3));
+    }
+
+    /** Ultraviolet (Urbach) tail α = A·exp(B/λ) in dB/km, λ and B in µm. */
+    public static double ultravioletTailDbPerKm(double wavelengthNm, double aDbPerKm, double bUm) {
+        return aDbPerKm * Math.exp(bUm / (wavelengthNm * 1e-3));
+    }
+
+    /** OH absorption per ppm OH (dB/km/ppm) from {@link #SILICA_OH_BANDS} at one wavelength. */
+    public static double ohAbsorptionDbPerKmPerPpm(double wavelengthNm) {
+        return ohAbsorptionDbPerKmPerPpm(wavelengthNm, SILICA_OH_BANDS);
+    }
+
+    /** OH absorption per ppm OH (dB/km/ppm) of the given bands at one wavelength. */
+    public static double ohAbsorptionDbPerKmPerPpm(double wavelengthNm, List<OhBand> bands) {
+        double sum = 0;
+        for (OhBand band : bands) {
+            sum += band.dbPerKmPerPpm(wavelengthNm);
+        }
+        return sum;
+    }
+
+    /** OH absorption per ppm OH (dB/km/ppm) from {@link #SILICA_OH_BANDS} on a grid. */
+    public static double[] ohAbsorptionDbPerKmPerPpm(WavelengthGrid grid) {
+        double[] s = new double[grid.size()];
+        for (int i = 0; i < s.length; i++) {
+            s[i] = ohAbsorptionDbPerKmPerPpm(grid.wavelengthNm(i));
+        }
+        return s;
+    }
+
+    /**
+     * Shape of the molecular-hydrogen loss: 1 at the 1240 nm peak, {@code relativePeak2420} at the
+     * 2420 nm peak, Gaussians in wavenumber. Band positions from the H₂-in-fiber literature
+     * (Electron. Lett. 1983 and J. Lightwave Technol. 1985 abstracts; IEC TR 62690 summary); the
+     * band ratio and widths are parameters, not claims.
+     */
+    public static double hydrogenBandShape(double wavelengthNm, double relativePeak2420) {
+        return gaussianInWavenumber(wavelengthNm, HYDROGEN_BAND_1240_NM, HYDROGEN_1240_FWHM_CM)
+                + relativePeak2420 * gaussianInWavenumber(wavelengthNm, HYDROGEN_BAND_2420_NM, HYDROGEN_2420_FWHM_CM);
+    }
+
+    /** {@link #hydrogenBandShape(double, double)} on a grid. */
+    public static double[] hydrogenBandShape(WavelengthGrid grid, double relativePeak2420) {
+        double[] s = new double[grid.size()];
+        for (int i = 0; i < s.length; i++) {
+            s[i] = hydrogenBandShape(grid.wavelengthNm(i), relativePeak2420);
+        }
+        return s;
+    }
+
+    /**
+     * Shape of radiation-induced darkening of a silica core (dimensionless, 1 at
+     * {@link #RADIATION_REFERENCE_NM} ≈ 629 nm): Gaussian colour-centre bands in photon energy
+     * (NBOHC 1.97 eV, self-trapped holes 1.63 and 1.88 eV) on the exponential visible tail of the
+     * UV defect bands, so it rises toward short wavelengths. For fitting an amplitude to measured
+     * excess loss; it predicts no dose response.
+     */
+    public static double radiationDarkeningShape(double wavelengthNm) {
+        return RADIATION_NORMALISATION * rawRadiationShape(photonEnergyEv(wavelengthNm));
+    }
+
+    /** {@link #radiationDarkeningShape(double)} on a grid. */
+    public static double[] radiationDarkeningShape(WavelengthGrid grid) {
+        double[] s = new double[grid.size()];
+        for (int i = 0; i < s.length; i++) {
+            s[i] = radiationDarkeningShape(grid.wavelengthNm(i));
+        }
+        return s;
+    }
+
+    private static double rawRadiationShape(double energyEv) {
+        double sum = Math.exp((energyEv - NBOHC_BAND_EV) / RADIATION_TAIL_WIDTH_EV);
+        for (double[] band : RADIATION_BANDS) {
+            double d = (energyEv - band[0]) / band[1];
+            sum += band[2] * Math.exp(-FOUR_LN2 * d * d);
+        }
+        return sum;
+    }
+}

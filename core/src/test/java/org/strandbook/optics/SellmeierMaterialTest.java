@@ -1,0 +1,60 @@
+package org.strandbook.optics;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+
+class SellmeierMaterialTest {
+
+    @Test
+    void fusedSilicaMatchesMalitsonsPublishedIndexAtTheHeliumDLine() {
+        // I. H. Malitson, J. Opt. Soc. Am. 55, 1205 (1965): n(0.5876 µm) = 1.45846
+        assertEquals(1.45846, SellmeierMaterial.FUSED_SILICA.refractiveIndex(587.6), 1e-5);
+    }
+
+    @Test
+    void fusedSilicaHasTheHandbookAbbeNumber() {
+        // Abbe number V_d = (n_d − 1)/(n_F − n_C) ≈ 67.8 for fused silica (from memory: optical glass handbooks)
+        double nd = SellmeierMaterial.FUSED_SILICA.refractiveIndex(587.6);
+        double nf = SellmeierMaterial.FUSED_SILICA.refractiveIndex(486.1);
+        double nc = SellmeierMaterial.FUSED_SILICA.refractiveIndex(656.3);
+        assertEquals(67.8, (nd - 1) / (nf - nc), 0.1);
+    }
+
+    // Measured ordinary-ray indices of synthetic sapphire at 20 °C: I. H. Malitson and M. J. Dodge,
+    // J. Opt. Soc. Am. 62, 1405 (1972), as reproduced in widely copied sapphire index tables (not
+    // re-read in the original); the Sellmeier fit reproduces them to about 1e-4.
+    @ParameterizedTest
+    @CsvSource(textBlock = """
+            265.20,  1.83360
+            361.05,  1.79450
+            579.06,  1.76871
+            852.12,  1.75885
+            1128.66, 1.75339
+            1529.52, 1.74660
+            1813.07, 1.74144
+            2249.29, 1.73232
+            4255.30, 1.66371
+            """)
+    void sapphireOrdinaryRayMatchesMalitsonAndDodge(double nm, double measured) {
+        assertEquals(measured, SellmeierMaterial.SAPPHIRE_ORDINARY.refractiveIndex(nm), 1.2e-4);
+    }
+
+    @Test
+    void indexOutsideTheFittedRangeIsRefusedWithTheRangeInTheMessage() {
+        // Malitson 1965 fitted 0.21–3.71 µm only
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> SellmeierMaterial.FUSED_SILICA.refractiveIndex(4000));
+        assertTrue(e.getMessage().contains("210–3710 nm"), e.getMessage());
+    }
+
+    @Test
+    void airIsOneAtEveryWavelength() {
+        // taken as vacuum index by design (see ConstantIndexMaterial.AIR)
+        assertEquals(1.0, ConstantIndexMaterial.AIR.refractiveIndex(1550), 0);
+    }
+}
