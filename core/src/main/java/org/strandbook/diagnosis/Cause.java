@@ -1,0 +1,24 @@
+package org.strandbook.diagnosis;
+
+/** What a technician goes out to fix. */
+public enum Cause {
+    DIRTY_CONNECTOR("dirty or misaligned connector"),
+    TIGHT_BEND("tight bend or crush"),
+    HIGH_OH_FIBER("high-OH fiber or OH growth"),
+    HYDROGEN_DARKENING("hydrogen darkening"),
+    RADIATION_DARKENING("radiation or solarization darkening"),
+    AIR_GAP("air gap or crack acting as an etalon"),
+    REFERENCE_DRIFT("lamp drift since the reference scan"),
+    BROKEN_FIBER("broken fiber or open connector");
+
+    private final String words;
+
+    Cause(String words) {
+        this.words = words;
+    }
+
+    /** The cause in plain words. */
+    public String words() {
+        return words;
+    }
+}

@@ -1,0 +1,327 @@
+package org.strandbook.diagnosis;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.stream.Collectors;
+
+import org.strandbook.fit.ColumnPair;
+import org.strandbook.fit.CollinearityReport;
+import org.strandbook.fit.LeastSquaresProblem;
+import org.strandbook.fit.NnlsResult;
+import org.strandbook.fit.NonNegativeLeastSquares;
+import org.strandbook.optics.WavelengthGrid;
+import org.strandbook.optics.attenuation.AttenuationShapes;
+import org.strandbook.optics.attenuation.OhBand;
+import org.strandbook.optics.attenuation.SilicaFiberGrade;
+import org.strandbook.throughput.ThroughputResult;
+
+/**
+ * Explains a deviation spectrum (measured − predicted loss, dB) as a non-negative combination of
+ * fault signatures ({@link Signature}) plus a signed reference-drift tilt, fitted by Lawson–Hanson
+ * NNLS (Lawson &amp; Hanson, "Solving Least Squares Problems", 1974, ch. 23) over the measured
+ * wavelengths, each weighted by 1/σ. The σ of a point is its detector-noise σ combined with a model
+ * floor ({@link #MODEL_FLOOR_DB}), so that a very quiet detector does not let one region dominate.
+ *
+ * <p>A wavelength-flat excess cannot say whether a connector or a bend is to blame (for large
+ * cores Gloge's bend loss is nearly flat too); the workbook's records rank the candidates. Fringes
+ * left in the residual are searched for separately over fringe periods.
+ */
+public final class DeviationDiagnoser {
+
+    /** dB: modelling scatter added in quadrature to detector noise (a design choice). */
+    public static final double MODEL_FLOOR_DB = 0.02;
+    /** Shape parameter of the hydrogen signature: the 2420 nm band relative to 1240 nm (not a claim). */
+    public static final double HYDROGEN_2420_RELATIVE = 5.0;
+    /** |cos| above which two signatures are reported as indistinguishable over the measured range. */
+    public static final double COLLINEAR_COSINE = 0.95;
+
+    private final double minReportDb;
+
+    private DeviationDiagnoser(double minReportDb) {
+        this.minReportDb = minReportDb;
+    }
+
+    /**
+     * Reports a cause when its largest effect over the measured range reaches 0.3 dB (common
+     * practice: re-mating an SMA pair scatters by a few tenths of a dB).
+     */
+    public static DeviationDiagnoser withDefaults() {
+        return new DeviationDiagnoser(0.3);
+    }
+
+    public DeviationDiagnoser withMinReportDb(double db) {
+        return new DeviationDiagnoser(db);
+    }
+
+    public Diagnosis diagnose(ThroughputResult measured, double[] predictedLossDb, PathEvidence evidence) {
+        WavelengthGrid grid = measured.grid();
+        grid.requireSameLength(predictedLossDb);
+        if (measured.noLightReturned()) {
+            return broken(evidence);
+        }
+        boolean[] usable = measured.usable();
+        double[] loss = measured.lossDb();
+        double[] sigma = measured.sigmaDb();
+        int[] rows = usableRows(usable);
+        if (rows.length < 8) {
+            return new Diagnosis(List.of(), Double.NaN, List.of(), Optional.empty(),
+                    "too few measured wavelengths (" + rows.length + ") to diagnose");
+        }
+        double[] b = new double[rows.length];
+        double[] s = new double[rows.length];
+        for (int r = 0; r < rows.length; r++) {
+            int i = rows[r];
+            b[r] = loss[i] - predictedLossDb[i];
+            double noise = Double.isFinite(sigma[i]) ? sigma[i] : 0;
+            s[r] = Math.sqrt(noise * noise + MODEL_FLOOR_DB * MODEL_FLOOR_DB);
+        }
+        List<Column> columns = columns(grid, rows);
+        double[][] a = new double[columns.size()][];
+        int driftIndex = -1;
+        for (int j = 0; j < a.length; j++) {
+            a[j] = columns.get(j).values;
+            if (columns.get(j).signature == Signature.REFERENCE_DRIFT) {
+                driftIndex = j;
+            }
+        }
+        LeastSquaresProblem problem = LeastSquaresProblem.ofColumns(a, b).withRowSigmas(s);
+        if (driftIndex >= 0) {
+            problem = problem.withSignedColumns(driftIndex);
+        }
+        NnlsResult fit = NonNegativeLeastSquares.withDefaults().solve(problem);
+        double[] x = fit.coefficients();
+        double[] residual = problem.residual(x);
+
+        double[] effect = new double[columns.size()];
+        double totalEffect = 0;
+        for (int j = 0; j < columns.size(); j++) {
+            for (double v : columns.get(j).values) {
+                effect[j] += Math.abs(x[j] * v);
+            }
+            totalEffect += effect[j];
+        }
+        List<Finding> findings = new ArrayList<>();
+        for (int j = 0; j < columns.size(); j++) {
+            Column c = columns.get(j);
+            double peak = 0;
+            for (double v : c.values) {
+                peak = Math.max(peak, Math.abs(x[j] * v));
+            }
+            if (peak < minReportDb) {
+                continue;
+            }
+            double share = totalEffect > 0 ? 100 * effect[j] / totalEffect : 0;
+            findings.add(finding(c, x[j], share, evidence));
+        }
+        findings.sort(Comparator.comparingDouble(Finding::sharePercent).reversed());
+
+        double rms = rms(residual);
+        Optional<FringeReport> fringes = Optional.empty();
+        if (fit.reducedChiSquare() > 2) {
+            fringes = FringeSearch.search(grid, rows, residual, median(s));
+            fringes.ifPresent(f -> findings.add(fringeFinding(f, evidence)));
+        }
+        List<String> collinear = collinearNotes(problem, columns);
+        String summary = findings.isEmpty()
+                ? String.format(Locale.ROOT, "no fault signature reaches %.1f dB: the path behaves as predicted"
+                        + " (residual %.2f dB RMS)", minReportDb, rms)
+                : findings.get(0).text();
+        return new Diagnosis(findings, rms, collinear, fringes, summary);
+    }
+
+    private static Diagnosis broken(PathEvidence evidence) {
+        String joints = evidence.joints().stream().map(PathEvidence.JointEvidence::label)
+                .collect(Collectors.joining(", "));
+        String text = "no light returned in any band: a broken fiber or an open connector. Check that every joint"
+                + " is mated (" + joints + "), then test the send and return legs separately. Switch the lamp off"
+                + " before opening a connector and never look into a fiber end.";
+        Finding f = new Finding(Signature.FLAT_EXCESS, List.of(Cause.BROKEN_FIBER), Double.POSITIVE_INFINITY,
+                Double.NaN, 100, evidence.joints().isEmpty() ? "" : evidence.joints().get(0).label(), text);
+        return new Diagnosis(List.of(f), Double.NaN, List.of(), Optional.empty(), text);
+    }
+
+    private record Column(Signature signature, double[] values, double atNm) {
+    }
+
+    /** Signature columns over the measured rows, each 1 dB at its reference wavelength. */
+    private static List<Column> columns(WavelengthGrid grid, int[] rows) {
+        double first = grid.firstNm();
+        double last = grid.lastNm();
+        double mid = 0.5 * (first + last);
+        List<Column> out = new ArrayList<>();
+        out.add(new Column(Signature.FLAT_EXCESS, fill(rows.length, 1.0), mid));
+
+        double ohRef = ohReferenceNm(grid);
+        double ohScale = 1.0 / AttenuationShapes.ohAbsorptionDbPerKmPerPpm(ohRef);
+        double[] oh = new double[rows.length];
+        double[] h2 = new double[rows.length];
+        double[] dark = new double[rows.length];
+        double[] drift = new double[rows.length];
+        double h2Scale = 1.0 / AttenuationShapes.hydrogenBandShape(AttenuationShapes.HYDROGEN_BAND_1240_NM,
+                HYDROGEN_2420_RELATIVE);
+        double darkScale = 1.0 / AttenuationShapes.radiationDarkeningShape(first);
+        for (int r = 0; r < rows.length; r++) {
+            double w = grid.wavelengthNm(rows[r]);
+            oh[r] = ohScale * AttenuationShapes.ohAbsorptionDbPerKmPerPpm(w);
+            h2[r] = h2Scale * AttenuationShapes.hydrogenBandShape(w, HYDROGEN_2420_RELATIVE);
+            dark[r] = darkScale * AttenuationShapes.radiationDarkeningShape(w);
+            drift[r] = (w - mid) / (last - first);
+        }
+        addIfObservable(out, new Column(Signature.OH_BANDS, oh, ohRef));
+        addIfObservable(out, new Column(Signature.HYDROGEN, h2, AttenuationShapes.HYDROGEN_BAND_1240_NM));
+        addIfObservable(out, new Column(Signature.DARKENING, dark, first));
+        out.add(new Column(Signature.REFERENCE_DRIFT, drift, last));
+        return out;
+    }
+
+    /** A band shape only enters the fit where the measured range shows a real part of it. */
+    private static void addIfObservable(List<Column> out, Column c) {
+        double max = 0;
+        for (double v : c.values) {
+            max = Math.max(max, Math.abs(v));
+        }
+        if (max >= 0.05) {
+            out.add(c);
+        }
+    }
+
+    /** The OH band the amount is stated at: 1240 nm if the grid holds it, else the first band it holds. */
+    static double ohReferenceNm(WavelengthGrid grid) {
+        if (grid.covers(1240)) {
+            return 1240;
+        }
+        for (OhBand band : AttenuationShapes.SILICA_OH_BANDS) {
+            if (grid.covers(band.centerNm())) {
+                return band.centerNm();
+            }
+        }
+        return AttenuationShapes.SILICA_OH_BANDS.get(0).centerNm();
+    }
+
+    private Finding finding(Column c, double amount, double share, PathEvidence evidence) {
+        return switch (c.signature) {
+            case FLAT_EXCESS -> FlatExcessRanking.finding(amount, c.atNm, share, evidence);
+            case OH_BANDS -> ohFinding(amount, c.atNm, share, evidence);
+            case HYDROGEN -> hydrogenFinding(amount, c.atNm, share, evidence);
+            case DARKENING -> new Finding(Signature.DARKENING, List.of(Cause.RADIATION_DARKENING), amount, c.atNm,
+                    share, evidence.longestSegment().label(), String.format(Locale.ROOT,
+                    "≈%.1f dB excess at %.0f nm rising toward short wavelengths: radiation or solarization"
+                            + " darkening; check the dose history of %s and whether the lamp's UV reaches the fiber",
+                    amount, c.atNm, evidence.longestSegment().label()));
+            case REFERENCE_DRIFT -> new Finding(Signature.REFERENCE_DRIFT, List.of(Cause.REFERENCE_DRIFT), amount,
+                    c.atNm, share, "", String.format(Locale.ROOT,
+                    "loss tilts by %+.1f dB across the range: the lamp drifted since the reference scan;"
+                            + " re-take the reference through the patch cord, then the loop scan", amount));
+            case FRINGES -> throw new IllegalStateException("fringes are not a fitted column");
+        };
+    }
+
+    private static Finding ohFinding(double amount, double atNm, double share, PathEvidence evidence) {
+        double ppmKm = amount / AttenuationShapes.ohAbsorptionDbPerKmPerPpm(atNm);
+        double highOhPpm = SilicaFiberGrade.HIGH_OH.typicalOhPpm();
+        // the segment whose length would need the most typical high-OH content to explain it
+        PathEvidence.SegmentEvidence suspect = evidence.segments().stream()
+                .min(Comparator.comparingDouble(seg -> Math.abs(Math.log(ppmKm / (seg.lengthM() * 1e-3) / highOhPpm))))
+                .orElseThrow();
+        double impliedPpm = ppmKm / (suspect.lengthM() * 1e-3);
+        List<Cause> causes = List.of(Cause.HIGH_OH_FIBER);
+        String growth = evidence.hydrogenService()
+                ? " The point is in hydrogen service: OH can also grow where hydrogen reacts with hot glass."
+                : "";
+        String text = String.format(Locale.ROOT,
+                "≈%.1f dB OH-band excess at %.0f nm (%.2f ppm·km of OH): a high-OH fiber where a low-OH one belongs;"
+                        + " if it is one cable, %s (%.1f m) would hold ≈%.0f ppm OH: check its label and grade.%s",
+                amount, atNm, ppmKm, suspect.label(), suspect.lengthM(), impliedPpm, growth);
+        return new Finding(Signature.OH_BANDS, causes, amount, atNm, share, suspect.label(), text);
+    }
+
+    private static Finding hydrogenFinding(double amount, double atNm, double share, PathEvidence evidence) {
+        String service = evidence.hydrogenService()
+                ? "the point is recorded in hydrogen service"
+                : "the point is not recorded in hydrogen service: look for a hydrogen source near the route";
+        String hot = evidence.processTemperatureC().isPresent()
+                ? String.format(Locale.ROOT, " at %.0f °C", evidence.processTemperatureC().getAsDouble()) : "";
+        String text = String.format(Locale.ROOT,
+                "≈%.1f dB hydrogen-band excess at %.0f nm: hydrogen darkening of the fiber near the probe%s;"
+                        + " %s. Plan a hydrogen-resistant (carbon-coated) fiber for the probe tail; the loss recedes"
+                        + " only slowly if hydrogen is removed.", amount, atNm, hot, service);
+        String tails = String.join(" and ", evidence.probeTails());
+        return new Finding(Signature.HYDROGEN, List.of(Cause.HYDROGEN_DARKENING), amount, atNm, share,
+                evidence.probeTails().isEmpty() ? "" : evidence.probeTails().get(0), text + " Fiber nearest the probe: "
+                + tails + ".");
+    }
+
+    private static Finding fringeFinding(FringeReport f, PathEvidence evidence) {
+        String joint = evidence.joints().stream().filter(PathEvidence.JointEvidence::airGap)
+                .map(PathEvidence.JointEvidence::label).findFirst().orElse("");
+        String text = String.format(Locale.ROOT,
+                "fringes of ±%.2f dB every %.0f cm⁻¹ left after the fit: an air gap or crack of ≈%.0f µm acting as"
+                        + " an etalon; re-mate the air-gap joints%s", f.amplitudeDb(), f.periodCm(), f.gapUm(),
+                joint.isEmpty() ? "" : " starting with " + joint);
+        return new Finding(Signature.FRINGES, List.of(Cause.AIR_GAP), f.amplitudeDb(), Double.NaN,
+                0, joint, text);
+    }
+
+    private static List<String> collinearNotes(LeastSquaresProblem problem, List<Column> columns) {
+        Map<Signature, Integer> index = new EnumMap<>(Signature.class);
+        for (int j = 0; j < columns.size(); j++) {
+            index.put(columns.get(j).signature, j);
+        }
+        List<String> notes = new ArrayList<>();
+        for (ColumnPair pair : CollinearityReport.of(problem).pairsAbove(COLLINEAR_COSINE)) {
+            notes.add(String.format(Locale.ROOT, "%s and %s look alike over the measured range (cos %.2f):"
+                            + " the spectrum alone cannot tell them apart",
+                    words(columns.get(pair.first()).signature), words(columns.get(pair.second()).signature),
+                    pair.cosine()));
+        }
+        if (index.containsKey(Signature.FLAT_EXCESS)) {
+            notes.add("a dirty connector and a tight bend both give a wavelength-flat excess for large cores"
+                    + " (Gloge 1972): the workbook's inspection grades and bend records rank them");
+        }
+        return notes;
+    }
+
+    private static String words(Signature s) {
+        return s.name().toLowerCase(Locale.ROOT).replace('_', ' ');
+    }
+
+    private static int[] usableRows(boolean[] usable) {
+        int n = 0;
+        for (boolean u : usable) {
+            n += u ? 1 : 0;
+        }
+        int[] rows = new int[n];
+        int k = 0;
+        for (int i = 0; i < usable.length; i++) {
+            if (usable[i]) {
+                rows[k++] = i;
+            }
+        }
+        return rows;
+    }
+
+    private static double[] fill(int n, double v) {
+        double[] a = new double[n];
+        java.util.Arrays.fill(a, v);
+        return a;
+    }
+
+    private static double rms(double[] r) {
+        double s = 0;
+        for (double v : r) {
+            s += v * v;
+        }
+        return Math.sqrt(s / r.length);
+    }
+
+    private static double median(double[] v) {
+        double[] c = v.clone();
+        java.util.Arrays.sort(c);
+        return c[c.length / 2];
+    }
+}

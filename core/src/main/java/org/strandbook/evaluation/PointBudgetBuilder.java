@@ -1,0 +1,97 @@
+package org.strandbook.evaluation;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import java.util.OptionalDouble;
+
+import org.strandbook.optics.path.FiberSegment;
+import org.strandbook.optics.path.FiberSpec;
+import org.strandbook.optics.path.JointElement;
+import org.strandbook.optics.path.LightPath;
+import org.strandbook.optics.path.LossBudget;
+import org.strandbook.optics.path.OpticsCache;
+import org.strandbook.optics.path.PathElement;
+import org.strandbook.site.Bend;
+import org.strandbook.site.CableSegment;
+import org.strandbook.site.Catalog;
+import org.strandbook.site.Joint;
+import org.strandbook.site.MeasurementPoint;
+import org.strandbook.site.PathLeg;
+
+/**
+ * Builds a point's predicted loop budget from what the workbook records.
+ *
+ * <p>What is counted: every cable segment and joint on the send and return legs, and the probe.
+ * What is not: the analyzer's own launch and detector faces and the reference patch cord, which
+ * the one-cord reference scan divides out.
+ *
+ * <p>Bends: of the bends recorded on a segment only the tightest is charged, once. Gloge's formula
+ * gives the share of modes a bend of that radius cannot guide; in a fully filled fiber the first
+ * such bend strips them and later bends of the same or a larger radius find them gone, unless mode
+ * coupling over a long run refills them. Charging every bend would multiply a worst case.
+ */
+public final class PointBudgetBuilder {
+
+    private final Catalog catalog;
+
+    public PointBudgetBuilder(Catalog catalog) {
+        this.catalog = catalog;
+    }
+
+    /** The predicted budget of the point's loop on the cache's grid. */
+    public PredictedBudget build(MeasurementPoint point, PathLeg send, PathLeg ret, OpticsCache cache) {
+        List<String> notes = new ArrayList<>();
+        List<PathElement> elements = new ArrayList<>();
+        addLeg(send, elements, notes);
+        elements.add(OpticsMapping.probe(catalog.probe(point.probeTypeCode())));
+        addLeg(ret, elements, notes);
+        LossBudget budget = LossBudget.of(new LightPath(point.tag(), elements), cache);
+        notes.addAll(budget.notes());
+        return new PredictedBudget(point.tag(), budget, notes);
+    }
+
+    private void addLeg(PathLeg leg, List<PathElement> out, List<String> notes) {
+        List<org.strandbook.site.PathElement> items = leg.elements();
+        if (leg.segments().isEmpty()) {
+            throw new IllegalArgumentException("point " + leg.pointTag() + ": the " + leg.direction().name()
+                    .toLowerCase(Locale.ROOT) + " leg has no cable segment");
+        }
+        for (int i = 0; i < items.size(); i++) {
+            org.strandbook.site.PathElement item = items.get(i);
+            if (item instanceof CableSegment segment) {
+                out.add(fiberSegment(segment, notes));
+            } else if (item instanceof Joint joint) {
+                FiberSpec from = fiberNear(items, i, -1);
+                FiberSpec to = fiberNear(items, i, +1);
+                out.add(new JointElement(joint.label(), from == null ? to : from, to == null ? from : to,
+                        OpticsMapping.allowance(joint, catalog)));
+            }
+        }
+    }
+
+    private FiberSegment fiberSegment(CableSegment segment, List<String> notes) {
+        FiberSpec spec = OpticsMapping.fiberSpec(catalog.fiber(segment.fiberTypeCode()));
+        if (segment.bends().isEmpty()) {
+            return FiberSegment.straight(segment.label(), spec, segment.lengthM());
+        }
+        Bend tightest = segment.bends().stream().min(Comparator.comparingDouble(Bend::radiusMm)).orElseThrow();
+        int recorded = segment.bends().stream().mapToInt(Bend::count).sum();
+        if (recorded > 1) {
+            notes.add(String.format(Locale.ROOT, "cable %s: %d bends recorded, the tightest (%.0f mm) charged once",
+                    segment.label(), recorded, tightest.radiusMm()));
+        }
+        return new FiberSegment(segment.label(), spec, segment.lengthM(), OptionalDouble.of(tightest.radiusMm()), 1);
+    }
+
+    /** The fiber of the nearest cable segment before (step −1) or after (+1) position {@code i}. */
+    private FiberSpec fiberNear(List<org.strandbook.site.PathElement> items, int i, int step) {
+        for (int j = i + step; j >= 0 && j < items.size(); j += step) {
+            if (items.get(j) instanceof CableSegment s) {
+                return OpticsMapping.fiberSpec(catalog.fiber(s.fiberTypeCode()));
+            }
+        }
+        return null;
+    }
+}

@@ -1,0 +1,34 @@
+package org.strandbook.evaluation;
+
+import java.util.List;
+
+import org.strandbook.optics.WavelengthGrid;
+import org.strandbook.optics.path.Contribution;
+import org.strandbook.optics.path.LossBudget;
+
+/**
+ * The predicted loss of one measurement point's loop (send leg, probe, return leg) on the
+ * evaluation grid, with each element's own contribution.
+ *
+ * @param pointTag the point
+ * @param budget   the optics engine's budget of the loop
+ * @param notes    what the prediction assumed or flagged (bend radii, missing data), in words
+ */
+public record PredictedBudget(String pointTag, LossBudget budget, List<String> notes) {
+
+    public PredictedBudget {
+        notes = List.copyOf(notes);
+    }
+
+    public WavelengthGrid grid() {
+        return budget.grid();
+    }
+
+    public double[] totalLossDb() {
+        return budget.totalLossDb();
+    }
+
+    public List<Contribution> contributions() {
+        return budget.contributions();
+    }
+}
