@@ -5,7 +5,6 @@ import java.util.List;
 import java.util.OptionalDouble;
 
 import org.strandbook.site.Analyzer;
-import org.strandbook.site.Bend;
 import org.strandbook.site.CableSegment;
 import org.strandbook.site.ConnectorType;
 import org.strandbook.site.DetectorType;
@@ -117,8 +116,13 @@ public final class DemoPlant {
     }
 
     /**
-     * Each leg: a patch cord in the shelter panel (SMA joints at both ends), the field trunk to a
-     * junction box, and a short probe tail. The fault decides which element is spoiled.
+     * The legs as the workbook records them. Each leg: a patch cord from the analyzer port to the
+     * shelter panel, the field trunk to a junction box, and a short tail to the probe, with SMA joints
+     * between; the return leg lists them in the order light meets them, from the probe back. The
+     * analyzer's own ports are not listed: the reference patch cord plugs into them too. The records are what the
+     * installer believed: the generator spoils the truth, not the records (a high-OH cord still reads
+     * "LOH-200", an unnoticed crush has no bend entry), except for the dirty joint, which the
+     * inspection caught.
      */
     private void add(MeasurementPoint p, double sendM, double returnM, String fiber, Fault fault) {
         String t = p.tag().substring(p.tag().indexOf('-') + 1);
@@ -126,42 +130,45 @@ public final class DemoPlant {
             case DIRTY_CONNECTOR -> "J2";
             case TIGHT_BEND -> "C" + t + "-R2";
             case HIGH_OH_FIBER -> "C" + t + "-S1";
-            case HYDROGEN_DARKENING -> "C" + t + "-S2";
+            case HYDROGEN_DARKENING -> "C" + t + "-S3";
             case BROKEN_FIBER -> "C" + t + "-R2";
             case NONE -> "";
         };
-        PathLeg send = leg(p.tag(), PathDirection.SEND, t, "S", sendM, fiber, fault, faulty, 1);
-        PathLeg ret = leg(p.tag(), PathDirection.RETURN, t, "R", returnM, fiber, fault, faulty, 4);
+        PathLeg send = leg(p.tag(), PathDirection.SEND, "C" + t + "-S", sendM, fiber, faulty, 1);
+        PathLeg ret = leg(p.tag(), PathDirection.RETURN, "C" + t + "-R", returnM, fiber, faulty, 4);
         points.add(new DemoPoint(p, send, ret, fault, faulty));
     }
 
-    private static PathLeg leg(String tag, PathDirection dir, String t, String side, double lengthM, String fiber,
-                               Fault fault, String faulty, int firstJoint) {
+    private static PathLeg leg(String tag, PathDirection dir, String cable, double lengthM, String fiber,
+                               String faulty, int firstJoint) {
         double patchM = Math.min(2.0, lengthM / 4);
         double tailM = Math.min(3.0, lengthM / 4);
         double trunkM = lengthM - patchM - tailM;
-        String patchFiber = fault == Fault.HIGH_OH_FIBER && faulty.equals("C" + t + "-" + side + "1")
-                ? "HOH-200" : fiber;
+        boolean send = dir == PathDirection.SEND;
         List<PathElement> e = new ArrayList<>();
-        e.add(joint("J" + firstJoint, faulty));
-        e.add(segment("C" + t + "-" + side + "1", patchFiber, patchM, List.of()));
-        e.add(joint("J" + (firstJoint + 1), faulty));
-        List<Bend> trunkBends = faulty.equals("C" + t + "-" + side + "2") && fault == Fault.TIGHT_BEND
-                ? List.of(new Bend(18, 3), new Bend(150, 6))
-                : List.of(new Bend(150, 6));
-        e.add(segment("C" + t + "-" + side + "2", fiber, trunkM, trunkBends));
-        e.add(joint("J" + (firstJoint + 2), faulty));
-        e.add(segment("C" + t + "-" + side + "3", fiber, tailM, List.of()));
+        if (send) {
+            // analyzer port → patch cord → panel J1 → trunk → junction box J2 → tail → probe J3
+            e.add(new CableSegment(cable + "1", fiber, patchM, List.of()));
+            e.add(joint("J" + firstJoint, faulty));
+            e.add(new CableSegment(cable + "2", fiber, trunkM, List.of()));
+            e.add(joint("J" + (firstJoint + 1), faulty));
+            e.add(new CableSegment(cable + "3", fiber, tailM, List.of()));
+            e.add(joint("J" + (firstJoint + 2), faulty));
+        } else {
+            // probe J4 → tail → junction box J5 → trunk → panel J6 → patch cord → detector port
+            e.add(joint("J" + firstJoint, faulty));
+            e.add(new CableSegment(cable + "1", fiber, tailM, List.of()));
+            e.add(joint("J" + (firstJoint + 1), faulty));
+            e.add(new CableSegment(cable + "2", fiber, trunkM, List.of()));
+            e.add(joint("J" + (firstJoint + 2), faulty));
+            e.add(new CableSegment(cable + "3", fiber, patchM, List.of()));
+        }
         return new PathLeg(tag, dir, e);
     }
 
     private static Joint joint(String label, String faulty) {
         InspectionGrade grade = label.equals(faulty) ? InspectionGrade.DIRTY : InspectionGrade.CLEAN;
         return new Joint(label, "SMA-A", "SMA-A", grade, OptionalDouble.empty(), LossBasis.ASSUMED);
-    }
-
-    private static CableSegment segment(String id, String fiber, double lengthM, List<Bend> bends) {
-        return new CableSegment(id, fiber, lengthM, bends);
     }
 
     public Site site() {
