@@ -1,0 +1,57 @@
+package org.strandbook.evaluation;
+
+import java.util.List;
+import java.util.Optional;
+
+import org.strandbook.diagnosis.Diagnosis;
+import org.strandbook.site.MeasurementPoint;
+import org.strandbook.throughput.ThroughputResult;
+
+/**
+ * The evaluation of one measurement point: its prediction, its latest measurement against it, what
+ * is wrong, and where its loss is heading.
+ *
+ * @param point      the point
+ * @param status     the worst band status, or REVIEW when no scan could be evaluated
+ * @param predicted  the predicted loop budget with each element's contribution
+ * @param latest     the latest paired scans, if any
+ * @param measured   the latest measured loss spectrum, if any
+ * @param verdicts   acceptance per band of interest for the latest scan
+ * @param diagnosis  the latest deviation's diagnosis, if measured
+ * @param trends     loss history and forecast per band
+ * @param problems   what could not be evaluated, in words (unpaired scans, missing data)
+ */
+public record PointEvaluation(MeasurementPoint point, Status status, PredictedBudget predicted,
+                              Optional<ScanPair> latest, Optional<ThroughputResult> measured,
+                              List<BandVerdict> verdicts, Optional<Diagnosis> diagnosis, List<BandTrend> trends,
+                              List<String> problems) {
+
+    public PointEvaluation {
+        verdicts = List.copyOf(verdicts);
+        trends = List.copyOf(trends);
+        problems = List.copyOf(problems);
+    }
+
+    /** The band with the least margin (or the first failing one), if any was judged. */
+    public Optional<BandVerdict> worstBand() {
+        return verdicts.stream().min((a, b) -> {
+            int s = b.status().compareTo(a.status());
+            if (s != 0) {
+                return s;
+            }
+            return Double.compare(nanLow(a.marginDb()), nanLow(b.marginDb()));
+        });
+    }
+
+    private static double nanLow(double v) {
+        return Double.isNaN(v) ? Double.NEGATIVE_INFINITY : v;
+    }
+
+    /** The finding in one line: the diagnosis summary, or why nothing was measured. */
+    public String finding() {
+        if (diagnosis.isPresent()) {
+            return diagnosis.get().summary();
+        }
+        return problems.isEmpty() ? "not measured yet" : problems.get(0);
+    }
+}

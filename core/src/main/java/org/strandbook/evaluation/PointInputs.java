@@ -1,0 +1,22 @@
+package org.strandbook.evaluation;
+
+import java.util.List;
+
+import org.strandbook.site.Analyzer;
+import org.strandbook.site.Catalog;
+import org.strandbook.site.MeasurementPoint;
+import org.strandbook.site.PathLeg;
+import org.strandbook.site.ScanRecord;
+import org.strandbook.site.Site;
+
+/**
+ * Everything the evaluation of one point reads: its records, its catalog, its scans' listing and a
+ * way to fetch a scan's spectrum on demand (so that years of scans are never all in memory).
+ */
+public record PointInputs(Site site, MeasurementPoint point, Analyzer analyzer, PathLeg send, PathLeg ret,
+                          Catalog catalog, List<ScanRecord> scans, SpectrumSource spectra) {
+
+    public PointInputs {
+        scans = List.copyOf(scans);
+    }
+}
