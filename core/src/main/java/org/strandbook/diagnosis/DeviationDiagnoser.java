@@ -27,6 +27,10 @@ import org.strandbook.throughput.ThroughputResult;
  * wavelengths, each weighted by 1/σ. The σ of a point is its detector-noise σ combined with a model
  * floor ({@link #MODEL_FLOOR_DB}), so that a very quiet detector does not let one region dominate.
  *
+ * <p>The flat term is fitted signed: connectors are budgeted at a conservative allowance, so a
+ * healthy path often loses a few tenths of a dB less than predicted, and a non-negative flat term
+ * would push that shortfall into the other shapes. Only a positive flat excess is reported as a fault.
+ *
  * <p>A wavelength-flat excess cannot say whether a connector or a bend is to blame (for large
  * cores Gloge's bend loss is nearly flat too); the workbook's records rank the candidates. Fringes
  * left in the residual are searched for separately over fringe periods.
@@ -82,17 +86,16 @@ public final class DeviationDiagnoser {
         }
         List<Column> columns = columns(grid, rows);
         double[][] a = new double[columns.size()][];
-        int driftIndex = -1;
+        List<Integer> signed = new ArrayList<>();
         for (int j = 0; j < a.length; j++) {
             a[j] = columns.get(j).values;
-            if (columns.get(j).signature == Signature.REFERENCE_DRIFT) {
-                driftIndex = j;
+            Signature sig = columns.get(j).signature;
+            if (sig == Signature.REFERENCE_DRIFT || sig == Signature.FLAT_EXCESS) {
+                signed.add(j);
             }
         }
-        LeastSquaresProblem problem = LeastSquaresProblem.ofColumns(a, b).withRowSigmas(s);
-        if (driftIndex >= 0) {
-            problem = problem.withSignedColumns(driftIndex);
-        }
+        LeastSquaresProblem problem = LeastSquaresProblem.ofColumns(a, b).withRowSigmas(s)
+                .withSignedColumns(signed.stream().mapToInt(Integer::intValue).toArray());
         NnlsResult fit = NonNegativeLeastSquares.withDefaults().solve(problem);
         double[] x = fit.coefficients();
         double[] residual = problem.residual(x);
@@ -112,7 +115,7 @@ public final class DeviationDiagnoser {
             for (double v : c.values) {
                 peak = Math.max(peak, Math.abs(x[j] * v));
             }
-            if (peak < minReportDb) {
+            if (peak < minReportDb || (c.signature == Signature.FLAT_EXCESS && x[j] < 0)) {
                 continue;
             }
             double share = totalEffect > 0 ? 100 * effect[j] / totalEffect : 0;

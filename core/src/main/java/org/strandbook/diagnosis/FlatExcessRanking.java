@@ -40,9 +40,13 @@ final class FlatExcessRanking {
         }
         if (unseen.isEmpty() && !evidence.joints().isEmpty()) {
             PathEvidence.SegmentEvidence longest = evidence.longestSegment();
+            String runs = evidence.segments().stream()
+                    .filter(s -> s.lengthM() >= 0.5 * longest.lengthM())
+                    .map(s -> String.format(Locale.ROOT, "%s (%.0f m)", s.label(), s.lengthM()))
+                    .collect(Collectors.joining(" and "));
             String text = String.format(Locale.ROOT, "%s; every joint was graded clean at inspection, so suspect a"
-                            + " tight bend or crush: walk cable %s (%.0f m) and its junction boxes, then re-inspect %s",
-                    head, longest.label(), longest.lengthM(), labels(evidence.joints()));
+                            + " tight bend or crush: walk %s and their junction boxes, then re-inspect %s",
+                    head, runs, labels(evidence.joints()));
             return new Finding(Signature.FLAT_EXCESS, List.of(Cause.TIGHT_BEND, Cause.DIRTY_CONNECTOR), amountDb,
                     atNm, share, longest.label(), text);
         }

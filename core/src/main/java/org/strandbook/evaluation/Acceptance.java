@@ -15,7 +15,8 @@ import org.strandbook.site.WavelengthBand;
  *   <li>FAIL when nothing in the band could be measured (no light), when the highest measured loss
  *       exceeds the analyzer's allowed loss (negative margin), or when the mean deviation exceeds
  *       the tolerance: the path loses more than physics says it should, which is the acceptance
- *       criterion of installed-loss testing (measured within the calculated budget);</li>
+ *       criterion of installed-loss testing (measured within the calculated budget), or when a
+ *       local excess exceeds {@link #LOCAL_FAIL_FACTOR} tolerances;</li>
  *   <li>REVIEW when less than {@link #MIN_MEASURED_FRACTION} of the band could be measured, when a
  *       local deviation exceeds twice the tolerance while the mean is within it, when the path loses
  *       less than predicted by more than the tolerance (a bad reference or wrong records), or when
@@ -27,6 +28,8 @@ public final class Acceptance {
 
     /** Common practice: judge a band on at least half of it. */
     public static final double MIN_MEASURED_FRACTION = 0.5;
+    /** Common practice: a local excess of three tolerances distorts the band the analyzer's model reads. */
+    public static final double LOCAL_FAIL_FACTOR = 3.0;
 
     private Acceptance() {
     }
@@ -91,11 +94,14 @@ public final class Acceptance {
         }
         if (meanDev > toleranceDb) {
             fails.add(f("loses %.2f dB more than predicted on average (tolerance %.2f dB)", meanDev, toleranceDb));
+        } else if (worstDev > LOCAL_FAIL_FACTOR * toleranceDb) {
+            fails.add(f("local excess of %.2f dB at %.0f nm, more than %.0f× the tolerance of %.2f dB",
+                    worstDev, worstAt, LOCAL_FAIL_FACTOR, toleranceDb));
         }
         if (fraction < MIN_MEASURED_FRACTION) {
             reviews.add(f("only %.0f %% of the band could be measured", 100 * fraction));
         }
-        if (meanDev <= toleranceDb && worstDev > 2 * toleranceDb) {
+        if (meanDev <= toleranceDb && worstDev > 2 * toleranceDb && worstDev <= LOCAL_FAIL_FACTOR * toleranceDb) {
             reviews.add(f("local excess of %.2f dB at %.0f nm (mean deviation %.2f dB)", worstDev, worstAt, meanDev));
         }
         if (meanDev < -toleranceDb) {

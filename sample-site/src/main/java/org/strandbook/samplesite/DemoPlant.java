@@ -85,6 +85,7 @@ public final class DemoPlant {
         WavelengthBand ch3 = new WavelengthBand("C-H 2nd overtone", 1150, 1230);
         WavelengthBand oh1 = new WavelengthBand("O-H 1st overtone", 1420, 1520);
         WavelengthBand sw = new WavelengthBand("C-H 3rd overtone", 860, 940);
+        WavelengthBand ch3Wide = new WavelengthBand("C-H 2nd overtone, CH2", 1190, 1250);
 
         add(point("FT-4101", "Reactor R-410 feed", "R-410 inlet, level 2", "AZ-41", 1, "PT-TX5",
                 List.of(ch3, ch2), false, false, 40), 25, 25, "LOH-200", Fault.NONE);
@@ -95,7 +96,7 @@ public final class DemoPlant {
         add(point("FT-4104", "Blender M-430 discharge", "Shelter S1 wall, sample loop", "AZ-41", 4, "PT-TX5",
                 List.of(ch2, comb), false, false, 30), 2, 2, "LOH-200", Fault.NONE);
         add(point("FT-4105", "Hydrogenator R-440", "R-440 bottom nozzle", "AZ-41", 5, "PT-TX5",
-                List.of(ch3, ch2), true, true, 165), 45, 45, "LOH-200", Fault.HYDROGEN_DARKENING);
+                List.of(ch3Wide, ch2), true, true, 165), 45, 45, "LOH-200", Fault.HYDROGEN_DARKENING);
         add(point("FT-4106", "Tank T-450 rundown", "T-450 roof", "AZ-41", 6, "PT-TF2",
                 List.of(ch3, oh1, ch2), false, false, 25), 35, 35, "LOH-200", Fault.HIGH_OH_FIBER);
         add(point("FT-4107", "Stripper C-460 bottoms", "C-460 skirt", "AZ-41", 7, "PT-TX5",
