@@ -109,6 +109,7 @@ public final class DeviationDiagnoser {
             totalEffect += effect[j];
         }
         List<Finding> findings = new ArrayList<>();
+        Map<Finding, Double> peaks = new java.util.IdentityHashMap<>();
         for (int j = 0; j < columns.size(); j++) {
             Column c = columns.get(j);
             double peak = 0;
@@ -119,9 +120,12 @@ public final class DeviationDiagnoser {
                 continue;
             }
             double share = totalEffect > 0 ? 100 * effect[j] / totalEffect : 0;
-            findings.add(finding(c, x[j], share, evidence));
+            Finding f = finding(c, x[j], share, evidence);
+            findings.add(f);
+            peaks.put(f, peak);
         }
-        findings.sort(Comparator.comparingDouble(Finding::sharePercent).reversed());
+        // the largest effect at any measured wavelength first: what a technician would see first
+        findings.sort(Comparator.comparingDouble((Finding f) -> peaks.get(f)).reversed());
 
         double rms = rms(residual);
         Optional<FringeReport> fringes = Optional.empty();

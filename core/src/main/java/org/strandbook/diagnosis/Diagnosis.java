@@ -6,7 +6,8 @@ import java.util.Optional;
 /**
  * What the deviation of one loop scan says is wrong.
  *
- * @param findings        fitted causes above the reporting threshold, largest first
+ * @param findings        fitted causes above the reporting threshold, the largest effect at any
+ *                        measured wavelength first
  * @param residualRmsDb   RMS of what the fit leaves unexplained over the measured points, dB
  * @param collinearNotes  pairs of signatures the measured range cannot tell apart, in words
  * @param fringes         etalon fringes, if any
