@@ -100,6 +100,10 @@ final class DelimitedSpectrumReader {
         for (int r = 0; r < rows; r++) {
             int lineNo = content.get(firstData + r) + 1;
             List<String> fields = split(lines[lineNo - 1], delimiter, lineNo);
+            // a delimiter after the last field, as some spreadsheets write it
+            if (fields.size() > 2 && fields.size() != fieldCount && fields.get(fields.size() - 1).isEmpty()) {
+                fields.remove(fields.size() - 1);
+            }
             if (fieldCount < 0) {
                 fieldCount = fields.size();
                 requireTwoColumns(fieldCount, delimiter, lineNo);
@@ -117,6 +121,9 @@ final class DelimitedSpectrumReader {
         if (headerIndex >= 0) {
             String headerLine = lines[headerIndex];
             List<String> header = split(headerLine, delimiter, headerIndex + 1);
+            if (header.size() == fieldCount + 1 && header.get(fieldCount).isEmpty()) {
+                header.remove(fieldCount);
+            }
             if (header.size() == fieldCount) {
                 unit = unitFromHeader(header.get(0)).orElse(null);
                 yLabel = header.get(1);
@@ -219,6 +226,23 @@ final class DelimitedSpectrumReader {
         if (delimiter == Delimiter.BLANKS) {
             return splitBlanks(line);
         }
+        if (line.indexOf('"') >= 0) {
+            return splitQuoted(line, delimiter.character, lineNo);
+        }
+        List<String> fields = new ArrayList<>(4);
+        int start = 0;
+        while (true) {
+            int end = line.indexOf(delimiter.character, start);
+            if (end < 0) {
+                fields.add(line.substring(start).strip());
+                return fields;
+            }
+            fields.add(line.substring(start, end).strip());
+            start = end + 1;
+        }
+    }
+
+    private List<String> splitQuoted(String line, char delimiter, int lineNo) throws SpectrumFileException {
         List<String> fields = new ArrayList<>(4);
         StringBuilder field = new StringBuilder();
         boolean quoted = false;
@@ -238,7 +262,7 @@ final class DelimitedSpectrumReader {
             } else if (c == '"' && field.toString().isBlank()) {
                 field.setLength(0);
                 quoted = true;
-            } else if (c == delimiter.character) {
+            } else if (c == delimiter) {
                 fields.add(field.toString().strip());
                 field.setLength(0);
             } else {
@@ -249,10 +273,6 @@ final class DelimitedSpectrumReader {
             throw fail(lineNo, "a quoted field is not closed");
         }
         fields.add(field.toString().strip());
-        // a delimiter after the last field, as some spreadsheets write it
-        if (fields.size() > 1 && fields.get(fields.size() - 1).isEmpty()) {
-            fields.remove(fields.size() - 1);
-        }
         return fields;
     }
 
@@ -300,11 +320,9 @@ final class DelimitedSpectrumReader {
             }
             f = f.replace(',', '.');
         }
-        if (NumberField.isNonFiniteWord(f)) {
-            throw fail(lineNo, NumberField.quote(field) + " in column " + column + " is not a finite number");
-        }
         if (!NumberField.isPlainDecimal(f)) {
-            throw fail(lineNo, NumberField.quote(field) + " in column " + column + " is not a number");
+            throw fail(lineNo, NumberField.quote(field) + " in column " + column
+                    + (NumberField.isNonFiniteWord(f) ? " is not a finite number" : " is not a number"));
         }
         double v = NumberField.parsePlainDecimal(f);
         if (!Double.isFinite(v)) {

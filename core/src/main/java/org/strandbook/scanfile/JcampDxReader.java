@@ -353,8 +353,8 @@ final class JcampDxReader {
             double d = number(deltaX);
             if (Math.abs(d - dx) > DELTAX_RELATIVE_TOLERANCE * Math.abs(dx)) {
                 throw fail(deltaX.line, "##DELTAX= " + NumberField.plain(d) + " disagrees with (LASTX − FIRSTX)/(NPOINTS − 1) = "
-                        + NumberField.plain(dx) + " from lines " + firstXRecord.line + ", " + lastXRecord.line + ", "
-                        + nRecord.line);
+                        + NumberField.plain(dx) + " (##FIRSTX= on line " + firstXRecord.line + ", ##LASTX= on line "
+                        + lastXRecord.line + ", ##NPOINTS= on line " + nRecord.line + ")");
             }
         }
         double[] y = new double[n];
@@ -437,7 +437,8 @@ final class JcampDxReader {
         }
         throw fail(lineNo, "line starts at X = " + NumberField.plain(xLine) + " but its first ordinate is point "
                 + (firstIndex + 1) + " of " + n + ", at X = " + NumberField.plain(expected)
-                + " by ##FIRSTX=, ##LASTX= and ##NPOINTS=: ordinates are missing or extra before this line");
+                + " by ##FIRSTX=, ##LASTX= and ##NPOINTS=: ordinates are missing or extra before this line, "
+                + "or one of those records is wrong");
     }
 
     private static boolean sameOrdinate(double a, double b) {

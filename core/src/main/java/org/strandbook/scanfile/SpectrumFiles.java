@@ -13,8 +13,9 @@ import java.util.HexFormat;
  * from the content and hands the text to the matching reader.
  *
  * <p>Format by content, not by file name: text whose first non-blank line starts with {@code ##}
- * (or a {@code $$} comment) is JCAMP-DX ({@link JcampDxReader}); anything else is read as
- * delimited text ({@link DelimitedSpectrumReader}). Encodings: see {@link SpectrumText}.
+ * (or a {@code $$} comment), or that has a {@code ##TITLE=} record within its first 50 lines, is
+ * JCAMP-DX ({@link JcampDxReader}); anything else is read as delimited text
+ * ({@link DelimitedSpectrumReader}). Encodings: see {@link SpectrumText}.
  *
  * <p>Files larger than {@link #MAX_FILE_BYTES} (64 MiB) are refused without being read: a 2,000-point
  * spectrum takes a few kB to a few hundred kB in any of these formats, so anything that large is a
@@ -26,6 +27,8 @@ public final class SpectrumFiles {
 
     /** The largest file accepted: 64 MiB. */
     public static final long MAX_FILE_BYTES = 64L * 1024 * 1024;
+
+    private static final int TITLE_SEARCH_LINES = 50;
 
     private SpectrumFiles() {
     }
@@ -89,13 +92,24 @@ public final class SpectrumFiles {
         while (i < text.length() && Character.isWhitespace(text.charAt(i))) {
             i++;
         }
-        return text.startsWith("##", i) || text.startsWith("$$", i);
+        if (text.startsWith("##", i) || text.startsWith("$$", i)) {
+            return true;
+        }
+        // a JCAMP-DX file with a stray line in front still deserves the JCAMP-DX reader's message
+        String[] lines = SpectrumText.lines(text.length() > 8192 ? text.substring(0, 8192) : text);
+        for (int k = 0; k < Math.min(lines.length, TITLE_SEARCH_LINES); k++) {
+            String line = lines[k].strip();
+            int eq = line.indexOf('=');
+            if (line.startsWith("##") && eq > 2 && JcampDxReader.normalizeLabel(line.substring(2, eq)).equals("TITLE")) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private static SpectrumFileException tooLarge(String fileName, long size) {
-        return new SpectrumFileException(fileName, 0, String.format(java.util.Locale.ROOT,
-                "the file is %.1f MiB, larger than the %d MiB a spectrum file may have",
-                size / (1024.0 * 1024.0), MAX_FILE_BYTES / (1024 * 1024)));
+        return new SpectrumFileException(fileName, 0, "the file has " + size + " bytes, more than the "
+                + MAX_FILE_BYTES + " bytes (64 MiB) a spectrum file may have");
     }
 
     private static String describe(IOException e) {

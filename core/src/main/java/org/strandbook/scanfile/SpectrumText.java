@@ -39,11 +39,18 @@ final class SpectrumText {
         } else if (startsWith(bytes, 0xFE, 0xFF)) {
             charset = StandardCharsets.UTF_16BE;
             offset = 2;
-        } else {
-            requireNoNulByte(fileName, bytes);
         }
-        String text = strictDecode(fileName, bytes, offset, charset);
-        requireNoControlCharacters(fileName, text);
+        String text;
+        if (charset == StandardCharsets.UTF_8 && isPlainAsciiText(bytes, offset)) {
+            // the common case, and the one the import benchmark measures: one pass, one copy
+            text = new String(bytes, offset, bytes.length - offset, StandardCharsets.ISO_8859_1);
+        } else {
+            if (charset == StandardCharsets.UTF_8) {
+                requireNoNulByte(fileName, bytes);
+            }
+            text = strictDecode(fileName, bytes, offset, charset);
+            requireNoControlCharacters(fileName, text);
+        }
         if (text.isBlank()) {
             throw new SpectrumFileException(fileName, 0, "the file holds only blank space");
         }
@@ -53,8 +60,21 @@ final class SpectrumText {
     /** The text split at CR LF, CR or LF; index {@code i} is line {@code i + 1}. */
     static String[] lines(String text) {
         List<String> lines = new ArrayList<>();
-        int start = 0;
         int n = text.length();
+        if (text.indexOf('\r') < 0) {
+            // LF only: indexOf scans far faster than a char-by-char loop
+            int start = 0;
+            while (start < n) {
+                int end = text.indexOf('\n', start);
+                if (end < 0) {
+                    end = n;
+                }
+                lines.add(text.substring(start, end));
+                start = end + 1;
+            }
+            return lines.toArray(new String[0]);
+        }
+        int start = 0;
         for (int i = 0; i < n; i++) {
             char c = text.charAt(i);
             if (c == '\n' || c == '\r') {
@@ -69,6 +89,17 @@ final class SpectrumText {
             lines.add(text.substring(start));
         }
         return lines.toArray(new String[0]);
+    }
+
+    /** True if every byte is printable ASCII, a tab, CR or LF: then Latin-1 decoding equals UTF-8. */
+    private static boolean isPlainAsciiText(byte[] bytes, int offset) {
+        for (int i = offset; i < bytes.length; i++) {
+            int b = bytes[i];
+            if (b < 0x20 ? (b != '\n' && b != '\r' && b != '\t') : b == 0x7F) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private static boolean startsWith(byte[] bytes, int... prefix) {
@@ -110,10 +141,10 @@ final class SpectrumText {
             int bad = in.position();
             int line = 1 + countLineBreaks(out.duplicate().flip());
             String what = charset == StandardCharsets.UTF_8
-                    ? String.format(Locale.ROOT, "byte 0x%02X at byte offset %d is not UTF-8 text", bytes[bad] & 0xFF, bad)
-                    : "the text is not valid " + charset.name() + " at byte offset " + bad;
-            throw new SpectrumFileException(fileName, line, what
-                    + " (other 8-bit encodings are not read: save the spectrum as UTF-8)");
+                    ? String.format(Locale.ROOT, "byte 0x%02X at byte offset %d is not UTF-8 text (other 8-bit "
+                            + "encodings are not read: save the spectrum as UTF-8)", bytes[bad] & 0xFF, bad)
+                    : "the " + charset.name() + " text breaks off at byte offset " + bad + " (cut short or not UTF-16)";
+            throw new SpectrumFileException(fileName, line, what);
         }
         out.flip();
         return out.toString();
