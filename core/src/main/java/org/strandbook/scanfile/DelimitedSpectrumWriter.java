@@ -6,7 +6,7 @@ import java.nio.file.Path;
 import java.util.Map;
 
 /**
- * Writes one spectrum as delimited text that {@link SpectrumFiles} reads back unchanged: comment
+ * Writes one spectrum as delimited text that {@link SpectrumFiles} reads back: comment
  * lines {@code # key: value} for the title and metadata, a header naming the abscissa unit, then
  * one row per point in the spectrum's own x unit and order of ascending wavelength. Title, unit, label,
  * metadata values and numbers read back as written.
@@ -20,7 +20,12 @@ public final class DelimitedSpectrumWriter {
 
     /** The column separator. */
     public enum Delimiter {
-        COMMA(','), SEMICOLON(';'), TAB('\t');
+        /** {@code ,} with a decimal point. */
+        COMMA(','),
+        /** {@code ;}, the usual choice with a decimal comma. */
+        SEMICOLON(';'),
+        /** A tab character. */
+        TAB('\t');
 
         private final char character;
 

@@ -102,10 +102,12 @@ public final class JcampDxWriter {
         return new JcampDxWriter(form, significantDigits, oneLine(Objects.requireNonNull(newDataType, "dataType")));
     }
 
+    /** The form of evenly spaced tables this writer produces. */
     public Form form() {
         return form;
     }
 
+    /** Significant digits kept of the largest |ordinate| (1 to 15). */
     public int significantDigits() {
         return significantDigits;
     }

@@ -139,6 +139,7 @@ class AsdfCodecTest {
 
     @Test
     void dupCountBeyondTheLimitIsRefusedBeforeFillingMemory() {
+        // contract of AsdfDecoder: a line never holds more ordinates than the caller allows
         AsdfDecoder decoder = new AsdfDecoder();
         AsdfDecoder.SyntaxError e = assertThrows(AsdfDecoder.SyntaxError.class,
                 () -> decoder.decodeXyDataLine("1000As99999999999", 4000));

@@ -68,6 +68,7 @@ class DelimitedSpectrumReaderTest {
 
     @Test
     void descendingWavelengthAxisIsReversedWithItsValues() throws Exception {
+        // contract of DelimitedSpectrumReader (class Javadoc): one-way axes in either direction, values carried
         SpectrumFile s = read("desc.csv", "Wavelength (nm),Counts\n1700,7\n1600,6\n1500,5\n");
         assertArrayEquals(new double[] {1500, 1600, 1700}, s.wavelengthsNm());
         assertArrayEquals(new double[] {5, 6, 7}, s.values());
@@ -90,6 +91,7 @@ class DelimitedSpectrumReaderTest {
 
     @Test
     void rangeThatFitsNoUnitAsksForAHeader() {
+        // contract of DelimitedSpectrumReader (class Javadoc): 30..100 is neither um, nm nor cm-1
         SpectrumFileException e = assertThrows(SpectrumFileException.class, () -> read("odd.csv", "40;1\n60;2\n"));
         assertEquals(1, e.lineNumber());
         assertTrue(e.problem().contains("name it in a header"), e.getMessage());
@@ -97,6 +99,7 @@ class DelimitedSpectrumReaderTest {
 
     @Test
     void commentLinesBecomeMetadataAndTitle() throws Exception {
+        // contract of DelimitedSpectrumReader (class Javadoc): "# key: value" and "# key = value" lines
         SpectrumFile s = read("loop3.csv", """
                 # title: Loop 3 after re-termination
                 # operator: A. Example
@@ -117,6 +120,7 @@ class DelimitedSpectrumReaderTest {
 
     @Test
     void quotedHeaderFieldsMayHoldTheDelimiter() throws Exception {
+        // RFC 4180, section 2: fields holding the delimiter are enclosed in double quotes
         SpectrumFile s = read("q.csv", "\"Wavelength (nm)\",\"Intensity, counts\"\n1000,5\n1001,6,\n");
         assertEquals("Intensity, counts", s.yLabel());
         assertArrayEquals(new double[] {5, 6}, s.values(), "a trailing delimiter is ignored");
@@ -124,6 +128,7 @@ class DelimitedSpectrumReaderTest {
 
     @Test
     void fileNameWithoutExtensionIsTheTitleWhenNoneIsGiven() throws Exception {
+        // contract of SpectrumFile (record Javadoc): title falls back to the file name without extension
         assertEquals("lamp_2026-03-14", read("lamp_2026-03-14.csv", "1000;1\n1001;2\n").title());
     }
 

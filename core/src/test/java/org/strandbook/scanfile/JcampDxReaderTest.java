@@ -82,6 +82,7 @@ class JcampDxReaderTest {
 
     @Test
     void npointsDisagreeingWithTheTableIsRefused() {
+        // McDonald & Wilks 1988: NPOINTS is the number of ordinates in the table
         String text = PUBLISHED_EXAMPLE.replace("##NPOINTS= 10", "##NPOINTS= 11");
         SpectrumFileException e = assertThrows(SpectrumFileException.class, () -> read(text));
         assertEquals(14, e.lineNumber(), e.getMessage());
@@ -90,6 +91,7 @@ class JcampDxReaderTest {
 
     @Test
     void firstXDisagreeingWithTheFirstLineIsRefused() {
+        // McDonald & Wilks 1988: each (X++(Y..Y)) line starts with the abscissa of its first ordinate
         String text = PUBLISHED_EXAMPLE.replace("##FIRSTX= 1000", "##FIRSTX= 990");
         SpectrumFileException e = assertThrows(SpectrumFileException.class, () -> read(text));
         assertEquals("ex.jdx:13: the first data line starts at X = 1000 but ##FIRSTX= 990 (line 8)", e.getMessage());
@@ -97,6 +99,7 @@ class JcampDxReaderTest {
 
     @Test
     void firstYDisagreeingWithTheFirstOrdinateIsRefused() {
+        // McDonald & Wilks 1988: FIRSTY is the first ordinate in real units (ordinate x YFACTOR)
         String text = PUBLISHED_EXAMPLE.replace("##FIRSTY= 1", "##FIRSTY= 3");
         SpectrumFileException e = assertThrows(SpectrumFileException.class, () -> read(text));
         assertEquals(11, e.lineNumber(), e.getMessage());
@@ -104,7 +107,8 @@ class JcampDxReaderTest {
 
     @Test
     void lastXThatMovesTheLineAbscissaeIsRefused() {
-        // two lines: the second line's X (1005) no longer matches point 6 once LASTX is stretched
+        // McDonald & Wilks 1988: point i lies at FIRSTX + i (LASTX - FIRSTX)/(NPOINTS - 1);
+        // two lines: the second line's X (1006) no longer matches point 6 once LASTX is stretched
         String text = PUBLISHED_EXAMPLE.replace("##LASTX= 1009", "##LASTX= 1027").replace("1000AJT%jX\n1009c",
                 "1000AJT%jA\n1006@jU\n1009c");
         SpectrumFileException e = assertThrows(SpectrumFileException.class, () -> read(text));
@@ -160,6 +164,7 @@ class JcampDxReaderTest {
 
     @Test
     void multiBlockFilesAreRefused() {
+        // McDonald & Wilks 1988: a LINK block holds further blocks; Strandbook imports single spectra only
         String text = "##TITLE= link\n##JCAMP-DX= 5.01\n##DATA TYPE= LINK\n##BLOCKS= 2\n" + PUBLISHED_EXAMPLE + "##END=\n";
         SpectrumFileException e = assertThrows(SpectrumFileException.class, () -> read(text));
         assertTrue(e.getMessage().matches("ex\\.jdx:\\d+: .*(multi-block|nested block).*"), e.getMessage());
@@ -167,6 +172,7 @@ class JcampDxReaderTest {
 
     @Test
     void ntuplesAreRefused() {
+        // Lampen et al. 1994: NTUPLES carry multi-variable data, not one (X++(Y..Y)) spectrum
         String text = PUBLISHED_EXAMPLE.replace("##XYDATA= (X++(Y..Y))", "##NTUPLES= NMR SPECTRUM\n##XYDATA= (X++(Y..Y))");
         SpectrumFileException e = assertThrows(SpectrumFileException.class, () -> read(text));
         assertEquals(12, e.lineNumber());
@@ -175,6 +181,7 @@ class JcampDxReaderTest {
 
     @Test
     void missingEndIsRefusedAsCutShort() {
+        // McDonald & Wilks 1988: every block ends with ##END=
         String text = PUBLISHED_EXAMPLE.replace("##END=\n", "");
         SpectrumFileException e = assertThrows(SpectrumFileException.class, () -> read(text));
         assertEquals("ex.jdx:14: the file ends without ##END= (cut short?)", e.getMessage());

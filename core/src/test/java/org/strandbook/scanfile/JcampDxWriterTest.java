@@ -70,6 +70,7 @@ class JcampDxWriterTest {
 
     @Test
     void unevenAxisFallsBackToXyPoints() throws Exception {
+        // McDonald & Wilks 1988: ##XYPOINTS=(XY..XY) for unequally spaced abscissae
         double[] nm = {1000, 1001.5, 1004, 1010};
         double[] values = {0.5, 0.25, 0.125, 0.0625};
         String text = JcampDxWriter.difDup().toText(SpectrumFile.inMemory("uneven", XUnit.NM, "", nm, values, Map.of()));
@@ -106,6 +107,7 @@ class JcampDxWriterTest {
 
     @Test
     void writeReplacesTheFileWholeAndLeavesNoTemporaryFile(@TempDir Path dir) throws Exception {
+        // write to a temporary file, then rename over the target [common practice]
         Path target = dir.resolve("loop_A3.jdx");
         Files.writeString(target, "old content");
         SpectrumFile s = SpectrumFile.inMemory("loop A3", XUnit.NM, "COUNTS",
@@ -121,6 +123,7 @@ class JcampDxWriterTest {
 
     @Test
     void metadataKeysThatAreNotLabelsBecomeUserDefinedLabels() throws Exception {
+        // McDonald & Wilks 1988 [from memory]: labels starting with $ are user-defined; $$ starts a comment
         Map<String, String> metadata = new LinkedHashMap<>();
         metadata.put("integration time (ms)", "120");
         metadata.put("comment", "line one\nline two $$ not a comment");

@@ -111,6 +111,7 @@ class MalformedSpectrumCorpusTest {
         cases.add(Named.of("encoded surrogate in UTF-8", withSurrogate));
     }
 
+    /** Fixed-seed random bytes and text, and the signatures of common binary formats (PNG, ZIP). */
     private static void binaryJunk(List<Named<byte[]>> cases) {
         Random random = new Random(20260314L);
         for (int i = 0; i < 40; i++) {
@@ -132,6 +133,11 @@ class MalformedSpectrumCorpusTest {
         cases.add(Named.of("bell character in a row", "1000;1\n1001;\u00072\n".getBytes(StandardCharsets.UTF_8)));
     }
 
+    /**
+     * RFC 4180 (one record per line, same field count), IEEE 754-2019 (NaN and infinities are not
+     * finite numbers; 1e400 overflows binary64), ISO 80000-1:2009 7.3.2 (one decimal sign, no
+     * digit grouping with points), and the reader's documented contract (two columns, one-way axis).
+     */
     private static void delimitedContent(List<Named<byte[]>> cases) {
         String header = "Wavelength (nm);Counts\n";
         add(cases, "empty file", "");

@@ -28,6 +28,7 @@ class SpectrumFilesTest {
 
     @Test
     void readFromPathKeepsNameAndHashOfTheBytes(@TempDir Path dir) throws Exception {
+        // FIPS 180-4: SHA-256 of exactly the file's bytes
         Path file = dir.resolve("dark_0314.csv");
         Files.writeString(file, CSV);
         SpectrumFile s = SpectrumFiles.read(file);
@@ -37,6 +38,7 @@ class SpectrumFilesTest {
 
     @Test
     void formatIsChosenByContentNotByName() throws Exception {
+        // McDonald & Wilks 1988: a JCAMP-DX file opens with ##TITLE=, whatever its name
         byte[] jcamp = JcampDxWriter.affn().toBytes(SpectrumFile.inMemory("t", XUnit.NM, "", new double[] {1000, 1001},
                 new double[] {1, 2}, Map.of()));
         assertEquals("t", SpectrumFiles.read("misnamed.csv", jcamp).title());
@@ -69,6 +71,7 @@ class SpectrumFilesTest {
 
     @Test
     void latin1MicroSignIsRefusedWithItsLine() {
+        // RFC 3629, section 3: a lone byte 0xB5 is not a UTF-8 sequence
         byte[] bytes = "# note\nWavelength (µm);Counts\n1.5;2\n1.6;3\n".getBytes(StandardCharsets.ISO_8859_1);
         SpectrumFileException e = assertThrows(SpectrumFileException.class, () -> SpectrumFiles.read("l1.csv", bytes));
         assertEquals("l1.csv:2: byte 0xB5 at byte offset 19 is not UTF-8 text (other 8-bit encodings are not read: "
@@ -77,6 +80,7 @@ class SpectrumFilesTest {
 
     @Test
     void fileLargerThanTheLimitIsRefusedWithoutReadingIt(@TempDir Path dir) throws Exception {
+        // contract of SpectrumFiles (class Javadoc): 64 MiB limit, checked from the size before reading
         Path huge = dir.resolve("disk.img");
         try (RandomAccessFile f = new RandomAccessFile(huge.toFile(), "rw")) {
             f.setLength(SpectrumFiles.MAX_FILE_BYTES + 1); // sparse: no 64 MiB written
@@ -88,6 +92,7 @@ class SpectrumFilesTest {
 
     @Test
     void missingFileIsASpectrumFileExceptionOnLineZero(@TempDir Path dir) {
+        // contract of SpectrumFileException (class Javadoc): line 0 when no single line is at fault
         SpectrumFileException e = assertThrows(SpectrumFileException.class,
                 () -> SpectrumFiles.read(dir.resolve("gone.csv")));
         assertEquals(0, e.lineNumber());
@@ -96,6 +101,7 @@ class SpectrumFilesTest {
 
     @Test
     void spectrumFileCopiesItsArrays() throws Exception {
+        // contract of SpectrumFile (record Javadoc): arrays are copied on the way in and out
         SpectrumFile s = SpectrumFiles.read("c.csv", CSV.getBytes(StandardCharsets.UTF_8));
         s.values()[0] = 99;
         s.wavelengthsNm()[0] = 1;
