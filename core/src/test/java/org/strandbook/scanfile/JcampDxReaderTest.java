@@ -116,6 +116,14 @@ class JcampDxReaderTest {
     }
 
     @Test
+    void windowsAndClassicMacLineEndsReadTheSame() throws Exception {
+        // CR LF (Windows) and lone CR (classic Mac OS) line ends [common practice]
+        SpectrumFile lf = read(PUBLISHED_EXAMPLE);
+        assertEquals(lf, read(PUBLISHED_EXAMPLE.replace("\n", "\r\n")).withSource("ex.jdx", lf.sha256Hex()));
+        assertEquals(lf, read(PUBLISHED_EXAMPLE.replace("\n", "\r")).withSource("ex.jdx", lf.sha256Hex()));
+    }
+
+    @Test
     void version501AndCommentsAreAccepted() throws Exception {
         // Lampen et al., Appl. Spectrosc. 48, 1545 (1994): version 5 keeps the 4.24 XYDATA table
         String text = PUBLISHED_EXAMPLE.replace("##JCAMP-DX= 4.24", "##JCAMP-DX= 5.01 $$ written by an analyzer")
