@@ -17,6 +17,8 @@ import org.strandbook.optics.path.OpticsCache;
 import org.strandbook.site.ScanRecord;
 import org.strandbook.site.Spectrum;
 import org.strandbook.site.WavelengthBand;
+import org.strandbook.site.ScanKind;
+import org.strandbook.throughput.DarkNoise;
 import org.strandbook.throughput.OneCordThroughput;
 import org.strandbook.throughput.RawSpectrum;
 import org.strandbook.throughput.ThroughputResult;
@@ -159,7 +161,9 @@ public final class PointEvaluator {
     private static RawSpectrum raw(ScanRecord scan, SpectrumSource source, Map<Long, RawSpectrum> fetched) {
         return fetched.computeIfAbsent(scan.id(), id -> {
             Spectrum s = source.spectrum(id);
-            return RawSpectrum.ofNm(s.wavelengthsNm(), s.values());
+            RawSpectrum raw = RawSpectrum.ofNm(s.wavelengthsNm(), s.values());
+            // a dark's noise is estimated once, however many scans it serves
+            return scan.kind() == ScanKind.DARK ? raw.withNoiseCounts(DarkNoise.sigmaCounts(s.values())) : raw;
         });
     }
 

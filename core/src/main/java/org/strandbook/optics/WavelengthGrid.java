@@ -154,12 +154,32 @@ public final class WavelengthGrid {
         return values[lo] + f * (values[hi] - values[lo]);
     }
 
-    /** The spectrum {@code values} (on this grid) linearly resampled onto {@code target}. */
+    /**
+     * The spectrum {@code values} (on this grid) linearly resampled onto {@code target}, end values
+     * held outside this grid. Both axes ascend, so one merged walk serves every target point.
+     */
     public double[] resample(double[] values, WavelengthGrid target) {
         requireSameLength(values);
-        double[] out = new double[target.size()];
+        double[] src = wavelengthsNm;
+        double[] dst = target.wavelengthsNm;
+        int n = src.length;
+        double[] out = new double[dst.length];
+        int j = 0;
         for (int i = 0; i < out.length; i++) {
-            out[i] = interpolate(values, target.wavelengthsNm[i]);
+            double w = dst[i];
+            if (n == 1 || w <= src[0]) {
+                out[i] = values[0];
+                continue;
+            }
+            if (w >= src[n - 1]) {
+                out[i] = values[n - 1];
+                continue;
+            }
+            while (src[j + 1] < w) {
+                j++;
+            }
+            double f = (w - src[j]) / (src[j + 1] - src[j]);
+            out[i] = values[j] + f * (values[j + 1] - values[j]);
         }
         return out;
     }

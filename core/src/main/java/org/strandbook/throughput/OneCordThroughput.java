@@ -126,7 +126,7 @@ public final class OneCordThroughput {
             if (reasons[i] == null) {
                 usable[i] = true;
                 lossDb[i] = -10 * Math.log10(netLoop[i] / netRef[i]);
-                sigmaDb[i] = DB_PER_RELATIVE_CHANGE * Math.hypot(loopNoise / netLoop[i], refNoise / netRef[i]);
+                sigmaDb[i] = DB_PER_RELATIVE_CHANGE * Math.sqrt(square(loopNoise / netLoop[i]) + square(refNoise / netRef[i]));
             } else {
                 lossDb[i] = Double.NaN;
                 sigmaDb[i] = Double.NaN;
@@ -225,5 +225,9 @@ public final class OneCordThroughput {
 
     private static String formatNumber(double value) {
         return new DecimalFormat("0.#", DecimalFormatSymbols.getInstance(Locale.ROOT)).format(value);
+    }
+
+    private static double square(double v) {
+        return v * v;
     }
 }

@@ -68,12 +68,22 @@ public final class ScanGenerator {
 
     private final DemoPlant plant;
     private final long seed;
+    private final int visits;
     private final Catalog catalog;
     private final Map<String, InjectedFault> injected = new HashMap<>();
 
     public ScanGenerator(DemoPlant plant, long seed) {
+        this(plant, seed, VISITS);
+    }
+
+    /** A generator with another number of visits (the benchmark's long histories). */
+    public ScanGenerator(DemoPlant plant, long seed, int visits) {
+        if (visits < 1) {
+            throw new IllegalArgumentException("visits must be 1 or more, was " + visits);
+        }
         this.plant = plant;
         this.seed = seed;
+        this.visits = visits;
         this.catalog = Catalog.of(plant.fiberTypes(), plant.connectorTypes(), plant.probeTypes());
     }
 
@@ -121,7 +131,7 @@ public final class ScanGenerator {
 
         List<GeneratedScan> out = new ArrayList<>();
         double[] lastFaultDb = null;
-        for (int v = 0; v < VISITS; v++) {
+        for (int v = 0; v < visits; v++) {
             Instant t0 = COMMISSIONING.plus(VISIT_INTERVAL.multipliedBy(v)).plus(Duration.ofMinutes(40L * index));
             String operator = OPERATORS[(v + index) % OPERATORS.length];
             double integrationMs = analyzer.detector() == org.strandbook.site.DetectorType.SILICON ? 20 : 50;
@@ -133,7 +143,7 @@ public final class ScanGenerator {
             double[] lossDb = new PointBudgetBuilder(truthCatalog).build(point, send, ret, cache).totalLossDb();
             double[] faultDb = new double[axis.size()];
             if (dp.fault() == DemoPlant.Fault.HYDROGEN_DARKENING) {
-                double scale = hydrogenFinalDb * yearFraction / 2.0
+                double scale = hydrogenFinalDb * yearFraction / (VISIT_INTERVAL.toDays() * (VISITS - 1) / 365.25)
                         / AttenuationShapes.hydrogenBandShape(1240, DeviationDiagnoser.HYDROGEN_2420_RELATIVE);
                 for (int i = 0; i < faultDb.length; i++) {
                     faultDb[i] = scale * AttenuationShapes.hydrogenBandShape(axis.wavelengthNm(i),
