@@ -4,13 +4,16 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Arrays;
 import java.util.Enumeration;
 import java.util.Locale;
+import java.util.regex.Pattern;
 import java.util.zip.ZipEntry;
 import java.util.zip.ZipFile;
 
 import org.apache.poi.openxml4j.opc.OPCPackage;
 import org.apache.poi.openxml4j.opc.PackageAccess;
+import org.apache.poi.poifs.filesystem.FileMagic;
 import org.apache.poi.poifs.filesystem.POIFSFileSystem;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 
@@ -42,9 +45,14 @@ public final class CableScheduleReader {
 
     static final int MAX_PARTS = 1000;
 
+    /** An empty ZIP archive is its 22-byte end-of-central-directory record alone (PKWARE APPNOTE.TXT). */
+    private static final int SMALLEST_ZIP_BYTES = 22;
+
     private static final byte[] ZIP_ENTRY = {'P', 'K', 3, 4};
     private static final byte[] ZIP_EMPTY = {'P', 'K', 5, 6};
     private static final byte[] OLE2 = {(byte) 0xD0, (byte) 0xCF, 0x11, (byte) 0xE0, (byte) 0xA1, (byte) 0xB1, 0x1A, (byte) 0xE1};
+
+    private static final Pattern JAVA_CLASS_PREFIX = Pattern.compile("^([a-z_][\\w]*\\.)+[A-Z]\\w*: ");
 
     private final ComponentCatalog known;
     private final long maxFileBytes;
@@ -102,6 +110,9 @@ public final class CableScheduleReader {
         long size = Files.size(file);
         if (size == 0) {
             return name + " is empty (0 bytes), not an XLSX workbook";
+        }
+        if (size < SMALLEST_ZIP_BYTES) {
+            return name + " is only " + size + " bytes, too short for an XLSX workbook";
         }
         if (size > maxFileBytes) {
             return name + " is " + megabytes(size) + "; a cable schedule may be at most " + megabytes(maxFileBytes);
@@ -187,6 +198,16 @@ public final class CableScheduleReader {
     }
 
     private static String describeNonZip(byte[] head, int n, String name) {
+        String kind = switch (FileMagic.valueOf(Arrays.copyOf(head, n))) {
+            case PDF -> "a PDF document";
+            case PNG, JPEG, GIF, TIFF, BMP, WMF, EMF -> "an image";
+            case RTF, WORD2, MSWRITE -> "a word-processor document";
+            case BIFF2, BIFF3, BIFF4 -> "a very old Excel worksheet";
+            default -> null;
+        };
+        if (kind != null) {
+            return name + " is " + kind + ", not an XLSX workbook";
+        }
         int start = 0;
         if (n >= 3 && (head[0] & 0xFF) == 0xEF && (head[1] & 0xFF) == 0xBB && (head[2] & 0xFF) == 0xBF) {
             start = 3;
@@ -233,6 +254,8 @@ public final class CableScheduleReader {
             return e.getClass().getSimpleName();
         }
         String line = message.strip().lines().findFirst().orElse("");
+        // a wrapped exception repeats its class name; the user needs only the reason
+        line = JAVA_CLASS_PREFIX.matcher(line).replaceFirst("").replaceFirst("^error: ", "");
         return line.length() > 200 ? line.substring(0, 200) + "..." : line;
     }
 

@@ -7,7 +7,7 @@ import java.util.regex.Pattern;
  * Numbers that arrive as text in a numeric column, and numbers shown back in messages.
  *
  * <p>Accepted: an optional sign (ASCII or the Unicode minus), digits, one decimal sign that may be a
- * point or a comma, an optional exponent ({@code 1.5e3}). ISO 80000-1:2009 §7.3.2 allows either
+ * point or a comma, an optional exponent ({@code 1.5e3}). ISO 80000-1:2009 (numbers: decimal sign, digit grouping) allows either
  * decimal sign and groups digits in threes with a space, never with a point or comma; so spaces
  * (also no-break and thin spaces) between digits are dropped, while a point or comma followed by
  * exactly three digits after one to three leading digits ({@code 1,234}, {@code 12.500}) is

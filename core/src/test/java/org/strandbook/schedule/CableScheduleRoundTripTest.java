@@ -77,7 +77,7 @@ class CableScheduleRoundTripTest {
         assertEquals(true, CableScheduleWriter.looksLikeFormula("\rcmd"));
     }
 
-    // ISO 80000-1:2009 §7.3.2: the decimal sign is a comma or a point on the line.
+    // ISO 80000-1:2009 (numbers): the decimal sign is a comma or a point on the line.
     @Test
     void lengthTypedAsTextWithDecimalCommaOrPointIsAccepted() throws IOException {
         Path file = ScheduleFixture.writeEdited(folder, ScheduleFixture.set("Segments", "F2", "12,5")

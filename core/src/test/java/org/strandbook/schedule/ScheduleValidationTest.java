@@ -68,7 +68,7 @@ class ScheduleValidationTest {
                 problemsAfter(set("Segments", "F3", "twelve")));
     }
 
-    // ISO 80000-1:2009 §7.3.2 groups digits with a space, never a comma or point, so "1,234"
+    // ISO 80000-1:2009 (numbers) groups digits with a space, never a comma or point, so "1,234"
     // written by someone who groups with commas would silently become 1.234 m: it is refused.
     @Test
     void lengthWithCommaBeforeThreeDigitsIsRejectedAsAmbiguous() throws IOException {
