@@ -103,7 +103,7 @@ final class CatalogSheets {
             OhGrade ohGrade = row.choice(ScheduleColumn.FIBER_OH_GRADE, OhGrade.class, null, "OH grade");
             double ohPpm = row.number(ScheduleColumn.FIBER_OH_PPM, OH_PPM);
             if (!row.faulty()) {
-                build(row, ScheduleColumn.FIBER_CODE, () -> fibers.put(code, new FiberType(code, description, coreUm,
+                row.guard(ScheduleColumn.FIBER_CODE, () -> fibers.put(code, new FiberType(code, description, coreUm,
                         claddingUm, bufferUm, na, coreMaterial, ohGrade, ohPpm, List.of())));
             }
         }
@@ -142,7 +142,7 @@ final class CatalogSheets {
                 }
             }
             if (!row.faulty() && fibers.containsKey(code)) {
-                build(row, ScheduleColumn.ATTENUATION_WAVELENGTH_NM, () -> datasheets
+                row.guard(ScheduleColumn.ATTENUATION_WAVELENGTH_NM, () -> datasheets
                         .computeIfAbsent(code, k -> new ArrayList<>()).add(new AttenuationPoint(wavelengthNm, dbPerKm)));
             }
         }
@@ -163,7 +163,7 @@ final class CatalogSheets {
             double lossDb = row.number(ScheduleColumn.CONNECTOR_TYPICAL_LOSS_DB, TYPICAL_LOSS_DB);
             Boolean airGap = row.yesNo(ScheduleColumn.CONNECTOR_AIR_GAP, "air gap");
             if (!row.faulty()) {
-                build(row, ScheduleColumn.CONNECTOR_CODE,
+                row.guard(ScheduleColumn.CONNECTOR_CODE,
                         () -> connectors.add(new ConnectorType(code, description, family, lossDb, airGap)));
             }
         }
@@ -186,7 +186,7 @@ final class CatalogSheets {
             double pathMm = row.number(ScheduleColumn.PROBE_OPTICAL_PATH_MM, OPTICAL_PATH_MM);
             double fixedLossDb = row.number(ScheduleColumn.PROBE_FIXED_LOSS_DB, FIXED_LOSS_DB);
             if (!row.faulty()) {
-                build(row, ScheduleColumn.PROBE_CODE,
+                row.guard(ScheduleColumn.PROBE_CODE,
                         () -> probes.add(new ProbeType(code, description, kind, window, faces, pathMm, fixedLossDb)));
             }
         }
@@ -204,23 +204,11 @@ final class CatalogSheets {
                     + " give the new " + what + " a code of its own");
             return null;
         }
-        Optional<CellPlace> earlier = codes.define(code, row.place(column));
+        Optional<ScheduleCell> earlier = codes.define(code, row.place(column));
         if (earlier.isPresent()) {
             row.problem(column, "duplicate " + what + " code '" + code + "' (first on row " + earlier.get().row() + ")");
             return null;
         }
         return code;
-    }
-
-    /**
-     * Builds a model value from a row whose cells all passed; the model's own checks are the last
-     * guard, and any rule they enforce beyond the cell checks still becomes a located problem.
-     */
-    static void build(SheetRow row, ScheduleColumn column, Runnable construction) {
-        try {
-            construction.run();
-        } catch (IllegalArgumentException e) {
-            row.problem(column, e.getMessage());
-        }
     }
 }

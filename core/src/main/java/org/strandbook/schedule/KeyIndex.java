@@ -16,7 +16,7 @@ import java.util.Optional;
 final class KeyIndex {
 
     private final Map<String, String> spellingByFolded = new HashMap<>();
-    private final Map<String, CellPlace> placeByFolded = new HashMap<>();
+    private final Map<String, ScheduleCell> placeByFolded = new HashMap<>();
     private boolean complete = true;
 
     /** Adds a key known from elsewhere (the shipped catalog). */
@@ -28,9 +28,9 @@ final class KeyIndex {
      * Registers a key defined at {@code place}; returns the place of an earlier definition equal
      * ignoring case, if any. Callers check {@link #isKnownElsewhere} first.
      */
-    Optional<CellPlace> define(String key, CellPlace place) {
+    Optional<ScheduleCell> define(String key, ScheduleCell place) {
         String folded = fold(key);
-        CellPlace earlier = placeByFolded.get(folded);
+        ScheduleCell earlier = placeByFolded.get(folded);
         if (earlier != null) {
             return Optional.of(earlier);
         }
@@ -45,7 +45,7 @@ final class KeyIndex {
         return spellingByFolded.containsKey(folded) && !placeByFolded.containsKey(folded);
     }
 
-    Optional<CellPlace> placeOf(String key) {
+    Optional<ScheduleCell> placeOf(String key) {
         return Optional.ofNullable(placeByFolded.get(fold(key)));
     }
 

@@ -58,11 +58,15 @@ final class LegSheets {
     }
 
     /** One element of a leg at its position; {@code draft} is null when its row had problems. */
-    private record Entry(int position, CellPlace positionCell, boolean segment, Draft draft) {
+    private record Entry(int position, ScheduleCell positionCell, boolean segment, Draft draft) {
     }
 
-    /** @param legs every leg found, by point tag and direction; empty when a leg sheet could not be read */
-    record Result(Map<String, Map<PathDirection, PathLeg>> legs) {
+    /**
+     * @param legs          every leg found, by point tag and direction; empty when a leg sheet could not be read
+     * @param cableIds      defined cable IDs and their cells
+     * @param jointsByPoint joint labels and their cells, per point tag
+     */
+    record Result(Map<String, Map<PathDirection, PathLeg>> legs, KeyIndex cableIds, Map<String, KeyIndex> jointsByPoint) {
     }
 
     private final Workbook workbook;
@@ -70,6 +74,8 @@ final class LegSheets {
     private final CatalogSheets.Result catalog;
     private final ProblemLog log;
     private final Map<LegKey, List<Entry>> entries = new LinkedHashMap<>();
+    private final KeyIndex cableIds = new KeyIndex();
+    private final Map<String, KeyIndex> labelsByPoint = new HashMap<>();
 
     private LegSheets(Workbook workbook, PlantSheets.Result plant, CatalogSheets.Result catalog, ProblemLog log) {
         this.workbook = workbook;
@@ -83,14 +89,13 @@ final class LegSheets {
     }
 
     private Result read() {
-        KeyIndex cableIds = new KeyIndex();
         boolean segmentsRead = segments(cableIds);
         Map<String, List<Bend>> bends = bends(cableIds);
         boolean jointsRead = joints();
         Map<String, Map<PathDirection, PathLeg>> legs = new HashMap<>();
         if (!segmentsRead || !jointsRead) {
             // half a leg cannot be judged; the missing or unreadable sheet is reported already
-            return new Result(legs);
+            return new Result(legs, cableIds, labelsByPoint);
         }
         for (Map.Entry<LegKey, List<Entry>> leg : entries.entrySet()) {
             List<Entry> ordered = checkOrder(leg.getKey(), leg.getValue());
@@ -114,7 +119,7 @@ final class LegSheets {
                 }
             }
         }
-        return new Result(legs);
+        return new Result(legs, cableIds, labelsByPoint);
     }
 
     private boolean segments(KeyIndex cableIds) {
@@ -128,8 +133,8 @@ final class LegSheets {
             LegKey key = legKey(pointTag, row.choice(ScheduleColumn.SEGMENT_DIRECTION, PathDirection.class, null,
                     "direction"));
             int position = row.whole(ScheduleColumn.SEGMENT_POSITION, POSITION);
-            String cableId = PlantSheets.uniqueTag(row, ScheduleColumn.SEGMENT_CABLE_ID, cableIds, "cable ID");
-            String fiber = PlantSheets.reference(row, ScheduleColumn.SEGMENT_FIBER_TYPE, catalog.fiberCodes(),
+            String cableId = row.uniqueKey(ScheduleColumn.SEGMENT_CABLE_ID, cableIds, "cable ID");
+            String fiber = row.reference(ScheduleColumn.SEGMENT_FIBER_TYPE, catalog.fiberCodes(),
                     "fiber type", "in the catalog nor on sheet 'Fiber types'");
             double lengthM = row.number(ScheduleColumn.SEGMENT_LENGTH_M, LENGTH_M);
             Draft draft = row.faulty() ? null : new SegmentDraft(cableId, fiber, lengthM);
@@ -145,12 +150,12 @@ final class LegSheets {
             return bends;
         }
         for (SheetRow row : rows.get()) {
-            String cableId = PlantSheets.reference(row, ScheduleColumn.BEND_CABLE_ID, cableIds, "cable ID",
+            String cableId = row.reference(ScheduleColumn.BEND_CABLE_ID, cableIds, "cable ID",
                     "on sheet 'Segments'");
             double radiusMm = row.number(ScheduleColumn.BEND_RADIUS_MM, BEND_RADIUS_MM);
             int count = row.whole(ScheduleColumn.BEND_COUNT, BEND_COUNT);
             if (!row.faulty()) {
-                CatalogSheets.build(row, ScheduleColumn.BEND_RADIUS_MM,
+                row.guard(ScheduleColumn.BEND_RADIUS_MM,
                         () -> bends.computeIfAbsent(cableId, k -> new ArrayList<>()).add(new Bend(radiusMm, count)));
             }
         }
@@ -162,7 +167,6 @@ final class LegSheets {
         if (rows.isEmpty()) {
             return false;
         }
-        Map<String, KeyIndex> labelsByPoint = new HashMap<>();
         for (SheetRow row : rows.get()) {
             String pointTag = pointReference(row, ScheduleColumn.JOINT_POINT);
             LegKey key = legKey(pointTag, row.choice(ScheduleColumn.JOINT_DIRECTION, PathDirection.class, null,
@@ -170,14 +174,14 @@ final class LegSheets {
             int position = row.whole(ScheduleColumn.JOINT_POSITION, POSITION);
             String label = row.identifier(ScheduleColumn.JOINT_LABEL, "joint label");
             if (label != null && pointTag != null) {
-                Optional<CellPlace> earlier = labelsByPoint.computeIfAbsent(pointTag, k -> new KeyIndex())
+                Optional<ScheduleCell> earlier = labelsByPoint.computeIfAbsent(pointTag, k -> new KeyIndex())
                         .define(label, row.place(ScheduleColumn.JOINT_LABEL));
                 if (earlier.isPresent()) {
                     row.problem(ScheduleColumn.JOINT_LABEL, "joint label '" + label + "' is already used for point "
                             + pointTag + " (row " + earlier.get().row() + ")");
                 }
             }
-            String upstream = PlantSheets.reference(row, ScheduleColumn.JOINT_UPSTREAM_CONNECTOR,
+            String upstream = row.reference(ScheduleColumn.JOINT_UPSTREAM_CONNECTOR,
                     catalog.connectorCodes(), "connector type", "in the catalog nor on sheet 'Connector types'");
             String downstream = optionalReference(row, ScheduleColumn.JOINT_DOWNSTREAM_CONNECTOR,
                     catalog.connectorCodes(), "connector type", "in the catalog nor on sheet 'Connector types'");
@@ -192,7 +196,7 @@ final class LegSheets {
             }
             List<Draft> draft = new ArrayList<>(1);
             if (!row.faulty()) {
-                CatalogSheets.build(row, ScheduleColumn.JOINT_LABEL,
+                row.guard(ScheduleColumn.JOINT_LABEL,
                         () -> draft.add(new JointDraft(new Joint(label, upstream, downstream, grade, lossDb, basis))));
             }
             place(key, position, row.place(ScheduleColumn.JOINT_POSITION), false, draft.isEmpty() ? null : draft.get(0));
@@ -219,18 +223,18 @@ final class LegSheets {
         if (row.isBlank(column)) {
             return null;
         }
-        return PlantSheets.reference(row, column, keys, what, whereDefined);
+        return row.reference(column, keys, what, whereDefined);
     }
 
     private String pointReference(SheetRow row, ScheduleColumn column) {
-        return PlantSheets.reference(row, column, plant.pointTags(), "point tag", "on sheet 'Points'");
+        return row.reference(column, plant.pointTags(), "point tag", "on sheet 'Points'");
     }
 
     private static LegKey legKey(String pointTag, PathDirection direction) {
         return pointTag == null || direction == null ? null : new LegKey(pointTag, direction);
     }
 
-    private void place(LegKey key, int position, CellPlace positionCell, boolean segment, Draft draft) {
+    private void place(LegKey key, int position, ScheduleCell positionCell, boolean segment, Draft draft) {
         if (key != null && position > 0) {
             entries.computeIfAbsent(key, k -> new ArrayList<>()).add(new Entry(position, positionCell, segment, draft));
         }

@@ -54,13 +54,13 @@ final class PlantSheets {
     }
 
     /**
-     * @param analyzers   analyzers whose rows passed, by tag in sheet order
-     * @param points      one draft per distinct point tag, in sheet order
-     * @param pointTags   defined point tags, for references from other sheets
-     * @param bandsRead   false when sheet 'Bands' could not be read
+     * @param analyzers    analyzers whose rows passed, by tag in sheet order
+     * @param analyzerTags defined analyzer tags and their cells
+     * @param points       one draft per distinct point tag, in sheet order
+     * @param pointTags    defined point tags and their cells, for references from other sheets
      */
-    record Result(Map<String, Analyzer> analyzers, Map<String, PointDraft> points, KeyIndex pointTags,
-                  boolean bandsRead) {
+    record Result(Map<String, Analyzer> analyzers, KeyIndex analyzerTags, Map<String, PointDraft> points,
+                  KeyIndex pointTags) {
     }
 
     private final Workbook workbook;
@@ -91,7 +91,7 @@ final class PlantSheets {
                 }
             }
         }
-        return new Result(analyzers, points, pointTags, bandsRead);
+        return new Result(analyzers, analyzerTags, points, pointTags);
     }
 
     private Map<String, Analyzer> analyzers(KeyIndex tags) {
@@ -102,7 +102,7 @@ final class PlantSheets {
             return analyzers;
         }
         for (SheetRow row : rows.get()) {
-            String tag = uniqueTag(row, ScheduleColumn.ANALYZER_TAG, tags, "analyzer tag");
+            String tag = row.uniqueKey(ScheduleColumn.ANALYZER_TAG, tags, "analyzer tag");
             String description = row.text(ScheduleColumn.ANALYZER_DESCRIPTION);
             double minNm = row.number(ScheduleColumn.ANALYZER_MIN_NM, ANALYZER_NM);
             double maxNm = row.number(ScheduleColumn.ANALYZER_MAX_NM, ANALYZER_NM);
@@ -115,7 +115,7 @@ final class PlantSheets {
             DetectorType detector = row.choice(ScheduleColumn.ANALYZER_DETECTOR, DetectorType.class,
                     DetectorType.OTHER, "detector");
             if (!row.faulty()) {
-                CatalogSheets.build(row, ScheduleColumn.ANALYZER_TAG, () -> analyzers.put(tag,
+                row.guard(ScheduleColumn.ANALYZER_TAG, () -> analyzers.put(tag,
                         new Analyzer(tag, description, minNm, maxNm, channels, allowedLossDb, detector)));
             }
         }
@@ -135,11 +135,11 @@ final class PlantSheets {
         }
         Map<String, Map<Integer, PointDraft>> channelUse = new HashMap<>();
         for (SheetRow row : rows.get()) {
-            String tag = uniqueTag(row, ScheduleColumn.POINT_TAG, tags, "point tag");
+            String tag = row.uniqueKey(ScheduleColumn.POINT_TAG, tags, "point tag");
             PointDraft p = new PointDraft(row, tag);
             p.service = row.text(ScheduleColumn.POINT_SERVICE);
             p.location = row.text(ScheduleColumn.POINT_LOCATION);
-            p.analyzerTag = reference(row, ScheduleColumn.POINT_ANALYZER, analyzerTags, "analyzer tag",
+            p.analyzerTag = row.reference(ScheduleColumn.POINT_ANALYZER, analyzerTags, "analyzer tag",
                     "on sheet 'Analyzers'");
             p.channel = row.whole(ScheduleColumn.POINT_CHANNEL, CHANNEL);
             Analyzer analyzer = p.analyzerTag == null ? null : analyzers.get(p.analyzerTag);
@@ -153,7 +153,7 @@ final class PlantSheets {
                             + " already serves point " + other.tag + " (row " + other.row.number() + ")");
                 }
             }
-            p.probeTypeCode = reference(row, ScheduleColumn.POINT_PROBE_TYPE, catalog.probeCodes(), "probe type",
+            p.probeTypeCode = row.reference(ScheduleColumn.POINT_PROBE_TYPE, catalog.probeCodes(), "probe type",
                     "in the catalog nor on sheet 'Probe types'");
             p.toleranceDb = row.optionalNumber(ScheduleColumn.POINT_TOLERANCE_DB, TOLERANCE_DB);
             p.hazardousArea = row.yesNo(ScheduleColumn.POINT_HAZARDOUS_AREA, "hazardous area");
@@ -172,7 +172,7 @@ final class PlantSheets {
             return false;
         }
         for (SheetRow row : rows.get()) {
-            String tag = reference(row, ScheduleColumn.BAND_POINT, pointTags, "point tag", "on sheet 'Points'");
+            String tag = row.reference(ScheduleColumn.BAND_POINT, pointTags, "point tag", "on sheet 'Points'");
             String name = row.text(ScheduleColumn.BAND_NAME);
             double fromNm = row.number(ScheduleColumn.BAND_FROM_NM, BAND_FROM_NM);
             double toNm = row.number(ScheduleColumn.BAND_TO_NM, BAND_TO_NM);
@@ -197,40 +197,10 @@ final class PlantSheets {
                         + DecimalText.display(toNm));
             }
             if (!row.faulty()) {
-                CatalogSheets.build(row, ScheduleColumn.BAND_NAME,
+                row.guard(ScheduleColumn.BAND_NAME,
                         () -> point.bands.add(new WavelengthBand(name, fromNm, toNm)));
             }
         }
         return true;
-    }
-
-    /** A required tag unique on its sheet; null (and a problem) when missing or a duplicate. */
-    static String uniqueTag(SheetRow row, ScheduleColumn column, KeyIndex tags, String what) {
-        String tag = row.identifier(column, what);
-        if (tag == null) {
-            return null;
-        }
-        Optional<CellPlace> earlier = tags.define(tag, row.place(column));
-        if (earlier.isPresent()) {
-            row.problem(column, "duplicate " + what + " '" + tag + "' (first on row " + earlier.get().row() + ")");
-            return null;
-        }
-        return tag;
-    }
-
-    /**
-     * A required reference to a key defined elsewhere; returns the reference even when unknown
-     * (after a problem) so that later checks on the row still run, null only when missing.
-     */
-    static String reference(SheetRow row, ScheduleColumn column, KeyIndex keys, String what, String whereDefined) {
-        String key = row.identifier(column, what);
-        if (key == null) {
-            return null;
-        }
-        String unknown = keys.unknownReference(key, what, whereDefined);
-        if (unknown != null) {
-            row.problem(column, unknown);
-        }
-        return key;
     }
 }

@@ -231,8 +231,12 @@ public enum ScheduleColumn {
 
     /** Width of the column in characters: room for the header, wider for free text. */
     public int widthChars() {
-        boolean freeText = header.equals("Description") || header.equals("Service") || header.equals("Location");
-        return Math.max(freeText ? 40 : 12, header.length() + 3);
+        int room = switch (this) {
+            case ANALYZER_DESCRIPTION, POINT_SERVICE, POINT_LOCATION, FIBER_DESCRIPTION, CONNECTOR_DESCRIPTION,
+                    PROBE_DESCRIPTION -> 40;
+            default -> 12;
+        };
+        return Math.max(room, header.length() + 3);
     }
 
     private static List<String> names(Enum<?>[] values) {

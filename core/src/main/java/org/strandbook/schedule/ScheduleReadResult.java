@@ -15,12 +15,17 @@ public sealed interface ScheduleReadResult {
         return this instanceof Accepted;
     }
 
-    /** The schedule passed every rule. */
-    record Accepted(CableSchedule schedule) implements ScheduleReadResult {
+    /**
+     * The schedule passed every rule.
+     *
+     * @param schedule the schedule as read
+     * @param origins  the cell each item was entered in, for problems found later (say, by the store)
+     */
+    record Accepted(CableSchedule schedule, ScheduleOrigins origins) implements ScheduleReadResult {
 
         public Accepted {
-            if (schedule == null) {
-                throw new IllegalArgumentException("an accepted result needs its schedule");
+            if (schedule == null || origins == null) {
+                throw new IllegalArgumentException("an accepted result needs its schedule and their origins");
             }
         }
 

@@ -30,7 +30,7 @@ final class ScheduleWorkbook {
         List<MeasurementPoint> points = new ArrayList<>();
         List<PathLeg> orderedLegs = new ArrayList<>();
         for (PlantSheets.PointDraft draft : plant.points().values()) {
-            CatalogSheets.build(draft.row, ScheduleColumn.POINT_TAG, () -> points.add(draft.build()));
+            draft.row.guard(ScheduleColumn.POINT_TAG, () -> points.add(draft.build()));
             Map<PathDirection, PathLeg> byDirection = legs.legs().get(draft.tag);
             for (PathDirection d : PathDirection.values()) {
                 orderedLegs.add(byDirection.get(d));
@@ -39,7 +39,9 @@ final class ScheduleWorkbook {
         if (!log.isEmpty()) {
             return new ScheduleReadResult.Rejected(log.toList());
         }
+        ScheduleOrigins origins = new ScheduleOrigins(plant.analyzerTags(), plant.pointTags(), legs.cableIds(),
+                legs.jointsByPoint(), catalog.fiberCodes(), catalog.connectorCodes(), catalog.probeCodes());
         return new ScheduleReadResult.Accepted(new CableSchedule(List.copyOf(plant.analyzers().values()), points,
-                orderedLegs, catalog.added()));
+                orderedLegs, catalog.added()), origins);
     }
 }

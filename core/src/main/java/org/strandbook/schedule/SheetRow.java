@@ -1,6 +1,7 @@
 package org.strandbook.schedule;
 
 import java.util.Locale;
+import java.util.Optional;
 import java.util.OptionalDouble;
 
 import org.apache.poi.ss.usermodel.Cell;
@@ -61,11 +62,11 @@ final class SheetRow {
         return faulty;
     }
 
-    CellPlace place(ScheduleColumn column) {
+    ScheduleCell place(ScheduleColumn column) {
         if (column.sheet() != sheet) {
             throw new IllegalArgumentException(column + " is not a column of sheet " + sheet.title());
         }
-        return new CellPlace(column, number());
+        return new ScheduleCell(column, number());
     }
 
     void problem(ScheduleColumn column, String message) {
@@ -81,6 +82,48 @@ final class SheetRow {
             }
         }
         return true;
+    }
+
+    /** A required key unique on its sheet (ignoring case); null (and a problem) when missing or a duplicate. */
+    String uniqueKey(ScheduleColumn column, KeyIndex keys, String what) {
+        String key = identifier(column, what);
+        if (key == null) {
+            return null;
+        }
+        Optional<ScheduleCell> earlier = keys.define(key, place(column));
+        if (earlier.isPresent()) {
+            problem(column, "duplicate " + what + " '" + key + "' (first on row " + earlier.get().row() + ")");
+            return null;
+        }
+        return key;
+    }
+
+    /**
+     * A required reference to a key defined elsewhere; returns the reference even when unknown
+     * (after a problem) so that later checks on the row still run, null only when missing.
+     */
+    String reference(ScheduleColumn column, KeyIndex keys, String what, String whereDefined) {
+        String key = identifier(column, what);
+        if (key == null) {
+            return null;
+        }
+        String unknown = keys.unknownReference(key, what, whereDefined);
+        if (unknown != null) {
+            problem(column, unknown);
+        }
+        return key;
+    }
+
+    /**
+     * Builds a model value from cells that all passed; the model's own checks are the last guard,
+     * and any rule they enforce beyond the cell checks still becomes a problem at {@code column}.
+     */
+    void guard(ScheduleColumn column, Runnable construction) {
+        try {
+            construction.run();
+        } catch (IllegalArgumentException e) {
+            problem(column, e.getMessage());
+        }
     }
 
     /** True when the cell holds nothing (or only spaces); reports nothing. */

@@ -61,7 +61,7 @@ final class SheetTable {
             }
             if (!normalized(found).equals(normalized(column.header()))) {
                 String was = found.isEmpty() ? ", the cell is empty" : ", was '" + found + "'";
-                log.add(new CellPlace(column, 1).problem("expected header '" + column.header() + "'" + was));
+                log.add(new ScheduleCell(column, 1).problem("expected header '" + column.header() + "'" + was));
                 ok = false;
             }
         }

@@ -23,6 +23,7 @@ import org.apache.poi.ss.usermodel.IndexedColors;
 import org.apache.poi.ss.usermodel.Row;
 import org.apache.poi.ss.usermodel.Sheet;
 import org.apache.poi.ss.usermodel.VerticalAlignment;
+import org.apache.poi.ss.util.CellRangeAddress;
 import org.apache.poi.ss.util.CellRangeAddressList;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 import org.strandbook.site.ConnectorType;
@@ -54,7 +55,15 @@ public final class TemplateBuilder {
     /** Rows offered with drop-downs; the reader accepts rows beyond these. */
     static final int DROP_DOWN_ROWS = 2000;
 
-    private static final int README_WIDTH_CHARS = 120;
+    private static final int README_WIDTH_CHARS = 110;
+
+    /**
+     * Spreadsheet programs do not grow a row for wrapped text on opening, so the builder sets each
+     * Read me row's height: a line of the column holds at least this many characters of body text.
+     */
+    private static final int README_CHARS_PER_LINE = 100;
+
+    private static final float LINE_HEIGHT_POINTS = 15f;
 
     private final XSSFWorkbook workbook = new XSSFWorkbook();
     private final CellStyle header;
@@ -154,6 +163,18 @@ public final class TemplateBuilder {
             }
         }
         sheet.createFreezePane(0, 1);
+        printFitToWidth(sheet, true);
+    }
+
+    /** Prints the sheet one page wide, as many pages long as it needs; the header row repeats on each. */
+    private static void printFitToWidth(Sheet sheet, boolean landscape) {
+        sheet.setFitToPage(true);
+        sheet.getPrintSetup().setFitWidth((short) 1);
+        sheet.getPrintSetup().setFitHeight((short) 0);
+        sheet.getPrintSetup().setLandscape(landscape);
+        if (landscape) {
+            sheet.setRepeatingRows(CellRangeAddress.valueOf("1:1"));
+        }
     }
 
     private enum Look { TITLE, HEADING, BODY, GAP }
@@ -189,6 +210,7 @@ public final class TemplateBuilder {
 
         Sheet sheet = workbook.createSheet(ScheduleSheet.README_TITLE);
         sheet.setColumnWidth(0, README_WIDTH_CHARS * 256);
+        printFitToWidth(sheet, false);
         for (int i = 0; i < lines.size(); i++) {
             Line line = lines.get(i);
             Row row = sheet.createRow(i);
@@ -197,6 +219,10 @@ public final class TemplateBuilder {
             }
             Cell cell = row.createCell(0);
             cell.setCellValue(line.text());
+            int textLines = Math.max(1, (line.text().length() + README_CHARS_PER_LINE - 1) / README_CHARS_PER_LINE);
+            if (line.look() == Look.BODY && textLines > 1) {
+                row.setHeightInPoints(textLines * LINE_HEIGHT_POINTS);
+            }
             cell.setCellStyle(switch (line.look()) {
                 case TITLE -> title;
                 case HEADING -> heading;

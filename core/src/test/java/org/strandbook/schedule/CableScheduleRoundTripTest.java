@@ -40,6 +40,23 @@ class CableScheduleRoundTripTest {
     }
 
     @Test
+    void acceptedScheduleKnowsTheCellEachItemCameFrom() throws IOException {
+        ScheduleReadResult.Accepted accepted = assertInstanceOf(ScheduleReadResult.Accepted.class,
+                reader.read(ScheduleFixture.write(ScheduleFixture.plant(), folder)));
+        ScheduleOrigins origins = accepted.origins();
+
+        assertEquals("Segments!D3", origins.cable("C-101S-2").orElseThrow().address());
+        assertEquals("Joints!D3", origins.joint("P-101", "J2").orElseThrow().address());
+        assertEquals("Points!A4", origins.point("P-201").orElseThrow().address());
+        assertEquals("Analyzers!A3", origins.analyzer("AN-02").orElseThrow().address());
+        assertEquals("'Fiber types'!A2", origins.fiberType("SI300-HOH-T").orElseThrow().address());
+        assertTrue(origins.fiberType("SI200-LOH").isEmpty(), "shipped types were entered nowhere");
+        assertEquals("Segments!D3: cable ID C-101S-2 is already used at this site",
+                origins.cable("C-101S-2").orElseThrow().problem("cable ID C-101S-2 is already used at this site")
+                        .toString());
+    }
+
+    @Test
     void writerLeavesNoPartialFileBehind() throws IOException {
         ScheduleFixture.write(ScheduleFixture.plant(), folder);
 
