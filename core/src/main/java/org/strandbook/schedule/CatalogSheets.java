@@ -103,8 +103,11 @@ final class CatalogSheets {
             OhGrade ohGrade = row.choice(ScheduleColumn.FIBER_OH_GRADE, OhGrade.class, null, "OH grade");
             double ohPpm = row.number(ScheduleColumn.FIBER_OH_PPM, OH_PPM);
             if (!row.faulty()) {
-                row.guard(ScheduleColumn.FIBER_CODE, () -> fibers.put(code, new FiberType(code, description, coreUm,
-                        claddingUm, bufferUm, na, coreMaterial, ohGrade, ohPpm, List.of())));
+                FiberType fiber = row.guard(ScheduleColumn.FIBER_CODE, () -> new FiberType(code, description, coreUm,
+                        claddingUm, bufferUm, na, coreMaterial, ohGrade, ohPpm, List.of()));
+                if (fiber != null) {
+                    fibers.put(code, fiber);
+                }
             }
         }
         return fibers;
@@ -142,8 +145,11 @@ final class CatalogSheets {
                 }
             }
             if (!row.faulty() && fibers.containsKey(code)) {
-                row.guard(ScheduleColumn.ATTENUATION_WAVELENGTH_NM, () -> datasheets
-                        .computeIfAbsent(code, k -> new ArrayList<>()).add(new AttenuationPoint(wavelengthNm, dbPerKm)));
+                AttenuationPoint point = row.guard(ScheduleColumn.ATTENUATION_WAVELENGTH_NM,
+                        () -> new AttenuationPoint(wavelengthNm, dbPerKm));
+                if (point != null) {
+                    datasheets.computeIfAbsent(code, k -> new ArrayList<>()).add(point);
+                }
             }
         }
         return datasheets;
@@ -163,8 +169,11 @@ final class CatalogSheets {
             double lossDb = row.number(ScheduleColumn.CONNECTOR_TYPICAL_LOSS_DB, TYPICAL_LOSS_DB);
             Boolean airGap = row.yesNo(ScheduleColumn.CONNECTOR_AIR_GAP, "air gap");
             if (!row.faulty()) {
-                row.guard(ScheduleColumn.CONNECTOR_CODE,
-                        () -> connectors.add(new ConnectorType(code, description, family, lossDb, airGap)));
+                ConnectorType connector = row.guard(ScheduleColumn.CONNECTOR_CODE,
+                        () -> new ConnectorType(code, description, family, lossDb, airGap));
+                if (connector != null) {
+                    connectors.add(connector);
+                }
             }
         }
         return connectors;
@@ -186,8 +195,11 @@ final class CatalogSheets {
             double pathMm = row.number(ScheduleColumn.PROBE_OPTICAL_PATH_MM, OPTICAL_PATH_MM);
             double fixedLossDb = row.number(ScheduleColumn.PROBE_FIXED_LOSS_DB, FIXED_LOSS_DB);
             if (!row.faulty()) {
-                row.guard(ScheduleColumn.PROBE_CODE,
-                        () -> probes.add(new ProbeType(code, description, kind, window, faces, pathMm, fixedLossDb)));
+                ProbeType probe = row.guard(ScheduleColumn.PROBE_CODE,
+                        () -> new ProbeType(code, description, kind, window, faces, pathMm, fixedLossDb));
+                if (probe != null) {
+                    probes.add(probe);
+                }
             }
         }
         return probes;

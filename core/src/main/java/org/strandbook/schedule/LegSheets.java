@@ -89,8 +89,8 @@ final class LegSheets {
     }
 
     private Result read() {
-        boolean segmentsRead = segments(cableIds);
-        Map<String, List<Bend>> bends = bends(cableIds);
+        boolean segmentsRead = segments();
+        Map<String, List<Bend>> bends = bends();
         boolean jointsRead = joints();
         Map<String, Map<PathDirection, PathLeg>> legs = new HashMap<>();
         if (!segmentsRead || !jointsRead) {
@@ -122,7 +122,7 @@ final class LegSheets {
         return new Result(legs, cableIds, labelsByPoint);
     }
 
-    private boolean segments(KeyIndex cableIds) {
+    private boolean segments() {
         Optional<List<SheetRow>> rows = SheetTable.rows(workbook, ScheduleSheet.SEGMENTS, log);
         if (rows.isEmpty()) {
             cableIds.markIncomplete();
@@ -143,7 +143,7 @@ final class LegSheets {
         return true;
     }
 
-    private Map<String, List<Bend>> bends(KeyIndex cableIds) {
+    private Map<String, List<Bend>> bends() {
         Map<String, List<Bend>> bends = new HashMap<>();
         Optional<List<SheetRow>> rows = SheetTable.rows(workbook, ScheduleSheet.BENDS, log);
         if (rows.isEmpty()) {
@@ -155,8 +155,10 @@ final class LegSheets {
             double radiusMm = row.number(ScheduleColumn.BEND_RADIUS_MM, BEND_RADIUS_MM);
             int count = row.whole(ScheduleColumn.BEND_COUNT, BEND_COUNT);
             if (!row.faulty()) {
-                row.guard(ScheduleColumn.BEND_RADIUS_MM,
-                        () -> bends.computeIfAbsent(cableId, k -> new ArrayList<>()).add(new Bend(radiusMm, count)));
+                Bend bend = row.guard(ScheduleColumn.BEND_RADIUS_MM, () -> new Bend(radiusMm, count));
+                if (bend != null) {
+                    bends.computeIfAbsent(cableId, k -> new ArrayList<>()).add(bend);
+                }
             }
         }
         return bends;
@@ -194,12 +196,10 @@ final class LegSheets {
             if (basis == LossBasis.MEASURED && lossDb.isEmpty() && !row.faulty()) {
                 row.problem(ScheduleColumn.JOINT_LOSS_DB, "loss basis MEASURED needs the measured loss in dB");
             }
-            List<Draft> draft = new ArrayList<>(1);
-            if (!row.faulty()) {
-                row.guard(ScheduleColumn.JOINT_LABEL,
-                        () -> draft.add(new JointDraft(new Joint(label, upstream, downstream, grade, lossDb, basis))));
-            }
-            place(key, position, row.place(ScheduleColumn.JOINT_POSITION), false, draft.isEmpty() ? null : draft.get(0));
+            Joint joint = row.faulty() ? null : row.guard(ScheduleColumn.JOINT_LABEL,
+                    () -> new Joint(label, upstream, downstream, grade, lossDb, basis));
+            place(key, position, row.place(ScheduleColumn.JOINT_POSITION), false,
+                    joint == null ? null : new JointDraft(joint));
         }
         return true;
     }

@@ -115,8 +115,11 @@ final class PlantSheets {
             DetectorType detector = row.choice(ScheduleColumn.ANALYZER_DETECTOR, DetectorType.class,
                     DetectorType.OTHER, "detector");
             if (!row.faulty()) {
-                row.guard(ScheduleColumn.ANALYZER_TAG, () -> analyzers.put(tag,
-                        new Analyzer(tag, description, minNm, maxNm, channels, allowedLossDb, detector)));
+                Analyzer analyzer = row.guard(ScheduleColumn.ANALYZER_TAG,
+                        () -> new Analyzer(tag, description, minNm, maxNm, channels, allowedLossDb, detector));
+                if (analyzer != null) {
+                    analyzers.put(tag, analyzer);
+                }
             }
         }
         return analyzers;
@@ -197,8 +200,10 @@ final class PlantSheets {
                         + DecimalText.display(toNm));
             }
             if (!row.faulty()) {
-                row.guard(ScheduleColumn.BAND_NAME,
-                        () -> point.bands.add(new WavelengthBand(name, fromNm, toNm)));
+                WavelengthBand band = row.guard(ScheduleColumn.BAND_NAME, () -> new WavelengthBand(name, fromNm, toNm));
+                if (band != null) {
+                    point.bands.add(band);
+                }
             }
         }
         return true;

@@ -30,7 +30,10 @@ final class ScheduleWorkbook {
         List<MeasurementPoint> points = new ArrayList<>();
         List<PathLeg> orderedLegs = new ArrayList<>();
         for (PlantSheets.PointDraft draft : plant.points().values()) {
-            draft.row.guard(ScheduleColumn.POINT_TAG, () -> points.add(draft.build()));
+            MeasurementPoint point = draft.row.guard(ScheduleColumn.POINT_TAG, draft::build);
+            if (point != null) {
+                points.add(point);
+            }
             Map<PathDirection, PathLeg> byDirection = legs.legs().get(draft.tag);
             for (PathDirection d : PathDirection.values()) {
                 orderedLegs.add(byDirection.get(d));

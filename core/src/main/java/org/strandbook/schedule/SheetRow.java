@@ -3,6 +3,7 @@ package org.strandbook.schedule;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import java.util.function.Supplier;
 
 import org.apache.poi.ss.usermodel.Cell;
 import org.apache.poi.ss.usermodel.CellType;
@@ -115,14 +116,15 @@ final class SheetRow {
     }
 
     /**
-     * Builds a model value from cells that all passed; the model's own checks are the last guard,
-     * and any rule they enforce beyond the cell checks still becomes a problem at {@code column}.
+     * Builds a model value from cells that all passed, or null. The model's own checks are the last
+     * guard: any rule they enforce beyond the cell checks still becomes a problem at {@code column}.
      */
-    void guard(ScheduleColumn column, Runnable construction) {
+    <T> T guard(ScheduleColumn column, Supplier<T> construction) {
         try {
-            construction.run();
+            return construction.get();
         } catch (IllegalArgumentException e) {
             problem(column, e.getMessage());
+            return null;
         }
     }
 

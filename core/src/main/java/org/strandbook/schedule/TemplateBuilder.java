@@ -26,14 +26,13 @@ import org.apache.poi.ss.usermodel.VerticalAlignment;
 import org.apache.poi.ss.util.CellRangeAddress;
 import org.apache.poi.ss.util.CellRangeAddressList;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
-import org.strandbook.site.ConnectorType;
-import org.strandbook.site.FiberType;
-import org.strandbook.site.ProbeType;
 
 /**
  * Builds the cable schedule template from {@link ScheduleSheet} and {@link ScheduleColumn}, so the
- * committed {@code cable-schedule.xlsx}, the reader and the writer share one layout. A test checks
- * that the committed file matches what this class builds; after changing the layout, regenerate it:
+ * committed {@code cable-schedule.xlsx}, the reader and the writer share one layout. A test
+ * (TemplateBuilderTest) checks that the committed file matches what this class builds; when it does
+ * not, the test leaves the fresh build in {@code core/target/cable-schedule.generated.xlsx} to review
+ * and copy over the committed one. Or regenerate it directly:
  *
  * <pre>
  * mvn -q -pl core -am install -DskipTests
