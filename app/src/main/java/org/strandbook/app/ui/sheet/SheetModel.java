@@ -438,18 +438,25 @@ public final class SheetModel<R> {
 
     private void apply(List<R> next) {
         records = Collections.unmodifiableList(next);
-        while (rows.size() > next.size()) {
-            rows.remove(rows.size() - 1);
-        }
-        for (int r = 0; r < next.size(); r++) {
-            if (r < rows.size()) {
-                rows.get(r).setRecord(next.get(r));
-            } else {
-                rows.add(new SheetRow<>(next.get(r), columns.size()));
-            }
-        }
         evaluate();
-        refreshCells();
+        if (rows.size() > next.size()) {
+            rows.remove(next.size(), rows.size());
+        }
+        // new rows get their content before they are added, so list listeners see finished rows
+        List<SheetRow<R>> added = new ArrayList<>();
+        int existing = rows.size();
+        for (int r = 0; r < next.size(); r++) {
+            SheetRow<R> row;
+            if (r < existing) {
+                row = rows.get(r);
+                row.setRecord(next.get(r));
+            } else {
+                row = new SheetRow<>(next.get(r), columns.size());
+                added.add(row);
+            }
+            fill(row, r);
+        }
+        rows.addAll(added);
     }
 
     private void evaluate() {
@@ -472,10 +479,13 @@ public final class SheetModel<R> {
 
     private void refreshCells() {
         for (int r = 0; r < rows.size(); r++) {
-            SheetRow<R> row = rows.get(r);
-            for (int c = 0; c < columns.size(); c++) {
-                row.setCell(c, contentOf(r, c));
-            }
+            fill(rows.get(r), r);
+        }
+    }
+
+    private void fill(SheetRow<R> row, int r) {
+        for (int c = 0; c < columns.size(); c++) {
+            row.setCell(c, contentOf(r, c));
         }
     }
 

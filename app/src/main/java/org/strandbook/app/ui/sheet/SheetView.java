@@ -185,7 +185,7 @@ public final class SheetView<R> {
 
     /** Widths that fit the header and the first rows' text, within bounds, so a sheet reads at a glance. */
     private void fitColumns() {
-        int sample = Math.min(model.rowCount(), 200);
+        int sample = Math.min(model.rows().size(), 200);
         for (int c = 0; c < model.columnCount(); c++) {
             double w = textWidth(model.columns().get(c).header(), HEADER_FONT) + 22;
             for (int r = 0; r < sample; r++) {
