@@ -1,6 +1,7 @@
 package org.strandbook.app.ui.plot;
 
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.List;
 import java.util.prefs.Preferences;
 
@@ -86,7 +87,7 @@ public final class SpectrumPlotModel {
             out.add(new PlotPoint(x.fromNm(wavelengthsNm[i]), y.fromLossDb(lossDb[i])));
         }
         if (x == SpectralAxis.WAVENUMBER_CM) {
-            java.util.Collections.reverse(out);
+            Collections.reverse(out);
         }
         points.set(List.copyOf(out));
     }

@@ -14,9 +14,25 @@ import javafx.scene.layout.BorderPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
+import javafx.util.StringConverter;
+
+import org.strandbook.app.ui.sheet.CellFormats;
 
 /** The detail plot: a line chart with axis toggles bound to a {@link SpectrumPlotModel}. */
 public final class SpectrumPlotView {
+
+    /** Tick labels without grouping, independent of the machine's locale (1000, not 1,000 or 1.000). */
+    private static final StringConverter<Number> ROOT_NUMBERS = new StringConverter<>() {
+        @Override
+        public String toString(Number n) {
+            return n == null ? "" : CellFormats.plain(n.doubleValue());
+        }
+
+        @Override
+        public Number fromString(String s) {
+            return Double.valueOf(s);
+        }
+    };
 
     private final NumberAxis xAxis = new NumberAxis();
     private final NumberAxis yAxis = new NumberAxis();
@@ -31,6 +47,8 @@ public final class SpectrumPlotView {
         xAxis.setForceZeroInRange(false);
         yAxis.setForceZeroInRange(false);
         xAxis.setAnimated(false);
+        xAxis.setTickLabelFormatter(ROOT_NUMBERS);
+        yAxis.setTickLabelFormatter(ROOT_NUMBERS);
         yAxis.setAnimated(false);
         chart.titleProperty().bind(model.titleProperty());
 

@@ -101,6 +101,10 @@ final class SheetCell<R> extends TableCell<SheetRow<R>, CellContent> {
         });
         setText(null);
         setGraphic(editor);
+        view.editingStarted(this);
+        // the skin carries the text field's key handling; create it now, not at the next pulse,
+        // or keys typed right after the first one are lost
+        editor.applyCss();
         editor.requestFocus();
         if (typed != null) {
             editor.end();
@@ -150,16 +154,30 @@ final class SheetCell<R> extends TableCell<SheetRow<R>, CellContent> {
         }
     }
 
+    /** Appends a key typed before the editor could take it; false when the editor takes keys itself. */
+    boolean takeTypedKey(String ch) {
+        if (editor == null || (editor.getSkin() != null && editor.isFocused())) {
+            return false;
+        }
+        editor.appendText(ch);
+        editor.end();
+        return true;
+    }
+
     private void finishEdit() {
         // the model already holds the value; leave edit mode without TableView's commit machinery
         super.cancelEdit();
-        editor = null;
-        render(getItem());
+        leaveEditor();
     }
 
     @Override
     public void cancelEdit() {
         super.cancelEdit();
+        leaveEditor();
+    }
+
+    private void leaveEditor() {
+        view.editingEnded(this);
         editor = null;
         render(getItem());
     }

@@ -3,8 +3,10 @@ package org.strandbook.app.ui.sheet;
 import java.util.List;
 import java.util.Optional;
 
+import javafx.beans.binding.Bindings;
 import javafx.beans.property.ReadOnlyObjectWrapper;
 import javafx.collections.ListChangeListener;
+import javafx.css.PseudoClass;
 import javafx.geometry.Pos;
 import javafx.scene.Node;
 import javafx.scene.control.Button;
@@ -46,7 +48,7 @@ public final class SheetView<R> {
     private static final Font CELL_FONT = Font.font(13);
     private static final Font HEADER_FONT = Font.font(null, FontWeight.BOLD, 13);
     private static final double MIN_COLUMN_WIDTH = 56;
-    private static final double MAX_COLUMN_WIDTH = 240;
+    private static final double MAX_COLUMN_WIDTH = 280;
 
     private static final KeyCombination COPY = new KeyCodeCombination(KeyCode.C, KeyCombination.SHORTCUT_DOWN);
     private static final KeyCombination PASTE = new KeyCodeCombination(KeyCode.V, KeyCombination.SHORTCUT_DOWN);
@@ -65,6 +67,7 @@ public final class SheetView<R> {
     private final Label status = new Label();
     private final BorderPane root = new BorderPane();
     private String typedText;
+    private SheetCell<R> editingCell;
     private SheetCell<R> dragAnchor;
 
     /** {@code id} names the table node; the status line is {@code id + "-status"}. */
@@ -93,8 +96,8 @@ public final class SheetView<R> {
         status.setMinHeight(Region.USE_PREF_SIZE);
         status.setWrapText(true);
         model.statusIsProblemProperty().addListener((o, was, is) -> status.pseudoClassStateChanged(
-                javafx.css.PseudoClass.getPseudoClass("problem"), is));
-        status.tooltipProperty().bind(javafx.beans.binding.Bindings.createObjectBinding(
+                PseudoClass.getPseudoClass("problem"), is));
+        status.tooltipProperty().bind(Bindings.createObjectBinding(
                 () -> model.statusProperty().get().isEmpty() ? null : new Tooltip(model.statusProperty().get()),
                 model.statusProperty()));
 
@@ -267,6 +270,16 @@ public final class SheetView<R> {
         return model.edit(at, text).applied();
     }
 
+    void editingStarted(SheetCell<R> cell) {
+        editingCell = cell;
+    }
+
+    void editingEnded(SheetCell<R> cell) {
+        if (editingCell == cell) {
+            editingCell = null;
+        }
+    }
+
     String takeTypedText() {
         String t = typedText;
         typedText = null;
@@ -339,11 +352,18 @@ public final class SheetView<R> {
     }
 
     private void onKeyTyped(KeyEvent e) {
-        if (table.getEditingCell() != null || e.isShortcutDown() || e.isControlDown() || e.isAltDown() || e.isMetaDown()) {
+        if (e.isShortcutDown() || e.isControlDown() || e.isAltDown() || e.isMetaDown()) {
             return;
         }
         String ch = e.getCharacter();
         if (ch.isEmpty() || ch.equals(KeyEvent.CHAR_UNDEFINED) || Character.isISOControl(ch.charAt(0))) {
+            return;
+        }
+        if (table.getEditingCell() != null) {
+            // keys typed fast, before the new editor holds the focus, still belong to it
+            if (editingCell != null && editingCell.takeTypedKey(ch)) {
+                e.consume();
+            }
             return;
         }
         Optional<CellAddress> at = focused();

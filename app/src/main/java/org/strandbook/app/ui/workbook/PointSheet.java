@@ -15,7 +15,10 @@ import org.strandbook.app.ui.sheet.SheetModel;
 import org.strandbook.site.MeasurementPoint;
 import org.strandbook.site.WavelengthBand;
 
-/** The "Points" sheet: one row per measurement point, with its predicted loss, margin and status. */
+/**
+ * The "Points" sheet: one row per measurement point. Status, margin and predicted loss come right
+ * after the tag so they stay in view on a laptop screen; long free text comes last.
+ */
 public final class PointSheet {
 
     public static final String PREDICTED = "predictedDb";
@@ -35,12 +38,10 @@ public final class PointSheet {
                                                       Function<List<MeasurementPoint>, List<RowFigures>> figures) {
         return SheetModel.<MeasurementPoint>builder()
                 .column(SheetColumn.derived("tag", "Point tag", false, p -> Figure.text(p.tag())))
-                .column(SheetColumn.input("service", "Service", MeasurementPoint::service, s -> s,
-                        CellParsers.freeText(), (p, v) -> with(p, v, p.location(), p.analyzerTag(), p.channel(),
-                                p.probeTypeCode(), p.toleranceDb(), p.hazardousArea(), p.hydrogenService())))
-                .column(SheetColumn.input("location", "Location", MeasurementPoint::location, s -> s,
-                        CellParsers.freeText(), (p, v) -> with(p, p.service(), v, p.analyzerTag(), p.channel(),
-                                p.probeTypeCode(), p.toleranceDb(), p.hazardousArea(), p.hydrogenService())))
+                .column(SheetColumn.computed(STATUS, "Status", false))
+                .column(SheetColumn.computed(MARGIN, "Margin (dB)", true))
+                .column(SheetColumn.computed(PREDICTED, "Predicted loss (dB)", true))
+                .column(SheetColumn.computed(ALLOWED, "Allowed loss (dB)", true))
                 .column(SheetColumn.input("analyzer", "Analyzer", MeasurementPoint::analyzerTag, s -> s,
                         CellParsers.catalogCode("site's analyzers",
                                 () -> outline.get().analyzers().stream().map(a -> a.tag()).toList()),
@@ -65,10 +66,12 @@ public final class PointSheet {
                 .column(SheetColumn.input("hydrogen", "H\u2082 service", MeasurementPoint::hydrogenService, CellFormats::yesNo,
                         CellParsers.yesNo(), (p, v) -> with(p, p.service(), p.location(), p.analyzerTag(), p.channel(),
                                 p.probeTypeCode(), p.toleranceDb(), p.hazardousArea(), v)))
-                .column(SheetColumn.computed(PREDICTED, "Predicted loss (dB)", true))
-                .column(SheetColumn.computed(ALLOWED, "Allowed loss (dB)", true))
-                .column(SheetColumn.computed(MARGIN, "Margin (dB)", true))
-                .column(SheetColumn.computed(STATUS, "Status", false))
+                .column(SheetColumn.input("service", "Service", MeasurementPoint::service, s -> s,
+                        CellParsers.freeText(), (p, v) -> with(p, v, p.location(), p.analyzerTag(), p.channel(),
+                                p.probeTypeCode(), p.toleranceDb(), p.hazardousArea(), p.hydrogenService())))
+                .column(SheetColumn.input("location", "Location", MeasurementPoint::location, s -> s,
+                        CellParsers.freeText(), (p, v) -> with(p, p.service(), v, p.analyzerTag(), p.channel(),
+                                p.probeTypeCode(), p.toleranceDb(), p.hazardousArea(), p.hydrogenService())))
                 .evaluator(figures)
                 .build();
     }

@@ -86,7 +86,7 @@ public final class WorkbookWindow {
         BorderPane root = new BorderPane();
         root.setTop(menuBar());
         SplitPane main = new SplitPane(siteTree(), workArea());
-        main.setDividerPositions(0.2);
+        main.setDividerPositions(0.21);
         SplitPane.setResizableWithParent(main.getItems().get(0), false);
         root.setCenter(main);
         root.setBottom(statusBar());
@@ -209,7 +209,7 @@ public final class WorkbookWindow {
     private void rebuildTree(SiteOutline outline) {
         rebuildingTree = true;
         try {
-            String site = outline.site().name() + (outline.site().plantArea().isEmpty() ? "" : " \u00B7 " + outline.site().plantArea());
+            String site = outline.site().name();
             TreeItem<SiteEntry> root = new TreeItem<>(new SiteEntry(SiteEntry.Kind.SITE, "", site));
             root.setExpanded(true);
             outline.analyzers().forEach(a -> {

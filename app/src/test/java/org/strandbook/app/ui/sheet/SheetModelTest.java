@@ -12,6 +12,7 @@ import static org.strandbook.app.ui.sheet.SegmentSheetFixture.lengthM;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 
 import org.junit.jupiter.api.Test;
 import org.strandbook.app.ui.workbook.LegSegment;
@@ -194,7 +195,7 @@ class SheetModelTest {
     @Test
     void evaluatorHookReplacesTheComputedFiguresAtOnce() {
         sheet.setEvaluator(rows -> rows.stream()
-                .map(r -> new RowFigures(java.util.Map.of("fiberLossDb", Figure.of(Verdict.REVIEW)))).toList());
+                .map(r -> new RowFigures(Map.of("fiberLossDb", Figure.of(Verdict.REVIEW)))).toList());
 
         assertEquals("\u25B2 REVIEW", sheet.text(at(0, LOSS)));
         assertEquals(Verdict.REVIEW, sheet.rows().get(0).cell(LOSS).verdict());
