@@ -1,10 +1,12 @@
 package org.strandbook.app;
 
 import org.strandbook.app.cli.StrandbookCommand;
+import org.strandbook.app.ui.workbook.StrandbookWindow;
 
 /**
- * Entry point of the runnable jar. It must not extend {@code javafx.application.Application}:
- * a shaded jar whose main class does fails with "JavaFX runtime components are missing".
+ * Entry point of the runnable jar: with no arguments it opens the workbook window, with arguments
+ * it runs the command line. It must not extend {@code javafx.application.Application}: a shaded
+ * jar whose main class does fails with "JavaFX runtime components are missing".
  */
 public final class Launcher {
 
@@ -12,6 +14,20 @@ public final class Launcher {
     }
 
     public static void main(String[] args) {
+        if (args.length == 0) {
+            System.exit(openWindow());
+        }
         System.exit(StrandbookCommand.run(args));
+    }
+
+    private static int openWindow() {
+        try {
+            StrandbookWindow.open();
+            return StrandbookCommand.EXIT_OK;
+        } catch (RuntimeException | UnsatisfiedLinkError e) {
+            // no display (or no GTK): say so in one line and point to the command line
+            System.err.println("strandbook: cannot open the window (" + e.getMessage() + "); run 'strandbook --help' for the command line");
+            return StrandbookCommand.EXIT_REJECTED;
+        }
     }
 }

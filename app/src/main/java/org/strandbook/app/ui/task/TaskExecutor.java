@@ -1,0 +1,36 @@
+package org.strandbook.app.ui.task;
+
+import java.util.function.Consumer;
+
+import javafx.beans.property.ReadOnlyBooleanProperty;
+import javafx.beans.property.ReadOnlyDoubleProperty;
+import javafx.beans.property.ReadOnlyStringProperty;
+
+/**
+ * Runs jobs away from the FX thread, one at a time in submission order, and delivers each result
+ * back where the view models live. The status bar binds to the three properties and the Cancel
+ * button calls {@link #cancel()}.
+ */
+public interface TaskExecutor extends AutoCloseable {
+
+    /**
+     * Runs {@code job}; on success {@code onSuccess} receives its result, on failure {@code onFailure}
+     * the exception. A cancelled job calls neither; the message property says it was cancelled.
+     */
+    <T> void submit(String title, Job<T> job, Consumer<? super T> onSuccess, Consumer<? super Exception> onFailure);
+
+    /** True while a job runs or waits. */
+    ReadOnlyBooleanProperty runningProperty();
+
+    /** Progress of the running job in 0..1, negative when its end is unknown. */
+    ReadOnlyDoubleProperty progressProperty();
+
+    /** What the running job does, or how the last one ended. */
+    ReadOnlyStringProperty messageProperty();
+
+    /** Asks the running job to stop. */
+    void cancel();
+
+    @Override
+    void close();
+}

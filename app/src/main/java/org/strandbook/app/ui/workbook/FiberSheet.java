@@ -1,0 +1,52 @@
+package org.strandbook.app.ui.workbook;
+
+import java.util.Locale;
+
+import org.strandbook.app.ui.sheet.CellFormats;
+import org.strandbook.app.ui.sheet.CellParsers;
+import org.strandbook.app.ui.sheet.DecimalParser;
+import org.strandbook.app.ui.sheet.Figure;
+import org.strandbook.app.ui.sheet.SheetColumn;
+import org.strandbook.app.ui.sheet.SheetModel;
+import org.strandbook.site.FiberType;
+import org.strandbook.site.OhGrade;
+
+/** The fiber-type catalog as a sheet (codes are keys and stay read-only). */
+public final class FiberSheet {
+
+    private FiberSheet() {
+    }
+
+    public static SheetModel<FiberType> create() {
+        return SheetModel.<FiberType>builder()
+                .column(SheetColumn.derived("code", "Code", false, f -> Figure.text(f.code())))
+                .column(SheetColumn.input("description", "Description", FiberType::description, v -> v,
+                        CellParsers.freeText(), (f, v) -> with(f, v, f.coreUm(), f.claddingUm(), f.na(), f.ohGrade(), f.ohPpm())))
+                .column(SheetColumn.number("core", "Core (\u00B5m)", FiberType::coreUm, 0,
+                        DecimalParser.in("\u00B5m").above(0).atMost(2000).withDecimalComma(),
+                        (f, v) -> with(f, f.description(), v, f.claddingUm(), f.na(), f.ohGrade(), f.ohPpm())))
+                .column(SheetColumn.number("cladding", "Cladding (\u00B5m)", FiberType::claddingUm, 0,
+                        DecimalParser.in("\u00B5m").above(0).atMost(2500).withDecimalComma(),
+                        (f, v) -> with(f, f.description(), f.coreUm(), v, f.na(), f.ohGrade(), f.ohPpm())))
+                .column(SheetColumn.number("na", "NA", FiberType::na, 2,
+                        DecimalParser.in("").above(0).atMost(0.99).withDecimalComma(),
+                        (f, v) -> with(f, f.description(), f.coreUm(), f.claddingUm(), v, f.ohGrade(), f.ohPpm())))
+                .column(SheetColumn.input("oh", "OH grade", FiberType::ohGrade, CellFormats::choice,
+                        CellParsers.choice(OhGrade.class),
+                        (f, v) -> with(f, f.description(), f.coreUm(), f.claddingUm(), f.na(), v, f.ohPpm())))
+                .column(SheetColumn.number("ohPpm", "OH (ppm)", FiberType::ohPpm, 1,
+                        DecimalParser.in("ppm").atLeast(0).atMost(2000).withDecimalComma(),
+                        (f, v) -> with(f, f.description(), f.coreUm(), f.claddingUm(), f.na(), f.ohGrade(), v)))
+                .column(SheetColumn.derived("datasheet", "Datasheet attenuation", false, f -> Figure.text(
+                        f.datasheet().isEmpty() ? "none" : String.format(Locale.ROOT, "%d points, %s\u2013%s nm",
+                                f.datasheet().size(), CellFormats.plain(f.datasheet().get(0).wavelengthNm()),
+                                CellFormats.plain(f.datasheet().get(f.datasheet().size() - 1).wavelengthNm())))))
+                .build();
+    }
+
+    private static FiberType with(FiberType f, String description, double coreUm, double claddingUm, double na,
+                                  OhGrade oh, double ohPpm) {
+        return new FiberType(f.code(), description, coreUm, claddingUm, f.bufferUm(), na, f.coreMaterial(), oh, ohPpm,
+                f.datasheet());
+    }
+}

@@ -1,0 +1,73 @@
+package org.strandbook.app.ui.workbook;
+
+import java.util.Map;
+import java.util.OptionalDouble;
+import java.util.function.Supplier;
+
+import org.strandbook.app.ui.sheet.CellFormats;
+import org.strandbook.app.ui.sheet.CellParsers;
+import org.strandbook.app.ui.sheet.DecimalParser;
+import org.strandbook.app.ui.sheet.Figure;
+import org.strandbook.app.ui.sheet.RowFigures;
+import org.strandbook.app.ui.sheet.SheetColumn;
+import org.strandbook.app.ui.sheet.SheetModel;
+import org.strandbook.site.InspectionGrade;
+import org.strandbook.site.Joint;
+import org.strandbook.site.LossBasis;
+
+/** The "Joints" sheet of one point: both legs, with the loss each joint contributes. */
+public final class JointSheet {
+
+    public static final String LOSS_USED = "lossUsedDb";
+
+    private JointSheet() {
+    }
+
+    public static SheetModel<LegJoint> create(Supplier<Catalog> catalog) {
+        return SheetModel.<LegJoint>builder()
+                .column(SheetColumn.derived("leg", "Leg", false, j -> Figure.text(CellFormats.choice(j.direction()))))
+                .column(SheetColumn.input("label", "Joint", (LegJoint j) -> j.joint().label(), v -> v,
+                        CellParsers.text("a joint label"), (j, v) -> with(j, v, j.joint().connectorTypeA(),
+                                j.joint().connectorTypeB(), j.joint().grade(), j.joint().lossDb(), j.joint().lossBasis())))
+                .column(SheetColumn.input("connectorA", "Connector (light in)", (LegJoint j) -> j.joint().connectorTypeA(), v -> v,
+                        CellParsers.catalogCode("connector catalog", () -> catalog.get().connectorCodes()),
+                        (j, v) -> with(j, j.joint().label(), v, j.joint().connectorTypeB(), j.joint().grade(),
+                                j.joint().lossDb(), j.joint().lossBasis())))
+                .column(SheetColumn.input("connectorB", "Connector (light out)", (LegJoint j) -> j.joint().connectorTypeB(), v -> v,
+                        CellParsers.catalogCode("connector catalog", () -> catalog.get().connectorCodes()),
+                        (j, v) -> with(j, j.joint().label(), j.joint().connectorTypeA(), v, j.joint().grade(),
+                                j.joint().lossDb(), j.joint().lossBasis())))
+                .column(SheetColumn.input("grade", "End face", (LegJoint j) -> j.joint().grade(), CellFormats::choice,
+                        CellParsers.choice(InspectionGrade.class),
+                        (j, v) -> with(j, j.joint().label(), j.joint().connectorTypeA(), j.joint().connectorTypeB(), v,
+                                j.joint().lossDb(), j.joint().lossBasis())))
+                .column(SheetColumn.input("loss", "Entered loss (dB)", (LegJoint j) -> j.joint().lossDb(),
+                        CellFormats.optionalDecimal(2),
+                        CellParsers.optional(DecimalParser.in("dB").atLeast(0).atMost(20).withDecimalComma()),
+                        (j, v) -> with(j, j.joint().label(), j.joint().connectorTypeA(), j.joint().connectorTypeB(),
+                                j.joint().grade(), v, j.joint().lossBasis())))
+                .column(SheetColumn.input("basis", "Loss basis", (LegJoint j) -> j.joint().lossBasis(), CellFormats::choice,
+                        CellParsers.choice(LossBasis.class),
+                        (j, v) -> with(j, j.joint().label(), j.joint().connectorTypeA(), j.joint().connectorTypeB(),
+                                j.joint().grade(), j.joint().lossDb(), v)))
+                .column(SheetColumn.computed(LOSS_USED, "Loss used (dB)", true))
+                .uniqueKey("label", j -> j.direction() + "/" + j.joint().label())
+                .newRowsFrom((above, all) -> with(above, LabelSequence.nextUnused(above.joint().label(),
+                                all.stream().filter(j -> j.direction() == above.direction()).map(j -> j.joint().label()).toList()),
+                        above.joint().connectorTypeA(), above.joint().connectorTypeB(), InspectionGrade.NOT_INSPECTED,
+                        OptionalDouble.empty(), LossBasis.ASSUMED))
+                .evaluator(SheetModel.perRow(j -> {
+                    try {
+                        return new RowFigures(Map.of(LOSS_USED, Figure.number(new DatasheetLossBudget(catalog.get()).jointLossDb(j.joint()), 2)));
+                    } catch (IllegalArgumentException e) {
+                        return new RowFigures(Map.of(LOSS_USED, Figure.text("no such connector")));
+                    }
+                }))
+                .build();
+    }
+
+    private static LegJoint with(LegJoint j, String label, String a, String b, InspectionGrade grade,
+                                 OptionalDouble lossDb, LossBasis basis) {
+        return new LegJoint(j.direction(), new Joint(label, a, b, grade, lossDb, basis));
+    }
+}
