@@ -1,0 +1,80 @@
+package org.strandbook.app;
+
+import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
+import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices;
+
+import com.tngtech.archunit.core.domain.JavaClasses;
+import com.tngtech.archunit.core.importer.ClassFileImporter;
+import com.tngtech.archunit.core.importer.ImportOption;
+import com.tngtech.archunit.lang.ArchRule;
+import com.tngtech.archunit.library.GeneralCodingRules;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The boundaries of the design, enforced on the compiled classes of every module: the model and
+ * the physics know nothing of the window, the database or the spreadsheet library, and only the
+ * command line talks to the console.
+ */
+class ArchitectureTest {
+
+    private static JavaClasses classes;
+
+    @BeforeAll
+    static void importClasses() {
+        classes = new ClassFileImporter()
+                .withImportOption(ImportOption.Predefined.DO_NOT_INCLUDE_TESTS)
+                .withImportOption(ImportOption.Predefined.DO_NOT_INCLUDE_JARS)
+                .importPackages("org.strandbook");
+    }
+
+    @Test
+    void coreAndSampleSiteNeverTouchJavaFx() {
+        ArchRule rule = noClasses().that().resideOutsideOfPackage("org.strandbook.app..")
+                .should().dependOnClassesThat().resideInAnyPackage("javafx..")
+                .because("core has no JavaFX dependency at all; the window is one client among others");
+        rule.check(classes);
+    }
+
+    @Test
+    void jdbcStaysInTheStore() {
+        ArchRule rule = noClasses().that().resideOutsideOfPackage("org.strandbook.store..")
+                .should().dependOnClassesThat().resideInAnyPackage("java.sql..", "org.sqlite..")
+                .because("explicit SQL lives in small repository classes of one package");
+        rule.check(classes);
+    }
+
+    @Test
+    void spreadsheetLibraryStaysInImportAndDossier() {
+        ArchRule rule = noClasses().that()
+                .resideOutsideOfPackages("org.strandbook.schedule..", "org.strandbook.dossier..")
+                .should().dependOnClassesThat().resideInAnyPackage("org.apache.poi..", "org.openxmlformats..")
+                .because("POI is confined to the cable-schedule import and the dossier export");
+        rule.check(classes);
+    }
+
+    @Test
+    void physicsAndNumericsAreFreeOfStorageAndFiles() {
+        ArchRule rule = noClasses().that()
+                .resideInAnyPackage("org.strandbook.optics..", "org.strandbook.fit..", "org.strandbook.trend..",
+                        "org.strandbook.throughput..", "org.strandbook.diagnosis..")
+                .should().dependOnClassesThat().resideInAnyPackage("java.sql..", "java.nio.file..",
+                        "org.strandbook.store..", "org.apache.poi..")
+                .because("physics and numerics are pure functions of their arguments");
+        rule.check(classes);
+    }
+
+    @Test
+    void onlyTheCommandLineWritesToTheConsole() {
+        // the app's root package holds only the launcher, the process's entry point
+        ArchRule rule = noClasses().that().resideOutsideOfPackages("org.strandbook.app.cli..", "org.strandbook.app")
+                .should(GeneralCodingRules.ACCESS_STANDARD_STREAMS)
+                .because("results reach the user through the command line or the window, never stray prints");
+        rule.check(classes);
+    }
+
+    @Test
+    void packagesFormNoCycles() {
+        slices().matching("org.strandbook.(*)..").should().beFreeOfCycles().check(classes);
+    }
+}
