@@ -60,7 +60,8 @@ final class AuditVerifier {
                 switch (String.valueOf(e.action())) {
                     case "INSERT", "UPDATE", "BASELINE" -> last.put(rowName(e.table(), e.rowKey()),
                             new LastImage(e.id(), e.table(), e.rowKey(), e.rowSha256()));
-                    case "DELETE" -> last.put(rowName(e.table(), e.rowKey()), new LastImage(e.id(), e.table(), e.rowKey(), null));
+                    case "DELETE" -> last.put(rowName(e.table(), e.rowKey()),
+                            new LastImage(e.id(), e.table(), e.rowKey(), null));
                     default -> {
                         // SCHEMA rows record no data row
                     }

@@ -65,7 +65,8 @@ public final class PointRepository {
             }
             audit.updated(AuditedTable.POINT, id, before);
             if (!bands(id).equals(point.bands())) {
-                for (long bandId : RowKeys.children(session, "SELECT id FROM point_band WHERE point_id = ? ORDER BY position", id)) {
+                for (long bandId : RowKeys.children(session,
+                        "SELECT id FROM point_band WHERE point_id = ? ORDER BY position", id)) {
                     audit.deleteRow(AuditedTable.POINT_BAND, bandId);
                 }
                 insertBands(id, point.bands());

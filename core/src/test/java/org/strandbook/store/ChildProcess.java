@@ -83,9 +83,14 @@ final class ChildProcess implements AutoCloseable {
     }
 
     @Override
-    public void close() throws InterruptedException {
+    public void close() {
         if (process.isAlive()) {
-            kill();
+            process.destroyForcibly();
+            try {
+                process.waitFor(30, TimeUnit.SECONDS);
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+            }
         }
     }
 }

@@ -14,7 +14,8 @@ import org.strandbook.site.Spectrum;
  * Builds the committed schema-1 workbook {@value #RESOURCE}: a small invented site written the way
  * a schema-1 Strandbook wrote it, before the audit trail existed. Run once, when schema 2 was
  * added; a released fixture is never rebuilt, it stands for files already out in plants.
- * {@code java -cp core/target/test-classes:core/target/classes:<sqlite-jdbc jar> org.strandbook.store.SchemaOneFixture core/src/test/resources/org/strandbook/store/workbook-schema1.sqlite}
+ * <pre>java -cp core/target/test-classes:core/target/classes:&lt;sqlite-jdbc jar&gt; \
+ *     org.strandbook.store.SchemaOneFixture core/src/test/resources/org/strandbook/store/workbook-schema1.sqlite</pre>
  */
 final class SchemaOneFixture {
 

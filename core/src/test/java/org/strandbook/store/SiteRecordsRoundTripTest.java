@@ -135,7 +135,8 @@ class SiteRecordsRoundTripTest {
         wb.signOffs().add(point);
         assertEquals(List.of(site, point), wb.signOffs().list());
 
-        Note n = new Note(DemoSite.POINT_B, Instant.parse("2024-03-05T11:00:00Z"), "k.ashdown", "return leg re-routed\nsee sketch");
+        Note n = new Note(DemoSite.POINT_B, Instant.parse("2024-03-05T11:00:00Z"), "k.ashdown",
+                "return leg re-routed\nsee sketch");
         wb.notes().add(n);
         assertEquals(List.of(n), wb.notes().list(DemoSite.POINT_B));
         assertEquals(List.of(n), wb.notes().list());

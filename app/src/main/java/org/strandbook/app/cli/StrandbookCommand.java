@@ -15,6 +15,10 @@ import picocli.CommandLine.Command;
         description = "Commissioning and maintenance workbook for the fiber-optic light paths of process spectrometers.",
         subcommands = {
             CommandLine.HelpCommand.class,
+            InitCommand.class,
+            ScansCommand.class,
+            ScanCommand.class,
+            AuditCommand.class,
         })
 public final class StrandbookCommand implements Runnable {
 
