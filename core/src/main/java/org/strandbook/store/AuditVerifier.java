@@ -116,6 +116,14 @@ final class AuditVerifier {
                 }
             }
         }
+        // rows another program wrote with foreign keys off, such as a spectrum whose scan is gone
+        try (PreparedStatement ps = session.connection().prepareStatement("PRAGMA foreign_key_check");
+             ResultSet rs = ps.executeQuery()) {
+            while (rs.next()) {
+                findings.add(new AuditFinding(0, rs.getString(1) + " row " + rs.getLong(2) + " refers to a missing "
+                        + rs.getString(3) + " row: it was changed without Strandbook"));
+            }
+        }
         for (LastImage gone : last.values()) {
             if (gone.rowSha256() != null) {
                 findings.add(new AuditFinding(gone.auditRowId(), gone.table() + " row " + gone.rowKey()

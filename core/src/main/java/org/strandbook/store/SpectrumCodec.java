@@ -1,8 +1,8 @@
 package org.strandbook.store;
 
-import java.nio.ByteBuffer;
+import java.lang.invoke.MethodHandles;
+import java.lang.invoke.VarHandle;
 import java.nio.ByteOrder;
-import java.nio.DoubleBuffer;
 
 import org.strandbook.site.Spectrum;
 
@@ -16,16 +16,22 @@ final class SpectrumCodec {
 
     static final int BYTES_PER_POINT = 2 * Double.BYTES;
 
+    private static final VarHandle LITTLE_ENDIAN_DOUBLE =
+            MethodHandles.byteArrayViewVarHandle(double[].class, ByteOrder.LITTLE_ENDIAN);
+
     private SpectrumCodec() {
     }
 
     static byte[] encode(Spectrum spectrum) {
-        int n = spectrum.size();
-        ByteBuffer bytes = ByteBuffer.allocate(n * BYTES_PER_POINT).order(ByteOrder.LITTLE_ENDIAN);
-        DoubleBuffer doubles = bytes.asDoubleBuffer();
-        doubles.put(spectrum.wavelengthsNm());
-        doubles.put(spectrum.values());
-        return bytes.array();
+        double[] wavelengthsNm = spectrum.wavelengthsNm();
+        double[] values = spectrum.values();
+        int n = values.length;
+        byte[] out = new byte[n * BYTES_PER_POINT];
+        for (int i = 0; i < n; i++) {
+            LITTLE_ENDIAN_DOUBLE.set(out, i * Double.BYTES, wavelengthsNm[i]);
+            LITTLE_ENDIAN_DOUBLE.set(out, (n + i) * Double.BYTES, values[i]);
+        }
+        return out;
     }
 
     /**
@@ -39,11 +45,12 @@ final class SpectrumCodec {
                     + (long) nPoints * BYTES_PER_POINT + " bytes for " + nPoints + " points, found "
                     + (data == null ? 0 : data.length) + ")");
         }
-        DoubleBuffer doubles = ByteBuffer.wrap(data).order(ByteOrder.LITTLE_ENDIAN).asDoubleBuffer();
         double[] wavelengthsNm = new double[nPoints];
         double[] values = new double[nPoints];
-        doubles.get(wavelengthsNm);
-        doubles.get(values);
+        for (int i = 0; i < nPoints; i++) {
+            wavelengthsNm[i] = (double) LITTLE_ENDIAN_DOUBLE.get(data, i * Double.BYTES);
+            values[i] = (double) LITTLE_ENDIAN_DOUBLE.get(data, (nPoints + i) * Double.BYTES);
+        }
         try {
             return new Spectrum(wavelengthsNm, values);
         } catch (IllegalArgumentException e) {

@@ -34,6 +34,9 @@ public final class Workbook implements AutoCloseable {
 
     public static final Duration DEFAULT_BUSY_TIMEOUT = Duration.ofSeconds(5);
 
+    /** SQLite page cache per open workbook, KiB; taken only as pages are read or written. */
+    private static final int CACHE_KIB = 32 * 1024;
+
     private final Session session;
     private final AuditLog audit;
     private final SiteRepository site;
@@ -130,6 +133,8 @@ public final class Workbook implements AutoCloseable {
         config.setBusyTimeout((int) Math.min(Integer.MAX_VALUE, busyTimeout.toMillis()));
         // keys come from INSERT ... RETURNING; the driver's emulation would prepare a query per insert
         config.setGetGeneratedKeys(false);
+        // a batch of imports in one transaction stays in memory instead of spilling pages early
+        config.setCacheSize(-CACHE_KIB);
         if (!create) {
             config.resetOpenMode(SQLiteOpenMode.CREATE);
         }

@@ -173,6 +173,15 @@ class AuditTrailTest {
     }
 
     @Test
+    void aScanRemovedWithForeignKeysOffLeavesItsSpectrumAccusingIt() throws SQLException {
+        tamper("DELETE FROM scan WHERE id = 2 RETURNING id");
+        List<String> found = verify().unrecordedChanges().stream().map(AuditFinding::message).toList();
+        assertTrue(found.contains("scan_spectrum row 2 refers to a missing scan row: it was changed without Strandbook"),
+                found::toString);
+        assertTrue(found.stream().anyMatch(m -> m.startsWith("scan row 2 recorded by audit row")), found::toString);
+    }
+
+    @Test
     void cuttingOffTheNewestRowsLeavesTheirDataUnaccountedFor() throws SQLException {
         tamper("DELETE FROM audit_entry WHERE id >= (SELECT max(id) - 1 FROM audit_entry) RETURNING id");
         AuditReport r = verify();
