@@ -103,6 +103,42 @@ final class Session implements AutoCloseable {
     }
 
     /**
+     * Opens a write transaction that stays open across calls until {@link #commitOpenWrite()}; calls
+     * of {@link #write} in between run under savepoints inside it. The calling thread holds the
+     * session until then.
+     */
+    void beginOpenWrite() {
+        lock.lock();
+        try {
+            if (depth > 0) {
+                throw new IllegalStateException("a long write cannot start inside another transaction");
+            }
+            exec("BEGIN IMMEDIATE");
+            depth = 1;
+            writing = true;
+        } catch (SQLException e) {
+            lock.unlock();
+            throw SqlFailures.translate(e, file);
+        } catch (RuntimeException e) {
+            lock.unlock();
+            throw e;
+        }
+    }
+
+    /** Commits the transaction of {@link #beginOpenWrite()} (or rolls it back if the commit fails). */
+    void commitOpenWrite() {
+        try {
+            depth = 0;
+            writing = false;
+            finishOutermost(true);
+        } catch (SQLException e) {
+            throw SqlFailures.translate(e, file);
+        } finally {
+            lock.unlock();
+        }
+    }
+
+    /**
      * Runs {@code work} on one consistent snapshot of the workbook; inside a write transaction it
      * simply joins it.
      */

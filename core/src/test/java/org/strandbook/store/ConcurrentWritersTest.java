@@ -42,7 +42,8 @@ class ConcurrentWritersTest {
         int inserted = 0;
         int busy = 0;
         try (ChildProcess a = ChildProcess.start(scratch, file.toString(), "a", Integer.toString(STEPS), "1");
-             ChildProcess b = ChildProcess.start(scratch, file.toString(), "b", Integer.toString(STEPS), "2")) {
+             ChildProcess b = ChildProcess.start(scratch, file.toString(), "b", Integer.toString(STEPS), "2",
+                     "import")) {
             for (ChildProcess child : new ChildProcess[] {a, b}) {
                 String[] done = child.awaitLine("done", 120).split(" ");
                 assertEquals(0, child.awaitExit(30));

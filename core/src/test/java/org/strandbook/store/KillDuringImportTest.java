@@ -11,7 +11,8 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * An import killed at any moment leaves a sound workbook in which every scan is wholly present or
- * absent. The kills come from a fixed-seed random delay after the child has opened the workbook.
+ * absent. The kills come from a fixed-seed random delay after the child has opened the workbook;
+ * children alternate between one transaction per scan and a {@link ScanImport}.
  */
 class KillDuringImportTest {
 
@@ -33,7 +34,8 @@ class KillDuringImportTest {
         long scans = 0;
         int roundsThatCommitted = 0;
         for (int round = 0; round < KILLS; round++) {
-            try (ChildProcess child = ChildProcess.start(scratch, file.toString(), "k" + round, "0", Long.toString(round))) {
+            try (ChildProcess child = ChildProcess.start(scratch, file.toString(), "k" + round, "0",
+                    Long.toString(round), round % 2 == 0 ? "single" : "import")) {
                 child.awaitLine("ready", 60);
                 Thread.sleep(delays.nextInt(250));
                 child.kill();

@@ -1,6 +1,7 @@
 package org.strandbook.store;
 
 import java.nio.file.Path;
+import java.time.Duration;
 import java.time.Instant;
 import java.util.List;
 import java.util.Random;
@@ -14,8 +15,10 @@ import org.strandbook.site.ScanKind;
 /**
  * The other process of the reliability tests: imports scans into a workbook, one transaction per
  * scan, and every tenth step replaces point AT-102's legs as a whole (a multi-row transaction).
+ * In mode {@code import} the scans go through a {@link ScanImport} committing every few scans instead.
  * Prints {@code ready} once the workbook is open and {@code done <inserted> <busy>} at the end.
- * Arguments: workbook, a label unique to this run, number of steps (0 = until killed), seed.
+ * Arguments: workbook, a label unique to this run, number of steps (0 = until killed), seed, mode
+ * ({@code single} or {@code import}).
  */
 final class ScanImportChild {
 
@@ -30,9 +33,11 @@ final class ScanImportChild {
         String label = args[1];
         int steps = Integer.parseInt(args[2]);
         Random random = new Random(Long.parseLong(args[3]));
+        boolean batched = args.length > 4 && args[4].equals("import");
         int inserted = 0;
         int busy = 0;
-        try (Workbook wb = Workbook.open(file, "child-" + label)) {
+        try (Workbook wb = Workbook.open(file, "child-" + label);
+             ScanImport batch = wb.scans().startImport(7, Duration.ofSeconds(1))) {
             System.out.println("ready");
             System.out.flush();
             for (int i = 0; steps == 0 || i < steps; i++) {
@@ -41,10 +46,15 @@ final class ScanImportChild {
                         wb.paths().replaceLegs(DemoSite.POINT_B, legs(label + "x" + i));
                     } else {
                         int points = 64 + random.nextInt(960);
-                        wb.scans().insert(i % 2 == 0 ? DemoSite.POINT_A : DemoSite.POINT_B, ScanKind.LOOP,
+                        NewScan scan = new NewScan(i % 2 == 0 ? DemoSite.POINT_A : DemoSite.POINT_B, ScanKind.LOOP,
                                 Instant.EPOCH.plusSeconds(i), ScanConditions.unknown(label),
                                 DemoSite.spectrum(points, random.nextLong()), label + "-" + i + ".csv",
                                 DemoSite.sha256Of(label + "/" + i));
+                        if (batched) {
+                            batch.add(scan);
+                        } else {
+                            wb.scans().insert(scan);
+                        }
                         inserted++;
                     }
                 } catch (WorkbookBusyException e) {
