@@ -16,6 +16,10 @@ import picocli.CommandLine.Command;
         subcommands = {
             CommandLine.HelpCommand.class,
             FiberCommand.class,
+            InitCommand.class,
+            ScansCommand.class,
+            ScanCommand.class,
+            AuditCommand.class,
             BenchCommand.class,
         })
 public final class StrandbookCommand implements Runnable {

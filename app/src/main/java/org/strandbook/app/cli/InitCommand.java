@@ -1,0 +1,41 @@
+package org.strandbook.app.cli;
+
+import java.util.concurrent.Callable;
+
+import org.strandbook.site.Site;
+import org.strandbook.store.Workbook;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/** {@code strandbook init SITE --site-name NAME}: a new, empty workbook for one site. Never overwrites a file. */
+@Command(name = "init", mixinStandardHelpOptions = true,
+        description = "Create a new workbook for one site. An existing file is never overwritten.")
+final class InitCommand implements Callable<Integer> {
+
+    @Mixin
+    WorkbookFileOptions workbook;
+
+    @Option(names = "--site-name", required = true, paramLabel = "NAME",
+            description = "The site's name as the plant writes it.")
+    String siteName;
+
+    @Option(names = "--plant-area", paramLabel = "AREA", defaultValue = "", description = "Plant area or unit.")
+    String plantArea;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        Site site = new Site(siteName, plantArea, "A", Site.COMMON_PRACTICE_TOLERANCE_DB);
+        try (Workbook wb = Workbook.create(workbook.file(), site, workbook.user())) {
+            spec.commandLine().getOut().println("created workbook " + workbook.file() + " for site " + site.name()
+                    + " (schema " + wb.schemaVersion() + ", default tolerance " + site.defaultToleranceDb() + " dB)");
+        }
+        return StrandbookCommand.EXIT_OK;
+    }
+}

@@ -1,0 +1,89 @@
+package org.strandbook.store;
+
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.util.ArrayList;
+import java.util.List;
+
+import org.strandbook.site.Inspection;
+import org.strandbook.site.InspectionGrade;
+
+/**
+ * End-face inspections of joints. They name the joint by label, so a point's history of
+ * inspections outlives a replacement of its legs. Every addition is audited.
+ */
+public final class InspectionRepository {
+
+    private static final String SELECT = "SELECT p.tag, i.joint_label, i.inspected_at, i.inspector, i.grade, i.remark "
+            + "FROM inspection i JOIN point p ON p.id = i.point_id";
+
+    private final Session session;
+    private final AuditLog audit;
+
+    InspectionRepository(Session session, AuditLog audit) {
+        this.session = session;
+        this.audit = audit;
+    }
+
+    /**
+     * Records an inspection.
+     *
+     * @return its id
+     * @throws UnknownEntryException when no point has the inspection's tag
+     */
+    public long add(Inspection inspection) {
+        return session.write(() -> {
+            long pointId = RowKeys.requirePoint(session, inspection.pointTag());
+            if (inspection.inspectedAt() == null) {
+                throw new IllegalArgumentException("inspection of " + inspection.pointTag() + " "
+                        + inspection.jointLabel() + ": time missing");
+            }
+            try (PreparedStatement ps = session.connection().prepareStatement("INSERT INTO inspection (point_id, "
+                    + "joint_label, inspected_at, inspector, grade, remark) VALUES (?, ?, ?, ?, ?, ?) RETURNING id")) {
+                ps.setLong(1, pointId);
+                ps.setString(2, inspection.jointLabel());
+                ps.setString(3, StoredTime.format(inspection.inspectedAt()));
+                ps.setString(4, inspection.inspector());
+                ps.setString(5, inspection.grade().name());
+                ps.setString(6, inspection.remark());
+                long id = Columns.insertReturningId(ps);
+                audit.inserted(AuditedTable.INSPECTION, id);
+                return id;
+            }
+        });
+    }
+
+    /** The point's inspections in time order. */
+    public List<Inspection> list(String pointTag) {
+        return session.read(() -> {
+            long pointId = RowKeys.requirePoint(session, pointTag);
+            try (PreparedStatement ps = session.connection().prepareStatement(
+                    SELECT + " WHERE i.point_id = ? ORDER BY i.inspected_at, i.id")) {
+                ps.setLong(1, pointId);
+                return inspections(ps);
+            }
+        });
+    }
+
+    /** Every inspection, by point tag then time. */
+    public List<Inspection> listAll() {
+        return session.read(() -> {
+            try (PreparedStatement ps = session.connection().prepareStatement(
+                    SELECT + " ORDER BY p.tag, i.inspected_at, i.id")) {
+                return inspections(ps);
+            }
+        });
+    }
+
+    private static List<Inspection> inspections(PreparedStatement ps) throws SQLException {
+        List<Inspection> out = new ArrayList<>();
+        try (ResultSet rs = ps.executeQuery()) {
+            while (rs.next()) {
+                out.add(new Inspection(rs.getString(1), rs.getString(2), StoredTime.parse(rs.getString(3)),
+                        rs.getString(4), InspectionGrade.valueOf(rs.getString(5)), rs.getString(6)));
+            }
+        }
+        return out;
+    }
+}

@@ -1,0 +1,118 @@
+package org.strandbook.store;
+
+import java.security.MessageDigest;
+import java.sql.ResultSet;
+import java.sql.ResultSetMetaData;
+import java.sql.SQLException;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * One row as SQLite holds it, in two forms: JSON text for people reading the audit trail, and a
+ * SHA-256 digest for the machine check that the row still is what the trail last recorded.
+ *
+ * <p>The JSON shows a BLOB as its SHA-256 and size, never its bytes. The digest runs over an exact,
+ * runtime-independent encoding rather than the JSON: a REAL enters as the hex of its IEEE 754 bits,
+ * because decimal text of a double has changed between Java releases and would raise false alarms.
+ * Digest input, per non-NULL column in table order: {@code field(name) field(type) field(value)},
+ * with {@code field(s) = <UTF-8 byte length of s> ":" s}, type {@code I} (value: decimal),
+ * {@code R} (value: 16 hex digits of the bits), {@code T} (value: the text) or {@code B} (value:
+ * SHA-256 hex of the bytes, then a field with the byte count). NULL columns are left out, so a
+ * column added later as NULL leaves older rows' digests valid.
+ */
+final class RowImage {
+
+    private record Column(String name, Object value) {
+    }
+
+    private record BlobSummary(String sha256, int bytes) {
+    }
+
+    private final List<Column> columns;
+
+    private RowImage(List<Column> columns) {
+        this.columns = columns;
+    }
+
+    /** The image of the result set's current row. */
+    static RowImage of(ResultSet rs) throws SQLException {
+        ResultSetMetaData meta = rs.getMetaData();
+        int n = meta.getColumnCount();
+        List<Column> columns = new ArrayList<>(n);
+        for (int i = 1; i <= n; i++) {
+            Object v = rs.getObject(i);
+            if (v instanceof Integer k) {
+                v = k.longValue();
+            } else if (v instanceof byte[] bytes) {
+                v = new BlobSummary(Sha256.hex(bytes), bytes.length);
+            } else if (v instanceof Float f) {
+                v = f.doubleValue();
+            }
+            columns.add(new Column(meta.getColumnName(i), v));
+        }
+        return new RowImage(List.copyOf(columns));
+    }
+
+    String json() {
+        StringBuilder sb = new StringBuilder(64 + 24 * columns.size()).append('{');
+        for (int i = 0; i < columns.size(); i++) {
+            Column c = columns.get(i);
+            if (i > 0) {
+                sb.append(',');
+            }
+            JsonText.string(sb, c.name()).append(':');
+            Object v = c.value();
+            if (v == null) {
+                sb.append("null");
+            } else if (v instanceof String s) {
+                JsonText.string(sb, s);
+            } else if (v instanceof BlobSummary b) {
+                sb.append("{\"sha256\":\"").append(b.sha256()).append("\",\"bytes\":").append(b.bytes()).append('}');
+            } else {
+                sb.append(v);
+            }
+        }
+        return sb.append('}').toString();
+    }
+
+    String sha256() {
+        MessageDigest md = Sha256.newDigest();
+        for (Column c : columns) {
+            Object v = c.value();
+            if (v == null) {
+                continue;
+            }
+            Sha256.field(md, c.name());
+            if (v instanceof Long k) {
+                Sha256.field(md, "I");
+                Sha256.field(md, Long.toString(k));
+            } else if (v instanceof Double d) {
+                Sha256.field(md, "R");
+                Sha256.field(md, bitsHex(d));
+            } else if (v instanceof BlobSummary b) {
+                Sha256.field(md, "B");
+                Sha256.field(md, b.sha256());
+                Sha256.field(md, Integer.toString(b.bytes()));
+            } else {
+                Sha256.field(md, "T");
+                Sha256.field(md, v.toString());
+            }
+        }
+        return Sha256.toHex(md.digest());
+    }
+
+    private static String bitsHex(double d) {
+        String hex = Long.toHexString(Double.doubleToLongBits(d));
+        return "0".repeat(16 - hex.length()) + hex;
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof RowImage r && columns.equals(r.columns);
+    }
+
+    @Override
+    public int hashCode() {
+        return columns.hashCode();
+    }
+}

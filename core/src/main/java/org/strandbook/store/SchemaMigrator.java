@@ -1,0 +1,119 @@
+package org.strandbook.store;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.util.List;
+
+/**
+ * Brings a workbook to the current schema, one version per transaction, keeping the version in
+ * SQLite's {@code PRAGMA user_version}. Scripts are {@code migration/V<n>__<what>.sql} beside this
+ * class; a released script is never edited, a change is a new step.
+ *
+ * <p>Why not Flyway: tried with flyway-core 13.12.1 on SQLite, it migrates cleanly alone, but when
+ * two processes migrated the same file at once both ran the same step and one failed ("Failed to
+ * execute script"), as Flyway takes no lock on SQLite. Here each step takes the write lock first
+ * ({@code BEGIN IMMEDIATE}) and re-reads the version inside it, so a second process finds the step
+ * done and moves on. Flyway would also add about 0.7 s to every command's start and needs a Java
+ * migration for the audit baseline, which here is one call.
+ */
+final class SchemaMigrator {
+
+    /** Schema version this Strandbook writes. */
+    static final int LATEST = 2;
+
+    /** The version that created the audit trail; from it on, every step is itself audited. */
+    static final int AUDIT_TRAIL = 2;
+
+    private record Step(int version, String script) {
+    }
+
+    private static final List<Step> STEPS = List.of(
+            new Step(1, "V1__create_workbook.sql"),
+            new Step(2, "V2__audit_trail.sql"));
+
+    private SchemaMigrator() {
+    }
+
+    static void migrate(Session session, AuditLog audit) {
+        migrateTo(session, audit, LATEST);
+    }
+
+    /** Applies the steps up to {@code target}; tests stop early to build older workbooks. */
+    static void migrateTo(Session session, AuditLog audit, int target) {
+        if (session.read(() -> pragma(session, "user_version")) >= target) {
+            checkIdentity(session);
+            return;
+        }
+        for (Step step : STEPS) {
+            if (step.version() > target) {
+                break;
+            }
+            session.write(() -> {
+                int current = pragma(session, "user_version");
+                if (current != 0 || !isEmpty(session)) {
+                    checkIdentity(session);
+                }
+                if (current >= step.version()) {
+                    return null;
+                }
+                try (Statement st = session.connection().createStatement()) {
+                    st.executeUpdate(script(step.script()));
+                }
+                if (step.version() == AUDIT_TRAIL) {
+                    for (AuditedTable table : AuditedTable.values()) {
+                        audit.baseline(table);
+                    }
+                }
+                if (step.version() >= AUDIT_TRAIL) {
+                    audit.schemaChanged(current, step.version());
+                }
+                try (Statement st = session.connection().createStatement()) {
+                    st.execute("PRAGMA user_version = " + step.version());
+                }
+                return null;
+            });
+        }
+    }
+
+    static int schemaVersion(Session session) {
+        return session.read(() -> pragma(session, "user_version"));
+    }
+
+    private static void checkIdentity(Session session) {
+        session.read(() -> {
+            WorkbookFile.checkIdentity(session.file(), pragma(session, "application_id"),
+                    pragma(session, "user_version"));
+            return null;
+        });
+    }
+
+    private static boolean isEmpty(Session session) throws SQLException {
+        try (Statement st = session.connection().createStatement();
+             ResultSet rs = st.executeQuery("SELECT count(*) FROM sqlite_master")) {
+            rs.next();
+            return rs.getInt(1) == 0 && pragma(session, "application_id") == 0;
+        }
+    }
+
+    private static int pragma(Session session, String name) throws SQLException {
+        try (Statement st = session.connection().createStatement();
+             ResultSet rs = st.executeQuery("PRAGMA " + name)) {
+            return rs.next() ? rs.getInt(1) : 0;
+        }
+    }
+
+    private static String script(String name) {
+        try (InputStream in = SchemaMigrator.class.getResourceAsStream("migration/" + name)) {
+            if (in == null) {
+                throw new IllegalStateException("schema script " + name + " missing from the Strandbook jar");
+            }
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            throw new IllegalStateException("cannot read schema script " + name, e);
+        }
+    }
+}

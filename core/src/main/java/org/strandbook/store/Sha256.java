@@ -1,0 +1,65 @@
+package org.strandbook.store;
+
+import java.nio.charset.StandardCharsets;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.HexFormat;
+import java.util.Locale;
+import java.util.regex.Pattern;
+
+/** SHA-256 (FIPS 180-4) as the workbook writes it: 64 lowercase hex digits. */
+final class Sha256 {
+
+    /** The previous hash of the first audit row. */
+    static final String GENESIS = "0".repeat(64);
+
+    private static final Pattern HEX_64 = Pattern.compile("[0-9a-f]{64}");
+    private static final HexFormat HEX = HexFormat.of();
+
+    private Sha256() {
+    }
+
+    static MessageDigest newDigest() {
+        try {
+            return MessageDigest.getInstance("SHA-256");
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("every Java runtime provides SHA-256", e);
+        }
+    }
+
+    static String hex(byte[] data) {
+        return HEX.formatHex(newDigest().digest(data));
+    }
+
+    static String hex(String text) {
+        return hex(text.getBytes(StandardCharsets.UTF_8));
+    }
+
+    static String toHex(byte[] digest) {
+        return HEX.formatHex(digest);
+    }
+
+    /**
+     * Feeds one field to a digest as {@code <UTF-8 byte length> ":" <bytes>}, or {@code -} for null:
+     * length-prefixed so that no two different sequences of fields feed the same bytes.
+     */
+    static void field(MessageDigest md, String value) {
+        if (value == null) {
+            md.update((byte) '-');
+            return;
+        }
+        byte[] bytes = value.getBytes(StandardCharsets.UTF_8);
+        md.update(Integer.toString(bytes.length).getBytes(StandardCharsets.US_ASCII));
+        md.update((byte) ':');
+        md.update(bytes);
+    }
+
+    /** The given hash in stored form, or an error naming what is wrong with it. */
+    static String normalized(String sha256, String what) {
+        String s = sha256 == null ? "" : sha256.strip().toLowerCase(Locale.ROOT);
+        if (!HEX_64.matcher(s).matches()) {
+            throw new IllegalArgumentException(what + ": SHA-256 must be 64 hex digits, was '" + sha256 + "'");
+        }
+        return s;
+    }
+}

@@ -1,0 +1,271 @@
+package org.strandbook.store;
+
+import java.io.IOException;
+import java.nio.file.FileAlreadyExistsException;
+import java.nio.file.Files;
+import java.nio.file.LinkOption;
+import java.nio.file.Path;
+import java.sql.Connection;
+import java.sql.SQLException;
+import java.time.Duration;
+import java.util.UUID;
+import java.util.function.Supplier;
+
+import org.sqlite.SQLiteConfig;
+import org.sqlite.SQLiteOpenMode;
+import org.strandbook.site.Site;
+
+/**
+ * One site's workbook: a single SQLite file holding the site, its catalogs, points, light paths,
+ * scans, inspections, sign-offs, notes and the audit trail of every change.
+ *
+ * <p>Each connection runs with foreign keys on, a write-ahead log and a busy timeout (default
+ * {@link #DEFAULT_BUSY_TIMEOUT}): readers never wait for a writer, and a writer waits that long for
+ * another before giving up with {@link WorkbookBusyException}. Every change is one transaction, so
+ * a change is wholly in the file or not at all, even if the program is killed. Synchronous mode is
+ * NORMAL, which SQLite documents as corruption-proof in WAL mode: a kill loses nothing committed;
+ * a power cut may lose the last commits since the latest checkpoint, never corrupt the file. That
+ * keeps per-file import transactions near the speed of a bare insert.
+ *
+ * <p>A workbook is used from one thread at a time (calls are serialised); UI code calls it from a
+ * background task. It is opened for one user, whose name the audit trail records.
+ */
+public final class Workbook implements AutoCloseable {
+
+    public static final Duration DEFAULT_BUSY_TIMEOUT = Duration.ofSeconds(5);
+
+    /** SQLite page cache per open workbook, KiB; taken only as pages are read or written. */
+    private static final int CACHE_KIB = 32 * 1024;
+
+    private final Session session;
+    private final AuditLog audit;
+    private final SiteRepository site;
+    private final CatalogRepository catalog;
+    private final PointRepository points;
+    private final PathRepository paths;
+    private final ScanRepository scans;
+    private final InspectionRepository inspections;
+    private final SignOffRepository signOffs;
+    private final NoteRepository notes;
+
+    private Workbook(Session session, AuditLog audit) {
+        this.session = session;
+        this.audit = audit;
+        this.site = new SiteRepository(session, audit);
+        this.catalog = new CatalogRepository(session, audit);
+        this.points = new PointRepository(session, audit);
+        this.paths = new PathRepository(session, audit);
+        this.scans = new ScanRepository(session, audit);
+        this.inspections = new InspectionRepository(session, audit);
+        this.signOffs = new SignOffRepository(session, audit);
+        this.notes = new NoteRepository(session, audit);
+    }
+
+    /**
+     * Creates a workbook for {@code site} at {@code file}, which must not exist. The file appears
+     * complete or not at all: it is built under a temporary name beside it and then linked into place.
+     *
+     * @param user who creates it, for the audit trail
+     * @throws WorkbookException when a file is already there or the folder is missing
+     */
+    public static Workbook create(Path file, Site site, String user) {
+        String who = requireUser(user);
+        if (site == null) {
+            throw new IllegalArgumentException("site missing");
+        }
+        Path target = file.toAbsolutePath().normalize();
+        if (Files.exists(target, LinkOption.NOFOLLOW_LINKS)) {
+            throw refuseOverwrite(file);
+        }
+        Path folder = target.getParent();
+        if (folder == null || !Files.isDirectory(folder)) {
+            throw new WorkbookException("cannot create " + file + ": folder " + folder + " does not exist");
+        }
+        Path draft = folder.resolve("." + target.getFileName() + "." + UUID.randomUUID() + ".creating");
+        try {
+            try (Workbook wb = connect(draft, who, DEFAULT_BUSY_TIMEOUT, true)) {
+                wb.site.create(site);
+            }
+            publish(draft, target, file);
+        } finally {
+            for (String suffix : new String[] {"", "-wal", "-shm", "-journal"}) {
+                deleteQuietly(Path.of(draft + suffix));
+            }
+        }
+        return open(file, who);
+    }
+
+    /**
+     * Opens an existing workbook, upgrading an older schema first (each step audited).
+     *
+     * @param user who works on it, for the audit trail
+     * @throws WorkbookMissingException when there is no file
+     * @throws NotAWorkbookException    when the file is not a Strandbook workbook (it is left unchanged)
+     * @throws NewerWorkbookException   when a newer Strandbook wrote it (it is left unchanged)
+     * @throws WorkbookBusyException    when another program holds it longer than the busy timeout
+     */
+    public static Workbook open(Path file, String user) {
+        return open(file, user, DEFAULT_BUSY_TIMEOUT);
+    }
+
+    /** As {@link #open(Path, String)}, waiting at most {@code busyTimeout} for another writer. */
+    public static Workbook open(Path file, String user, Duration busyTimeout) {
+        String who = requireUser(user);
+        WorkbookFile.checkHeader(file);
+        return connect(file, who, busyTimeout, false);
+    }
+
+    /** The schema version this Strandbook writes. */
+    public static int latestSchemaVersion() {
+        return SchemaMigrator.LATEST;
+    }
+
+    static Workbook connect(Path file, String user, Duration busyTimeout, boolean create) {
+        return connect(file, user, busyTimeout, create, SchemaMigrator.LATEST);
+    }
+
+    /** Opens without the header check and migrates up to {@code schemaVersion}: tests build old workbooks so. */
+    static Workbook connect(Path file, String user, Duration busyTimeout, boolean create, int schemaVersion) {
+        SQLiteConfig config = new SQLiteConfig();
+        config.enforceForeignKeys(true);
+        config.setJournalMode(SQLiteConfig.JournalMode.WAL);
+        config.setSynchronous(SQLiteConfig.SynchronousMode.NORMAL);
+        config.setBusyTimeout((int) Math.min(Integer.MAX_VALUE, busyTimeout.toMillis()));
+        // keys come from INSERT ... RETURNING; the driver's emulation would prepare a query per insert
+        config.setGetGeneratedKeys(false);
+        // a batch of imports in one transaction stays in memory instead of spilling pages early
+        config.setCacheSize(-CACHE_KIB);
+        if (!create) {
+            config.resetOpenMode(SQLiteOpenMode.CREATE);
+        }
+        Connection connection;
+        try {
+            connection = config.createConnection("jdbc:sqlite:" + file.toAbsolutePath());
+        } catch (SQLException e) {
+            throw SqlFailures.translate(e, file);
+        }
+        Session session = new Session(connection, file, user);
+        try {
+            AuditLog audit = new AuditLog(session);
+            SchemaMigrator.migrateTo(session, audit, schemaVersion);
+            return new Workbook(session, audit);
+        } catch (RuntimeException e) {
+            session.close();
+            throw e;
+        }
+    }
+
+    private static void publish(Path draft, Path target, Path asGiven) {
+        try {
+            // a hard link is atomic and fails if the name is taken, unlike a rename
+            Files.createLink(target, draft);
+        } catch (FileAlreadyExistsException e) {
+            throw refuseOverwrite(asGiven);
+        } catch (UnsupportedOperationException | IOException e) {
+            // file systems without hard links (FAT on a USB stick): a rename that refuses to replace
+            try {
+                Files.move(draft, target);
+            } catch (FileAlreadyExistsException e2) {
+                throw refuseOverwrite(asGiven);
+            } catch (IOException e2) {
+                throw new WorkbookException("cannot create " + asGiven + " (" + e2.getMessage() + ")", e2);
+            }
+        }
+    }
+
+    private static WorkbookException refuseOverwrite(Path file) {
+        return new WorkbookException("a file already exists at " + file + "; Strandbook never overwrites a file");
+    }
+
+    private static void deleteQuietly(Path p) {
+        try {
+            Files.deleteIfExists(p);
+        } catch (IOException ignored) {
+            // a leftover draft under a hidden name does no harm
+        }
+    }
+
+    private static String requireUser(String user) {
+        if (user == null || user.isBlank()) {
+            throw new IllegalArgumentException("user name must not be empty: the audit trail records who changed what");
+        }
+        return user.strip();
+    }
+
+    public Path file() {
+        return session.file();
+    }
+
+    /** Who this workbook was opened for: the name the audit trail records. */
+    public String user() {
+        return session.user();
+    }
+
+    /** The schema version of the open file. */
+    public int schemaVersion() {
+        return SchemaMigrator.schemaVersion(session);
+    }
+
+    public SiteRepository site() {
+        return site;
+    }
+
+    public CatalogRepository catalog() {
+        return catalog;
+    }
+
+    public PointRepository points() {
+        return points;
+    }
+
+    public PathRepository paths() {
+        return paths;
+    }
+
+    public ScanRepository scans() {
+        return scans;
+    }
+
+    public InspectionRepository inspections() {
+        return inspections;
+    }
+
+    public SignOffRepository signOffs() {
+        return signOffs;
+    }
+
+    public NoteRepository notes() {
+        return notes;
+    }
+
+    public AuditLog audit() {
+        return audit;
+    }
+
+    /**
+     * Runs {@code work} as one transaction: every repository call inside it commits together or,
+     * if {@code work} throws, not at all. A repository call that fails inside undoes only itself,
+     * so work that catches, for example, a {@link DuplicateScanException} can go on.
+     */
+    public void inTransaction(Runnable work) {
+        session.write(() -> {
+            work.run();
+            return null;
+        });
+    }
+
+    /** As {@link #inTransaction(Runnable)}, returning what {@code work} gives. */
+    public <T> T inTransaction(Supplier<T> work) {
+        return session.write(work::get);
+    }
+
+    /** Closes the file; SQLite folds the write-ahead log back into it. */
+    @Override
+    public void close() {
+        session.close();
+    }
+
+    Session session() {
+        return session;
+    }
+}

@@ -1,0 +1,86 @@
+package org.strandbook.store;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import java.time.Duration;
+import java.time.Instant;
+
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.strandbook.site.ScanConditions;
+import org.strandbook.site.ScanKind;
+
+class ScanImportTest {
+
+    @TempDir
+    Path dir;
+
+    private Workbook wb;
+
+    @BeforeEach
+    void open() {
+        wb = Workbook.create(dir.resolve("import.sqlite"), DemoSite.site(), DemoSite.USER);
+        DemoSite.populate(wb);
+    }
+
+    @AfterEach
+    void checkTrailAndClose() {
+        AuditReport report = wb.audit().verify();
+        wb.close();
+        assertTrue(report.intact(), report::toString);
+    }
+
+    private static NewScan scan(String tag, int seq) {
+        return new NewScan(tag, ScanKind.LOOP, Instant.EPOCH.plusSeconds(seq), ScanConditions.unknown("k.ashdown"),
+                DemoSite.spectrum(128, seq), "f" + seq + ".csv", DemoSite.sha256Of("import/" + seq));
+    }
+
+    @Test
+    void storesEveryScanAcrossSeveralCommits() {
+        try (ScanImport batch = wb.scans().startImport(25, Duration.ofMinutes(1))) {
+            for (int i = 0; i < 60; i++) {
+                assertEquals(ScanImport.Result.STORED, batch.add(scan(DemoSite.POINT_A, i)).result());
+            }
+            assertEquals(60, batch.stored());
+        }
+        assertEquals(60, wb.scans().count());
+        assertEquals(60, wb.scans().list(DemoSite.POINT_A).size());
+    }
+
+    @Test
+    void aFileAlreadyStoredIsReportedWithItsScanNotThrown() {
+        long first = wb.scans().insert(scan(DemoSite.POINT_A, 1));
+        try (ScanImport batch = wb.scans().startImport()) {
+            assertEquals(new ScanImport.Outcome(ScanImport.Result.ALREADY_STORED, first),
+                    batch.add(scan(DemoSite.POINT_A, 1)));
+            assertEquals(ScanImport.Result.STORED, batch.add(scan(DemoSite.POINT_A, 2)).result());
+            assertEquals(1, batch.alreadyStored());
+        }
+        assertEquals(2, wb.scans().count());
+    }
+
+    @Test
+    void aRefusedScanUndoesOnlyItselfAndTheImportGoesOn() {
+        try (ScanImport batch = wb.scans().startImport()) {
+            batch.add(scan(DemoSite.POINT_A, 1));
+            assertThrows(UnknownEntryException.class, () -> batch.add(scan("AT-404", 2)));
+            batch.add(scan(DemoSite.POINT_B, 3));
+        }
+        assertEquals(2, wb.scans().count());
+    }
+
+    @Test
+    void otherWorkbookCallsOfTheSameThreadJoinTheOpenImport() {
+        try (ScanImport batch = wb.scans().startImport()) {
+            batch.add(scan(DemoSite.POINT_A, 1));
+            wb.notes().add(new org.strandbook.site.Note(DemoSite.POINT_A, Instant.EPOCH, "k.ashdown", "mid-import note"));
+            assertEquals(1, wb.scans().count());
+        }
+        assertEquals(1, wb.notes().list().size());
+    }
+}

@@ -1,0 +1,29 @@
+package org.strandbook.store;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+
+import org.junit.jupiter.api.Test;
+
+class Sha256Test {
+
+    @Test
+    void matchesTheFips180ExampleForAbc() {
+        // FIPS 180-4 (NIST, 2015), SHA-256 example "abc", as published in NIST's example values.
+        assertEquals("ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad", Sha256.hex("abc"));
+    }
+
+    @Test
+    void matchesTheFips180ExampleForTheTwoBlockMessage() {
+        // FIPS 180-4 example, 448-bit message "abcdbcde...nopq".
+        assertEquals("248d6a61d20638b8e5c026930c3e6039a33ce45964ff2167f6ecedd419db06c1",
+                Sha256.hex("abcdbcdecdefdefgefghfghighijhijkijkljklmklmnlmnomnopnopq"));
+    }
+
+    @Test
+    void normalisesCaseAndRefusesAnythingButSixtyFourHexDigits() {
+        assertEquals("ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad",
+                Sha256.normalized(" BA7816BF8F01CFEA414140DE5DAE2223B00361A396177A9CB410FF61F20015AD ", "f"));
+        assertThrows(IllegalArgumentException.class, () -> Sha256.normalized("ba7816bf", "f"));
+    }
+}
