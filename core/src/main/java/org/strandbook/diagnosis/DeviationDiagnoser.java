@@ -2,7 +2,6 @@ package org.strandbook.diagnosis;
 
 import java.util.ArrayList;
 import java.util.Comparator;
-import java.util.EnumMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -133,7 +132,8 @@ public final class DeviationDiagnoser {
             fringes = FringeSearch.search(grid, rows, residual, median(s));
             fringes.ifPresent(f -> findings.add(fringeFinding(f, evidence)));
         }
-        List<String> collinear = collinearNotes(problem, columns);
+        List<String> collinear = collinearNotes(problem, columns,
+                findings.stream().anyMatch(f -> f.signature() == Signature.FLAT_EXCESS));
         String summary = findings.isEmpty()
                 ? String.format(Locale.ROOT, "no fault signature reaches %.1f dB: the path behaves as predicted"
                         + " (residual %.2f dB RMS)", minReportDb, rms)
@@ -274,11 +274,8 @@ public final class DeviationDiagnoser {
                 0, joint, text);
     }
 
-    private static List<String> collinearNotes(LeastSquaresProblem problem, List<Column> columns) {
-        Map<Signature, Integer> index = new EnumMap<>(Signature.class);
-        for (int j = 0; j < columns.size(); j++) {
-            index.put(columns.get(j).signature, j);
-        }
+    private static List<String> collinearNotes(LeastSquaresProblem problem, List<Column> columns,
+                                               boolean flatFound) {
         List<String> notes = new ArrayList<>();
         for (ColumnPair pair : CollinearityReport.of(problem).pairsAbove(COLLINEAR_COSINE)) {
             notes.add(String.format(Locale.ROOT, "%s and %s look alike over the measured range (cos %.2f):"
@@ -286,7 +283,7 @@ public final class DeviationDiagnoser {
                     words(columns.get(pair.first()).signature), words(columns.get(pair.second()).signature),
                     pair.cosine()));
         }
-        if (index.containsKey(Signature.FLAT_EXCESS)) {
+        if (flatFound) {
             notes.add("a dirty connector and a tight bend both give a wavelength-flat excess for large cores"
                     + " (Gloge 1972): the workbook's inspection grades and bend records rank them");
         }

@@ -54,4 +54,18 @@ public record PointEvaluation(MeasurementPoint point, Status status, PredictedBu
         }
         return problems.isEmpty() ? "not measured yet" : problems.get(0);
     }
+
+    /** The finding in a few words for a one-line summary: cause, size, element to check first. */
+    public String shortFinding() {
+        if (diagnosis.isEmpty()) {
+            return problems.isEmpty() ? "not measured yet" : "not evaluated";
+        }
+        return diagnosis.get().first().map(f -> {
+            String size = Double.isInfinite(f.amountDb()) ? "no light"
+                    : Double.isNaN(f.atNm()) || f.signature() == org.strandbook.diagnosis.Signature.FLAT_EXCESS
+                    ? String.format(java.util.Locale.ROOT, "≈%.1f dB, wavelength-flat", f.amountDb())
+                    : String.format(java.util.Locale.ROOT, "≈%.1f dB at %.0f nm", f.amountDb(), f.atNm());
+            return f.cause().words() + ", " + size + (f.checkFirst().isEmpty() ? "" : "; check " + f.checkFirst());
+        }).orElse("as predicted");
+    }
 }

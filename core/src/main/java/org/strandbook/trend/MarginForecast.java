@@ -65,6 +65,11 @@ public final class MarginForecast {
         this.horizonYears = horizonYears;
     }
 
+    /** How far ahead a run-out date is still given, years. */
+    public double horizonYears() {
+        return horizonYears;
+    }
+
     /** Horizon {@link #DEFAULT_HORIZON_YEARS}. */
     public static MarginForecast withDefaults() {
         return new MarginForecast(DEFAULT_HORIZON_YEARS);

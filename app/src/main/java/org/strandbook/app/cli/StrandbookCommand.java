@@ -15,10 +15,15 @@ import picocli.CommandLine.Command;
         description = "Commissioning and maintenance workbook for the fiber-optic light paths of process spectrometers.",
         subcommands = {
             CommandLine.HelpCommand.class,
+            DemoCommand.class,
             FiberCommand.class,
             InitCommand.class,
+            ImportScheduleCommand.class,
+            ImportScansCommand.class,
             ScansCommand.class,
             ScanCommand.class,
+            EvaluateCommand.class,
+            TrendCommand.class,
             AuditCommand.class,
             BenchCommand.class,
         })

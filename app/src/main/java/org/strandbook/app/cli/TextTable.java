@@ -4,20 +4,33 @@ import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
 
-/** A plain-text table: header lines left-aligned, cells right-aligned, columns two spaces apart. */
+/**
+ * A plain-text table: header lines left-aligned, numbers right-aligned, columns marked as text
+ * left-aligned, columns two spaces apart.
+ */
 final class TextTable {
 
     private final List<String[]> headers = new ArrayList<>();
     private final List<String[]> rows = new ArrayList<>();
     private final int columns;
+    private final boolean[] left;
 
     TextTable(String[] names, String[] units) {
         if (names.length != units.length) {
             throw new IllegalArgumentException("one unit per column");
         }
         this.columns = names.length;
+        this.left = new boolean[columns];
         headers.add(names);
         headers.add(units);
+    }
+
+    /** Marks text columns to be left-aligned; the rest are numbers, right-aligned. */
+    TextTable leftAligned(int... textColumns) {
+        for (int c : textColumns) {
+            left[c] = true;
+        }
+        return this;
     }
 
     void row(String... cells) {
@@ -44,14 +57,14 @@ final class TextTable {
         }
     }
 
-    private static String line(String[] cells, int[] width, boolean rightAlign) {
+    private String line(String[] cells, int[] width, boolean alignNumbers) {
         StringBuilder b = new StringBuilder();
         for (int c = 0; c < cells.length; c++) {
             if (c > 0) {
                 b.append("  ");
             }
             String pad = " ".repeat(width[c] - cells[c].length());
-            b.append(rightAlign ? pad + cells[c] : cells[c] + pad);
+            b.append(alignNumbers && !left[c] ? pad + cells[c] : cells[c] + pad);
         }
         return b.toString().stripTrailing();
     }

@@ -1,0 +1,258 @@
+package org.strandbook.app.cli;
+
+import java.io.PrintWriter;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.stream.Collectors;
+
+import org.strandbook.diagnosis.Finding;
+import org.strandbook.evaluation.BandTrend;
+import org.strandbook.evaluation.BandVerdict;
+import org.strandbook.evaluation.PointEvaluation;
+import org.strandbook.evaluation.SiteEvaluation;
+import org.strandbook.evaluation.Urgency;
+import org.strandbook.throughput.MaskedRange;
+import org.strandbook.trend.LossReading;
+import org.strandbook.trend.LossTrend;
+import org.strandbook.trend.MarginForecast;
+import org.strandbook.trend.StepEvent;
+
+/** Evaluations and trends as the command line prints them: aligned text with units, or JSON. */
+final class EvaluationText {
+
+    private EvaluationText() {
+    }
+
+    static String db(double v) {
+        return Double.isFinite(v) ? String.format(Locale.ROOT, "%.2f", v) : "—";
+    }
+
+    /** One line per point: tag, status, worst band, margin, finding. */
+    static void summary(SiteEvaluation site, PrintWriter out) {
+        TextTable t = new TextTable(new String[] {"Point", "Status", "Worst band", "Margin", "Finding"},
+                new String[] {"", "", "", "(dB)", ""}).leftAligned(0, 1, 2, 4);
+        for (PointEvaluation e : site.points()) {
+            Optional<BandVerdict> worst = e.worstBand();
+            t.row(e.point().tag(), e.status().label(), worst.map(v -> v.band().name()).orElse("—"),
+                    worst.map(v -> db(v.marginDb())).orElse("—"), e.shortFinding());
+        }
+        t.print(out);
+        out.println();
+        for (PointEvaluation e : site.points()) {
+            if (e.status() != org.strandbook.evaluation.Status.PASS) {
+                out.println(e.point().tag() + ": " + e.finding());
+            }
+        }
+        site.problems().forEach(p -> out.println("not evaluated: " + p));
+        out.printf(Locale.ROOT, "%d point%s: %d pass, %d review, %d fail. Pairing rule: %s%n", site.points().size(),
+                site.points().size() == 1 ? "" : "s",
+                site.count(org.strandbook.evaluation.Status.PASS), site.count(org.strandbook.evaluation.Status.REVIEW),
+                site.count(org.strandbook.evaluation.Status.FAIL), site.pairingRule());
+    }
+
+    /** The bands, findings and masked ranges of one point. */
+    static void details(PointEvaluation e, PrintWriter out) {
+        out.println();
+        out.println(e.point().tag() + " — " + e.point().service() + ": " + e.status().label());
+        e.latest().ifPresent(p -> out.printf(Locale.ROOT, "  loop scan %d taken %s; reference %d, darks %d and %d%n",
+                p.loop().id(), p.loop().takenAt(), p.reference().id(), p.loopDark().id(), p.referenceDark().id()));
+        TextTable bands = new TextTable(
+                new String[] {"Band", "From", "To", "Status", "Predicted", "Measured max", "Mean dev.", "Worst dev.",
+                    "Margin", "Reason"},
+                new String[] {"", "(nm)", "(nm)", "", "(dB)", "(dB)", "(dB)", "(dB)", "(dB)", ""}).leftAligned(0, 3, 9);
+        for (BandVerdict v : e.verdicts()) {
+            bands.row(v.band().name(), String.format(Locale.ROOT, "%.0f", v.band().fromNm()),
+                    String.format(Locale.ROOT, "%.0f", v.band().toNm()), v.status().label(), db(v.predictedLossDb()),
+                    db(v.worstMeasuredLossDb()), db(v.meanDeviationDb()), db(v.worstDeviationDb()), db(v.marginDb()),
+                    v.reason());
+        }
+        bands.print(out);
+        e.diagnosis().ifPresent(d -> {
+            for (Finding f : d.findings()) {
+                out.printf(Locale.ROOT, "  finding: %s%n", f.text());
+            }
+            if (d.findings().isEmpty()) {
+                out.println("  finding: " + d.summary());
+            }
+            d.collinearNotes().forEach(n -> out.println("  note: " + n));
+        });
+        e.measured().ifPresent(m -> m.maskedRanges().forEach(r -> out.println("  not measured: " + r.description())));
+        e.problems().forEach(p -> out.println("  problem: " + p));
+    }
+
+    static String json(SiteEvaluation site) {
+        StringBuilder b = new StringBuilder();
+        b.append("{\"site\":").append(JsonText.string(site.site().name()))
+                .append(",\"evaluated_at\":").append(JsonText.string(site.evaluatedAt().toString()))
+                .append(",\"pairing_rule\":").append(JsonText.string(site.pairingRule()))
+                .append(",\"points\":[");
+        boolean firstPoint = true;
+        for (PointEvaluation e : site.points()) {
+            b.append(firstPoint ? "" : ",");
+            firstPoint = false;
+            b.append("{\"point\":").append(JsonText.string(e.point().tag()))
+                    .append(",\"status\":").append(JsonText.string(e.status().name()))
+                    .append(",\"worst_band\":").append(e.worstBand().map(v -> JsonText.string(v.band().name()))
+                            .orElse("null"))
+                    .append(",\"margin_db\":").append(JsonText.number(Urgency.leastMarginDb(e)))
+                    .append(",\"finding\":").append(JsonText.string(e.finding()));
+            e.latest().ifPresent(p -> b.append(",\"loop_scan_id\":").append(p.loop().id())
+                    .append(",\"reference_scan_id\":").append(p.reference().id())
+                    .append(",\"loop_dark_scan_id\":").append(p.loopDark().id())
+                    .append(",\"reference_dark_scan_id\":").append(p.referenceDark().id())
+                    .append(",\"taken_at\":").append(JsonText.string(p.loop().takenAt().toString())));
+            b.append(",\"bands\":[").append(e.verdicts().stream().map(EvaluationText::json)
+                    .collect(Collectors.joining(","))).append(']');
+            b.append(",\"findings\":[");
+            e.diagnosis().ifPresent(d -> b.append(d.findings().stream().map(EvaluationText::json)
+                    .collect(Collectors.joining(","))));
+            b.append("],\"residual_rms_db\":").append(JsonText.number(
+                    e.diagnosis().map(d -> d.residualRmsDb()).orElse(Double.NaN)));
+            b.append(",\"masked\":[");
+            b.append(e.measured().map(m -> m.maskedRanges().stream().map(EvaluationText::json)
+                    .collect(Collectors.joining(","))).orElse(""));
+            b.append("],\"problems\":").append(strings(e.problems())).append('}');
+        }
+        b.append("],\"problems\":").append(strings(site.problems())).append("}\n");
+        return b.toString();
+    }
+
+    private static String json(BandVerdict v) {
+        return "{\"band\":" + JsonText.string(v.band().name())
+                + ",\"from_nm\":" + JsonText.number(v.band().fromNm())
+                + ",\"to_nm\":" + JsonText.number(v.band().toNm())
+                + ",\"status\":" + JsonText.string(v.status().name())
+                + ",\"predicted_loss_db\":" + JsonText.number(v.predictedLossDb())
+                + ",\"measured_loss_db\":" + JsonText.number(v.worstMeasuredLossDb())
+                + ",\"mean_deviation_db\":" + JsonText.number(v.meanDeviationDb())
+                + ",\"worst_deviation_db\":" + JsonText.number(v.worstDeviationDb())
+                + ",\"worst_at_nm\":" + JsonText.number(v.worstAtNm())
+                + ",\"margin_db\":" + JsonText.number(v.marginDb())
+                + ",\"measured_fraction\":" + JsonText.number(v.measuredFraction())
+                + ",\"reason\":" + JsonText.string(v.reason()) + "}";
+    }
+
+    private static String json(Finding f) {
+        return "{\"cause\":" + JsonText.string(f.cause().name())
+                + ",\"candidates\":" + strings(f.candidates().stream().map(Enum::name).toList())
+                + ",\"signature\":" + JsonText.string(f.signature().name())
+                + ",\"amount_db\":" + JsonText.number(f.amountDb())
+                + ",\"at_nm\":" + JsonText.number(f.atNm())
+                + ",\"share_percent\":" + JsonText.number(f.sharePercent())
+                + ",\"check_first\":" + JsonText.string(f.checkFirst())
+                + ",\"text\":" + JsonText.string(f.text()) + "}";
+    }
+
+    private static String json(MaskedRange r) {
+        return "{\"from_nm\":" + JsonText.number(r.fromNm()) + ",\"to_nm\":" + JsonText.number(r.toNm())
+                + ",\"reason\":" + JsonText.string(r.description()) + "}";
+    }
+
+    static String strings(List<String> items) {
+        return items.stream().map(JsonText::string).collect(Collectors.joining(",", "[", "]"));
+    }
+
+    /** The site's points ranked by urgency, one line per point and band. */
+    static void trendTable(SiteEvaluation site, PrintWriter out) {
+        TextTable t = new TextTable(
+                new String[] {"Rank", "Point", "Status", "Band", "Scans", "Slope", "95 % interval", "Steps", "Margin",
+                    "Margin runs out"},
+                new String[] {"", "", "", "", "", "(dB/year)", "(dB/year)", "", "(dB)", "(date)"})
+                .leftAligned(1, 2, 3, 9);
+        int rank = 1;
+        for (PointEvaluation e : site.points()) {
+            for (int b = 0; b < e.trends().size(); b++) {
+                BandTrend tr = e.trends().get(b);
+                Optional<LossTrend> lt = tr.trend();
+                double margin = b < e.verdicts().size() ? e.verdicts().get(b).marginDb() : Double.NaN;
+                t.row(b == 0 ? Integer.toString(rank) : "", b == 0 ? e.point().tag() : "",
+                        b == 0 ? e.status().label() : "", tr.band().name(),
+                        Integer.toString(tr.readings().size()) + (tr.noLight().isEmpty() ? ""
+                                : " (+" + tr.noLight().size() + " dark)"),
+                        lt.map(x -> String.format(Locale.ROOT, "%+.3f", x.slopeDbPerYear())).orElse("—"),
+                        lt.map(x -> String.format(Locale.ROOT, "%+.3f … %+.3f", x.lowerSlopeDbPerYear(),
+                                x.upperSlopeDbPerYear())).orElse("—"),
+                        Integer.toString(tr.steps().size()), db(margin), outlook(tr));
+            }
+            rank++;
+        }
+        t.print(out);
+        for (PointEvaluation e : site.points()) {
+            for (BandTrend tr : e.trends()) {
+                for (StepEvent s : tr.steps()) {
+                    out.printf(Locale.ROOT, "event: %s %s: %s of %+.2f dB between %s and %s%n", e.point().tag(),
+                            tr.band().name(), s.kind().name().toLowerCase(Locale.ROOT), s.stepDb(), s.before(),
+                            s.after());
+                }
+                if (!tr.noLight().isEmpty()) {
+                    out.printf(Locale.ROOT, "event: %s %s: no light returned since %s%n", e.point().tag(),
+                            tr.band().name(), tr.noLight().get(0));
+                }
+            }
+        }
+    }
+
+    private static String outlook(BandTrend tr) {
+        if (!tr.noLight().isEmpty()) {
+            return "no light now";
+        }
+        return tr.outlook().map(o -> switch (o.status()) {
+            case ALREADY_EXHAUSTED -> "already used up";
+            case PROJECTED -> o.expectedDate().map(Object::toString).orElse("—")
+                    + o.earliestDate().map(d -> " (earliest " + d + ")").orElse("");
+            case BEYOND_HORIZON -> "beyond " + (int) MarginForecast.withDefaults().horizonYears() + " years";
+            case NOT_SHRINKING -> "not shrinking";
+        }).orElse("—");
+    }
+
+    static String trendJson(SiteEvaluation site) {
+        StringBuilder b = new StringBuilder("{\"site\":").append(JsonText.string(site.site().name()))
+                .append(",\"ranking\":").append(strings(site.points().stream().map(e -> e.point().tag()).toList()))
+                .append(",\"points\":[");
+        boolean firstPoint = true;
+        for (PointEvaluation e : site.points()) {
+            b.append(firstPoint ? "" : ",");
+            firstPoint = false;
+            b.append("{\"point\":").append(JsonText.string(e.point().tag()))
+                    .append(",\"status\":").append(JsonText.string(e.status().name()))
+                    .append(",\"run_out_date\":").append(Urgency.runOutDate(e).map(d -> JsonText.string(d.toString()))
+                            .orElse("null"))
+                    .append(",\"bands\":[");
+            for (int i = 0; i < e.trends().size(); i++) {
+                BandTrend tr = e.trends().get(i);
+                b.append(i == 0 ? "" : ",").append("{\"band\":").append(JsonText.string(tr.band().name()))
+                        .append(",\"readings\":[");
+                for (int r = 0; r < tr.readings().size(); r++) {
+                    LossReading lr = tr.readings().get(r);
+                    b.append(r == 0 ? "" : ",").append("{\"taken_at\":").append(JsonText.string(lr.time().toString()))
+                            .append(",\"loss_db\":").append(JsonText.number(lr.lossDb())).append('}');
+                }
+                b.append("],\"no_light\":").append(strings(tr.noLight().stream().map(Object::toString).toList()));
+                tr.trend().ifPresentOrElse(lt -> b.append(",\"slope_db_per_year\":").append(JsonText.number(lt.slopeDbPerYear()))
+                        .append(",\"slope_low_db_per_year\":").append(JsonText.number(lt.lowerSlopeDbPerYear()))
+                        .append(",\"slope_high_db_per_year\":").append(JsonText.number(lt.upperSlopeDbPerYear()))
+                        .append(",\"confidence\":").append(JsonText.number(lt.confidenceLevel())),
+                        () -> b.append(",\"slope_db_per_year\":null"));
+                b.append(",\"steps\":[");
+                for (int s = 0; s < tr.steps().size(); s++) {
+                    StepEvent st = tr.steps().get(s);
+                    b.append(s == 0 ? "" : ",").append("{\"kind\":").append(JsonText.string(st.kind().name()))
+                            .append(",\"before\":").append(JsonText.string(st.before().toString()))
+                            .append(",\"after\":").append(JsonText.string(st.after().toString()))
+                            .append(",\"step_db\":").append(JsonText.number(st.stepDb())).append('}');
+                }
+                b.append(']');
+                tr.outlook().ifPresent(o -> b.append(",\"forecast\":{\"status\":").append(JsonText.string(o.status().name()))
+                        .append(",\"margin_db\":").append(JsonText.number(o.marginDb()))
+                        .append(",\"expected_date\":").append(o.expectedDate().map(d -> JsonText.string(d.toString())).orElse("null"))
+                        .append(",\"earliest_date\":").append(o.earliestDate().map(d -> JsonText.string(d.toString())).orElse("null"))
+                        .append(",\"latest_date\":").append(o.latestDate().map(d -> JsonText.string(d.toString())).orElse("null"))
+                        .append('}'));
+                b.append('}');
+            }
+            b.append("]}");
+        }
+        return b.append("]}\n").toString();
+    }
+}

@@ -1,0 +1,96 @@
+package org.strandbook.intake;
+
+import java.time.Instant;
+import java.time.LocalDateTime;
+import java.time.OffsetDateTime;
+import java.time.ZoneOffset;
+import java.time.format.DateTimeFormatter;
+import java.time.format.DateTimeParseException;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.OptionalInt;
+
+/**
+ * What a scan file says about how it was taken, from its labelled records (JCAMP-DX) or its
+ * {@code # key: value} header lines (delimited text). Keys are matched ignoring case, blanks and
+ * punctuation, with or without JCAMP-DX's leading {@code $} for private labels:
+ *
+ * <ul>
+ *   <li>time taken: {@code LONGDATE} (JCAMP-DX 5.01 form {@code YYYY/MM/DD HH:MM:SS [±hhmm]}),
+ *       {@code taken_at} or {@code date_time} (ISO-8601); a time without an offset is UTC;</li>
+ *   <li>operator: {@code OWNER} or {@code operator};</li>
+ *   <li>integration time: {@code integration_ms} or {@code INTEGRATION TIME MS};</li>
+ *   <li>co-added scans: {@code co_added} or {@code CO-ADDED}.</li>
+ * </ul>
+ */
+record ScanFileFacts(Optional<Instant> takenAt, Optional<String> operator, OptionalDouble integrationMs,
+                     OptionalInt coAdded) {
+
+    private static final DateTimeFormatter JCAMP_LONGDATE = DateTimeFormatter.ofPattern("uuuu/MM/dd HH:mm:ss",
+            Locale.ROOT);
+
+    static ScanFileFacts of(Map<String, String> metadata) {
+        Optional<String> time = find(metadata, "LONGDATE", "TAKENAT", "DATETIME");
+        Optional<Instant> takenAt = time.map(ScanFileFacts::parseTime);
+        Optional<String> operator = find(metadata, "OPERATOR", "OWNER").filter(s -> !s.isBlank());
+        OptionalDouble integration = find(metadata, "INTEGRATIONMS", "INTEGRATIONTIMEMS")
+                .map(ScanFileFacts::number).map(OptionalDouble::of).orElse(OptionalDouble.empty());
+        OptionalInt coAdded = find(metadata, "COADDED", "COADDEDSCANS")
+                .map(s -> OptionalInt.of((int) Math.round(number(s)))).orElse(OptionalInt.empty());
+        return new ScanFileFacts(takenAt, operator, integration, coAdded);
+    }
+
+    private static Optional<String> find(Map<String, String> metadata, String... keys) {
+        for (String wanted : keys) {
+            for (Map.Entry<String, String> e : metadata.entrySet()) {
+                if (normalize(e.getKey()).equals(wanted)) {
+                    return Optional.of(e.getValue().strip());
+                }
+            }
+        }
+        return Optional.empty();
+    }
+
+    private static String normalize(String key) {
+        return key.toUpperCase(Locale.ROOT).replaceAll("[^A-Z0-9]", "");
+    }
+
+    private static double number(String text) {
+        try {
+            double v = Double.parseDouble(text.strip().replace(',', '.'));
+            if (!Double.isFinite(v) || v < 0) {
+                throw new IllegalArgumentException("'" + text + "' is not a number of zero or more");
+            }
+            return v;
+        } catch (NumberFormatException e) {
+            throw new IllegalArgumentException("'" + text + "' is not a number");
+        }
+    }
+
+    /** ISO-8601 with or without offset, or the JCAMP-DX LONGDATE form; no offset means UTC. */
+    static Instant parseTime(String text) {
+        String t = text.strip();
+        try {
+            return OffsetDateTime.parse(t).toInstant();
+        } catch (DateTimeParseException ignored) {
+            // try the next form
+        }
+        try {
+            return LocalDateTime.parse(t.replace(' ', 'T')).toInstant(ZoneOffset.UTC);
+        } catch (DateTimeParseException ignored) {
+            // try the JCAMP-DX form
+        }
+        String[] parts = t.split("\\s+");
+        try {
+            LocalDateTime local = LocalDateTime.parse(parts[0] + " " + (parts.length > 1 ? parts[1] : "00:00:00"),
+                    JCAMP_LONGDATE);
+            ZoneOffset offset = parts.length > 2 ? ZoneOffset.of(parts[2].substring(0, 3) + ":" + parts[2].substring(3))
+                    : ZoneOffset.UTC;
+            return local.toInstant(offset);
+        } catch (DateTimeParseException | StringIndexOutOfBoundsException e) {
+            throw new IllegalArgumentException("time '" + text + "' is neither ISO-8601 nor YYYY/MM/DD HH:MM:SS");
+        }
+    }
+}

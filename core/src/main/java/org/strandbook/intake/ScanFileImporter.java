@@ -1,0 +1,139 @@
+package org.strandbook.intake;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.OptionalDouble;
+
+import org.strandbook.scanfile.SpectrumFile;
+import org.strandbook.scanfile.SpectrumFileException;
+import org.strandbook.scanfile.SpectrumFiles;
+import org.strandbook.site.ScanConditions;
+import org.strandbook.site.ScanKind;
+import org.strandbook.site.Spectrum;
+import org.strandbook.store.NewScan;
+import org.strandbook.store.ScanImport;
+import org.strandbook.store.Workbook;
+
+/**
+ * Imports analyzer scan files into a workbook for one point and one kind of scan. A file is stored
+ * whole or not at all; a bad file is rejected with {@code file:line: what is wrong} and the batch
+ * goes on; the same file twice (same SHA-256) is refused.
+ */
+public final class ScanFileImporter {
+
+    /** Told after each file; returns false to stop before the next. */
+    @FunctionalInterface
+    public interface Progress {
+        boolean fileDone(int done, int total, Path file);
+
+        Progress NONE = (done, total, file) -> true;
+    }
+
+    /**
+     * What to import.
+     *
+     * @param pointTag the measurement point the scans belong to
+     * @param kind     reference, loop or dark
+     * @param files    the files, in the order given
+     * @param takenAt  a time for every file, overriding what the files say
+     * @param operator the operator when a file names none
+     */
+    public record Request(String pointTag, ScanKind kind, List<Path> files, Optional<Instant> takenAt,
+                          String operator) {
+        public Request {
+            files = List.copyOf(files);
+        }
+    }
+
+    /** A stored file. */
+    public record Accepted(Path file, long scanId, Instant takenAt, String timeSource) {
+    }
+
+    /** A refused file and why. */
+    public record Rejected(Path file, String reason) {
+    }
+
+    /** The batch's outcome, file by file. */
+    public record Summary(List<Accepted> accepted, List<Rejected> rejected, boolean stoppedEarly) {
+        public Summary {
+            accepted = List.copyOf(accepted);
+            rejected = List.copyOf(rejected);
+        }
+    }
+
+    /**
+     * @throws IllegalArgumentException when the point is not in the workbook (nothing is read then)
+     */
+    public Summary importFiles(Workbook workbook, Request request, Progress progress) {
+        if (workbook.points().get(request.pointTag()).isEmpty()) {
+            throw new IllegalArgumentException("no point tagged '" + request.pointTag() + "' in this workbook");
+        }
+        List<Accepted> accepted = new ArrayList<>();
+        List<Rejected> rejected = new ArrayList<>();
+        boolean stopped = false;
+        try (ScanImport batch = workbook.scans().startImport()) {
+            for (int i = 0; i < request.files().size(); i++) {
+                Path file = request.files().get(i);
+                try {
+                    Prepared prepared = prepare(file, request);
+                    NewScan scan = prepared.scan();
+                    ScanImport.Outcome outcome = batch.add(scan);
+                    if (outcome.result() == ScanImport.Result.ALREADY_STORED) {
+                        rejected.add(new Rejected(file, file.getFileName() + ":0: the same file is already stored as"
+                                + " scan " + outcome.scanId() + " (same SHA-256)"));
+                    } else {
+                        accepted.add(new Accepted(file, outcome.scanId(), scan.takenAt(), prepared.timeSource()));
+                    }
+                } catch (SpectrumFileException e) {
+                    rejected.add(new Rejected(file, e.getMessage()));
+                } catch (IllegalArgumentException e) {
+                    rejected.add(new Rejected(file, file.getFileName() + ":0: " + e.getMessage()));
+                }
+                if (!progress.fileDone(i + 1, request.files().size(), file)) {
+                    stopped = i + 1 < request.files().size();
+                    break;
+                }
+            }
+        }
+        return new Summary(accepted, rejected, stopped);
+    }
+
+    private record Prepared(NewScan scan, String timeSource) {
+    }
+
+    private static Prepared prepare(Path file, Request request) throws SpectrumFileException {
+        SpectrumFile read = SpectrumFiles.read(file);
+        ScanFileFacts facts = ScanFileFacts.of(read.metadata());
+        Instant takenAt;
+        String timeSource;
+        if (request.takenAt().isPresent()) {
+            takenAt = request.takenAt().get();
+            timeSource = "given on the command";
+        } else if (facts.takenAt().isPresent()) {
+            takenAt = facts.takenAt().get();
+            timeSource = "from the file";
+        } else {
+            takenAt = modified(file);
+            timeSource = "file modification time (the file names none)";
+        }
+        ScanConditions conditions = new ScanConditions(facts.operator().orElse(request.operator()),
+                facts.integrationMs().orElse(0), facts.coAdded().orElse(1), OptionalDouble.empty(),
+                OptionalDouble.empty());
+        Spectrum spectrum = new Spectrum(read.wavelengthsNm(), read.values());
+        return new Prepared(new NewScan(request.pointTag(), request.kind(), takenAt, conditions, spectrum,
+                file.getFileName().toString(), read.sha256Hex()), timeSource);
+    }
+
+    private static Instant modified(Path file) {
+        try {
+            return Files.getLastModifiedTime(file).toInstant();
+        } catch (IOException e) {
+            throw new IllegalArgumentException("the file names no time taken and its modification time cannot be read");
+        }
+    }
+}
