@@ -72,7 +72,7 @@ public final class DeviationDiagnoser {
         double[] sigma = measured.sigmaDb();
         int[] rows = usableRows(usable);
         if (rows.length < 8) {
-            return new Diagnosis(List.of(), Double.NaN, List.of(), Optional.empty(),
+            return new Diagnosis(List.of(), Double.NaN, List.of(), Optional.empty(), List.of(),
                     "too few measured wavelengths (" + rows.length + ") to diagnose");
         }
         double[] b = new double[rows.length];
@@ -132,13 +132,23 @@ public final class DeviationDiagnoser {
             fringes = FringeSearch.search(grid, rows, residual, median(s));
             fringes.ifPresent(f -> findings.add(fringeFinding(f, evidence)));
         }
+        List<FittedSignature> fitted = new ArrayList<>();
+        for (int j = 0; j < columns.size(); j++) {
+            if (x[j] != 0) {
+                double[] curve = columns.get(j).onGrid.clone();
+                for (int i = 0; i < curve.length; i++) {
+                    curve[i] *= x[j];
+                }
+                fitted.add(new FittedSignature(columns.get(j).signature, curve));
+            }
+        }
         List<String> collinear = collinearNotes(problem, columns,
                 findings.stream().anyMatch(f -> f.signature() == Signature.FLAT_EXCESS));
         String summary = findings.isEmpty()
                 ? String.format(Locale.ROOT, "no fault signature reaches %.1f dB: the path behaves as predicted"
                         + " (residual %.2f dB RMS)", minReportDb, rms)
                 : findings.get(0).text();
-        return new Diagnosis(findings, rms, collinear, fringes, summary);
+        return new Diagnosis(findings, rms, collinear, fringes, fitted, summary);
     }
 
     private static Diagnosis broken(PathEvidence evidence) {
@@ -149,41 +159,52 @@ public final class DeviationDiagnoser {
                 + " before opening a connector and never look into a fiber end.";
         Finding f = new Finding(Signature.FLAT_EXCESS, List.of(Cause.BROKEN_FIBER), Double.POSITIVE_INFINITY,
                 Double.NaN, 100, evidence.joints().isEmpty() ? "" : evidence.joints().get(0).label(), text);
-        return new Diagnosis(List.of(f), Double.NaN, List.of(), Optional.empty(), text);
+        return new Diagnosis(List.of(f), Double.NaN, List.of(), Optional.empty(), List.of(), text);
     }
 
-    private record Column(Signature signature, double[] values, double atNm) {
+    /** A signature's shape over the measured rows ({@code values}) and over the whole grid. */
+    private record Column(Signature signature, double[] values, double[] onGrid, double atNm) {
     }
 
-    /** Signature columns over the measured rows, each 1 dB at its reference wavelength. */
+    /** Signature columns, each 1 dB at its reference wavelength. */
     private static List<Column> columns(WavelengthGrid grid, int[] rows) {
         double first = grid.firstNm();
         double last = grid.lastNm();
         double mid = 0.5 * (first + last);
-        List<Column> out = new ArrayList<>();
-        out.add(new Column(Signature.FLAT_EXCESS, fill(rows.length, 1.0), mid));
-
+        int n = grid.size();
         double ohRef = ohReferenceNm(grid);
         double ohScale = 1.0 / AttenuationShapes.ohAbsorptionDbPerKmPerPpm(ohRef);
-        double[] oh = new double[rows.length];
-        double[] h2 = new double[rows.length];
-        double[] dark = new double[rows.length];
-        double[] drift = new double[rows.length];
         double h2Scale = 1.0 / AttenuationShapes.hydrogenBandShape(AttenuationShapes.HYDROGEN_BAND_1240_NM,
                 HYDROGEN_2420_RELATIVE);
         double darkScale = 1.0 / AttenuationShapes.radiationDarkeningShape(first);
-        for (int r = 0; r < rows.length; r++) {
-            double w = grid.wavelengthNm(rows[r]);
-            oh[r] = ohScale * AttenuationShapes.ohAbsorptionDbPerKmPerPpm(w);
-            h2[r] = h2Scale * AttenuationShapes.hydrogenBandShape(w, HYDROGEN_2420_RELATIVE);
-            dark[r] = darkScale * AttenuationShapes.radiationDarkeningShape(w);
-            drift[r] = (w - mid) / (last - first);
+        double[] flat = fill(n, 1.0);
+        double[] oh = new double[n];
+        double[] h2 = new double[n];
+        double[] dark = new double[n];
+        double[] drift = new double[n];
+        for (int i = 0; i < n; i++) {
+            double w = grid.wavelengthNm(i);
+            oh[i] = ohScale * AttenuationShapes.ohAbsorptionDbPerKmPerPpm(w);
+            h2[i] = h2Scale * AttenuationShapes.hydrogenBandShape(w, HYDROGEN_2420_RELATIVE);
+            dark[i] = darkScale * AttenuationShapes.radiationDarkeningShape(w);
+            drift[i] = (w - mid) / (last - first);
         }
-        addIfObservable(out, new Column(Signature.OH_BANDS, oh, ohRef));
-        addIfObservable(out, new Column(Signature.HYDROGEN, h2, AttenuationShapes.HYDROGEN_BAND_1240_NM));
-        addIfObservable(out, new Column(Signature.DARKENING, dark, first));
-        out.add(new Column(Signature.REFERENCE_DRIFT, drift, last));
+        List<Column> out = new ArrayList<>();
+        out.add(new Column(Signature.FLAT_EXCESS, rowsOf(flat, rows), flat, mid));
+        addIfObservable(out, new Column(Signature.OH_BANDS, rowsOf(oh, rows), oh, ohRef));
+        addIfObservable(out, new Column(Signature.HYDROGEN, rowsOf(h2, rows), h2,
+                AttenuationShapes.HYDROGEN_BAND_1240_NM));
+        addIfObservable(out, new Column(Signature.DARKENING, rowsOf(dark, rows), dark, first));
+        out.add(new Column(Signature.REFERENCE_DRIFT, rowsOf(drift, rows), drift, last));
         return out;
+    }
+
+    private static double[] rowsOf(double[] onGrid, int[] rows) {
+        double[] v = new double[rows.length];
+        for (int r = 0; r < rows.length; r++) {
+            v[r] = onGrid[rows[r]];
+        }
+        return v;
     }
 
     /** A band shape only enters the fit where the measured range shows a real part of it. */

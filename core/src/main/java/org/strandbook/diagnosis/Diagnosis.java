@@ -11,14 +11,16 @@ import java.util.Optional;
  * @param residualRmsDb   RMS of what the fit leaves unexplained over the measured points, dB
  * @param collinearNotes  pairs of signatures the measured range cannot tell apart, in words
  * @param fringes         etalon fringes, if any
+ * @param fitted          each fitted signature's loss over the whole evaluation grid (dB), for plots
  * @param summary         the finding in plain words, naming the element to check first
  */
 public record Diagnosis(List<Finding> findings, double residualRmsDb, List<String> collinearNotes,
-                        Optional<FringeReport> fringes, String summary) {
+                        Optional<FringeReport> fringes, List<FittedSignature> fitted, String summary) {
 
     public Diagnosis {
         findings = List.copyOf(findings);
         collinearNotes = List.copyOf(collinearNotes);
+        fitted = List.copyOf(fitted);
     }
 
     /** The first-ranked cause, if anything was found. */
