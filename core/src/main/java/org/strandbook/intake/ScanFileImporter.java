@@ -4,10 +4,16 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
+import java.util.ArrayDeque;
 import java.util.ArrayList;
+import java.util.Deque;
 import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 
 import org.strandbook.scanfile.SpectrumFile;
 import org.strandbook.scanfile.SpectrumFileException;
@@ -25,6 +31,9 @@ import org.strandbook.store.Workbook;
  * goes on; the same file twice (same SHA-256) is refused.
  */
 public final class ScanFileImporter {
+
+    private static final int READ_AHEAD_THREADS = 3;
+    private static final int READ_AHEAD_FILES = 16;
 
     /** Told after each file; returns false to stop before the next. */
     @FunctionalInterface
@@ -76,34 +85,78 @@ public final class ScanFileImporter {
         List<Accepted> accepted = new ArrayList<>();
         List<Rejected> rejected = new ArrayList<>();
         boolean stopped = false;
+        List<Path> files = request.files();
+        // files are read and parsed ahead on the other cores while this thread stores them in order
+        int threads = Math.max(1, Math.min(READ_AHEAD_THREADS, Runtime.getRuntime().availableProcessors() - 1));
+        ExecutorService readers = Executors.newFixedThreadPool(threads, r -> {
+            Thread t = new Thread(r, "scan-file-reader");
+            t.setDaemon(true);
+            return t;
+        });
         try (ScanImport batch = workbook.scans().startImport()) {
-            for (int i = 0; i < request.files().size(); i++) {
-                Path file = request.files().get(i);
-                try {
-                    Prepared prepared = prepare(file, request);
-                    NewScan scan = prepared.scan();
+            Deque<Future<Parsed>> ahead = new ArrayDeque<>();
+            int submitted = 0;
+            for (int i = 0; i < files.size(); i++) {
+                while (submitted < files.size() && ahead.size() < READ_AHEAD_FILES) {
+                    Path next = files.get(submitted++);
+                    ahead.add(readers.submit(() -> parse(next, request)));
+                }
+                Path file = files.get(i);
+                Parsed parsed = await(ahead.removeFirst());
+                if (parsed.problem() != null) {
+                    rejected.add(new Rejected(file, parsed.problem()));
+                } else {
+                    NewScan scan = parsed.prepared().scan();
                     ScanImport.Outcome outcome = batch.add(scan);
                     if (outcome.result() == ScanImport.Result.ALREADY_STORED) {
                         rejected.add(new Rejected(file, file.getFileName() + ":0: the same file is already stored as"
                                 + " scan " + outcome.scanId() + " (same SHA-256)"));
                     } else {
-                        accepted.add(new Accepted(file, outcome.scanId(), scan.takenAt(), prepared.timeSource()));
+                        accepted.add(new Accepted(file, outcome.scanId(), scan.takenAt(), parsed.prepared().timeSource()));
                     }
-                } catch (SpectrumFileException e) {
-                    rejected.add(new Rejected(file, e.getMessage()));
-                } catch (IllegalArgumentException e) {
-                    rejected.add(new Rejected(file, file.getFileName() + ":0: " + e.getMessage()));
                 }
-                if (!progress.fileDone(i + 1, request.files().size(), file)) {
-                    stopped = i + 1 < request.files().size();
+                if (!progress.fileDone(i + 1, files.size(), file)) {
+                    stopped = i + 1 < files.size();
+                    ahead.forEach(f -> f.cancel(true));
                     break;
                 }
             }
+        } finally {
+            readers.shutdownNow();
         }
         return new Summary(accepted, rejected, stopped);
     }
 
     private record Prepared(NewScan scan, String timeSource) {
+    }
+
+    /** A file read and parsed, or why it cannot be stored. */
+    private record Parsed(Prepared prepared, String problem) {
+    }
+
+    private static Parsed parse(Path file, Request request) {
+        try {
+            return new Parsed(prepare(file, request), null);
+        } catch (SpectrumFileException e) {
+            return new Parsed(null, e.getMessage());
+        } catch (IllegalArgumentException e) {
+            return new Parsed(null, file.getFileName() + ":0: " + e.getMessage());
+        }
+    }
+
+    private static Parsed await(Future<Parsed> future) {
+        try {
+            return future.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("import interrupted", e);
+        } catch (ExecutionException e) {
+            Throwable cause = e.getCause();
+            if (cause instanceof RuntimeException r) {
+                throw r;
+            }
+            throw new IllegalStateException(cause);
+        }
     }
 
     private static Prepared prepare(Path file, Request request) throws SpectrumFileException {

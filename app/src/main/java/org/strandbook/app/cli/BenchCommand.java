@@ -14,6 +14,7 @@ import picocli.CommandLine.Spec;
         description = "Measure Strandbook's speed against the bare arithmetic floor; last line 'ratio: R'.",
         subcommands = {
             OpticsBenchCommand.class,
+            ImportBenchCommand.class,
             EvaluateBenchCommand.class,
         })
 public final class BenchCommand implements Runnable {

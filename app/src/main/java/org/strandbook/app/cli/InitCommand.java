@@ -2,6 +2,7 @@ package org.strandbook.app.cli;
 
 import java.util.concurrent.Callable;
 
+import org.strandbook.schedule.ComponentCatalog;
 import org.strandbook.site.Site;
 import org.strandbook.store.Workbook;
 
@@ -33,8 +34,16 @@ final class InitCommand implements Callable<Integer> {
     public Integer call() {
         Site site = new Site(siteName, plantArea, "A", Site.COMMON_PRACTICE_TOLERANCE_DB);
         try (Workbook wb = Workbook.create(workbook.file(), site, workbook.user())) {
+            ComponentCatalog shipped = ComponentCatalog.shipped();
+            wb.inTransaction(() -> {
+                shipped.fiberTypes().forEach(wb.catalog()::addFiberType);
+                shipped.connectorTypes().forEach(wb.catalog()::addConnectorType);
+                shipped.probeTypes().forEach(wb.catalog()::addProbeType);
+            });
             spec.commandLine().getOut().println("created workbook " + workbook.file() + " for site " + site.name()
-                    + " (schema " + wb.schemaVersion() + ", default tolerance " + site.defaultToleranceDb() + " dB)");
+                    + " (schema " + wb.schemaVersion() + ", default tolerance " + site.defaultToleranceDb() + " dB, "
+                    + (shipped.fiberTypes().size() + shipped.connectorTypes().size() + shipped.probeTypes().size())
+                    + " catalog entries from the shipped catalogs)");
         }
         return StrandbookCommand.EXIT_OK;
     }

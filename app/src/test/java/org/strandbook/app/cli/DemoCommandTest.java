@@ -1,0 +1,124 @@
+package org.strandbook.app.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.strandbook.samplesite.DemoSite;
+
+/**
+ * The README's main command end to end: the demo builds the invented plant through the real import
+ * paths, and its summary names every injected fault. Then the evaluate, trend and import commands on
+ * the workbook it made.
+ */
+class DemoCommandTest {
+
+    @TempDir
+    static Path dir;
+
+    private static CliRun demo;
+    private static Path workbook;
+
+    @BeforeAll
+    static void runDemo() {
+        demo = CliRun.of("demo", "--out", dir.resolve("demo").toString());
+        workbook = dir.resolve("demo").resolve(DemoSite.WORKBOOK_NAME);
+    }
+
+    private static String lineOf(String out, String tag) {
+        Matcher m = Pattern.compile("(?m)^" + Pattern.quote(tag) + " .*$").matcher(out);
+        assertTrue(m.find(), () -> "no summary line for " + tag + " in\n" + out);
+        return m.group();
+    }
+
+    @Test
+    void demoSucceedsAndSaysWhereItsFilesAre() {
+        assertEquals(0, demo.exitCode(), demo.err());
+        assertTrue(Files.exists(workbook));
+        assertTrue(demo.out().contains("270 files under"));
+    }
+
+    @Test
+    void summaryNamesEachInjectedFault() {
+        assertTrue(lineOf(demo.out(), "FT-4102").contains("dirty or misaligned connector"));
+        assertTrue(lineOf(demo.out(), "FT-4102").contains("check J2"));
+        assertTrue(lineOf(demo.out(), "FT-4103").contains("tight bend or crush"));
+        assertTrue(lineOf(demo.out(), "FT-4105").contains("hydrogen darkening"));
+        assertTrue(lineOf(demo.out(), "FT-4106").contains("high-OH fiber"));
+        assertTrue(lineOf(demo.out(), "FT-4106").contains("check C4106-S1"));
+        assertTrue(lineOf(demo.out(), "FT-4108").contains("broken fiber or open connector"));
+    }
+
+    @Test
+    void healthyPointsPassAsPredicted() {
+        for (String tag : new String[] {"FT-4101", "FT-4104", "FT-4107", "SW-4201", "SW-4202"}) {
+            String line = lineOf(demo.out(), tag);
+            assertTrue(line.contains("✔ PASS") && line.contains("as predicted"), line);
+        }
+    }
+
+    @Test
+    void evaluateJsonCarriesTheDocumentedFields() {
+        CliRun r = CliRun.of("evaluate", workbook.toString(), "--point", "FT-4102", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        for (String field : new String[] {"\"point\":\"FT-4102\"", "\"status\":\"FAIL\"", "\"worst_band\"",
+            "\"margin_db\"", "\"finding\"", "\"loop_scan_id\"", "\"reference_scan_id\"", "\"bands\"",
+            "\"mean_deviation_db\"", "\"findings\"", "\"cause\":\"DIRTY_CONNECTOR\"", "\"check_first\":\"J2\"",
+            "\"pairing_rule\"", "\"masked\""}) {
+            assertTrue(r.out().contains(field), field + " missing in " + r.out());
+        }
+    }
+
+    @Test
+    void trendRanksTheBrokenAndDarkeningPointsAmongTheFirst() {
+        CliRun r = CliRun.of("trend", workbook.toString(), "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        assertTrue(r.out().contains("\"slope_db_per_year\""));
+        assertTrue(r.out().contains("\"no_light\":[\""), "the broken fiber's dark scans are listed");
+        String ranking = r.out().substring(r.out().indexOf("\"ranking\":["), r.out().indexOf(']'));
+        assertTrue(ranking.indexOf("FT-4101") > ranking.indexOf("FT-4108"), ranking);
+    }
+
+    @Test
+    void importingTheSameScanFileTwiceIsRefused() throws Exception {
+        Path file;
+        try (var files = Files.list(dir.resolve("demo").resolve("scans").resolve("FT-4101"))) {
+            file = files.filter(f -> f.toString().endsWith("loop.jdx")).findFirst().orElseThrow();
+        }
+        CliRun r = CliRun.of("import-scans", workbook.toString(), "--point", "FT-4101", "--kind", "loop", file.toString());
+        assertEquals(1, r.exitCode());
+        assertTrue(r.out().contains("already stored as scan"), r.out());
+    }
+
+    @Test
+    void aBadScanFileIsRejectedWithFileAndLine() throws Exception {
+        Path bad = dir.resolve("bad.csv");
+        Files.writeString(bad, "Wavelength (nm);Counts\n1000;12\n1002;abc\n");
+        CliRun r = CliRun.of("import-scans", workbook.toString(), "--point", "FT-4101", "--kind", "dark", bad.toString());
+        assertEquals(1, r.exitCode());
+        assertTrue(r.out().contains("bad.csv:3:"), r.out());
+        assertFalse(r.err().contains("Exception"), r.err());
+    }
+
+    @Test
+    void unknownKindIsWrongUsage() {
+        CliRun r = CliRun.of("import-scans", workbook.toString(), "--point", "FT-4101", "--kind", "lamp", "x.jdx");
+        assertEquals(2, r.exitCode());
+        assertTrue(r.err().contains("use loop, reference or dark"), r.err());
+    }
+
+    @Test
+    void unknownPointIsRejected() {
+        CliRun r = CliRun.of("evaluate", workbook.toString(), "--point", "NOPE-1");
+        assertEquals(1, r.exitCode());
+        assertTrue(r.err().contains("no point tagged 'NOPE-1'"), r.err());
+    }
+}
