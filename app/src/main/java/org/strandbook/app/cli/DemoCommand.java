@@ -27,8 +27,9 @@ import picocli.CommandLine.Spec;
             "evaluate it and print a summary per point."})
 final class DemoCommand implements Callable<Integer> {
 
-    @Option(names = "--out", paramLabel = "DIR", defaultValue = "strandbook-demo",
-            description = "Folder for the workbook, schedule and scan files (default: ${DEFAULT-VALUE}).")
+    @Option(names = "--out", paramLabel = "DIR",
+            description = "Folder for the workbook, schedule and scan files (default: strandbook-demo, or"
+                    + " strandbook-demo-2, -3 ... when an earlier demo is there; an earlier demo is never overwritten).")
     Path out;
 
     @Option(names = "--seed", paramLabel = "N", description = "Generator seed (default: the demo's own).")
@@ -44,14 +45,15 @@ final class DemoCommand implements Callable<Integer> {
         o.println("Strandbook demo: Saltmarsh Ridge Works, an invented plant. Fiber work in a real plant: never look"
                 + " into a live fiber end; IEC 60079-28 governs optical power in explosive atmospheres; follow your"
                 + " site's rules.");
+        Path folder = out != null ? out : freshDefaultFolder();
         DemoSite.Built built;
         try {
-            built = DemoSite.build(out, seed == null ? ScanGenerator.DEMO_SEED : seed, step -> {
+            built = DemoSite.build(folder, seed == null ? ScanGenerator.DEMO_SEED : seed, step -> {
                 err.println("  " + step);
                 err.flush();
             });
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot write the demo into " + out + ": " + e.getMessage(), e);
+            throw new UncheckedIOException("cannot write the demo into " + folder + ": " + e.getMessage(), e);
         }
         o.printf(java.util.Locale.ROOT, "workbook  %s%nschedule  %s%nscans     %d files under %s%n",
                 built.workbook(), built.schedule(), built.scanFiles(), built.scanFolder());
@@ -66,5 +68,13 @@ final class DemoCommand implements Callable<Integer> {
                 + built.workbook());
         o.flush();
         return StrandbookCommand.EXIT_OK;
+    }
+
+    private static Path freshDefaultFolder() {
+        Path folder = Path.of("strandbook-demo");
+        for (int n = 2; java.nio.file.Files.exists(folder.resolve(DemoSite.WORKBOOK_NAME)); n++) {
+            folder = Path.of("strandbook-demo-" + n);
+        }
+        return folder;
     }
 }
