@@ -20,11 +20,11 @@ class ArchitectureTest {
 
     private static JavaClasses classes;
 
+    /** In a reactor build the other modules arrive as jars, so jars on the class path are read too. */
     @BeforeAll
     static void importClasses() {
         classes = new ClassFileImporter()
                 .withImportOption(ImportOption.Predefined.DO_NOT_INCLUDE_TESTS)
-                .withImportOption(ImportOption.Predefined.DO_NOT_INCLUDE_JARS)
                 .importPackages("org.strandbook");
     }
 
