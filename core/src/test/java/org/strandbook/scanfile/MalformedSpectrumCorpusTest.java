@@ -25,7 +25,7 @@ import org.strandbook.optics.WavelengthGrid;
  * a {@link SpectrumFileException} whose message reads {@code file:line: what is wrong}; any other
  * throwable (a parser bug: index out of range, number format, out of memory) fails the test.
  */
-class MalformedSpectrumCorpusTest {
+public class MalformedSpectrumCorpusTest {
 
     private static final Pattern MESSAGE = Pattern.compile("^.+:\\d+: .+");
 
@@ -52,7 +52,7 @@ class MalformedSpectrumCorpusTest {
         assertTrue(count >= 200, "corpus has " + count + " inputs");
     }
 
-    static Stream<Named<byte[]>> corpus() {
+    public static Stream<Named<byte[]>> corpus() {
         List<Named<byte[]>> cases = new ArrayList<>();
         String difDup = JcampDxWriter.difDup().toText(baseSpectrum());
         String affn = JcampDxWriter.affn().toText(baseSpectrum());
