@@ -1,17 +1,13 @@
 package org.strandbook.app.cli;
 
 import java.io.PrintWriter;
-import java.util.List;
 import java.util.concurrent.Callable;
 
 import org.strandbook.evaluation.SiteEvaluation;
-import org.strandbook.evaluation.SiteEvaluator;
-import org.strandbook.store.Workbook;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
 /** {@code strandbook trend SITE [--point TAG] [--json]}: loss over time and when margins run out. */
@@ -23,26 +19,18 @@ final class TrendCommand implements Callable<Integer> {
     @Mixin
     WorkbookFileOptions workbook;
 
-    @Option(names = "--point", paramLabel = "TAG", description = "Only this point.")
-    String point;
-
-    @Option(names = "--json", description = "JSON (fields listed in the README) instead of a table.")
-    boolean json;
+    @Mixin
+    PointSelection selection;
 
     @Spec
     CommandSpec spec;
 
     @Override
     public Integer call() {
-        SiteEvaluation site;
-        try (Workbook wb = workbook.open()) {
-            site = SiteEvaluator.withDefaults().evaluate(wb, point == null ? List.of() : List.of(point),
-                    SiteEvaluator.Progress.NONE);
-        }
+        SiteEvaluation site = selection.evaluate(workbook);
         PrintWriter out = spec.commandLine().getOut();
-        if (json) {
-            out.print(EvaluationText.trendJson(site));
-        } else {
+        out.print(selection.json ? EvaluationText.trendJson(site) : "");
+        if (!selection.json) {
             EvaluationText.trendTable(site, out);
         }
         out.flush();
