@@ -29,8 +29,9 @@ final class TrendCommand implements Callable<Integer> {
     public Integer call() {
         SiteEvaluation site = selection.evaluate(workbook);
         PrintWriter out = spec.commandLine().getOut();
-        out.print(selection.json ? EvaluationText.trendJson(site) : "");
-        if (!selection.json) {
+        if (selection.json) {
+            out.print(EvaluationText.trendJson(site));
+        } else {
             EvaluationText.trendTable(site, out);
         }
         out.flush();
