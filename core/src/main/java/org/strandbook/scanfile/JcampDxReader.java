@@ -394,7 +394,7 @@ final class JcampDxReader {
                 throw fail(lineNo, "more ordinates than ##NPOINTS= " + n + " (line " + nRecord.line + ")");
             }
             for (int j = skip; j < m; j++) {
-                double v = decoder.ordinate(j) * yFactor;
+                double v = scale(decoder.ordinate(j), yFactor);
                 if (!Double.isFinite(v)) {
                     throw fail(lineNo, "ordinate × YFACTOR is too large to store");
                 }
@@ -510,7 +510,7 @@ final class JcampDxReader {
         int[] pointLines = new int[points];
         for (int i = 0; i < points; i++) {
             x[i] = numbers[2 * i] * xFactor;
-            y[i] = numbers[2 * i + 1] * yFactor;
+            y[i] = scale(numbers[2 * i + 1], yFactor);
             pointLines[i] = numberLines[2 * i + 1];
             if (!Double.isFinite(x[i]) || !Double.isFinite(y[i])) {
                 throw fail(pointLines[i], "value × XFACTOR or YFACTOR is too large to store");
@@ -545,5 +545,20 @@ final class JcampDxReader {
 
     private SpectrumFileException fail(int line, String problem) {
         return new SpectrumFileException(fileName, line, problem);
+    }
+
+    /**
+     * value × factor; a factor of 10⁻ᵏ (what writers choose to keep k decimals) is applied as a
+     * division by 10ᵏ, which gives the double nearest the decimal the file means (799.8416, not
+     * 799.8416000000001).
+     */
+    static double scale(double value, double factor) {
+        if (factor > 0 && factor < 1) {
+            double inverse = Math.rint(1.0 / factor);
+            if (inverse <= 1e15 && 1.0 / inverse == factor) {
+                return value / inverse;
+            }
+        }
+        return value * factor;
     }
 }
