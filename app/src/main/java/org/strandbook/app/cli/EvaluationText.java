@@ -70,7 +70,11 @@ final class EvaluationText {
         bands.print(out);
         e.diagnosis().ifPresent(d -> {
             for (Finding f : d.findings()) {
-                out.printf(Locale.ROOT, "  finding: %s%n", f.text());
+                out.printf(Locale.ROOT, "  finding (%.0f %% of the explained deviation): %s%n", f.sharePercent(),
+                        f.text());
+            }
+            if (Double.isFinite(d.residualRmsDb())) {
+                out.printf(Locale.ROOT, "  residual after the fit: %.2f dB RMS%n", d.residualRmsDb());
             }
             if (d.findings().isEmpty()) {
                 out.println("  finding: " + d.summary());
