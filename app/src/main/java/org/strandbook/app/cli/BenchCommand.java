@@ -15,6 +15,7 @@ import picocli.CommandLine.Spec;
         subcommands = {
             OpticsBenchCommand.class,
             EvaluateBenchCommand.class,
+            EditBenchCommand.class,
         })
 public final class BenchCommand implements Runnable {
 

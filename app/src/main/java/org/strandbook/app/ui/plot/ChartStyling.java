@@ -7,6 +7,7 @@ import javafx.scene.Node;
 import javafx.scene.chart.NumberAxis;
 import javafx.scene.chart.XYChart;
 import javafx.scene.control.Label;
+import javafx.scene.control.Tooltip;
 import javafx.scene.layout.FlowPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.shape.Circle;
@@ -84,10 +85,18 @@ final class ChartStyling {
                 style.dashed() ? " -fx-stroke-dash-array: 7 4;" : "");
     }
 
-    /** One legend entry per label, drawn as the curve is. */
+    /** One legend entry per label, drawn as the curve is; a curve with an empty label has none. */
     static void fillLegend(FlowPane legend, List<String> labels, List<CurveStyle> styles) {
+        fillLegend(legend, labels, labels, styles);
+    }
+
+    /** As {@link #fillLegend(FlowPane, List, List)}, with the text each entry shows on hover. */
+    static void fillLegend(FlowPane legend, List<String> labels, List<String> hover, List<CurveStyle> styles) {
         legend.getChildren().clear();
         for (int i = 0; i < labels.size(); i++) {
+            if (labels.get(i).isEmpty()) {
+                continue;
+            }
             CurveStyle s = styles.get(i);
             Node key;
             if (s.markers()) {
@@ -101,14 +110,19 @@ final class ChartStyling {
             }
             Label text = new Label(labels.get(i));
             text.getStyleClass().add("plot-legend-text");
+            // a legend never widens its plot: in a narrow window an entry ends in "…" and shows in full on hover
+            text.setMinWidth(0);
+            text.setTooltip(new Tooltip(hover.get(i)));
             HBox entry = new HBox(4, key, text);
             entry.setAlignment(javafx.geometry.Pos.CENTER_LEFT);
+            entry.maxWidthProperty().bind(legend.widthProperty());
             legend.getChildren().add(entry);
         }
     }
 
     static FlowPane legend(String id) {
         FlowPane legend = new FlowPane(12, 1);
+        legend.setMinWidth(0);
         legend.setId(id);
         legend.getStyleClass().add("plot-legend");
         return legend;

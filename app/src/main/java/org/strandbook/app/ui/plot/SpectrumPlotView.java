@@ -21,6 +21,9 @@ public final class SpectrumPlotView {
     private final FlowPane legend;
     private final Label placeholder = new Label();
     private final BorderPane root = new BorderPane();
+    private List<CurveStyle> drawnStyles = List.of();
+    private List<String> legendLabels = List.of();
+    private List<CurveStyle> legendStyles = List.of();
 
     /** {@code id} names the chart node; the legend is {@code id + "-legend"}. */
     public SpectrumPlotView(SpectrumPlotModel model, String id) {
@@ -67,27 +70,64 @@ public final class SpectrumPlotView {
         return legend;
     }
 
+    /**
+     * Draws the lines. When only the values changed (an edit moves the curves, the curves stay the
+     * same), the points already on the chart are moved instead of replaced: new series and new
+     * legend nodes would each go through CSS and layout, which costs more than the arithmetic.
+     */
     private void draw(List<SpectrumPlotModel.PlotLine> lines) {
-        List<XYChart.Series<Number, Number>> all = new ArrayList<>();
+        List<List<SpectrumPlotModel.PlotPoint>> runs = new ArrayList<>();
         List<CurveStyle> styles = new ArrayList<>();
         for (SpectrumPlotModel.PlotLine line : lines) {
             for (List<SpectrumPlotModel.PlotPoint> run : line.runs()) {
+                runs.add(run);
+                styles.add(line.style());
+            }
+        }
+        if (styles.equals(drawnStyles) && sameShape(runs)) {
+            for (int i = 0; i < runs.size(); i++) {
+                List<XYChart.Data<Number, Number>> data = chart.getData().get(i).getData();
+                List<SpectrumPlotModel.PlotPoint> run = runs.get(i);
+                for (int k = 0; k < run.size(); k++) {
+                    data.get(k).setXValue(run.get(k).x());
+                    data.get(k).setYValue(run.get(k).y());
+                }
+            }
+        } else {
+            List<XYChart.Series<Number, Number>> all = new ArrayList<>();
+            for (List<SpectrumPlotModel.PlotPoint> run : runs) {
                 XYChart.Series<Number, Number> series = new XYChart.Series<>();
-                series.setName(line.label());
                 List<XYChart.Data<Number, Number>> data = new ArrayList<>(run.size());
                 for (SpectrumPlotModel.PlotPoint p : run) {
                     data.add(new XYChart.Data<>(p.x(), p.y()));
                 }
                 series.getData().setAll(data);
                 all.add(series);
-                styles.add(line.style());
+            }
+            chart.getData().setAll(all);
+            for (int i = 0; i < all.size(); i++) {
+                ChartStyling.style(all.get(i), styles.get(i));
+            }
+            drawnStyles = styles;
+        }
+        List<String> labels = lines.stream().map(SpectrumPlotModel.PlotLine::label).toList();
+        List<CurveStyle> lineStyles = lines.stream().map(SpectrumPlotModel.PlotLine::style).toList();
+        if (!labels.equals(legendLabels) || !lineStyles.equals(legendStyles)) {
+            ChartStyling.fillLegend(legend, labels, lineStyles);
+            legendLabels = labels;
+            legendStyles = lineStyles;
+        }
+    }
+
+    private boolean sameShape(List<List<SpectrumPlotModel.PlotPoint>> runs) {
+        if (chart.getData().size() != runs.size()) {
+            return false;
+        }
+        for (int i = 0; i < runs.size(); i++) {
+            if (chart.getData().get(i).getData().size() != runs.get(i).size()) {
+                return false;
             }
         }
-        chart.getData().setAll(all);
-        for (int i = 0; i < all.size(); i++) {
-            ChartStyling.style(all.get(i), styles.get(i));
-        }
-        ChartStyling.fillLegend(legend, lines.stream().map(SpectrumPlotModel.PlotLine::label).toList(),
-                lines.stream().map(SpectrumPlotModel.PlotLine::style).toList());
+        return true;
     }
 }

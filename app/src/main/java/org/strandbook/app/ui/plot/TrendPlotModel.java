@@ -40,8 +40,11 @@ public final class TrendPlotModel {
     public record TimePoint(double epochDay, double y) {
     }
 
-    /** One line or set of markers, with its legend text. */
-    public record TrendLine(String label, CurveStyle style, List<TimePoint> points) {
+    /**
+     * One line or set of markers, with its legend text (empty for none) and the detail a legend
+     * entry shows on hover. A line without points is a legend entry only.
+     */
+    public record TrendLine(String label, String detail, CurveStyle style, List<TimePoint> points) {
 
         public TrendLine {
             points = List.copyOf(points);
@@ -89,6 +92,10 @@ public final class TrendPlotModel {
     }
 
     public void show(String caption, List<BandTrend> bandTrends, double allowedDb) {
+        if (caption.equals(title.get()) && bandTrends.equals(trends) && Double.compare(allowedDb, allowedLossDb) == 0) {
+            // a re-evaluation after an edit of the path brings the same history: nothing to redraw
+            return;
+        }
         title.set(caption);
         trends = List.copyOf(bandTrends);
         allowedLossDb = allowedDb;
@@ -120,6 +127,7 @@ public final class TrendPlotModel {
         List<TrendLine> out = new ArrayList<>();
         Instant first = null;
         Instant end = null;
+        boolean trended = false;
         for (int b = 0; b < trends.size(); b++) {
             BandTrend t = trends.get(b);
             if (t.readings().isEmpty()) {
@@ -133,15 +141,19 @@ public final class TrendPlotModel {
             first = first == null || from.isBefore(first) ? from : first;
             end = end == null || until.isAfter(end) ? until : end;
 
+            // one legend entry per band (its markers); the trend and forecast lines explain themselves once, below
             String band = bandText(t.band(), x);
-            out.add(new TrendLine(band + ": band-mean " + (y == LossScale.LOSS_DB ? "loss" : "transmittance")
-                    + " per loop scan" + (t.noLight().isEmpty() ? "" : ", " + t.noLight().size() + " scans without light"),
+            String summary = t.trend().map(tr -> String.format(Locale.ROOT, ": %+.2f dB/yr, ", tr.slopeDbPerYear())
+                    + forecastText(t)).orElse(": too few scans for a trend");
+            out.add(new TrendLine(band + summary + (t.noLight().isEmpty() ? "" : " (" + t.noLight().size() + " scans without light)"),
+                    t.trend().map(TrendPlotModel::trendText).orElse(""),
                     CurveStyle.markers(colour),
                     readings.stream().map(r -> new TimePoint(epochDay(r.time()), y.fromLossDb(r.lossDb()))).toList()));
             if (t.trend().isPresent()) {
                 LossTrend trend = t.trend().get();
-                out.add(new TrendLine(trendText(trend), CurveStyle.line(colour, 2), along(trend, from, last, y)));
-                out.add(new TrendLine(forecastText(t), CurveStyle.dashed(colour, 2), along(trend, last, until, y)));
+                trended = true;
+                out.add(new TrendLine("", "", CurveStyle.line(colour, 2), along(trend, from, last, y)));
+                out.add(new TrendLine("", "", CurveStyle.dashed(colour, 2), along(trend, last, until, y)));
             }
         }
         if (first != null && Double.isFinite(allowedLossDb)) {
@@ -149,8 +161,12 @@ public final class TrendPlotModel {
             out.add(new TrendLine(y == LossScale.LOSS_DB
                     ? String.format(Locale.ROOT, "allowed loss %.1f dB", allowedLossDb)
                     : String.format(Locale.ROOT, "allowed: %.2g %% transmittance (%.1f dB)", a, allowedLossDb),
-                    CurveStyle.dashed(CurveStyle.VERMILLION, 2.5),
+                    "", CurveStyle.dashed(CurveStyle.VERMILLION, 2.5),
                     List.of(new TimePoint(epochDay(first), a), new TimePoint(epochDay(end), a))));
+        }
+        if (trended) {
+            out.add(new TrendLine("Theil\u2013Sen trend", "", CurveStyle.line(CurveStyle.GREY, 2), List.of()));
+            out.add(new TrendLine("forecast", "", CurveStyle.dashed(CurveStyle.GREY, 2), List.of()));
         }
         lines.set(List.copyOf(out));
         ranges(out);
@@ -219,22 +235,22 @@ public final class TrendPlotModel {
         if (!trend.slopeIsBounded()) {
             return slope + " (too few scans to bound it)";
         }
-        return slope + String.format(Locale.ROOT, " (%.0f %% CI %+.2f to %+.2f)", 100 * trend.confidenceLevel(),
-                trend.lowerSlopeDbPerYear(), trend.upperSlopeDbPerYear());
+        return slope + String.format(Locale.ROOT, ", %.0f %% confidence interval %+.2f to %+.2f dB/year",
+                100 * trend.confidenceLevel(), trend.lowerSlopeDbPerYear(), trend.upperSlopeDbPerYear());
     }
 
     private static String forecastText(BandTrend t) {
         if (t.outlook().isEmpty()) {
-            return "forecast: none (margin unknown)";
+            return "no forecast";
         }
         MarginForecast.Outlook o = t.outlook().get();
         return switch (o.status()) {
-            case ALREADY_EXHAUSTED -> "forecast: margin already used up";
-            case NOT_SHRINKING -> "forecast: margin not shrinking";
-            case BEYOND_HORIZON -> "forecast: margin lasts beyond the horizon";
-            case PROJECTED -> "forecast: margin used up about " + o.expectedDate().map(d -> MONTH.format(d)).orElse("?")
-                    + o.earliestDate().map(d -> " (earliest " + MONTH.format(d)
-                    + o.latestDate().map(l -> ", latest " + MONTH.format(l)).orElse("") + ")").orElse("");
+            case ALREADY_EXHAUSTED -> "margin used up";
+            case NOT_SHRINKING -> "margin holds";
+            case BEYOND_HORIZON -> "margin lasts " + Math.round(MarginForecast.DEFAULT_HORIZON_YEARS) + "+ yr";
+            case PROJECTED -> "margin used up \u2248 " + o.expectedDate().map(d -> MONTH.format(d)).orElse("?")
+                    + o.earliestDate().map(d -> " (" + MONTH.format(d)
+                    + o.latestDate().map(l -> "\u2026" + MONTH.format(l)).orElse("\u2026") + ")").orElse("");
         };
     }
 }

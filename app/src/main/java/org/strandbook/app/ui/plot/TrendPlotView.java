@@ -75,7 +75,11 @@ public final class TrendPlotView {
 
     private void draw(List<TrendPlotModel.TrendLine> lines) {
         List<XYChart.Series<Number, Number>> all = new ArrayList<>();
+        List<CurveStyle> styles = new ArrayList<>();
         for (TrendPlotModel.TrendLine line : lines) {
+            if (line.points().isEmpty()) {
+                continue;
+            }
             XYChart.Series<Number, Number> series = new XYChart.Series<>();
             series.setName(line.label());
             List<XYChart.Data<Number, Number>> data = new ArrayList<>(line.points().size());
@@ -84,12 +88,14 @@ public final class TrendPlotView {
             }
             series.getData().setAll(data);
             all.add(series);
+            styles.add(line.style());
         }
         chart.getData().setAll(all);
         for (int i = 0; i < all.size(); i++) {
-            ChartStyling.style(all.get(i), lines.get(i).style());
+            ChartStyling.style(all.get(i), styles.get(i));
         }
         ChartStyling.fillLegend(legend, lines.stream().map(TrendPlotModel.TrendLine::label).toList(),
+                lines.stream().map(l -> l.detail().isEmpty() ? l.label() : l.label() + "\n" + l.detail()).toList(),
                 lines.stream().map(TrendPlotModel.TrendLine::style).toList());
     }
 }

@@ -23,9 +23,9 @@ import org.strandbook.site.MeasurementPoint;
 import org.strandbook.site.WavelengthBand;
 
 /**
- * The "Points" sheet: one row per measurement point. The predicted status, margin and losses come
- * right after the tag so they stay in view on a laptop screen; the measured status follows; long
- * free text comes last.
+ * The "Points" sheet: one row per measurement point. The measured and predicted status, the margin
+ * and the predicted losses come right after the tag so they stay in view on a laptop screen; the
+ * latest finding and long free text come last.
  */
 public final class PointSheet {
 
@@ -52,12 +52,12 @@ public final class PointSheet {
                                                       Function<MeasurementPoint, RowFigures> figures) {
         return SheetModel.<MeasurementPoint>builder()
                 .column(SheetColumn.derived("tag", "Point tag", false, p -> Figure.text(p.tag())))
+                .column(SheetColumn.computed(MEASURED, "Measured status", false))
                 .column(SheetColumn.computed(STATUS, "Predicted status", false))
                 .column(SheetColumn.computed(MARGIN, "Least margin (dB)", true))
                 .column(SheetColumn.computed(PREDICTED, "Predicted loss at band centres (dB)", true))
                 .column(SheetColumn.computed(CENTRES, "Band centres (nm)", true))
                 .column(SheetColumn.computed(ALLOWED, "Allowed loss (dB)", true))
-                .column(SheetColumn.computed(MEASURED, "Measured status", false))
                 .column(SheetColumn.computed(FINDING, "Latest finding", false))
                 .column(SheetColumn.input("analyzer", "Analyzer", MeasurementPoint::analyzerTag, s -> s,
                         CellParsers.catalogCode("site's analyzers", analyzerTags),

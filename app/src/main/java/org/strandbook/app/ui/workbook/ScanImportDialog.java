@@ -13,6 +13,7 @@ import javafx.scene.control.Label;
 import javafx.scene.control.ListView;
 import javafx.scene.control.ProgressBar;
 import javafx.scene.control.TextField;
+import javafx.scene.input.TransferMode;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
@@ -43,6 +44,8 @@ public final class ScanImportDialog {
         stage.initModality(Modality.WINDOW_MODAL);
         stage.setTitle("Record measurement \u2013 " + vm.pointTag());
 
+        Label title = new Label("Record measurement \u2013 " + vm.pointTag());
+        title.getStyleClass().add("pane-heading");
         Label heading = new Label("Scan files of " + vm.pointTag()
                 + ": each file is stored whole or not at all; a refused file does not stop the others.");
         heading.setWrapText(true);
@@ -53,7 +56,21 @@ public final class ScanImportDialog {
         vm.files().addListener((javafx.collections.ListChangeListener<java.nio.file.Path>) c ->
                 list.getItems().setAll(vm.files().stream().map(java.nio.file.Path::toFile).toList()));
         list.getItems().setAll(vm.files().stream().map(java.nio.file.Path::toFile).toList());
-        list.setPlaceholder(new Label("No files chosen yet: Add files\u2026"));
+        list.setPlaceholder(new Label("No files chosen yet: Add files\u2026, or drop them here"));
+        list.setOnDragOver(e -> {
+            if (e.getDragboard().hasFiles() && !vm.runningProperty().get()) {
+                e.acceptTransferModes(TransferMode.COPY);
+            }
+            e.consume();
+        });
+        list.setOnDragDropped(e -> {
+            boolean taken = e.getDragboard().hasFiles() && !vm.runningProperty().get();
+            if (taken) {
+                vm.addFiles(e.getDragboard().getFiles().stream().filter(File::isFile).map(File::toPath).toList());
+            }
+            e.setDropCompleted(taken);
+            e.consume();
+        });
 
         Button add = new Button("Add files\u2026");
         add.setId("scan-import-add");
@@ -144,7 +161,7 @@ public final class ScanImportDialog {
         HBox buttons = new HBox(8, add, gap, start, cancel, close);
         buttons.setAlignment(Pos.CENTER_LEFT);
 
-        VBox root = new VBox(8, heading, list, form, buttons, progress, message, refused);
+        VBox root = new VBox(8, title, heading, list, form, buttons, progress, message, refused);
         root.setPadding(new Insets(12));
         root.setPrefWidth(620);
         Scene scene = new Scene(root);

@@ -249,7 +249,11 @@ public final class WorkbookViewModel {
             fail(e);
             return;
         }
-        run("Creating " + file.getFileName(), p -> service.create(file, newSite, p));
+        tasks.submit("Creating " + file.getFileName(), p -> service.create(file, newSite, p), loaded -> {
+            onLoaded(loaded);
+            notice.set("New workbook for " + newSite.name() + ": import the contractor's cable schedule "
+                    + "(File \u25B8 Import cable schedule) to fill it");
+        }, this::fail);
     }
 
     public void saveAs(Path file) {

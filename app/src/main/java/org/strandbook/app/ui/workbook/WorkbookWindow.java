@@ -138,9 +138,10 @@ public final class WorkbookWindow {
                 showScheduleProblems(is);
             }
         });
-        pointsView.table().getFocusModel().focusedCellProperty().addListener((o, was, is) -> {
-            if (is != null && is.getRow() >= 0 && is.getRow() < vm.points().rowCount()) {
-                vm.selectPoint(vm.points().records().get(is.getRow()).tag());
+        pointsView.table().getFocusModel().focusedIndexProperty().addListener((o, was, is) -> {
+            int row = is.intValue();
+            if (row >= 0 && row < vm.points().rowCount()) {
+                vm.selectPoint(vm.points().records().get(row).tag());
             }
         });
     }
@@ -448,7 +449,7 @@ public final class WorkbookWindow {
                         + "margin and losses are computed from the light paths; measured status from the latest scans.")),
                 tab("Cable segments", "tab-segments", segmentsView, pointContext(point)),
                 tab("Joints", "tab-joints", jointsView, pointContext(point)),
-                tab("Scans", "tab-scans", scansView, pointContext(point), scanActions()),
+                readOnlyTab("Scans", "tab-scans", scansView, pointContext(point), scanActions()),
                 catalogTab);
 
         Label summary = verdictLabel("budget-summary", point.summaryProperty(), point.summaryVerdictProperty());
@@ -498,6 +499,18 @@ public final class WorkbookWindow {
         box.setPadding(new Insets(4));
         box.getChildren().addAll(above);
         box.getChildren().addAll(view.toolbar(), view.node());
+        VBox.setVgrow(view.node(), Priority.ALWAYS);
+        Tab t = new Tab(title, box);
+        t.setId(id);
+        return t;
+    }
+
+    /** A tab for a sheet nobody types into: no undo, fill or row buttons. */
+    private Tab readOnlyTab(String title, String id, SheetView<?> view, Node... above) {
+        VBox box = new VBox(4);
+        box.setPadding(new Insets(4));
+        box.getChildren().addAll(above);
+        box.getChildren().add(view.node());
         VBox.setVgrow(view.node(), Priority.ALWAYS);
         Tab t = new Tab(title, box);
         t.setId(id);

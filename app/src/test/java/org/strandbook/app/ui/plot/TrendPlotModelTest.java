@@ -43,7 +43,7 @@ class TrendPlotModelTest {
         // Theil–Sen through exactly collinear readings is that line: 1 dB/year; 2 dB of margin is
         // used up two years after the last scan (MarginForecast: margin / slope)
         assertEquals(10.75 + 2 * 1.1, last.y(), 0.01);
-        assertTrue(forecast.label().startsWith("forecast: margin used up about 2027-1"), forecast.label());
+        assertTrue(lines.get(0).label().contains("+1.00 dB/yr, margin used up \u2248 2027-10"), lines.get(0).label());
         assertEquals("allowed loss 12.8 dB", lines.get(3).label());
     }
 

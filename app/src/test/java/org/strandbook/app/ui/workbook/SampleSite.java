@@ -17,10 +17,10 @@ import org.strandbook.samplesite.ScanGenerator;
 
 /**
  * The invented sample plant, built once per test run (it takes a few seconds) in a temporary
- * folder that is removed when the run ends. Tests that change a workbook work on their own copy.
+ * folder that is removed when the run ends (JUnit closes what its root store holds). Tests that change a workbook work on their own copy.
  * Use it as a parameter of a {@code @BeforeAll} method with {@code @ExtendWith(SampleSite.Resolver.class)}.
  */
-public final class SampleSite implements ExtensionContext.Store.CloseableResource {
+public final class SampleSite implements AutoCloseable {
 
     /** Hands the shared sample site to test methods. */
     public static final class Resolver implements ParameterResolver {
