@@ -14,7 +14,6 @@ import org.strandbook.app.ui.budget.PointPrediction;
 import org.strandbook.app.ui.budget.SitePrediction;
 import org.strandbook.site.Analyzer;
 import org.strandbook.site.Catalog;
-import org.strandbook.site.CableSegment;
 import org.strandbook.site.ConnectorType;
 import org.strandbook.site.FiberType;
 import org.strandbook.site.MeasurementPoint;
