@@ -1,12 +1,16 @@
 package org.strandbook.app;
 
+import java.util.Optional;
+
 import org.strandbook.app.cli.StrandbookCommand;
 import org.strandbook.app.ui.workbook.StrandbookWindow;
 
 /**
- * Entry point of the runnable jar: with no arguments it opens the workbook window, with arguments
- * it runs the command line. It must not extend {@code javafx.application.Application}: a shaded
- * jar whose main class does fails with "JavaFX runtime components are missing".
+ * Entry point of the runnable jar: with no arguments it opens the workbook window (the last
+ * workbook, or the offer of the sample site), with arguments it runs the command line
+ * ({@code strandbook open SITE} opens the window on a given workbook). It must not extend
+ * {@code javafx.application.Application}: a shaded jar whose main class does fails with "JavaFX
+ * runtime components are missing".
  */
 public final class Launcher {
 
@@ -22,7 +26,7 @@ public final class Launcher {
 
     private static int openWindow() {
         try {
-            StrandbookWindow.open();
+            StrandbookWindow.open(Optional.empty());
             return StrandbookCommand.EXIT_OK;
         } catch (RuntimeException | UnsatisfiedLinkError e) {
             // no display (or no GTK): say so in one line and point to the command line

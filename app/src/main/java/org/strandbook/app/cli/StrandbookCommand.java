@@ -16,6 +16,7 @@ import picocli.CommandLine.Command;
         subcommands = {
             CommandLine.HelpCommand.class,
             DemoCommand.class,
+            OpenCommand.class,
             FiberCommand.class,
             InitCommand.class,
             ImportScheduleCommand.class,

@@ -19,6 +19,15 @@ class BenchCommandTest {
     }
 
     @Test
+    void editBenchEndsWithTheRatioLine() {
+        // the window's work per typed cell against the bare budget; tiny run, no speed asserted
+        CliRun run = CliRun.of("bench", "edit", "--trial-ms", "5");
+        assertEquals(0, run.exitCode(), run.err());
+        List<String> lines = run.out().lines().toList();
+        assertTrue(lines.get(lines.size() - 1).matches("ratio: \\d+\\.\\d\\d"), run.out());
+    }
+
+    @Test
     void benchWithoutABenchmarkIsWrongUsage() {
         // a parent command needs a subcommand
         CliRun run = CliRun.of("bench");

@@ -3,102 +3,176 @@ package org.strandbook.app.ui.plot;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
-import java.util.prefs.Preferences;
 
-import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
 import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
-import javafx.beans.property.SimpleObjectProperty;
 
 /**
- * What the detail plot shows: one loss spectrum (nm, dB) and the user's choice of axes, which is
- * kept in {@link Preferences} so the next session opens the same way. The preferences node is
- * injected so that tests never touch the user's own settings.
+ * What one spectral plot shows: curves in nm and dB, turned into points in the axes the user chose
+ * ({@link PlotAxes}) whenever the curves or the choice change. A curve with NaN values becomes
+ * several runs, so masked ranges show as gaps. Long curves are thinned to at most
+ * {@link #MAX_POINTS} points per curve: the evaluation grid's 2 nm steps are finer than a plot a
+ * few hundred pixels wide can show, and fewer points keep a redraw inside a frame.
  */
 public final class SpectrumPlotModel {
 
-    static final String AXIS_KEY = "plot.xAxis";
-    static final String SCALE_KEY = "plot.yScale";
+    static final int MAX_POINTS = 400;
 
-    /** Points to draw, in the chosen axes; x ascending. */
+    /** A point in the chosen axes. */
     public record PlotPoint(double x, double y) {
     }
 
-    private final Preferences preferences;
-    private final ObjectProperty<SpectralAxis> axis = new SimpleObjectProperty<>(this, "axis");
-    private final ObjectProperty<LossScale> scale = new SimpleObjectProperty<>(this, "scale");
-    private final ReadOnlyStringWrapper title = new ReadOnlyStringWrapper(this, "title", "No point selected");
-    private final ReadOnlyObjectWrapper<List<PlotPoint>> points = new ReadOnlyObjectWrapper<>(this, "points", List.of());
-    private double[] wavelengthsNm = new double[0];
-    private double[] lossDb = new double[0];
+    /** A curve in the chosen axes: its legend text, style, and its runs between gaps, x ascending. */
+    public record PlotLine(String label, CurveStyle style, List<List<PlotPoint>> runs) {
 
-    public SpectrumPlotModel(Preferences preferences) {
-        this.preferences = preferences;
-        axis.set(read(AXIS_KEY, SpectralAxis.class, SpectralAxis.WAVELENGTH_NM));
-        scale.set(read(SCALE_KEY, LossScale.class, LossScale.LOSS_DB));
-        axis.addListener((o, was, is) -> {
-            preferences.put(AXIS_KEY, is.name());
-            recompute();
-        });
-        scale.addListener((o, was, is) -> {
-            preferences.put(SCALE_KEY, is.name());
-            recompute();
-        });
+        public PlotLine {
+            runs = List.copyOf(runs);
+        }
     }
 
-    public ObjectProperty<SpectralAxis> axisProperty() {
-        return axis;
+    private final PlotAxes axes;
+    private final ReadOnlyStringWrapper title = new ReadOnlyStringWrapper(this, "title", "");
+    private final ReadOnlyStringWrapper placeholder = new ReadOnlyStringWrapper(this, "placeholder", "No point selected");
+    private final ReadOnlyObjectWrapper<List<PlotLine>> lines = new ReadOnlyObjectWrapper<>(this, "lines", List.of());
+    private final ReadOnlyObjectWrapper<AxisRange> xRange = new ReadOnlyObjectWrapper<>(this, "xRange");
+    private final ReadOnlyObjectWrapper<AxisRange> yRange = new ReadOnlyObjectWrapper<>(this, "yRange");
+    private List<Curve> curves = List.of();
+    private double ceilingDb = Double.POSITIVE_INFINITY;
+
+    public SpectrumPlotModel(PlotAxes axes) {
+        this.axes = axes;
+        axes.axisProperty().addListener((o, was, is) -> recompute());
+        axes.scaleProperty().addListener((o, was, is) -> recompute());
     }
 
-    public ObjectProperty<LossScale> scaleProperty() {
-        return scale;
+    public PlotAxes axes() {
+        return axes;
     }
 
     public ReadOnlyStringProperty titleProperty() {
         return title.getReadOnlyProperty();
     }
 
-    public ReadOnlyObjectProperty<List<PlotPoint>> pointsProperty() {
-        return points.getReadOnlyProperty();
+    /** What to say where the plot would be when there is nothing to draw. */
+    public ReadOnlyStringProperty placeholderProperty() {
+        return placeholder.getReadOnlyProperty();
     }
 
-    /** Shows a loss spectrum: ascending wavelengths (nm) and loss (dB) of the same length. */
-    public void show(String caption, double[] wavelengthsNm, double[] lossDb) {
-        if (wavelengthsNm.length != lossDb.length) {
-            throw new IllegalArgumentException("spectrum has " + wavelengthsNm.length + " wavelengths but " + lossDb.length + " values");
-        }
-        this.wavelengthsNm = wavelengthsNm.clone();
-        this.lossDb = lossDb.clone();
+    public ReadOnlyObjectProperty<List<PlotLine>> linesProperty() {
+        return lines.getReadOnlyProperty();
+    }
+
+    /** The x axis: the curves' own span, so the plot starts and ends where the analyzer does. */
+    public ReadOnlyObjectProperty<AxisRange> xRangeProperty() {
+        return xRange.getReadOnlyProperty();
+    }
+
+    /** The y axis: the curves' span, in dB no higher than the ceiling given with them. */
+    public ReadOnlyObjectProperty<AxisRange> yRangeProperty() {
+        return yRange.getReadOnlyProperty();
+    }
+
+    /** The curves shown now, in nm and dB. */
+    public List<Curve> curves() {
+        return curves;
+    }
+
+    public void show(String caption, List<Curve> shown) {
+        show(caption, shown, Double.POSITIVE_INFINITY);
+    }
+
+    /**
+     * Shows curves with the loss axis cut at {@code ceilingDb}: silica's infrared edge climbs to
+     * hundreds of dB at the end of an analyzer's range and would flatten the few dB that matter.
+     */
+    public void show(String caption, List<Curve> shown, double ceilingDb) {
         title.set(caption);
+        placeholder.set("");
+        curves = List.copyOf(shown);
+        this.ceilingDb = ceilingDb;
         recompute();
     }
 
-    public void clear(String caption) {
-        show(caption, new double[0], new double[0]);
+    /** Shows nothing, and {@code message} in its place. */
+    public void clear(String caption, String message) {
+        title.set(caption);
+        placeholder.set(message);
+        curves = List.of();
+        ceilingDb = Double.POSITIVE_INFINITY;
+        recompute();
     }
 
     private void recompute() {
-        SpectralAxis x = axis.get();
-        LossScale y = scale.get();
-        List<PlotPoint> out = new ArrayList<>(wavelengthsNm.length);
-        for (int i = 0; i < wavelengthsNm.length; i++) {
-            out.add(new PlotPoint(x.fromNm(wavelengthsNm[i]), y.fromLossDb(lossDb[i])));
+        SpectralAxis x = axes.axisProperty().get();
+        LossScale y = axes.scaleProperty().get();
+        List<PlotLine> out = new ArrayList<>(curves.size());
+        for (Curve c : curves) {
+            out.add(new PlotLine(c.label(y), c.style(), runs(c, x, y)));
         }
-        if (x == SpectralAxis.WAVENUMBER_CM) {
-            Collections.reverse(out);
-        }
-        points.set(List.copyOf(out));
+        lines.set(List.copyOf(out));
+        ranges(out, y);
     }
 
-    private <E extends Enum<E>> E read(String key, Class<E> type, E fallback) {
-        String stored = preferences.get(key, fallback.name());
-        for (E e : type.getEnumConstants()) {
-            if (e.name().equals(stored)) {
-                return e;
+    private void ranges(List<PlotLine> shown, LossScale y) {
+        double xLo = Double.POSITIVE_INFINITY;
+        double xHi = Double.NEGATIVE_INFINITY;
+        double yLo = Double.POSITIVE_INFINITY;
+        double yHi = Double.NEGATIVE_INFINITY;
+        for (PlotLine line : shown) {
+            for (List<PlotPoint> run : line.runs()) {
+                for (PlotPoint p : run) {
+                    xLo = Math.min(xLo, p.x());
+                    xHi = Math.max(xHi, p.x());
+                    yLo = Math.min(yLo, p.y());
+                    yHi = Math.max(yHi, p.y());
+                }
             }
         }
-        return fallback;
+        if (xLo > xHi) {
+            xRange.set(null);
+            yRange.set(null);
+            return;
+        }
+        xRange.set(AxisRange.exact(xLo, xHi, 6));
+        if (y == LossScale.LOSS_DB) {
+            yHi = Math.min(yHi, ceilingDb);
+            yLo = Math.max(yLo, -ceilingDb / 4);
+        }
+        yRange.set(AxisRange.rounded(Math.min(yLo, 0), yHi, 6));
+    }
+
+    private static List<List<PlotPoint>> runs(Curve c, SpectralAxis x, LossScale y) {
+        int stride = Math.max(1, (c.size() + MAX_POINTS - 1) / MAX_POINTS);
+        List<List<PlotPoint>> runs = new ArrayList<>();
+        List<PlotPoint> run = new ArrayList<>();
+        for (int i = 0; i < c.size(); i++) {
+            double v = c.lossDb(i);
+            if (Double.isNaN(v)) {
+                if (!run.isEmpty()) {
+                    runs.add(run);
+                    run = new ArrayList<>();
+                }
+                continue;
+            }
+            // thin evenly but keep both ends of every run, so gaps start and stop where they are
+            boolean edge = i == 0 || i == c.size() - 1 || Double.isNaN(c.lossDb(i - 1)) || Double.isNaN(c.lossDb(i + 1));
+            if (edge || i % stride == 0) {
+                run.add(new PlotPoint(x.fromNm(c.wavelengthNm(i)), y.fromLossDb(v)));
+            }
+        }
+        if (!run.isEmpty()) {
+            runs.add(run);
+        }
+        if (x == SpectralAxis.WAVENUMBER_CM) {
+            // wavenumber falls as wavelength rises: reverse so every run reads left to right
+            for (List<PlotPoint> r : runs) {
+                Collections.reverse(r);
+            }
+            Collections.reverse(runs);
+        }
+        runs.replaceAll(List::copyOf);
+        return runs;
     }
 }

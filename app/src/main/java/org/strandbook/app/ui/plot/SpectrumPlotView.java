@@ -1,90 +1,60 @@
 package org.strandbook.app.ui.plot;
 
+import java.util.ArrayList;
 import java.util.List;
 
-import javafx.geometry.Pos;
 import javafx.scene.Node;
 import javafx.scene.chart.LineChart;
 import javafx.scene.chart.NumberAxis;
 import javafx.scene.chart.XYChart;
 import javafx.scene.control.Label;
-import javafx.scene.control.RadioButton;
-import javafx.scene.control.ToggleGroup;
 import javafx.scene.layout.BorderPane;
-import javafx.scene.layout.HBox;
-import javafx.scene.layout.Priority;
-import javafx.scene.layout.Region;
-import javafx.util.StringConverter;
+import javafx.scene.layout.FlowPane;
+import javafx.scene.layout.StackPane;
 
-import org.strandbook.app.ui.sheet.CellFormats;
-
-/** The detail plot: a line chart with axis toggles bound to a {@link SpectrumPlotModel}. */
+/** A spectral plot bound to a {@link SpectrumPlotModel}: a line chart, its legend below, and a message when empty. */
 public final class SpectrumPlotView {
 
-    /** Tick labels without grouping, independent of the machine's locale (1000, not 1,000 or 1.000). */
-    private static final StringConverter<Number> ROOT_NUMBERS = new StringConverter<>() {
-        @Override
-        public String toString(Number n) {
-            return n == null ? "" : CellFormats.plain(n.doubleValue());
-        }
-
-        @Override
-        public Number fromString(String s) {
-            return Double.valueOf(s);
-        }
-    };
-
-    private final NumberAxis xAxis = new NumberAxis();
-    private final NumberAxis yAxis = new NumberAxis();
+    private final NumberAxis xAxis = ChartStyling.axis();
+    private final NumberAxis yAxis = ChartStyling.axis();
     private final LineChart<Number, Number> chart = new LineChart<>(xAxis, yAxis);
+    private final FlowPane legend;
+    private final Label placeholder = new Label();
     private final BorderPane root = new BorderPane();
+    private List<CurveStyle> drawnStyles = List.of();
+    private List<String> legendLabels = List.of();
+    private List<CurveStyle> legendStyles = List.of();
 
-    public SpectrumPlotView(SpectrumPlotModel model) {
-        chart.setId("loss-plot");
+    /** {@code id} names the chart node; the legend is {@code id + "-legend"}. */
+    public SpectrumPlotView(SpectrumPlotModel model, String id) {
+        chart.setId(id);
         chart.setLegendVisible(false);
         chart.setCreateSymbols(false);
         chart.setAnimated(false);
-        xAxis.setForceZeroInRange(false);
-        yAxis.setForceZeroInRange(false);
-        xAxis.setAnimated(false);
-        xAxis.setTickLabelFormatter(ROOT_NUMBERS);
-        yAxis.setTickLabelFormatter(ROOT_NUMBERS);
-        yAxis.setAnimated(false);
+        chart.setAxisSortingPolicy(LineChart.SortingPolicy.NONE);
+        chart.getStyleClass().add("loss-plot");
         chart.titleProperty().bind(model.titleProperty());
+        legend = ChartStyling.legend(id + "-legend");
 
-        ToggleGroup xGroup = new ToggleGroup();
-        RadioButton nm = radio("nm", "plot-axis-nm", xGroup, model.axisProperty().get() == SpectralAxis.WAVELENGTH_NM);
-        RadioButton cm = radio("cm\u207B\u00B9", "plot-axis-cm", xGroup, model.axisProperty().get() == SpectralAxis.WAVENUMBER_CM);
-        nm.setOnAction(e -> model.axisProperty().set(SpectralAxis.WAVELENGTH_NM));
-        cm.setOnAction(e -> model.axisProperty().set(SpectralAxis.WAVENUMBER_CM));
-        ToggleGroup yGroup = new ToggleGroup();
-        RadioButton db = radio("dB", "plot-scale-db", yGroup, model.scaleProperty().get() == LossScale.LOSS_DB);
-        RadioButton pct = radio("% transmittance", "plot-scale-percent", yGroup,
-                model.scaleProperty().get() == LossScale.TRANSMITTANCE_PERCENT);
-        db.setOnAction(e -> model.scaleProperty().set(LossScale.LOSS_DB));
-        pct.setOnAction(e -> model.scaleProperty().set(LossScale.TRANSMITTANCE_PERCENT));
+        placeholder.setId(id + "-placeholder");
+        placeholder.getStyleClass().add("plot-placeholder");
+        placeholder.setWrapText(true);
+        placeholder.textProperty().bind(model.placeholderProperty());
+        placeholder.visibleProperty().bind(model.placeholderProperty().isNotEmpty());
 
-        Region gap = new Region();
-        HBox.setHgrow(gap, Priority.ALWAYS);
-        HBox bar = new HBox(8, new Label("x axis:"), nm, cm, gap, new Label("y axis:"), db, pct);
-        bar.setAlignment(Pos.CENTER_LEFT);
-        bar.getStyleClass().add("plot-toolbar");
+        model.axes().axisProperty().addListener((o, was, is) -> xAxis.setLabel(is.label()));
+        model.axes().scaleProperty().addListener((o, was, is) -> yAxis.setLabel(is.label()));
+        xAxis.setLabel(model.axes().axisProperty().get().label());
+        yAxis.setLabel(model.axes().scaleProperty().get().label());
+        model.linesProperty().addListener((o, was, is) -> draw(is));
+        model.xRangeProperty().addListener((o, was, is) -> ChartStyling.apply(xAxis, is));
+        model.yRangeProperty().addListener((o, was, is) -> ChartStyling.apply(yAxis, is));
+        draw(model.linesProperty().get());
+        ChartStyling.apply(xAxis, model.xRangeProperty().get());
+        ChartStyling.apply(yAxis, model.yRangeProperty().get());
 
-        model.axisProperty().addListener((o, was, is) -> {
-            xAxis.setLabel(is.label());
-            (is == SpectralAxis.WAVELENGTH_NM ? nm : cm).setSelected(true);
-        });
-        model.scaleProperty().addListener((o, was, is) -> {
-            yAxis.setLabel(is.label());
-            (is == LossScale.LOSS_DB ? db : pct).setSelected(true);
-        });
-        xAxis.setLabel(model.axisProperty().get().label());
-        yAxis.setLabel(model.scaleProperty().get().label());
-        model.pointsProperty().addListener((o, was, is) -> draw(is));
-        draw(model.pointsProperty().get());
-
-        root.setTop(bar);
-        root.setCenter(chart);
+        root.setCenter(new StackPane(chart, placeholder));
+        root.setBottom(legend);
         root.getStyleClass().add("plot-pane");
     }
 
@@ -96,19 +66,68 @@ public final class SpectrumPlotView {
         return chart;
     }
 
-    private static RadioButton radio(String text, String id, ToggleGroup group, boolean selected) {
-        RadioButton b = new RadioButton(text);
-        b.setId(id);
-        b.setToggleGroup(group);
-        b.setSelected(selected);
-        return b;
+    public FlowPane legend() {
+        return legend;
     }
 
-    private void draw(List<SpectrumPlotModel.PlotPoint> points) {
-        XYChart.Series<Number, Number> series = new XYChart.Series<>();
-        for (SpectrumPlotModel.PlotPoint p : points) {
-            series.getData().add(new XYChart.Data<>(p.x(), p.y()));
+    /**
+     * Draws the lines. When only the values changed (an edit moves the curves, the curves stay the
+     * same), the points already on the chart are moved instead of replaced: new series and new
+     * legend nodes would each go through CSS and layout, which costs more than the arithmetic.
+     */
+    private void draw(List<SpectrumPlotModel.PlotLine> lines) {
+        List<List<SpectrumPlotModel.PlotPoint>> runs = new ArrayList<>();
+        List<CurveStyle> styles = new ArrayList<>();
+        for (SpectrumPlotModel.PlotLine line : lines) {
+            for (List<SpectrumPlotModel.PlotPoint> run : line.runs()) {
+                runs.add(run);
+                styles.add(line.style());
+            }
         }
-        chart.getData().setAll(List.of(series));
+        if (styles.equals(drawnStyles) && sameShape(runs)) {
+            for (int i = 0; i < runs.size(); i++) {
+                List<XYChart.Data<Number, Number>> data = chart.getData().get(i).getData();
+                List<SpectrumPlotModel.PlotPoint> run = runs.get(i);
+                for (int k = 0; k < run.size(); k++) {
+                    data.get(k).setXValue(run.get(k).x());
+                    data.get(k).setYValue(run.get(k).y());
+                }
+            }
+        } else {
+            List<XYChart.Series<Number, Number>> all = new ArrayList<>();
+            for (List<SpectrumPlotModel.PlotPoint> run : runs) {
+                XYChart.Series<Number, Number> series = new XYChart.Series<>();
+                List<XYChart.Data<Number, Number>> data = new ArrayList<>(run.size());
+                for (SpectrumPlotModel.PlotPoint p : run) {
+                    data.add(new XYChart.Data<>(p.x(), p.y()));
+                }
+                series.getData().setAll(data);
+                all.add(series);
+            }
+            chart.getData().setAll(all);
+            for (int i = 0; i < all.size(); i++) {
+                ChartStyling.style(all.get(i), styles.get(i));
+            }
+            drawnStyles = styles;
+        }
+        List<String> labels = lines.stream().map(SpectrumPlotModel.PlotLine::label).toList();
+        List<CurveStyle> lineStyles = lines.stream().map(SpectrumPlotModel.PlotLine::style).toList();
+        if (!labels.equals(legendLabels) || !lineStyles.equals(legendStyles)) {
+            ChartStyling.fillLegend(legend, labels, lineStyles);
+            legendLabels = labels;
+            legendStyles = lineStyles;
+        }
+    }
+
+    private boolean sameShape(List<List<SpectrumPlotModel.PlotPoint>> runs) {
+        if (chart.getData().size() != runs.size()) {
+            return false;
+        }
+        for (int i = 0; i < runs.size(); i++) {
+            if (chart.getData().get(i).getData().size() != runs.get(i).size()) {
+                return false;
+            }
+        }
+        return true;
     }
 }

@@ -1,2 +1,5 @@
-/** The detail plot of a point's loss spectrum, with the axis choices remembered per user. */
+/**
+ * The point's plots (predicted loss with each element's contribution, measured against predicted,
+ * loss over time) and the axis choices they share, remembered per user.
+ */
 package org.strandbook.app.ui.plot;

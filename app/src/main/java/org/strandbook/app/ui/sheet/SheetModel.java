@@ -49,7 +49,7 @@ public final class SheetModel<R> {
     private final ObservableList<SheetRow<R>> rows = FXCollections.observableArrayList();
     private final ObservableList<SheetRow<R>> rowsView = FXCollections.unmodifiableObservableList(rows);
     private List<R> records = List.of();
-    private List<RowFigures> figures = List.of();
+    private List<RowFigures> figures = new ArrayList<>();
     private String evaluationProblem = "";
     private final Map<CellAddress, String> problems = new HashMap<>();
     private final SheetHistory<R> history = new SheetHistory<>(UNDO_LIMIT);
@@ -152,6 +152,22 @@ public final class SheetModel<R> {
     public void recompute() {
         evaluate();
         refreshCells();
+    }
+
+    /**
+     * Recomputes one row's figures. Only for evaluators whose rows do not depend on each other, such
+     * as {@link #perRow}: on a long sheet it spares every other row.
+     */
+    public void recomputeRow(int row) {
+        if (row < 0 || row >= records.size() || evaluator == null) {
+            return;
+        }
+        try {
+            figures.set(row, evaluator.apply(List.of(records.get(row))).get(0));
+        } catch (RuntimeException e) {
+            figures.set(row, RowFigures.NONE);
+        }
+        fill(rows.get(row), row);
     }
 
     /** Called with the new rows after every applied change (not after {@link #load}). */
@@ -462,7 +478,7 @@ public final class SheetModel<R> {
     private void evaluate() {
         evaluationProblem = "";
         if (evaluator == null) {
-            figures = Collections.nCopies(records.size(), RowFigures.NONE);
+            figures = new ArrayList<>(Collections.nCopies(records.size(), RowFigures.NONE));
             return;
         }
         try {
@@ -470,9 +486,9 @@ public final class SheetModel<R> {
             if (computed.size() != records.size()) {
                 throw new IllegalStateException("the evaluator returned " + computed.size() + " rows for " + records.size());
             }
-            figures = computed;
+            figures = new ArrayList<>(computed);
         } catch (RuntimeException e) {
-            figures = Collections.nCopies(records.size(), RowFigures.NONE);
+            figures = new ArrayList<>(Collections.nCopies(records.size(), RowFigures.NONE));
             evaluationProblem = "computed columns unavailable: " + Objects.requireNonNullElse(e.getMessage(), e.getClass().getSimpleName());
         }
     }

@@ -31,7 +31,6 @@ public final class DirectTaskExecutor implements TaskExecutor {
         T result;
         try {
             result = job.run(progress);
-            progress.stopIfCancelled();
         } catch (Exception e) {
             board.finished(title, e);
             if (!TaskBoard.isCancellation(e)) {
@@ -56,6 +55,11 @@ public final class DirectTaskExecutor implements TaskExecutor {
     @Override
     public ReadOnlyStringProperty messageProperty() {
         return board.messageProperty();
+    }
+
+    @Override
+    public ReadOnlyStringProperty titleProperty() {
+        return board.titleProperty();
     }
 
     /** Takes effect when the running job next checks {@link JobProgress#isCancelled()}. */

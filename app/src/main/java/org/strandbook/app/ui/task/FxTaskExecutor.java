@@ -1,9 +1,9 @@
 package org.strandbook.app.ui.task;
 
-import java.util.concurrent.CancellationException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
+import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.Consumer;
@@ -14,10 +14,17 @@ import javafx.beans.property.ReadOnlyDoubleProperty;
 import javafx.beans.property.ReadOnlyStringProperty;
 
 /**
- * Runs jobs on one background thread (so writes to the workbook file never interleave) and comes
- * back to the FX thread in exactly one place, {@link #onFx(Runnable)}.
+ * Runs jobs on one background thread (so writes to the workbook file never interleave, and the one
+ * workbook connection is only ever used from that thread) and comes back to the FX thread in
+ * exactly one place, {@link #onFx(Runnable)}.
+ *
+ * <p>Cancel is cooperative: the running job sees it through {@link JobProgress#isCancelled()}. The
+ * thread is not interrupted, because an interrupt closes any file channel the job is reading and
+ * would turn a clean stop into a reading error.
  */
 public final class FxTaskExecutor implements TaskExecutor {
+
+    private static final long CLOSE_WAIT_S = 10;
 
     private final TaskBoard board = new TaskBoard();
     private final ExecutorService worker = Executors.newSingleThreadExecutor(r -> {
@@ -25,17 +32,15 @@ public final class FxTaskExecutor implements TaskExecutor {
         t.setDaemon(true);
         return t;
     });
-    private final AtomicReference<Running> current = new AtomicReference<>();
-
-    private record Running(AtomicBoolean cancelled, Thread thread) {
-    }
+    /** The cancel flag of the running job, null between jobs. */
+    private final AtomicReference<AtomicBoolean> current = new AtomicReference<>();
 
     @Override
     public <T> void submit(String title, Job<T> job, Consumer<? super T> onSuccess, Consumer<? super Exception> onFailure) {
         board.queued();
         Future<?> ignored = worker.submit(() -> {
             AtomicBoolean cancelled = new AtomicBoolean(false);
-            current.set(new Running(cancelled, Thread.currentThread()));
+            current.set(cancelled);
             onFx(() -> board.started(title));
             JobProgress progress = new JobProgress() {
                 @Override
@@ -45,27 +50,31 @@ public final class FxTaskExecutor implements TaskExecutor {
 
                 @Override
                 public boolean isCancelled() {
-                    return cancelled.get() || Thread.currentThread().isInterrupted();
+                    return cancelled.get();
                 }
             };
             try {
                 T result = job.run(progress);
-                progress.stopIfCancelled();
                 onFx(() -> {
                     board.finished(title, null);
                     onSuccess.accept(result);
                 });
             } catch (Exception e) {
-                Exception reported = cancelled.get() ? new CancellationException() : e;
+                onFx(() -> {
+                    board.finished(title, e);
+                    if (!TaskBoard.isCancellation(e)) {
+                        onFailure.accept(e);
+                    }
+                });
+            } catch (LinkageError | AssertionError | StackOverflowError e) {
+                // a broken build or a bug: report it like a failure rather than leave the bar running
+                Exception reported = new IllegalStateException(e.toString(), e);
                 onFx(() -> {
                     board.finished(title, reported);
-                    if (!TaskBoard.isCancellation(reported)) {
-                        onFailure.accept(reported);
-                    }
+                    onFailure.accept(reported);
                 });
             } finally {
                 current.set(null);
-                Thread.interrupted();
             }
         });
     }
@@ -90,17 +99,30 @@ public final class FxTaskExecutor implements TaskExecutor {
     }
 
     @Override
-    public void cancel() {
-        Running r = current.get();
-        if (r != null) {
-            r.cancelled().set(true);
-            r.thread().interrupt();
-        }
+    public ReadOnlyStringProperty titleProperty() {
+        return board.titleProperty();
     }
 
     @Override
+    public void cancel() {
+        AtomicBoolean running = current.get();
+        if (running != null) {
+            running.set(true);
+        }
+    }
+
+    /** Cancels the running job, lets queued jobs (the closing of the workbook) run, and waits a little for them. */
+    @Override
     public void close() {
         cancel();
-        worker.shutdownNow();
+        worker.shutdown();
+        try {
+            if (!worker.awaitTermination(CLOSE_WAIT_S, TimeUnit.SECONDS)) {
+                worker.shutdownNow();
+            }
+        } catch (InterruptedException e) {
+            worker.shutdownNow();
+            Thread.currentThread().interrupt();
+        }
     }
 }

@@ -16,6 +16,7 @@ final class TaskBoard {
     private final ReadOnlyBooleanWrapper running = new ReadOnlyBooleanWrapper(this, "running", false);
     private final ReadOnlyDoubleWrapper progress = new ReadOnlyDoubleWrapper(this, "progress", 0);
     private final ReadOnlyStringWrapper message = new ReadOnlyStringWrapper(this, "message", "Ready");
+    private final ReadOnlyStringWrapper title = new ReadOnlyStringWrapper(this, "title", "");
     private int pending;
 
     ReadOnlyBooleanProperty runningProperty() {
@@ -30,14 +31,19 @@ final class TaskBoard {
         return message.getReadOnlyProperty();
     }
 
+    ReadOnlyStringProperty titleProperty() {
+        return title.getReadOnlyProperty();
+    }
+
     void queued() {
         pending++;
         running.set(true);
     }
 
-    void started(String title) {
+    void started(String jobTitle) {
+        title.set(jobTitle);
         progress.set(-1);
-        message.set(title + "\u2026");
+        message.set(jobTitle + "\u2026");
     }
 
     void progressed(String title, double fraction, String detail) {
@@ -46,6 +52,7 @@ final class TaskBoard {
     }
 
     void finished(String title, Exception failure) {
+        this.title.set("");
         pending--;
         running.set(pending > 0);
         progress.set(0);

@@ -15,7 +15,10 @@ public interface TaskExecutor extends AutoCloseable {
 
     /**
      * Runs {@code job}; on success {@code onSuccess} receives its result, on failure {@code onFailure}
-     * the exception. A cancelled job calls neither; the message property says it was cancelled.
+     * the exception. A job that stops because it saw a cancellation (it throws
+     * {@link java.util.concurrent.CancellationException}, e.g. from {@link JobProgress#stopIfCancelled()})
+     * calls neither; the message property says it was cancelled. A job that finishes is delivered
+     * even if Cancel came too late to stop it: its work is done.
      */
     <T> void submit(String title, Job<T> job, Consumer<? super T> onSuccess, Consumer<? super Exception> onFailure);
 
@@ -28,7 +31,10 @@ public interface TaskExecutor extends AutoCloseable {
     /** What the running job does, or how the last one ended. */
     ReadOnlyStringProperty messageProperty();
 
-    /** Asks the running job to stop. */
+    /** The title of the running job; empty between jobs. */
+    ReadOnlyStringProperty titleProperty();
+
+    /** Asks the running job to stop at its next check of {@link JobProgress#isCancelled()}. */
     void cancel();
 
     @Override

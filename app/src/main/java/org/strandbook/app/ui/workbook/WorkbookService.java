@@ -2,54 +2,81 @@ package org.strandbook.app.ui.workbook;
 
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
+import java.util.function.IntPredicate;
 
 import org.strandbook.app.ui.task.JobProgress;
+import org.strandbook.evaluation.PointEvaluation;
+import org.strandbook.intake.ScanFileImporter;
+import org.strandbook.intake.ScheduleImporter;
+import org.strandbook.site.ConnectorType;
 import org.strandbook.site.FiberType;
 import org.strandbook.site.MeasurementPoint;
+import org.strandbook.site.PathLeg;
+import org.strandbook.site.ProbeType;
 import org.strandbook.site.ScanRecord;
+import org.strandbook.site.Site;
 
 /**
- * Everything the window asks of the open workbook. View models call it only inside jobs of a
+ * Everything the window asks of the open workbook file. View models call it only inside jobs of a
  * {@link org.strandbook.app.ui.task.TaskExecutor}, never on the FX thread, so an implementation
- * may block on the workbook file. Implementations must be safe to call from that one background
- * thread while the FX thread holds the records they returned (records are immutable).
- * Failures throw {@link WorkbookProblem} (or any exception) with a message for the status bar.
+ * may block on the file; the executor's single worker thread is the only thread that reaches the
+ * workbook connection. Values returned are immutable records the FX thread may keep.
+ * Failures throw {@link WorkbookProblem} or the store's exceptions, with a message for the user.
  */
-public interface WorkbookService {
+public interface WorkbookService extends AutoCloseable {
 
-    SiteOutline loadOutline();
+    /** Opens a workbook; the one open before stays open if this fails. */
+    LoadedSite open(Path file, JobProgress progress);
 
-    Catalog loadCatalog();
+    /** Creates an empty workbook for {@code site} at {@code file} (which must not exist) and opens it. */
+    LoadedSite create(Path file, Site site, JobProgress progress);
 
-    /** The rows of one point; throws {@link WorkbookProblem} for an unknown tag. */
-    PointRecords loadPoint(String pointTag);
+    /** Opens the invented sample plant in {@code folder}, building it there first if it is not there yet. */
+    LoadedSite openSample(Path folder, JobProgress progress);
 
-    /** Replaces the site's points (tags unchanged; the sheet does not rename points). */
+    /** Reads the open workbook again. */
+    LoadedSite reload(JobProgress progress);
+
+    /**
+     * Copies the open workbook to {@code file}, complete or not at all, and continues in the copy.
+     *
+     * @return the copy, now open
+     */
+    Path saveAs(Path file, JobProgress progress);
+
+    /** The open workbook's file, if one is open. */
+    Optional<Path> file();
+
+    /** The point's scans, without spectra, oldest first. */
+    List<ScanRecord> scans(String pointTag);
+
+    /** Saves changed points (tags unchanged) in one transaction. */
     void savePoints(List<MeasurementPoint> points);
 
-    /** Replaces one point's segments and joints, in the sheets' order within each leg. */
-    void saveLegs(String pointTag, List<LegSegment> segments, List<LegJoint> joints);
+    /** Replaces the point's legs as a whole. */
+    void saveLegs(String pointTag, List<PathLeg> legs);
 
-    void saveFiberTypes(List<FiberType> fibers);
+    /** Saves changed catalog entries (codes unchanged) in one transaction. */
+    void saveCatalog(List<FiberType> fibers, List<ConnectorType> connectors, List<ProbeType> probes);
 
-    /** The predicted loss of one point from what is stored now. */
-    PointBudget evaluate(String pointTag, JobProgress progress);
+    /** Evaluates one point from what is stored: prediction, latest measurement, diagnosis, trends. */
+    PointEvaluation evaluatePoint(String pointTag);
 
-    /** The predicted loss of every point, by tag. */
-    Map<String, PointBudget> evaluateSite(JobProgress progress);
+    /**
+     * Evaluates the given points in order, telling {@code pointDone} the count done after each;
+     * it returns false to stop. Points that cannot be evaluated get a status saying why.
+     */
+    List<PointStatus> evaluatePoints(List<String> pointTags, IntPredicate pointDone);
 
-    /** Reads scan files for a point and stores them; returns the point's scans afterwards. */
-    List<ScanRecord> importScans(String pointTag, List<Path> files, JobProgress progress);
+    ScanFileImporter.Summary importScans(ScanFileImporter.Request request, ScanFileImporter.Progress progress);
 
-    /** Starts an empty workbook (catalogs kept). */
-    void newWorkbook();
+    /** Imports a filled cable schedule; nothing is written when it has problems. */
+    ScheduleImporter.Outcome importSchedule(Path file);
 
-    void open(Path file);
+    void exportDossier(DossierExport export, Path target, JobProgress progress) throws Exception;
 
-    void saveAs(Path file);
-
-    /** The file the workbook was opened from or last saved to. */
-    Optional<Path> file();
+    /** Closes the workbook file. */
+    @Override
+    void close();
 }

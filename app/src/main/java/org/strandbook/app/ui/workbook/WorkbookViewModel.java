@@ -1,12 +1,15 @@
 package org.strandbook.app.ui.workbook;
 
+import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
+import java.util.function.Function;
 
 import javafx.beans.property.ReadOnlyBooleanProperty;
 import javafx.beans.property.ReadOnlyBooleanWrapper;
@@ -15,106 +18,138 @@ import javafx.beans.property.ReadOnlyObjectWrapper;
 import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
 
-import org.strandbook.app.ui.plot.SpectrumPlotModel;
+import org.strandbook.app.ui.catalog.ConnectorSheet;
+import org.strandbook.app.ui.catalog.FiberSheet;
+import org.strandbook.app.ui.catalog.ProbeSheet;
+import org.strandbook.app.ui.plot.PlotAxes;
 import org.strandbook.app.ui.safety.SafetyCaution;
-import org.strandbook.app.ui.sheet.CellFormats;
-import org.strandbook.app.ui.sheet.Figure;
-import org.strandbook.app.ui.sheet.RowFigures;
 import org.strandbook.app.ui.sheet.SheetModel;
-import org.strandbook.app.ui.sheet.Verdict;
 import org.strandbook.app.ui.task.JobProgress;
 import org.strandbook.app.ui.task.TaskExecutor;
+import org.strandbook.intake.ScheduleImporter;
+import org.strandbook.schedule.ScheduleProblem;
 import org.strandbook.site.Analyzer;
+import org.strandbook.site.ConnectorType;
 import org.strandbook.site.FiberType;
 import org.strandbook.site.MeasurementPoint;
-import org.strandbook.site.ScanRecord;
+import org.strandbook.site.ProbeType;
 import org.strandbook.site.Site;
-import org.strandbook.site.WavelengthBand;
 
 /**
- * The window's view model: which workbook and point are shown, the sheets of that point, the plot
- * and the messages. Every call to the {@link WorkbookService} runs as a job of the
- * {@link TaskExecutor}; results come back on the executor's delivery thread (the FX thread in the
- * window), where this class and its sheets live.
+ * The window's view model: which workbook is open, the site's sheets (points and catalogs), the
+ * selected point ({@link PointViewModel}) and the messages. Every call to the
+ * {@link WorkbookService} runs as a job of the {@link TaskExecutor}; results come back on the
+ * executor's delivery thread (the FX thread in the window), where this class and its sheets live.
  *
- * <p>Each applied sheet change is saved at once (a workbook, not a document to remember to save)
- * and the point re-evaluated; the points sheet's computed columns follow from the last evaluation
- * and the row's own tolerance and analyzer, so they change as soon as either is typed.
+ * <p>Each applied sheet change is taken into the site in memory at once, where the predictions
+ * follow, and saved in the background (a workbook, not a document to remember to save). After a
+ * workbook opens, its points are evaluated against their scans in small batches, so that a point
+ * chosen meanwhile is not kept waiting behind the whole site.
  */
 public final class WorkbookViewModel {
 
-    private record Loaded(SiteOutline outline, Catalog catalog, Map<String, PointBudget> budgets, Optional<Path> file) {
+    /** Points evaluated per background job when the whole site is evaluated. */
+    static final int SITE_BATCH = 5;
+
+    private record ScheduleImport(ScheduleImporter.Outcome outcome, LoadedSite loaded) {
+    }
+
+    private record Batch(List<PointStatus> statuses, boolean stopped) {
     }
 
     private final WorkbookService service;
     private final TaskExecutor tasks;
-    private final SpectrumPlotModel plot;
     private final RecentFiles recent;
+    private final Path sampleFolder;
+    private final Optional<DossierExport> dossier;
     private final SafetyCaution caution = new SafetyCaution();
-
-    private SiteOutline outline = new SiteOutline(new Site("No workbook"), List.of(), List.of());
-    private Catalog catalog = Catalog.EMPTY;
-    private final Map<String, PointBudget> budgets = new HashMap<>();
-    private MeasurementPoint point;
-    private Optional<Path> file = Optional.empty();
-
-    private final ReadOnlyObjectWrapper<SiteOutline> outlineProperty = new ReadOnlyObjectWrapper<>(this, "outline", outline);
-    private final ReadOnlyStringWrapper selectedTag = new ReadOnlyStringWrapper(this, "selectedTag", "");
-    private final ReadOnlyStringWrapper pointContext = new ReadOnlyStringWrapper(this, "pointContext", "No point selected");
-    private final ReadOnlyStringWrapper budgetSummary = new ReadOnlyStringWrapper(this, "budgetSummary", "");
-    private final ReadOnlyObjectWrapper<Verdict> budgetVerdict = new ReadOnlyObjectWrapper<>(this, "budgetVerdict");
-    private final ReadOnlyStringWrapper notice = new ReadOnlyStringWrapper(this, "notice", "");
-    private final ReadOnlyStringWrapper title = new ReadOnlyStringWrapper(this, "title", "Strandbook");
-    private final ReadOnlyObjectWrapper<List<Path>> recentFiles = new ReadOnlyObjectWrapper<>(this, "recentFiles", List.of());
-    private final ReadOnlyBooleanWrapper lightSourceOn = new ReadOnlyBooleanWrapper(this, "lightSourceOn", false);
+    private final OpenSite site = new OpenSite();
+    private final Map<String, PointStatus> measured = new HashMap<>();
+    private final Map<String, Integer> pointRow = new HashMap<>();
+    private int siteRun;
+    private boolean evaluateOnOpen = true;
 
     private final SheetModel<MeasurementPoint> points;
-    private final SheetModel<LegSegment> segments;
-    private final SheetModel<LegJoint> joints;
-    private final SheetModel<ScanRecord> scans;
-    private final SheetModel<FiberType> fibers;
+    private final SheetModel<FiberType> fibers = FiberSheet.create();
+    private final SheetModel<ConnectorType> connectors = ConnectorSheet.create();
+    private final SheetModel<ProbeType> probes = ProbeSheet.create();
+    private final PointViewModel point;
 
-    public WorkbookViewModel(WorkbookService service, TaskExecutor tasks, SpectrumPlotModel plot, RecentFiles recent) {
+    private final ReadOnlyObjectWrapper<SiteOutline> outline = new ReadOnlyObjectWrapper<>(this, "outline",
+            new SiteOutline(site.site(), List.of(), List.of()));
+    private final ReadOnlyBooleanWrapper open = new ReadOnlyBooleanWrapper(this, "open", false);
+    private final ReadOnlyStringWrapper selectedTag = new ReadOnlyStringWrapper(this, "selectedTag", "");
+    private final ReadOnlyStringWrapper notice = new ReadOnlyStringWrapper(this, "notice", "");
+    private final ReadOnlyStringWrapper title = new ReadOnlyStringWrapper(this, "title", "Strandbook \u2013 no workbook open");
+    private final ReadOnlyObjectWrapper<List<Path>> recentFiles = new ReadOnlyObjectWrapper<>(this, "recentFiles", List.of());
+    private final ReadOnlyObjectWrapper<List<String>> scheduleProblems = new ReadOnlyObjectWrapper<>(this,
+            "scheduleProblems", List.of());
+    private final ReadOnlyBooleanWrapper lightSourceOn = new ReadOnlyBooleanWrapper(this, "lightSourceOn", false);
+
+    /**
+     * @param sampleFolder where the sample site is built when the user asks for it
+     * @param dossier      the dossier export, when this build has one
+     */
+    public WorkbookViewModel(WorkbookService service, TaskExecutor tasks, PlotAxes axes, RecentFiles recent,
+                             Path sampleFolder, Optional<DossierExport> dossier) {
         this.service = service;
         this.tasks = tasks;
-        this.plot = plot;
         this.recent = recent;
-        this.points = PointSheet.create(() -> outline, () -> catalog, this::pointFigures);
-        this.segments = SegmentSheet.create(() -> catalog, this::centreNm);
-        this.joints = JointSheet.create(() -> catalog);
-        this.scans = ScanSheet.create();
-        this.fibers = FiberSheet.create();
-        points.addChangeListener(this::savePoints);
-        segments.addChangeListener(rows -> saveLegs());
-        joints.addChangeListener(rows -> saveLegs());
-        fibers.addChangeListener(this::saveFibers);
+        this.sampleFolder = sampleFolder;
+        this.dossier = dossier;
+        this.points = PointSheet.create(() -> site.analyzers().stream().map(Analyzer::tag).toList(),
+                () -> site.probes().stream().map(ProbeType::code).toList(),
+                p -> PointSheet.figures(site.predict(p), measured.get(p.tag())));
+        this.point = new PointViewModel(site, service, tasks, axes, new PointEvents() {
+            @Override
+            public void legsChanged(String pointTag) {
+                recomputePointRow(pointTag);
+            }
+
+            @Override
+            public void evaluated(PointStatus status) {
+                measured.put(status.pointTag(), status);
+                recomputePointRow(status.pointTag());
+            }
+
+            @Override
+            public void saveFailed(Exception e) {
+                failAndReload(e);
+            }
+
+            @Override
+            public void failed(Exception e) {
+                fail(e);
+            }
+        });
+        points.addChangeListener(this::pointsEdited);
+        fibers.addChangeListener(rows -> catalogEdited(rows, site.connectors(), site.probes()));
+        connectors.addChangeListener(rows -> catalogEdited(site.fibers(), rows, site.probes()));
+        probes.addChangeListener(rows -> catalogEdited(site.fibers(), site.connectors(), rows));
         recentFiles.set(recent.list());
     }
 
-    // ---- sheets and properties
+    // ---- sheets, plots and properties
 
     public SheetModel<MeasurementPoint> points() {
         return points;
-    }
-
-    public SheetModel<LegSegment> segments() {
-        return segments;
-    }
-
-    public SheetModel<LegJoint> joints() {
-        return joints;
-    }
-
-    public SheetModel<ScanRecord> scans() {
-        return scans;
     }
 
     public SheetModel<FiberType> fibers() {
         return fibers;
     }
 
-    public SpectrumPlotModel plot() {
-        return plot;
+    public SheetModel<ConnectorType> connectors() {
+        return connectors;
+    }
+
+    public SheetModel<ProbeType> probes() {
+        return probes;
+    }
+
+    /** The selected point's sheets and plots. */
+    public PointViewModel point() {
+        return point;
     }
 
     public TaskExecutor tasks() {
@@ -125,25 +160,29 @@ public final class WorkbookViewModel {
         return caution;
     }
 
+    public Path sampleFolder() {
+        return sampleFolder;
+    }
+
+    public boolean dossierAvailable() {
+        return dossier.isPresent();
+    }
+
+    public Optional<String> dossierExtension() {
+        return dossier.map(DossierExport::extension);
+    }
+
     public ReadOnlyObjectProperty<SiteOutline> outlineProperty() {
-        return outlineProperty.getReadOnlyProperty();
+        return outline.getReadOnlyProperty();
+    }
+
+    /** True while a workbook is open; without one the window offers to open or start one. */
+    public ReadOnlyBooleanProperty openProperty() {
+        return open.getReadOnlyProperty();
     }
 
     public ReadOnlyStringProperty selectedTagProperty() {
         return selectedTag.getReadOnlyProperty();
-    }
-
-    /** One line naming the point and its band, shown above its sheets. */
-    public ReadOnlyStringProperty pointContextProperty() {
-        return pointContext.getReadOnlyProperty();
-    }
-
-    public ReadOnlyStringProperty budgetSummaryProperty() {
-        return budgetSummary.getReadOnlyProperty();
-    }
-
-    public ReadOnlyObjectProperty<Verdict> budgetVerdictProperty() {
-        return budgetVerdict.getReadOnlyProperty();
     }
 
     /** The last failure or refusal worth telling the user about. */
@@ -159,56 +198,181 @@ public final class WorkbookViewModel {
         return recentFiles.getReadOnlyProperty();
     }
 
+    /** The problems of the last refused cable schedule, one line each (sheet!cell: what is wrong). */
+    public ReadOnlyObjectProperty<List<String>> scheduleProblemsProperty() {
+        return scheduleProblems.getReadOnlyProperty();
+    }
+
     public ReadOnlyBooleanProperty lightSourceOnProperty() {
         return lightSourceOn.getReadOnlyProperty();
     }
 
-    // ---- actions
-
-    /** Loads the open workbook and shows its first point. */
-    public void start() {
-        tasks.submit("Opening workbook", this::loadAll, this::onLoaded, this::fail);
+    /** The open workbook's file. */
+    public Optional<Path> file() {
+        return site.file();
     }
 
-    public void selectPoint(String tag) {
-        if (tag == null || (point != null && tag.equals(point.tag()))) {
+    /** Whether opening a workbook evaluates its points against their scans at once (on by default). */
+    public void setEvaluateOnOpen(boolean evaluate) {
+        evaluateOnOpen = evaluate;
+    }
+
+    // ---- workbook actions
+
+    /**
+     * What the window does first: opens {@code requested}, else the most recent workbook that still
+     * exists; with neither, the window offers the sample site.
+     */
+    public void start(Optional<Path> requested) {
+        if (requested.isPresent()) {
+            open(requested.get());
             return;
         }
-        tasks.submit("Loading " + tag, p -> service.loadPoint(tag), this::showPoint, this::fail);
-    }
-
-    public void newWorkbook() {
-        tasks.submit("New workbook", p -> {
-            service.newWorkbook();
-            return loadAll(p);
-        }, this::onLoaded, this::fail);
+        recent.list().stream().filter(Files::isRegularFile).findFirst().ifPresentOrElse(this::open,
+                () -> notice.set("No workbook open: open one, start a new one, or look around the sample site"));
     }
 
     public void open(Path file) {
-        tasks.submit("Opening " + file.getFileName(), p -> {
-            service.open(file);
-            return loadAll(p);
-        }, loaded -> {
-            remember(file);
+        run("Opening " + file.getFileName(), p -> service.open(file, p));
+    }
+
+    /** Opens the sample site in the given folder, building it there first when it is not there yet. */
+    public void openSample(Path folder) {
+        run("Opening the sample site", p -> service.openSample(folder, p));
+    }
+
+    public void createWorkbook(Path file, String siteName) {
+        Site newSite;
+        try {
+            newSite = new Site(siteName);
+        } catch (IllegalArgumentException e) {
+            fail(e);
+            return;
+        }
+        tasks.submit("Creating " + file.getFileName(), p -> service.create(file, newSite, p), loaded -> {
             onLoaded(loaded);
+            notice.set("New workbook for " + newSite.name() + ": import the contractor's cable schedule "
+                    + "(File \u25B8 Import cable schedule) to fill it");
         }, this::fail);
     }
 
     public void saveAs(Path file) {
-        tasks.submit("Saving as " + file.getFileName(), p -> {
-            service.saveAs(file);
-            return file;
-        }, saved -> {
+        if (!site.isOpen()) {
+            notice.set("No workbook is open to save");
+            return;
+        }
+        tasks.submit("Saving a copy as " + file.getFileName(), p -> service.saveAs(file, p), saved -> {
+            site.setFile(saved);
             remember(saved);
-            this.file = Optional.of(saved);
             updateTitle();
+            notice.set("Saved as " + saved + "; you are now working in the copy");
         }, this::fail);
     }
 
+    /** Imports a filled cable schedule; a refused schedule's problems appear in {@link #scheduleProblemsProperty()}. */
+    public void importSchedule(Path file) {
+        if (!site.isOpen()) {
+            notice.set("Open or start a workbook before importing a cable schedule");
+            return;
+        }
+        tasks.submit("Importing cable schedule " + file.getFileName(), p -> {
+            ScheduleImporter.Outcome outcome = service.importSchedule(file);
+            return new ScheduleImport(outcome, outcome.written() ? service.reload(p) : null);
+        }, done -> {
+            if (done.outcome().written()) {
+                scheduleProblems.set(List.of());
+                onLoaded(done.loaded());
+                notice.set(String.format(Locale.ROOT, "Cable schedule imported: %d analyzers, %d points, %d legs, %d new catalog entries",
+                        done.outcome().analyzers(), done.outcome().points(), done.outcome().legs(),
+                        done.outcome().catalogEntries()));
+            } else {
+                scheduleProblems.set(done.outcome().problems().stream().map(ScheduleProblem::toString).toList());
+                notice.set("Cable schedule " + file.getFileName() + " refused with " + done.outcome().problems().size()
+                        + " problem(s); nothing was written");
+            }
+        }, this::fail);
+    }
+
+    public void exportDossier(Path target) {
+        if (dossier.isEmpty() || !site.isOpen()) {
+            notice.set("The dossier export is not part of this build");
+            return;
+        }
+        tasks.submit("Writing the dossier " + target.getFileName(), p -> {
+            service.exportDossier(dossier.get(), target, p);
+            return target;
+        }, done -> notice.set("Dossier written to " + done), this::fail);
+    }
+
+    /** Evaluates every point against its scans, a few points per background job; Cancel stops it. */
+    public void evaluateSite() {
+        if (!site.isOpen()) {
+            return;
+        }
+        int run = ++siteRun;
+        evaluateBatch(run, site.points().stream().map(MeasurementPoint::tag).toList(), 0);
+    }
+
+    private void evaluateBatch(int run, List<String> tags, int from) {
+        if (from >= tags.size()) {
+            return;
+        }
+        int to = Math.min(tags.size(), from + SITE_BATCH);
+        List<String> batch = List.copyOf(tags.subList(from, to));
+        int total = tags.size();
+        tasks.submit("Evaluating the site", p -> {
+            p.update((double) from / total, from + " of " + total + " points");
+            List<PointStatus> done = service.evaluatePoints(batch, n -> {
+                p.update((double) (from + n) / total, (from + n) + " of " + total + " points");
+                return !p.isCancelled();
+            });
+            return new Batch(done, p.isCancelled());
+        }, batchDone -> {
+            if (run != siteRun) {
+                return;
+            }
+            batchDone.statuses().forEach(s -> {
+                measured.put(s.pointTag(), s);
+                recomputePointRow(s.pointTag());
+            });
+            int reached = from + batchDone.statuses().size();
+            if (batchDone.stopped()) {
+                notice.set("Site evaluation stopped after " + reached + " of " + total + " points");
+            } else if (reached < total) {
+                evaluateBatch(run, tags, reached);
+            } else {
+                long failing = measured.values().stream().filter(s -> s.status().map(st -> st.name().equals("FAIL"))
+                        .orElse(false)).count();
+                notice.set("Site evaluated: " + total + " points, " + failing + " failing");
+            }
+        }, this::fail);
+    }
+
+    public void selectPoint(String tag) {
+        if (tag == null || tag.equals(selectedTag.get())) {
+            return;
+        }
+        site.point(tag).ifPresent(p -> {
+            selectedTag.set(p.tag());
+            point.show(p);
+        });
+    }
+
+    /** Closes the workbook file once the jobs before this one are done. */
+    public void close() {
+        siteRun++;
+        tasks.submit("Closing the workbook", p -> {
+            service.close();
+            return Boolean.TRUE;
+        }, done -> { }, this::fail);
+    }
+
+    // ---- safety
+
     /** Why the user must read the safety caution before recording a measurement now, if they must. */
     public Optional<String> cautionBeforeRecording() {
-        return point != null && point.hazardousArea() && caution.needed()
-                ? Optional.of(SafetyCaution.reasonForHazardousPoint(point.tag())) : Optional.empty();
+        return point.point().filter(p -> p.hazardousArea() && caution.needed())
+                .map(p -> SafetyCaution.reasonForHazardousPoint(p.tag()));
     }
 
     /** Why the user must read the safety caution before switching the light source on, if they must. */
@@ -222,155 +386,111 @@ public final class WorkbookViewModel {
         notice.set(on ? "Light source step: ON \u2013 do not view fiber ends or open joints" : "Light source step: off");
     }
 
-    /** Records measurement files for the shown point; the view asks {@link #cautionBeforeRecording()} first. */
-    public void recordMeasurement(List<Path> files) {
-        if (point == null || files.isEmpty()) {
-            return;
-        }
-        String tag = point.tag();
-        tasks.submit("Recording " + files.size() + " scan file" + (files.size() == 1 ? "" : "s") + " for " + tag,
-                p -> service.importScans(tag, files, p), scans::load, this::fail);
+    /**
+     * The scan import for the selected point; the view asks {@link #cautionBeforeRecording()} first.
+     * Empty when no point is selected.
+     */
+    public Optional<ScanImportViewModel> recordMeasurement() {
+        return point.point().map(p -> new ScanImportViewModel(service, tasks, p.tag(), operator(), summary ->
+                point.refreshMeasurements()));
+    }
+
+    private static String operator() {
+        return Objects.requireNonNullElse(System.getProperty("user.name"), "");
     }
 
     // ---- internals
 
-    private Loaded loadAll(JobProgress progress) {
-        SiteOutline o = service.loadOutline();
-        Catalog c = service.loadCatalog();
-        return new Loaded(o, c, service.evaluateSite(progress), service.file());
+    private void run(String title, Function<JobProgress, LoadedSite> load) {
+        tasks.submit(title, load::apply, this::onLoaded, this::fail);
     }
 
-    private void onLoaded(Loaded loaded) {
-        outline = loaded.outline();
-        catalog = loaded.catalog();
-        this.file = loaded.file();
-        budgets.clear();
-        budgets.putAll(loaded.budgets());
-        points.load(outline.points());
-        fibers.load(catalog.fibers());
-        String keep = point == null ? null : point.tag();
-        point = null;
-        outlineProperty.set(outline);
+    private void onLoaded(LoadedSite loaded) {
+        boolean sameFile = site.file().map(f -> f.equals(loaded.file())).orElse(false);
+        String keep = sameFile ? selectedTag.get() : "";
+        site.load(loaded);
+        if (!sameFile) {
+            measured.clear();
+        }
+        pointRow.clear();
+        List<MeasurementPoint> list = site.points();
+        for (int i = 0; i < list.size(); i++) {
+            pointRow.put(list.get(i).tag(), i);
+        }
+        points.load(list);
+        fibers.load(site.fibers());
+        connectors.load(site.connectors());
+        probes.load(site.probes());
+        outline.set(new SiteOutline(site.site(), site.analyzers(), list));
+        open.set(true);
+        remember(loaded.file());
         updateTitle();
-        Optional<MeasurementPoint> next = keep == null ? Optional.empty() : outline.point(keep);
-        if (next.isEmpty() && !outline.points().isEmpty()) {
-            next = Optional.of(outline.points().get(0));
-        }
-        if (next.isPresent()) {
-            selectPoint(next.get().tag());
+        selectedTag.set("");
+        Optional<MeasurementPoint> show = site.point(keep).or(() -> list.stream().findFirst());
+        if (show.isPresent()) {
+            selectedTag.set(show.get().tag());
+            point.show(show.get());
         } else {
-            selectedTag.set("");
-            segments.load(List.of());
-            joints.load(List.of());
-            scans.load(List.of());
-            pointContext.set("No point selected");
-            budgetSummary.set("");
-            budgetVerdict.set(null);
-            plot.clear("No point selected");
+            point.clear();
+        }
+        if (evaluateOnOpen) {
+            evaluateSite();
         }
     }
 
-    private void showPoint(PointRecords records) {
-        point = records.point();
-        selectedTag.set(point.tag());
-        WavelengthBand band = point.bands().get(0);
-        pointContext.set(point.tag() + " \u00B7 " + point.service() + " \u00B7 band " + PointSheet.bandText(band)
-                + " nm, centre " + CellFormats.plain(band.centreNm()) + " nm"
-                + (point.hazardousArea() ? " \u00B7 \u26A0 hazardous area" : ""));
-        segments.load(records.segments());
-        joints.load(records.joints());
-        scans.load(records.scans());
-        PointBudget known = budgets.get(point.tag());
-        if (known != null) {
-            showBudget(known);
-        } else {
-            String tag = point.tag();
-            tasks.submit("Evaluating " + tag, p -> service.evaluate(tag, p), this::showBudget, this::fail);
-        }
-    }
-
-    private void savePoints(List<MeasurementPoint> rows) {
-        tasks.submit("Saving points", p -> {
-            service.savePoints(rows);
-            return loadAll(p);
-        }, loaded -> {
-            outline = loaded.outline();
-            budgets.clear();
-            budgets.putAll(loaded.budgets());
-            outlineProperty.set(outline);
-            if (point != null) {
-                outline.point(point.tag()).ifPresent(p -> point = p);
-                Optional.ofNullable(budgets.get(point.tag())).ifPresent(this::showBudget);
-            }
-            points.recompute();
-        }, this::fail);
-    }
-
-    private void saveLegs() {
-        if (point == null) {
+    private void pointsEdited(List<MeasurementPoint> rows) {
+        List<MeasurementPoint> changed = site.replacePoints(rows);
+        if (changed.isEmpty()) {
             return;
         }
-        String tag = point.tag();
-        List<LegSegment> s = segments.records();
-        List<LegJoint> j = joints.records();
-        tasks.submit("Saving light path of " + tag, p -> {
-            service.saveLegs(tag, s, j);
-            return service.evaluate(tag, p);
-        }, this::showBudget, this::fail);
+        changed.forEach(point::pointEdited);
+        if (changed.stream().anyMatch(this::treeChanged)) {
+            outline.set(new SiteOutline(site.site(), site.analyzers(), site.points()));
+        }
+        tasks.submit("Saving " + changed.size() + " point" + (changed.size() == 1 ? "" : "s"), p -> {
+            service.savePoints(changed);
+            return changed;
+        }, done -> { }, this::failAndReload);
     }
 
-    private void saveFibers(List<FiberType> rows) {
-        tasks.submit("Saving fiber catalog", p -> {
-            service.saveFiberTypes(rows);
-            return loadAll(p);
-        }, loaded -> {
-            catalog = loaded.catalog();
-            budgets.clear();
-            budgets.putAll(loaded.budgets());
-            segments.recompute();
-            joints.recompute();
-            points.recompute();
-            if (point != null) {
-                Optional.ofNullable(budgets.get(point.tag())).ifPresent(this::showBudget);
-            }
-        }, this::fail);
+    private boolean treeChanged(MeasurementPoint changed) {
+        return outline.get().point(changed.tag()).map(before -> !before.analyzerTag().equals(changed.analyzerTag())
+                || before.channel() != changed.channel() || before.hazardousArea() != changed.hazardousArea()).orElse(true);
     }
 
-    private void showBudget(PointBudget budget) {
-        budgets.put(budget.pointTag(), budget);
+    private void catalogEdited(List<FiberType> f, List<ConnectorType> c, List<ProbeType> p) {
+        List<FiberType> changedFibers = changed(site.fibers(), f);
+        List<ConnectorType> changedConnectors = changed(site.connectors(), c);
+        List<ProbeType> changedProbes = changed(site.probes(), p);
+        site.setCatalog(f, c, p);
         points.recompute();
-        if (point == null || !budget.pointTag().equals(point.tag())) {
-            return;
-        }
-        double allowed = outline.analyzer(point.analyzerTag()).map(Analyzer::allowedLossDb).orElse(budget.allowedLossDb());
-        double margin = allowed - budget.predictedLossDb();
-        Verdict verdict = MarginVerdict.of(margin, point.effectiveToleranceDb(outline.site()));
-        budgetVerdict.set(verdict);
-        budgetSummary.set(String.format(Locale.ROOT,
-                "%s  %s: predicted %.2f dB at %s nm, allowed %.1f dB, margin %.2f dB (%s)",
-                verdict.label(), point.tag(), budget.predictedLossDb(), CellFormats.plain(budget.centreNm()),
-                allowed, margin, budget.basis()));
-        plot.show("Predicted round-trip loss, " + point.tag(), budget.wavelengthsNm(), budget.lossDb());
+        point.catalogChanged();
+        tasks.submit("Saving the catalog", job -> {
+            service.saveCatalog(changedFibers, changedConnectors, changedProbes);
+            return Boolean.TRUE;
+        }, done -> { }, this::failAndReload);
     }
 
-    private List<RowFigures> pointFigures(List<MeasurementPoint> rows) {
-        return rows.stream().map(p -> {
-            PointBudget b = budgets.get(p.tag());
-            Optional<Analyzer> a = outline.analyzer(p.analyzerTag());
-            if (b == null || a.isEmpty()) {
-                return new RowFigures(Map.of(PointSheet.STATUS, Figure.text("not evaluated")));
+    private static <T> List<T> changed(List<T> before, List<T> after) {
+        List<T> out = new ArrayList<>();
+        for (int i = 0; i < after.size(); i++) {
+            if (i >= before.size() || !after.get(i).equals(before.get(i))) {
+                out.add(after.get(i));
             }
-            double margin = a.get().allowedLossDb() - b.predictedLossDb();
-            return new RowFigures(Map.of(
-                    PointSheet.PREDICTED, Figure.number(b.predictedLossDb(), 2),
-                    PointSheet.ALLOWED, Figure.number(a.get().allowedLossDb(), 1),
-                    PointSheet.MARGIN, Figure.number(margin, 2),
-                    PointSheet.STATUS, Figure.of(MarginVerdict.of(margin, p.effectiveToleranceDb(outline.site())))));
-        }).toList();
+        }
+        return out;
     }
 
-    private double centreNm() {
-        return point == null ? Double.NaN : point.bands().get(0).centreNm();
+    private void recomputePointRow(String tag) {
+        Integer row = pointRow.get(tag);
+        if (row != null) {
+            points.recomputeRow(row);
+        }
+    }
+
+    private void failAndReload(Exception e) {
+        notice.set("Not saved: " + message(e) + ". The sheets now show what the workbook holds.");
+        tasks.submit("Reading the workbook again", service::reload, this::onLoaded, this::fail);
     }
 
     private void remember(Path file) {
@@ -379,11 +499,15 @@ public final class WorkbookViewModel {
     }
 
     private void updateTitle() {
-        title.set("Strandbook \u2013 " + outline.site().name() + " \u2013 "
-                + file.map(f -> f.getFileName().toString()).orElse("not saved to a file"));
+        title.set("Strandbook \u2013 " + site.site().name() + " \u2013 "
+                + site.file().map(f -> f.getFileName().toString()).orElse("no file"));
     }
 
     private void fail(Exception e) {
-        notice.set(Objects.requireNonNullElse(e.getMessage(), e.getClass().getSimpleName()));
+        notice.set(message(e));
+    }
+
+    private static String message(Exception e) {
+        return Objects.requireNonNullElse(e.getMessage(), e.getClass().getSimpleName());
     }
 }

@@ -5,8 +5,10 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
+import java.util.Optional;
 
 import javafx.beans.binding.Bindings;
+import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.css.PseudoClass;
 import javafx.geometry.Insets;
 import javafx.geometry.Orientation;
@@ -17,7 +19,9 @@ import javafx.scene.Scene;
 import javafx.scene.control.Alert;
 import javafx.scene.control.Button;
 import javafx.scene.control.ButtonType;
+import javafx.scene.control.CustomMenuItem;
 import javafx.scene.control.Label;
+import javafx.scene.control.ListView;
 import javafx.scene.control.Menu;
 import javafx.scene.control.MenuBar;
 import javafx.scene.control.MenuItem;
@@ -26,38 +30,53 @@ import javafx.scene.control.SeparatorMenuItem;
 import javafx.scene.control.SplitPane;
 import javafx.scene.control.Tab;
 import javafx.scene.control.TabPane;
+import javafx.scene.control.TextInputDialog;
 import javafx.scene.control.ToggleButton;
 import javafx.scene.control.Tooltip;
 import javafx.scene.control.TreeItem;
 import javafx.scene.control.TreeView;
 import javafx.scene.input.KeyCombination;
 import javafx.scene.layout.BorderPane;
+import javafx.scene.layout.ColumnConstraints;
+import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
+import javafx.scene.layout.RowConstraints;
+import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
+import javafx.stage.DirectoryChooser;
 import javafx.stage.FileChooser;
 import javafx.stage.Screen;
 import javafx.stage.Stage;
 
+import org.strandbook.app.ui.path.LegJoint;
+import org.strandbook.app.ui.path.LegSegment;
+import org.strandbook.app.ui.plot.PlotAxesBar;
 import org.strandbook.app.ui.plot.SpectrumPlotView;
+import org.strandbook.app.ui.plot.TrendPlotView;
 import org.strandbook.app.ui.safety.SafetyCaution;
 import org.strandbook.app.ui.safety.SafetyCautionDialog;
 import org.strandbook.app.ui.sheet.SheetView;
 import org.strandbook.app.ui.sheet.Verdict;
+import org.strandbook.site.ConnectorType;
 import org.strandbook.site.FiberType;
 import org.strandbook.site.MeasurementPoint;
+import org.strandbook.site.ProbeType;
 import org.strandbook.site.ScanRecord;
 
 /**
- * The workbook window: menu, site tree, the point's sheets in tabs, the loss plot and the status
- * bar with progress and Cancel. It binds to a {@link WorkbookViewModel} and holds no rules of its own.
+ * The workbook window: menu, site tree, the sheets in tabs, the selected point's three plots and
+ * the status bar with progress and Cancel. Without an open workbook it offers the sample site. It
+ * binds to a {@link WorkbookViewModel} and holds no rules of its own.
  */
 public final class WorkbookWindow {
 
     static final String STYLESHEET = "/org/strandbook/app/ui/strandbook.css";
     private static final FileChooser.ExtensionFilter WORKBOOK_FILES =
             new FileChooser.ExtensionFilter("Strandbook workbook (*.strandbook)", "*.strandbook");
+    private static final FileChooser.ExtensionFilter SCHEDULE_FILES =
+            new FileChooser.ExtensionFilter("Cable schedule (*.xlsx)", "*.xlsx");
 
     private final Stage stage;
     private final WorkbookViewModel vm;
@@ -68,73 +87,144 @@ public final class WorkbookWindow {
     private final SheetView<LegJoint> jointsView;
     private final SheetView<ScanRecord> scansView;
     private final SheetView<FiberType> fibersView;
-    private final SpectrumPlotView plotView;
+    private final SheetView<ConnectorType> connectorsView;
+    private final SheetView<ProbeType> probesView;
+    private final SpectrumPlotView budgetPlot;
+    private final SpectrumPlotView measuredPlot;
+    private final TrendPlotView trendPlot;
+    private final SplitPane workArea = new SplitPane();
     private final Menu recentMenu = new Menu("Open recent");
     private final Scene scene;
+    private final String stylesheet;
     private boolean rebuildingTree;
 
     public WorkbookWindow(Stage stage, WorkbookViewModel vm) {
         this.stage = stage;
         this.vm = vm;
+        this.stylesheet = Objects.requireNonNull(getClass().getResource(STYLESHEET)).toExternalForm();
+        PointViewModel point = vm.point();
         pointsView = new SheetView<>(vm.points(), "points-sheet");
-        segmentsView = new SheetView<>(vm.segments(), "segments-sheet");
-        jointsView = new SheetView<>(vm.joints(), "joints-sheet");
-        scansView = new SheetView<>(vm.scans(), "scans-sheet");
+        segmentsView = new SheetView<>(point.segments(), "segments-sheet");
+        jointsView = new SheetView<>(point.joints(), "joints-sheet");
+        scansView = new SheetView<>(point.scans(), "scans-sheet");
         fibersView = new SheetView<>(vm.fibers(), "fibers-sheet");
-        plotView = new SpectrumPlotView(vm.plot());
+        connectorsView = new SheetView<>(vm.connectors(), "connectors-sheet");
+        probesView = new SheetView<>(vm.probes(), "probes-sheet");
+        budgetPlot = new SpectrumPlotView(point.budgetPlot(), "budget-plot");
+        measuredPlot = new SpectrumPlotView(point.measuredPlot(), "measured-plot");
+        trendPlot = new TrendPlotView(point.trendPlot(), "trend-plot");
+
+        SplitPane main = new SplitPane(siteTree(), buildWorkArea());
+        main.setDividerPositions(0.16);
+        SplitPane.setResizableWithParent(main.getItems().get(0), false);
+        Node welcome = welcome();
+        welcome.visibleProperty().bind(vm.openProperty().not());
+        main.visibleProperty().bind(vm.openProperty());
 
         BorderPane root = new BorderPane();
         root.setTop(menuBar());
-        SplitPane main = new SplitPane(siteTree(), workArea());
-        main.setDividerPositions(0.21);
-        SplitPane.setResizableWithParent(main.getItems().get(0), false);
-        root.setCenter(main);
+        root.setCenter(new StackPane(main, welcome));
         root.setBottom(statusBar());
 
         Rectangle2D screen = Screen.getPrimary().getVisualBounds();
-        scene = new Scene(root, Math.min(1360, screen.getWidth()), Math.min(740, screen.getHeight() - 28));
-        scene.getStylesheets().add(Objects.requireNonNull(getClass().getResource(STYLESHEET)).toExternalForm());
+        scene = new Scene(root, Math.min(1366, screen.getWidth()), Math.min(768, screen.getHeight()));
+        scene.getStylesheets().add(stylesheet);
         stage.titleProperty().bind(vm.titleProperty());
         stage.setScene(scene);
         stage.setMinWidth(900);
         stage.setMinHeight(560);
+        vm.scheduleProblemsProperty().addListener((o, was, is) -> {
+            if (!is.isEmpty()) {
+                showScheduleProblems(is);
+            }
+        });
+        pointsView.table().getFocusModel().focusedIndexProperty().addListener((o, was, is) -> {
+            int row = is.intValue();
+            if (row >= 0 && row < vm.points().rowCount()) {
+                vm.selectPoint(vm.points().records().get(row).tag());
+            }
+        });
     }
 
     public Scene scene() {
         return scene;
     }
 
-    public SheetView<LegSegment> segmentsView() {
-        return segmentsView;
+    public TabPane tabs() {
+        return tabs;
     }
 
     public SheetView<MeasurementPoint> pointsView() {
         return pointsView;
     }
 
-    public SpectrumPlotView plotView() {
-        return plotView;
+    public SheetView<LegSegment> segmentsView() {
+        return segmentsView;
     }
 
-    public TabPane tabs() {
-        return tabs;
+    public SheetView<LegJoint> jointsView() {
+        return jointsView;
+    }
+
+    public SpectrumPlotView budgetPlot() {
+        return budgetPlot;
+    }
+
+    public SpectrumPlotView measuredPlot() {
+        return measuredPlot;
+    }
+
+    public TrendPlotView trendPlot() {
+        return trendPlot;
+    }
+
+    /** The split between the sheets (above) and the point's plots (below). */
+    public SplitPane sheetsAndPlots() {
+        return workArea;
     }
 
     // ---- menu
 
     private MenuBar menuBar() {
-        MenuItem newItem = item("New", "Shortcut+N", vm::newWorkbook);
+        MenuItem newItem = item("New workbook\u2026", "Shortcut+N", this::newWorkbook);
         MenuItem open = item("Open\u2026", "Shortcut+O", this::openWorkbook);
+        MenuItem sample = item("Open the sample site", null, () -> vm.openSample(vm.sampleFolder()));
         MenuItem saveAs = item("Save As\u2026", "Shortcut+Shift+S", this::saveAs);
+        saveAs.disableProperty().bind(vm.openProperty().not());
+        MenuItem schedule = item("Import cable schedule\u2026", null, this::importSchedule);
+        schedule.disableProperty().bind(vm.openProperty().not());
+        MenuItem record = item("Record measurement\u2026", "Shortcut+R", this::recordMeasurement);
+        record.disableProperty().bind(vm.selectedTagProperty().isEmpty());
         MenuItem quit = item("Quit", "Shortcut+Q", stage::close);
         vm.recentFilesProperty().addListener((o, was, is) -> fillRecent(is));
         fillRecent(vm.recentFilesProperty().get());
-        Menu file = new Menu("File", null, newItem, open, recentMenu, saveAs, new SeparatorMenuItem(), quit);
+        Menu file = new Menu("File", null, newItem, open, recentMenu, sample, saveAs, new SeparatorMenuItem(), schedule,
+                record, dossierItem(), new SeparatorMenuItem(), quit);
+        MenuItem evaluate = item("Evaluate every point against its scans", "F5", vm::evaluateSite);
+        evaluate.disableProperty().bind(vm.openProperty().not());
+        Menu site = new Menu("Site", null, evaluate);
         MenuItem safety = item(SafetyCaution.TITLE + "\u2026", null, () -> SafetyCautionDialog.show(stage));
         safety.setId("menu-safety");
         MenuItem about = item("About Strandbook", null, this::about);
         Menu help = new Menu("Help", null, safety, about);
-        return new MenuBar(file, help);
+        return new MenuBar(file, site, help);
+    }
+
+    /** Export dossier: enabled when this build has the export, else shown greyed with the reason. */
+    private MenuItem dossierItem() {
+        if (vm.dossierAvailable()) {
+            MenuItem export = item("Export dossier\u2026", "Shortcut+E", this::exportDossier);
+            export.setId("menu-export-dossier");
+            export.disableProperty().bind(vm.openProperty().not());
+            return export;
+        }
+        // a disabled menu item cannot show a tooltip; this one looks disabled, does nothing and says why
+        Label text = new Label("Export dossier\u2026");
+        text.getStyleClass().add("menu-item-unavailable");
+        Tooltip.install(text, new Tooltip("The commissioning dossier export is not part of this build yet"));
+        CustomMenuItem export = new CustomMenuItem(text, false);
+        export.setId("menu-export-dossier");
+        return export;
     }
 
     private static MenuItem item(String text, String accelerator, Runnable action) {
@@ -154,24 +244,92 @@ public final class WorkbookWindow {
         recentMenu.setDisable(files.isEmpty());
     }
 
-    private void openWorkbook() {
+    private Optional<Path> chooseWorkbook(boolean save, String title) {
         FileChooser chooser = new FileChooser();
-        chooser.setTitle("Open workbook");
+        chooser.setTitle(title);
         chooser.getExtensionFilters().add(WORKBOOK_FILES);
-        File f = chooser.showOpenDialog(stage);
-        if (f != null) {
-            vm.open(f.toPath());
+        File f = save ? chooser.showSaveDialog(stage) : chooser.showOpenDialog(stage);
+        if (f == null) {
+            return Optional.empty();
         }
+        Path p = f.toPath();
+        return Optional.of(save && !p.getFileName().toString().contains(".") ? p.resolveSibling(p.getFileName() + ".strandbook") : p);
+    }
+
+    private void openWorkbook() {
+        chooseWorkbook(false, "Open workbook").ifPresent(vm::open);
+    }
+
+    private void newWorkbook() {
+        Optional<Path> file = chooseWorkbook(true, "New workbook");
+        if (file.isEmpty()) {
+            return;
+        }
+        TextInputDialog name = new TextInputDialog();
+        name.initOwner(stage);
+        name.setTitle("New workbook");
+        name.setHeaderText("One workbook holds one site. Name the site as the plant names it.");
+        name.setContentText("Site name:");
+        name.showAndWait().filter(n -> !n.isBlank()).ifPresent(n -> vm.createWorkbook(file.get(), n));
     }
 
     private void saveAs() {
+        chooseWorkbook(true, "Save a copy of the workbook as").ifPresent(vm::saveAs);
+    }
+
+    private void importSchedule() {
         FileChooser chooser = new FileChooser();
-        chooser.setTitle("Save workbook as");
-        chooser.getExtensionFilters().add(WORKBOOK_FILES);
+        chooser.setTitle("Import a filled cable schedule");
+        chooser.getExtensionFilters().add(SCHEDULE_FILES);
+        File f = chooser.showOpenDialog(stage);
+        if (f != null) {
+            vm.importSchedule(f.toPath());
+        }
+    }
+
+    private void exportDossier() {
+        String ext = vm.dossierExtension().orElse("xlsx");
+        FileChooser chooser = new FileChooser();
+        chooser.setTitle("Export the commissioning dossier");
+        chooser.getExtensionFilters().add(new FileChooser.ExtensionFilter("Dossier (*." + ext + ")", "*." + ext));
         File f = chooser.showSaveDialog(stage);
         if (f != null) {
-            vm.saveAs(f.toPath());
+            vm.exportDossier(f.toPath());
         }
+    }
+
+    private void chooseSampleFolder() {
+        DirectoryChooser chooser = new DirectoryChooser();
+        chooser.setTitle("Folder for the sample site");
+        File f = chooser.showDialog(stage);
+        if (f != null) {
+            vm.openSample(f.toPath().resolve("strandbook-sample"));
+        }
+    }
+
+    /**
+     * Asks for the safety caution when the point needs it, then opens the record dialog on the
+     * returned import (empty when the user stopped or no point is selected).
+     */
+    public Optional<ScanImportViewModel> recordMeasurement() {
+        if (!vm.cautionBeforeRecording().map(reason -> SafetyCautionDialog.confirmOnce(stage, vm.caution(), reason)).orElse(true)) {
+            return Optional.empty();
+        }
+        Optional<ScanImportViewModel> importVm = vm.recordMeasurement();
+        importVm.ifPresent(i -> ScanImportDialog.open(stage, i, stylesheet));
+        return importVm;
+    }
+
+    private void showScheduleProblems(List<String> problems) {
+        Alert a = new Alert(Alert.AlertType.WARNING, "", ButtonType.CLOSE);
+        a.initOwner(stage);
+        a.setTitle("Cable schedule refused");
+        a.setHeaderText("Nothing was written. Correct these cells in the schedule and import it again:");
+        ListView<String> list = new ListView<>();
+        list.getItems().setAll(problems);
+        list.setPrefSize(640, 260);
+        a.getDialogPane().setContent(list);
+        a.show();
     }
 
     private void about() {
@@ -182,6 +340,39 @@ public final class WorkbookWindow {
         a.setTitle("About Strandbook");
         a.setHeaderText("Strandbook");
         a.showAndWait();
+    }
+
+    // ---- welcome: no workbook open
+
+    private Node welcome() {
+        Label heading = new Label("No workbook is open");
+        heading.getStyleClass().add("welcome-heading");
+        Label text = new Label("A workbook holds one site: its analyzers, measurement points, light paths, catalogs "
+                + "and every scan. Start from a contractor's cable schedule in a new workbook, open one, or look "
+                + "around the sample site first: an invented plant with ten points, some of them with faults, and two "
+                + "years of scans.");
+        text.setWrapText(true);
+        text.setMaxWidth(620);
+        Button sample = new Button("Open the sample site");
+        sample.setId("welcome-sample");
+        sample.setDefaultButton(true);
+        sample.setOnAction(e -> vm.openSample(vm.sampleFolder()));
+        Label where = new Label("built in " + vm.sampleFolder() + " the first time (a few seconds)");
+        where.getStyleClass().add("welcome-note");
+        Button elsewhere = new Button("Build the sample in another folder\u2026");
+        elsewhere.setOnAction(e -> chooseSampleFolder());
+        Button open = new Button("Open a workbook\u2026");
+        open.setOnAction(e -> openWorkbook());
+        Button create = new Button("New workbook\u2026");
+        create.setOnAction(e -> newWorkbook());
+        VBox box = new VBox(12, heading, text, new VBox(2, sample, where), elsewhere, new HBox(8, open, create));
+        box.setAlignment(Pos.CENTER_LEFT);
+        box.setMaxWidth(660);
+        box.setPadding(new Insets(24));
+        StackPane pane = new StackPane(box);
+        pane.setId("welcome");
+        pane.getStyleClass().add("welcome");
+        return pane;
     }
 
     // ---- site tree
@@ -202,15 +393,14 @@ public final class WorkbookWindow {
         VBox box = new VBox(4, heading, tree);
         VBox.setVgrow(tree, Priority.ALWAYS);
         box.setPadding(new Insets(4));
-        box.setMinWidth(200);
+        box.setMinWidth(170);
         return box;
     }
 
     private void rebuildTree(SiteOutline outline) {
         rebuildingTree = true;
         try {
-            String site = outline.site().name();
-            TreeItem<SiteEntry> root = new TreeItem<>(new SiteEntry(SiteEntry.Kind.SITE, "", site));
+            TreeItem<SiteEntry> root = new TreeItem<>(new SiteEntry(SiteEntry.Kind.SITE, "", outline.site().name()));
             root.setExpanded(true);
             outline.analyzers().forEach(a -> {
                 TreeItem<SiteEntry> ai = new TreeItem<>(new SiteEntry(SiteEntry.Kind.ANALYZER, a.tag(),
@@ -240,38 +430,68 @@ public final class WorkbookWindow {
         }
     }
 
-    // ---- sheets and plot
+    // ---- sheets and plots
 
-    private Node workArea() {
+    private Node buildWorkArea() {
+        PointViewModel point = vm.point();
         tabs.setId("workbook-tabs");
         tabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
+        TabPane catalogs = new TabPane(
+                tab("Fiber types", "tab-fibers", fibersView),
+                tab("Connector types", "tab-connectors", connectorsView),
+                tab("Probe types", "tab-probes", probesView));
+        catalogs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
+        catalogs.setId("catalog-tabs");
+        Tab catalogTab = new Tab("Catalogs", catalogs);
+        catalogTab.setId("tab-catalogs");
         tabs.getTabs().addAll(
-                tab("Points", "tab-points", pointsView, heading("All measurement points of the site. "
-                        + "Predicted loss, margin and status are computed.")),
-                tab("Cable segments", "tab-segments", segmentsView, pointContext()),
-                tab("Joints", "tab-joints", jointsView, pointContext()),
-                tab("Scans", "tab-scans", scansView, pointContext(), scanActions()),
-                tab("Catalogs", "tab-catalogs", fibersView, heading("Fiber types (connector and probe catalogs follow the same pattern)")));
+                tab("Points", "tab-points", pointsView, heading("All measurement points of the site. Predicted status, "
+                        + "margin and losses are computed from the light paths; measured status from the latest scans.")),
+                tab("Cable segments", "tab-segments", segmentsView, pointContext(point)),
+                tab("Joints", "tab-joints", jointsView, pointContext(point)),
+                readOnlyTab("Scans", "tab-scans", scansView, pointContext(point), scanActions()),
+                catalogTab);
 
-        Label summary = new Label();
-        summary.setId("budget-summary");
-        summary.getStyleClass().add("budget-summary");
-        summary.textProperty().bind(vm.budgetSummaryProperty());
-        summary.setWrapText(true);
-        summary.setMinHeight(Region.USE_PREF_SIZE);
-        vm.budgetVerdictProperty().addListener((o, was, is) -> {
+        Label summary = verdictLabel("budget-summary", point.summaryProperty(), point.summaryVerdictProperty());
+        Label finding = verdictLabel("measured-finding", point.findingProperty(), point.findingVerdictProperty());
+        GridPane plots = new GridPane();
+        plots.setId("point-plots");
+        plots.setHgap(6);
+        for (int i = 0; i < 3; i++) {
+            ColumnConstraints c = new ColumnConstraints();
+            c.setPercentWidth(100.0 / 3);
+            c.setHgrow(Priority.ALWAYS);
+            plots.getColumnConstraints().add(c);
+        }
+        RowConstraints r = new RowConstraints();
+        r.setVgrow(Priority.ALWAYS);
+        plots.getRowConstraints().add(r);
+        plots.addRow(0, budgetPlot.node(), measuredPlot.node(), trendPlot.node());
+        VBox detail = new VBox(2, summary, finding, new PlotAxesBar(point.budgetPlot().axes()).node(), plots);
+        VBox.setVgrow(plots, Priority.ALWAYS);
+        detail.setPadding(new Insets(2, 6, 2, 6));
+        detail.setMinHeight(0);
+
+        workArea.getItems().setAll(tabs, detail);
+        workArea.setOrientation(Orientation.VERTICAL);
+        workArea.setDividerPositions(0.45);
+        return workArea;
+    }
+
+    private static Label verdictLabel(String id, javafx.beans.property.ReadOnlyStringProperty text,
+                                      ReadOnlyObjectProperty<Verdict> verdict) {
+        Label l = new Label();
+        l.setId(id);
+        l.getStyleClass().add("budget-summary");
+        l.textProperty().bind(text);
+        l.setWrapText(true);
+        l.setMinHeight(Region.USE_PREF_SIZE);
+        verdict.addListener((o, was, is) -> {
             for (Verdict v : Verdict.values()) {
-                summary.pseudoClassStateChanged(PseudoClass.getPseudoClass(v.name().toLowerCase(Locale.ROOT)), v == is);
+                l.pseudoClassStateChanged(PseudoClass.getPseudoClass(v.name().toLowerCase(Locale.ROOT)), v == is);
             }
         });
-        VBox detail = new VBox(2, summary, plotView.node());
-        VBox.setVgrow(plotView.node(), Priority.ALWAYS);
-        detail.setPadding(new Insets(2, 6, 2, 6));
-
-        SplitPane split = new SplitPane(tabs, detail);
-        split.setOrientation(Orientation.VERTICAL);
-        split.setDividerPositions(0.58);
-        return split;
+        return l;
     }
 
     private Tab tab(String title, String id, SheetView<?> view, Node... above) {
@@ -285,16 +505,28 @@ public final class WorkbookWindow {
         return t;
     }
 
+    /** A tab for a sheet nobody types into: no undo, fill or row buttons. */
+    private Tab readOnlyTab(String title, String id, SheetView<?> view, Node... above) {
+        VBox box = new VBox(4);
+        box.setPadding(new Insets(4));
+        box.getChildren().addAll(above);
+        box.getChildren().add(view.node());
+        VBox.setVgrow(view.node(), Priority.ALWAYS);
+        Tab t = new Tab(title, box);
+        t.setId(id);
+        return t;
+    }
+
     private static Label heading(String text) {
         Label l = new Label(text);
         l.getStyleClass().add("pane-heading");
         return l;
     }
 
-    private Label pointContext() {
+    private static Label pointContext(PointViewModel point) {
         Label l = new Label();
         l.getStyleClass().add("pane-heading");
-        l.textProperty().bind(vm.pointContextProperty());
+        l.textProperty().bind(point.contextProperty());
         return l;
     }
 
@@ -302,16 +534,8 @@ public final class WorkbookWindow {
         Button record = new Button("Record measurement\u2026");
         record.setId("record-measurement");
         record.setTooltip(new Tooltip("Add scan files of this point to the workbook"));
-        record.setOnAction(e -> {
-            if (vm.cautionBeforeRecording().map(reason -> SafetyCautionDialog.confirmOnce(stage, vm.caution(), reason)).orElse(true)) {
-                FileChooser chooser = new FileChooser();
-                chooser.setTitle("Scan files to record");
-                List<File> files = chooser.showOpenMultipleDialog(stage);
-                if (files != null) {
-                    vm.recordMeasurement(files.stream().map(File::toPath).toList());
-                }
-            }
-        });
+        record.disableProperty().bind(vm.selectedTagProperty().isEmpty());
+        record.setOnAction(e -> recordMeasurement());
         ToggleButton light = new ToggleButton("Light source step");
         light.setId("light-source");
         light.setTooltip(new Tooltip("Mark the step in which the analyzer's source is on"));
@@ -343,9 +567,10 @@ public final class WorkbookWindow {
         HBox.setHgrow(message, Priority.ALWAYS);
         vm.tasks().messageProperty().addListener((o, was, is) -> message.setText(is));
         vm.noticeProperty().addListener((o, was, is) -> message.setText(is));
+        message.setText(vm.noticeProperty().get().isEmpty() ? "Ready" : vm.noticeProperty().get());
         ProgressBar progress = new ProgressBar();
         progress.setId("task-progress");
-        progress.setPrefWidth(180);
+        progress.setPrefWidth(200);
         progress.progressProperty().bind(vm.tasks().progressProperty());
         progress.visibleProperty().bind(vm.tasks().runningProperty());
         Button cancel = new Button("Cancel");

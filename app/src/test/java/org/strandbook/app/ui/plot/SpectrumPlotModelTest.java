@@ -1,6 +1,7 @@
 package org.strandbook.app.ui.plot;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 
@@ -47,11 +48,11 @@ class SpectrumPlotModelTest {
     @Test
     void axisChoiceIsRememberedForTheNextSession() {
         MemoryPreferences preferences = new MemoryPreferences();
-        SpectrumPlotModel first = new SpectrumPlotModel(preferences);
+        PlotAxes first = new PlotAxes(preferences);
         first.axisProperty().set(SpectralAxis.WAVENUMBER_CM);
         first.scaleProperty().set(LossScale.TRANSMITTANCE_PERCENT);
 
-        SpectrumPlotModel next = new SpectrumPlotModel(preferences);
+        PlotAxes next = new PlotAxes(preferences);
 
         assertEquals(SpectralAxis.WAVENUMBER_CM, next.axisProperty().get());
         assertEquals(LossScale.TRANSMITTANCE_PERCENT, next.scaleProperty().get());
@@ -59,13 +60,56 @@ class SpectrumPlotModelTest {
 
     @Test
     void wavenumberPointsRunAscendingSoTheChartDrawsOneLine() {
-        SpectrumPlotModel model = new SpectrumPlotModel(new MemoryPreferences());
-        model.show("test", new double[] {1000, 2000}, new double[] {10, 20});
-        model.axisProperty().set(SpectralAxis.WAVENUMBER_CM);
+        SpectrumPlotModel model = new SpectrumPlotModel(new PlotAxes(new MemoryPreferences()));
+        model.show("test", List.of(new Curve("loss", CurveStyle.line(CurveStyle.BLACK, 1), new double[] {1000, 2000},
+                new double[] {10, 20})));
+        model.axes().axisProperty().set(SpectralAxis.WAVENUMBER_CM);
 
-        List<SpectrumPlotModel.PlotPoint> points = model.pointsProperty().get();
+        List<SpectrumPlotModel.PlotPoint> points = model.linesProperty().get().get(0).runs().get(0);
         assertEquals(5000, points.get(0).x(), 1e-9);
         assertEquals(20, points.get(0).y(), 1e-12);
         assertEquals(10000, points.get(1).x(), 1e-9);
+    }
+
+    @Test
+    void unmeasuredStretchesLeaveAGapInsteadOfALineAcrossThem() {
+        SpectrumPlotModel model = new SpectrumPlotModel(new PlotAxes(new MemoryPreferences()));
+        model.show("test", List.of(new Curve("measured", CurveStyle.line(CurveStyle.BLUE, 1),
+                new double[] {1000, 1002, 1004, 1006, 1008}, new double[] {1, 2, Double.NaN, Double.NaN, 3})));
+
+        List<List<SpectrumPlotModel.PlotPoint>> runs = model.linesProperty().get().get(0).runs();
+        assertEquals(2, runs.size());
+        assertEquals(1002, runs.get(0).get(1).x());
+        assertEquals(1008, runs.get(1).get(0).x());
+    }
+
+    @Test
+    void lossAxisStopsAtTheCeilingSoTheFewDecibelsThatMatterStayReadable() {
+        SpectrumPlotModel model = new SpectrumPlotModel(new PlotAxes(new MemoryPreferences()));
+        model.show("test", List.of(new Curve("loss", CurveStyle.line(CurveStyle.BLACK, 1), new double[] {1000, 2000, 2500},
+                new double[] {10, 12, 180})), 40);
+
+        assertEquals(40, model.yRangeProperty().get().upper(), 1e-9);
+        assertEquals(0, model.yRangeProperty().get().lower(), 1e-9);
+        assertEquals(1000, model.xRangeProperty().get().lower(), 1e-9);
+        assertEquals(2500, model.xRangeProperty().get().upper(), 1e-9);
+    }
+
+    @Test
+    void longCurvesAreThinnedButKeepBothEnds() {
+        int n = 751;
+        double[] nm = new double[n];
+        double[] db = new double[n];
+        for (int i = 0; i < n; i++) {
+            nm[i] = 1000 + 2 * i;
+            db[i] = i;
+        }
+        SpectrumPlotModel model = new SpectrumPlotModel(new PlotAxes(new MemoryPreferences()));
+        model.show("test", List.of(new Curve("loss", CurveStyle.line(CurveStyle.BLACK, 1), nm, db)));
+
+        List<SpectrumPlotModel.PlotPoint> run = model.linesProperty().get().get(0).runs().get(0);
+        assertTrue(run.size() <= SpectrumPlotModel.MAX_POINTS + 2, "points: " + run.size());
+        assertEquals(1000, run.get(0).x());
+        assertEquals(2500, run.get(run.size() - 1).x());
     }
 }

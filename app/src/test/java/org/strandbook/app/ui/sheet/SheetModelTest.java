@@ -15,7 +15,8 @@ import java.util.List;
 import java.util.Map;
 
 import org.junit.jupiter.api.Test;
-import org.strandbook.app.ui.workbook.LegSegment;
+import org.strandbook.app.ui.path.LegSegment;
+import org.strandbook.app.ui.path.SegmentSheet;
 import org.strandbook.site.PathDirection;
 
 /**
@@ -82,7 +83,7 @@ class SheetModelTest {
 
     @Test
     void pasteWiderThanTheSheetChangesNothing() {
-        SheetOutcome outcome = sheet.paste(CellRange.single(at(0, LOSS)), "1\t2");
+        SheetOutcome outcome = sheet.paste(CellRange.single(at(0, sheet.columnCount() - 1)), "1\t2");
 
         assertFalse(outcome.applied());
         assertTrue(outcome.message().contains("2 columns wide"), outcome.message());
@@ -180,7 +181,7 @@ class SheetModelTest {
         // IEC 60793-1-40: attenuation coefficient in dB/km; loss = α·L = 5 dB/km × 0.250 km = 1.25 dB
         sheet.edit(at(1, LENGTH), "250");
 
-        assertEquals("1.25", sheet.text(at(1, LOSS)));
+        assertEquals("1.250", sheet.text(at(1, LOSS)));
     }
 
     @Test
@@ -189,13 +190,13 @@ class SheetModelTest {
         sheet.edit(at(1, FIBER), "f-b");
 
         assertEquals("F-B", fiber(sheet, 1));
-        assertEquals("0.80", sheet.text(at(1, LOSS)));
+        assertEquals("0.800", sheet.text(at(1, LOSS)));
     }
 
     @Test
     void evaluatorHookReplacesTheComputedFiguresAtOnce() {
         sheet.setEvaluator(rows -> rows.stream()
-                .map(r -> new RowFigures(Map.of("fiberLossDb", Figure.of(Verdict.REVIEW)))).toList());
+                .map(r -> new RowFigures(Map.of(SegmentSheet.LOSS, Figure.of(Verdict.REVIEW)))).toList());
 
         assertEquals("\u25B2 REVIEW", sheet.text(at(0, LOSS)));
         assertEquals(Verdict.REVIEW, sheet.rows().get(0).cell(LOSS).verdict());
@@ -206,7 +207,7 @@ class SheetModelTest {
         SheetOutcome refused = sheet.edit(at(0, LOSS), "3");
 
         assertFalse(refused.applied());
-        assertTrue(refused.message().startsWith("F1 Fiber loss at band centre (dB) is computed"), refused.message());
+        assertTrue(refused.message().startsWith("F1 Loss at 1st band centre (dB) is computed"), refused.message());
     }
 
     @Test

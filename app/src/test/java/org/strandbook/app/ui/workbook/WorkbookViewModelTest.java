@@ -1,125 +1,281 @@
 package org.strandbook.app.ui.workbook;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
 import org.junit.jupiter.api.io.TempDir;
 import org.strandbook.app.ui.MemoryPreferences;
-import org.strandbook.app.ui.plot.SpectrumPlotModel;
+import org.strandbook.app.ui.budget.PointPrediction;
+import org.strandbook.app.ui.path.SegmentSheet;
+import org.strandbook.app.ui.plot.PlotAxes;
 import org.strandbook.app.ui.sheet.CellAddress;
+import org.strandbook.app.ui.sheet.SheetModel;
 import org.strandbook.app.ui.task.DirectTaskExecutor;
-import org.strandbook.site.ScanRecord;
+import org.strandbook.site.CableSegment;
+import org.strandbook.site.ConnectorType;
+import org.strandbook.site.MeasurementPoint;
+import org.strandbook.site.PathLeg;
+import org.strandbook.store.Workbook;
 
-/** The window's view model over the in-memory workbook, with jobs run synchronously. */
+/**
+ * The window's view models over the real SQLite service on a copy of the sample site, with jobs
+ * run synchronously. Expected figures follow from published arithmetic on the workbook's own
+ * records: loss in dB adds along a path, and a fiber's loss is proportional to its length (the
+ * attenuation coefficient of IEC 60793-1-40 is loss per length).
+ */
+@ExtendWith(SampleSite.Resolver.class)
 class WorkbookViewModelTest {
 
-    private static final int LENGTH = 3;
+    private static final double RELATIVE_TOLERANCE = 1e-9;
+    private static SampleSite sample;
 
-    private InMemoryWorkbookService service;
+    @TempDir
+    Path dir;
+    private Path file;
+    private SqliteWorkbookService service;
+    private MemoryPreferences preferences;
     private WorkbookViewModel vm;
+
+    @BeforeAll
+    static void sample(SampleSite built) {
+        sample = built;
+    }
 
     @BeforeEach
     void open() {
-        service = new InMemoryWorkbookService(DemoWorkbook.create());
-        MemoryPreferences preferences = new MemoryPreferences();
-        vm = new WorkbookViewModel(service, new DirectTaskExecutor(), new SpectrumPlotModel(preferences),
-                new RecentFiles(preferences));
-        vm.start();
+        file = sample.workbookCopy(dir);
+        service = new SqliteWorkbookService("technician B");
+        preferences = new MemoryPreferences();
+        vm = new WorkbookViewModel(service, new DirectTaskExecutor(), new PlotAxes(preferences),
+                new RecentFiles(preferences), dir.resolve("sample"), Optional.empty());
+        vm.setEvaluateOnOpen(false);
+        vm.open(file);
+    }
+
+    @AfterEach
+    void close() {
+        service.close();
+    }
+
+    private PointPrediction predictionOf(String tag) {
+        assertEquals(tag, vm.selectedTagProperty().get());
+        return vm.point().prediction().orElseThrow();
     }
 
     @Test
-    void startShowsTheFirstPointWithItsRows() {
-        assertEquals("RX-101-A", vm.selectedTagProperty().get());
-        assertEquals(4, vm.segments().rowCount());
-        assertEquals(6, vm.joints().rowCount());
-        assertEquals(4, vm.points().rowCount());
+    void openingShowsEveryPointAndTheFirstPointsLegs() {
+        assertTrue(vm.openProperty().get());
+        assertEquals(10, vm.points().rowCount());
+        assertEquals("FT-4101", vm.selectedTagProperty().get());
+        assertEquals(6, vm.point().segments().rowCount());
+        assertEquals(6, vm.point().joints().rowCount());
+        assertTrue(vm.titleProperty().get().endsWith(file.getFileName().toString()), vm.titleProperty().get());
     }
 
     @Test
-    void selectingAPointLoadsItsRows() {
-        vm.selectPoint("ST-310-R");
+    void withoutRecentWorkbookTheStartOffersTheSampleSite() {
+        WorkbookViewModel fresh = new WorkbookViewModel(new SqliteWorkbookService("x"), new DirectTaskExecutor(),
+                new PlotAxes(new MemoryPreferences()), new RecentFiles(new MemoryPreferences()), dir, Optional.empty());
 
-        assertEquals("C-310R-01", vm.segments().records().get(0).segment().label());
-        assertTrue(vm.pointContextProperty().get().startsWith("ST-310-R"));
+        fresh.start(Optional.empty());
+
+        assertFalse(fresh.openProperty().get());
+        assertTrue(fresh.noticeProperty().get().contains("sample site"), fresh.noticeProperty().get());
     }
 
     @Test
-    void segmentEditIsSavedAndThePointReEvaluated() {
-        double before = service.evaluate("RX-101-A", null).predictedLossDb();
+    void theSampleSiteAlreadyBuiltInItsFolderOpensWithoutBuildingAgain() {
+        vm.openSample(sample.folder());
 
-        vm.segments().edit(new CellAddress(1, LENGTH), "186");
-
-        assertEquals(186.0, service.loadPoint("RX-101-A").segments().get(1).segment().lengthM());
-        // IEC 60793-1-40 attenuation coefficient: +100 m of a fiber whose datasheet gives 6 dB/km
-        // at the 1700 nm band centre adds 0.60 dB
-        double alpha = service.loadCatalog().fiber("SB-LOH-600").orElseThrow().datasheet().stream()
-                .filter(p -> p.wavelengthNm() == 1700).findFirst().orElseThrow().attenuationDbPerKm();
-        double after = service.evaluate("RX-101-A", null).predictedLossDb();
-        assertEquals(alpha * 0.100, after - before, 1e-9);
-        assertTrue(vm.budgetSummaryProperty().get().contains(String.format(Locale.ROOT, "predicted %.2f dB", after)));
+        assertEquals(10, vm.points().rowCount());
+        assertTrue(vm.titleProperty().get().contains("Saltmarsh Ridge Works"), vm.titleProperty().get());
     }
 
     @Test
-    void toleranceEditChangesThePointStatusAtOnce() {
-        int status = vm.points().columnIndex(PointSheet.STATUS);
-        String pass = vm.points().text(new CellAddress(0, status));
-        // a tolerance larger than the margin asks for review (Strandbook design choice, MarginVerdict)
-        vm.points().edit(new CellAddress(0, vm.points().columnIndex("tolerance")), "9");
+    void segmentLengthEditMovesThePredictionAtOnceAndIsSaved() {
+        vm.selectPoint("FT-4102");
+        SheetModel<org.strandbook.app.ui.path.LegSegment> segments = vm.point().segments();
+        int row = 1;
+        CableSegment trunk = segments.records().get(row).segment();
+        double centreNm = vm.point().point().orElseThrow().bands().get(0).centreNm();
+        double segmentBefore = Double.parseDouble(segments.text(new CellAddress(row, segments.columnIndex(SegmentSheet.LOSS))));
+        double loopBefore = predictionOf("FT-4102").lossDbAt(centreNm);
+        String summaryBefore = vm.point().summaryProperty().get();
 
-        assertEquals("\u2714 PASS", pass);
-        assertEquals("\u25B2 REVIEW", vm.points().text(new CellAddress(0, status)));
+        segments.edit(new CellAddress(row, segments.columnIndex("length")), String.format(Locale.ROOT, "%.1f", 3 * trunk.lengthM()));
+
+        // loss is proportional to length, and losses in dB add: tripling the trunk adds twice its loss
+        double loopAfter = predictionOf("FT-4102").lossDbAt(centreNm);
+        assertEquals(2 * segmentBefore, loopAfter - loopBefore, 0.0015);
+        assertFalse(summaryBefore.equals(vm.point().summaryProperty().get()));
+        try (Workbook wb = Workbook.open(file, "reader")) {
+            PathLeg send = wb.paths().legs("FT-4102").get(0);
+            assertEquals(3 * trunk.lengthM(), send.segments().get(1).lengthM(), 3 * trunk.lengthM() * RELATIVE_TOLERANCE);
+        }
+    }
+
+    @Test
+    void pointsSheetPredictedLossFollowsASegmentEdit() {
+        vm.selectPoint("FT-4102");
+        int row = vm.points().records().stream().map(MeasurementPoint::tag).toList().indexOf("FT-4102");
+        CellAddress predicted = new CellAddress(row, vm.points().columnIndex(PointSheet.PREDICTED));
+        String before = vm.points().text(predicted);
+
+        vm.point().segments().edit(new CellAddress(1, vm.point().segments().columnIndex("length")), "2500");
+
+        assertFalse(before.equals(vm.points().text(predicted)), before);
+    }
+
+    @Test
+    void connectorCatalogEditRaisesEveryJointThatUsesIt() {
+        vm.selectPoint("FT-4101");
+        double centreNm = vm.point().point().orElseThrow().bands().get(0).centreNm();
+        double before = predictionOf("FT-4101").lossDbAt(centreNm);
+        int row = vm.connectors().records().stream().map(ConnectorType::code).toList().indexOf("SMA-A");
+        double typical = vm.connectors().records().get(row).typicalLossDb();
+
+        vm.connectors().edit(new CellAddress(row, vm.connectors().columnIndex("typical")),
+                String.format(Locale.ROOT, "%.2f", typical + 1));
+
+        // FT-4101's six joints use the typical loss of their SMA-A pair; losses in dB add
+        assertEquals(6.0, predictionOf("FT-4101").lossDbAt(centreNm) - before, 1e-9);
+    }
+
+    @Test
+    void aToleranceLargerThanTheMarginAsksForReview() {
+        int row = 0;
+        String status = vm.points().text(new CellAddress(row, vm.points().columnIndex(PointSheet.STATUS)));
+        double margin = Double.parseDouble(vm.points().text(new CellAddress(row, vm.points().columnIndex(PointSheet.MARGIN))));
+
+        vm.points().edit(new CellAddress(row, vm.points().columnIndex("tolerance")),
+                String.format(Locale.ROOT, "%.2f", margin + 0.1));
+
+        // Strandbook design choice (MarginVerdict): a margin within the tolerance cannot be told apart from a fault
+        assertEquals("\u2714 PASS", status);
+        assertEquals("\u25B2 REVIEW", vm.points().text(new CellAddress(row, vm.points().columnIndex(PointSheet.STATUS))));
+    }
+
+    @Test
+    void siteEvaluationShowsTheMeasuredStatusOfEveryPoint() {
+        vm.evaluateSite();
+
+        List<String> measured = new ArrayList<>();
+        for (int r = 0; r < vm.points().rowCount(); r++) {
+            measured.add(vm.points().records().get(r).tag() + " "
+                    + vm.points().text(new CellAddress(r, vm.points().columnIndex(PointSheet.MEASURED))));
+        }
+        // the sample plant injects faults at FT-4102 (dirty joint) and leaves FT-4101 as built
+        assertTrue(measured.contains("FT-4102 \u2716 FAIL"), measured.toString());
+        assertTrue(measured.contains("FT-4101 \u2714 PASS"), measured.toString());
+        assertTrue(vm.noticeProperty().get().startsWith("Site evaluated: 10 points"), vm.noticeProperty().get());
+    }
+
+    @Test
+    void selectingAPointBringsItsScansAndItsThreePlots() {
+        vm.selectPoint("FT-4106");
+
+        assertEquals(27, vm.point().scans().rowCount());
+        assertFalse(vm.point().budgetPlot().linesProperty().get().isEmpty());
+        assertFalse(vm.point().measuredPlot().linesProperty().get().isEmpty());
+        assertFalse(vm.point().trendPlot().linesProperty().get().isEmpty());
+        assertTrue(vm.point().findingProperty().get().contains("OH"), vm.point().findingProperty().get());
     }
 
     @Test
     void hazardousPointAsksForTheSafetyCautionOncePerSession() {
+        vm.selectPoint("FT-4103");
         assertTrue(vm.cautionBeforeRecording().isPresent());
+
         vm.caution().acknowledge();
+
         assertTrue(vm.cautionBeforeRecording().isEmpty());
         assertTrue(vm.cautionBeforeLightSource().isEmpty());
     }
 
     @Test
-    void nonHazardousPointRecordsWithoutCaution() {
-        vm.selectPoint("DC-205-T");
+    void recordingReportsEachFileAndRefusesABadOneWithItsReason() throws Exception {
+        vm.selectPoint("SW-4202");
+        int before = vm.point().scans().rowCount();
+        Path good = sample.newLoopScan("SW-4202", dir, 7);
+        Path bad = dir.resolve("SW-4202_torn.csv");
+        Files.writeString(bad, "Wavelength (nm);Counts\n600;12\n600,5;oops\n", StandardCharsets.UTF_8);
+        ScanImportViewModel importer = vm.recordMeasurement().orElseThrow();
+        List<Double> progress = new ArrayList<>();
+        vm.tasks().progressProperty().addListener((o, was, is) -> progress.add(is.doubleValue()));
 
-        assertTrue(vm.cautionBeforeRecording().isEmpty());
-        assertTrue(vm.cautionBeforeLightSource().isPresent());
+        importer.addFiles(List.of(good, bad));
+        importer.start();
+
+        assertEquals(1.0, importer.progressProperty().get());
+        assertTrue(progress.containsAll(List.of(0.5, 1.0)), progress.toString());
+        assertEquals("Stored 1 of 2 files for SW-4202, 1 refused", importer.messageProperty().get());
+        assertTrue(importer.refusedProperty().get().get(0).startsWith("SW-4202_torn.csv:3"), importer.refusedProperty().get().toString());
+        assertEquals(before + 1, vm.point().scans().rowCount());
     }
 
     @Test
-    void recordedFileIsListedWithItsSha256(@TempDir Path dir) throws Exception {
-        Path file = dir.resolve("loop.jdx");
-        Files.writeString(file, "abc", StandardCharsets.US_ASCII);
+    void cancelStopsTheImportBeforeTheNextFileAndKeepsWhatWasStored() {
+        vm.selectPoint("SW-4202");
+        ScanImportViewModel importer = vm.recordMeasurement().orElseThrow();
+        importer.addFiles(List.of(sample.newLoopScan("SW-4202", dir, 8), sample.newLoopScan("SW-4202", dir, 9),
+                sample.newLoopScan("SW-4202", dir, 10)));
+        vm.tasks().progressProperty().addListener((o, was, is) -> {
+            if (is.doubleValue() > 0.3 && importer.runningProperty().get()) {
+                importer.cancel();
+            }
+        });
 
-        vm.recordMeasurement(List.of(file));
+        importer.start();
 
-        ScanRecord added = service.loadPoint("RX-101-A").scans().get(3);
-        // FIPS 180-4 example: SHA-256("abc")
-        assertEquals("ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad", added.sha256());
-        assertEquals(4, vm.scans().rowCount());
+        assertTrue(importer.messageProperty().get().startsWith("Stopped: stored 1 of 3 files"), importer.messageProperty().get());
     }
 
     @Test
-    void openingAFileThisBuildCannotReadSaysSo(@TempDir Path dir) {
-        vm.open(dir.resolve("elsewhere.strandbook"));
+    void aRefusedScheduleListsItsProblemsAndWritesNothing() throws Exception {
+        Path notXlsx = dir.resolve("schedule.xlsx");
+        Files.writeString(notXlsx, "not a spreadsheet", StandardCharsets.UTF_8);
 
-        assertTrue(vm.noticeProperty().get().startsWith("Cannot open elsewhere.strandbook"), vm.noticeProperty().get());
+        vm.importSchedule(notXlsx);
+
+        assertFalse(vm.scheduleProblemsProperty().get().isEmpty());
+        assertTrue(vm.noticeProperty().get().contains("nothing was written"), vm.noticeProperty().get());
+        assertEquals(10, vm.points().rowCount());
     }
 
     @Test
-    void savedWorkbookIsRememberedAmongRecentFiles(@TempDir Path dir) {
-        Path file = dir.resolve("unit3.strandbook");
-        vm.saveAs(file);
+    void savedCopyBecomesTheOpenWorkbookAndARecentFile() throws Exception {
+        Path copy = dir.resolve("copies").resolve("unit-41.strandbook");
+        Files.createDirectories(copy.getParent());
 
-        assertEquals(List.of(file.toAbsolutePath().normalize()), vm.recentFilesProperty().get());
-        assertTrue(vm.titleProperty().get().endsWith("unit3.strandbook"));
+        vm.saveAs(copy);
+
+        assertEquals(copy.toAbsolutePath().normalize(), vm.recentFilesProperty().get().get(0));
+        assertTrue(vm.titleProperty().get().endsWith("unit-41.strandbook"), vm.titleProperty().get());
+        assertEquals(Optional.of(copy.toAbsolutePath().normalize()), vm.file());
+    }
+
+    @Test
+    void openingAFileThatIsNotAWorkbookSaysSoAndKeepsTheOpenOne() throws Exception {
+        Path other = dir.resolve("other.strandbook");
+        Files.writeString(other, "no", StandardCharsets.UTF_8);
+
+        vm.open(other);
+
+        assertTrue(vm.noticeProperty().get().contains("other.strandbook"), vm.noticeProperty().get());
+        assertEquals(10, vm.points().rowCount());
     }
 }

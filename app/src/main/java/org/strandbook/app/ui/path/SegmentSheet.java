@@ -1,10 +1,11 @@
-package org.strandbook.app.ui.workbook;
+package org.strandbook.app.ui.path;
 
 import java.util.ArrayList;
+import java.util.Collection;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
-import java.util.function.DoubleSupplier;
+import java.util.Optional;
+import java.util.function.Function;
 import java.util.function.Supplier;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
@@ -22,10 +23,14 @@ import org.strandbook.app.ui.sheet.SheetModel;
 import org.strandbook.site.Bend;
 import org.strandbook.site.CableSegment;
 
-/** The "Cable segments" sheet of one point: both legs, with each segment's fiber loss at the band centre. */
+/**
+ * The "Cable segments" sheet of one point: both legs, each segment with the loss it contributes
+ * to the point's predicted loop at the first band's centre and its share of the loop's loss there.
+ */
 public final class SegmentSheet {
 
-    public static final String FIBER_LOSS = "fiberLossDb";
+    public static final String LOSS = "lossDb";
+    public static final String SHARE = "sharePercent";
     /** Longest run a sheet accepts, m: longer is almost always a typing slip (common practice for plant runs). */
     static final double MAX_LENGTH_M = 20_000;
 
@@ -35,17 +40,21 @@ public final class SegmentSheet {
     }
 
     /**
-     * @param catalog  fiber codes and attenuation
-     * @param centreNm the band centre of the point shown, nm
+     * @param fiberCodes         the fiber catalog's codes, read at each parse
+     * @param cableUsedElsewhere the tag of another point whose legs already use a cable ID, if any
+     *                           (a cable ID names one run of fiber on the whole site)
+     * @param figures            the computed columns {@link #LOSS} and {@link #SHARE} for all rows
      */
-    public static SheetModel<LegSegment> create(Supplier<Catalog> catalog, DoubleSupplier centreNm) {
+    public static SheetModel<LegSegment> create(Supplier<? extends Collection<String>> fiberCodes,
+                                                Function<String, Optional<String>> cableUsedElsewhere,
+                                                Function<List<LegSegment>, List<RowFigures>> figures) {
         return SheetModel.<LegSegment>builder()
                 .column(SheetColumn.derived("leg", "Leg", false, s -> Figure.text(CellFormats.choice(s.direction()))))
                 .column(SheetColumn.input("label", "Cable ID", (LegSegment s) -> s.segment().label(), v -> v,
-                        CellParsers.text("a cable ID"), (s, v) -> with(s, v, s.segment().fiberTypeCode(),
+                        cableId(cableUsedElsewhere), (s, v) -> with(s, v, s.segment().fiberTypeCode(),
                                 s.segment().lengthM(), s.segment().bends())))
                 .column(SheetColumn.input("fiber", "Fiber type", (LegSegment s) -> s.segment().fiberTypeCode(), v -> v,
-                        CellParsers.catalogCode("fiber catalog", () -> catalog.get().fiberCodes()),
+                        CellParsers.catalogCode("fiber catalog", fiberCodes),
                         (s, v) -> with(s, s.segment().label(), v, s.segment().lengthM(), s.segment().bends())))
                 .column(SheetColumn.number("length", "Length (m)", (LegSegment s) -> s.segment().lengthM(), 1,
                         DecimalParser.in("m").above(0).atMost(MAX_LENGTH_M).withDecimalComma(),
@@ -53,20 +62,32 @@ public final class SegmentSheet {
                 .column(SheetColumn.input("bends", "Bends (count \u00D7 radius mm)", (LegSegment s) -> s.segment().bends(),
                         SegmentSheet::bendsText, bendsParser(),
                         (s, v) -> with(s, s.segment().label(), s.segment().fiberTypeCode(), s.segment().lengthM(), v)))
-                .column(SheetColumn.computed(FIBER_LOSS, "Fiber loss at band centre (dB)", true))
+                .column(SheetColumn.computed(LOSS, "Loss at 1st band centre (dB)", true))
+                .column(SheetColumn.computed(SHARE, "Share of loop loss (%)", true))
                 .uniqueKey("label", s -> s.segment().label())
-                .newRowsFrom((above, all) -> with(above, LabelSequence.nextUnused(above.segment().label(),
-                        all.stream().map(s -> s.segment().label()).toList()), above.segment().fiberTypeCode(),
-                        above.segment().lengthM(), above.segment().bends()))
-                .evaluator(SheetModel.perRow(s -> {
-                    DatasheetLossBudget budget = new DatasheetLossBudget(catalog.get());
-                    if (catalog.get().fiber(s.segment().fiberTypeCode()).isEmpty()) {
-                        return new RowFigures(Map.of(FIBER_LOSS, Figure.text("no such fiber")));
-                    }
-                    return new RowFigures(Map.of(FIBER_LOSS,
-                            Figure.number(budget.segmentLossDb(s.segment(), centreNm.getAsDouble()), 2)));
-                }))
+                .newRowsFrom((above, all) -> new LegSegment(above.direction(),
+                        LegRows.placeAfter(above.position(), all.stream().filter(s -> s.direction() == above.direction())
+                                .map(LegSegment::position).toList()),
+                        new CableSegment(LabelSequence.nextUnused(above.segment().label(),
+                                all.stream().map(s -> s.segment().label()).toList()), above.segment().fiberTypeCode(),
+                                above.segment().lengthM(), above.segment().bends())))
+                .evaluator(figures)
                 .build();
+    }
+
+    private static CellParser<String> cableId(Function<String, Optional<String>> usedElsewhere) {
+        CellParser<String> text = CellParsers.text("a cable ID");
+        return t -> {
+            ParseResult<String> parsed = text.parse(t);
+            if (parsed instanceof ParseResult.Accepted<String> a) {
+                Optional<String> owner = usedElsewhere.apply(a.value());
+                if (owner.isPresent()) {
+                    return ParseResult.rejected("'" + a.value() + "' is already a cable of point " + owner.get()
+                            + " (a cable ID names one run on the site)");
+                }
+            }
+            return parsed;
+        };
     }
 
     static String bendsText(List<Bend> bends) {
@@ -97,6 +118,6 @@ public final class SegmentSheet {
     }
 
     private static LegSegment with(LegSegment s, String label, String fiber, double lengthM, List<Bend> bends) {
-        return new LegSegment(s.direction(), new CableSegment(label, fiber, lengthM, bends));
+        return s.with(new CableSegment(label, fiber, lengthM, bends));
     }
 }

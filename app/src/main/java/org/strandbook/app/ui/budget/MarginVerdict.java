@@ -1,4 +1,4 @@
-package org.strandbook.app.ui.workbook;
+package org.strandbook.app.ui.budget;
 
 import org.strandbook.app.ui.sheet.Verdict;
 

@@ -1,7 +1,9 @@
-package org.strandbook.app.ui.workbook;
+package org.strandbook.app.ui.path;
 
-import java.util.Map;
+import java.util.Collection;
+import java.util.List;
 import java.util.OptionalDouble;
+import java.util.function.Function;
 import java.util.function.Supplier;
 
 import org.strandbook.app.ui.sheet.CellFormats;
@@ -15,26 +17,36 @@ import org.strandbook.site.InspectionGrade;
 import org.strandbook.site.Joint;
 import org.strandbook.site.LossBasis;
 
-/** The "Joints" sheet of one point: both legs, with the loss each joint contributes. */
+/**
+ * The "Joints" sheet of one point: both legs, each joint with the elements it connects and the
+ * loss it contributes to the predicted loop at the first band's centre.
+ */
 public final class JointSheet {
 
-    public static final String LOSS_USED = "lossUsedDb";
+    public static final String BETWEEN = "between";
+    public static final String LOSS = "lossDb";
 
     private JointSheet() {
     }
 
-    public static SheetModel<LegJoint> create(Supplier<Catalog> catalog) {
+    /**
+     * @param connectorCodes the connector catalog's codes, read at each parse
+     * @param figures        the computed columns {@link #BETWEEN} and {@link #LOSS} for all rows
+     */
+    public static SheetModel<LegJoint> create(Supplier<? extends Collection<String>> connectorCodes,
+                                              Function<List<LegJoint>, List<RowFigures>> figures) {
         return SheetModel.<LegJoint>builder()
                 .column(SheetColumn.derived("leg", "Leg", false, j -> Figure.text(CellFormats.choice(j.direction()))))
                 .column(SheetColumn.input("label", "Joint", (LegJoint j) -> j.joint().label(), v -> v,
                         CellParsers.text("a joint label"), (j, v) -> with(j, v, j.joint().connectorTypeA(),
                                 j.joint().connectorTypeB(), j.joint().grade(), j.joint().lossDb(), j.joint().lossBasis())))
+                .column(SheetColumn.computed(BETWEEN, "Between", false))
                 .column(SheetColumn.input("connectorA", "Connector (light in)", (LegJoint j) -> j.joint().connectorTypeA(), v -> v,
-                        CellParsers.catalogCode("connector catalog", () -> catalog.get().connectorCodes()),
+                        CellParsers.catalogCode("connector catalog", connectorCodes),
                         (j, v) -> with(j, j.joint().label(), v, j.joint().connectorTypeB(), j.joint().grade(),
                                 j.joint().lossDb(), j.joint().lossBasis())))
                 .column(SheetColumn.input("connectorB", "Connector (light out)", (LegJoint j) -> j.joint().connectorTypeB(), v -> v,
-                        CellParsers.catalogCode("connector catalog", () -> catalog.get().connectorCodes()),
+                        CellParsers.catalogCode("connector catalog", connectorCodes),
                         (j, v) -> with(j, j.joint().label(), j.joint().connectorTypeA(), v, j.joint().grade(),
                                 j.joint().lossDb(), j.joint().lossBasis())))
                 .column(SheetColumn.input("grade", "End face", (LegJoint j) -> j.joint().grade(), CellFormats::choice,
@@ -50,24 +62,21 @@ public final class JointSheet {
                         CellParsers.choice(LossBasis.class),
                         (j, v) -> with(j, j.joint().label(), j.joint().connectorTypeA(), j.joint().connectorTypeB(),
                                 j.joint().grade(), j.joint().lossDb(), v)))
-                .column(SheetColumn.computed(LOSS_USED, "Loss used (dB)", true))
+                .column(SheetColumn.computed(LOSS, "Loss at 1st band centre (dB)", true))
                 .uniqueKey("label", j -> j.direction() + "/" + j.joint().label())
-                .newRowsFrom((above, all) -> with(above, LabelSequence.nextUnused(above.joint().label(),
-                                all.stream().filter(j -> j.direction() == above.direction()).map(j -> j.joint().label()).toList()),
-                        above.joint().connectorTypeA(), above.joint().connectorTypeB(), InspectionGrade.NOT_INSPECTED,
-                        OptionalDouble.empty(), LossBasis.ASSUMED))
-                .evaluator(SheetModel.perRow(j -> {
-                    try {
-                        return new RowFigures(Map.of(LOSS_USED, Figure.number(new DatasheetLossBudget(catalog.get()).jointLossDb(j.joint()), 2)));
-                    } catch (IllegalArgumentException e) {
-                        return new RowFigures(Map.of(LOSS_USED, Figure.text("no such connector")));
-                    }
-                }))
+                .newRowsFrom((above, all) -> new LegJoint(above.direction(),
+                        LegRows.placeAfter(above.position(), all.stream().filter(j -> j.direction() == above.direction())
+                                .map(LegJoint::position).toList()),
+                        new Joint(LabelSequence.nextUnused(above.joint().label(), all.stream()
+                                .filter(j -> j.direction() == above.direction()).map(j -> j.joint().label()).toList()),
+                                above.joint().connectorTypeA(), above.joint().connectorTypeB(), InspectionGrade.NOT_INSPECTED,
+                                OptionalDouble.empty(), LossBasis.ASSUMED)))
+                .evaluator(figures)
                 .build();
     }
 
     private static LegJoint with(LegJoint j, String label, String a, String b, InspectionGrade grade,
                                  OptionalDouble lossDb, LossBasis basis) {
-        return new LegJoint(j.direction(), new Joint(label, a, b, grade, lossDb, basis));
+        return j.with(new Joint(label, a, b, grade, lossDb, basis));
     }
 }

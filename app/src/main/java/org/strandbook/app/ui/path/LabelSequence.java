@@ -1,4 +1,4 @@
-package org.strandbook.app.ui.workbook;
+package org.strandbook.app.ui.path;
 
 import java.util.Collection;
 import java.util.HashSet;

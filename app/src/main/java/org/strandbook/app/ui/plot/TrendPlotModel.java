@@ -1,0 +1,256 @@
+package org.strandbook.app.ui.plot;
+
+import java.time.Instant;
+import java.time.LocalDate;
+import java.time.format.DateTimeFormatter;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+import javafx.beans.property.ReadOnlyObjectProperty;
+import javafx.beans.property.ReadOnlyObjectWrapper;
+import javafx.beans.property.ReadOnlyStringProperty;
+import javafx.beans.property.ReadOnlyStringWrapper;
+
+import org.strandbook.evaluation.BandTrend;
+import org.strandbook.site.WavelengthBand;
+import org.strandbook.trend.LossReading;
+import org.strandbook.trend.LossTrend;
+import org.strandbook.trend.MarginForecast;
+import org.strandbook.trend.YearScale;
+
+/**
+ * What the loss-over-time plot shows: per band of interest, the band-mean loss of each loop scan,
+ * the Theil–Sen trend line through them, its continuation to where the margin runs out (the
+ * forecast), and the analyzer's allowed loss. Time runs across in days since 1970-01-01 (UTC); the
+ * y axis follows the user's loss/transmittance choice and the band ranges follow the nm/cm⁻¹ one.
+ */
+public final class TrendPlotModel {
+
+    /** How far past the last scan the plot looks when the forecast gives no date, years. */
+    static final double DEFAULT_LOOK_AHEAD_YEARS = 1;
+    /** The furthest a forecast is drawn, years past the last scan: further says more about the line than the fiber. */
+    static final double MAX_LOOK_AHEAD_YEARS = 10;
+    private static final int TREND_POINTS = 40;
+    /** Tick steps of 1, 3, 6, 12 and 24 average months (a Julian year is 365.25 days). */
+    private static final double[] MONTH_STEPS_DAYS = {365.25 / 12, 365.25 / 4, 365.25 / 2, 365.25, 730.5};
+    private static final DateTimeFormatter MONTH = DateTimeFormatter.ofPattern("uuuu-MM", Locale.ROOT);
+
+    /** A point in time (days since 1970-01-01 UTC) and the chosen y unit. */
+    public record TimePoint(double epochDay, double y) {
+    }
+
+    /**
+     * One line or set of markers, with its legend text (empty for none) and the detail a legend
+     * entry shows on hover. A line without points is a legend entry only.
+     */
+    public record TrendLine(String label, String detail, CurveStyle style, List<TimePoint> points) {
+
+        public TrendLine {
+            points = List.copyOf(points);
+        }
+    }
+
+    private final PlotAxes axes;
+    private final ReadOnlyStringWrapper title = new ReadOnlyStringWrapper(this, "title", "");
+    private final ReadOnlyStringWrapper placeholder = new ReadOnlyStringWrapper(this, "placeholder", "No point selected");
+    private final ReadOnlyObjectWrapper<List<TrendLine>> lines = new ReadOnlyObjectWrapper<>(this, "lines", List.of());
+    private final ReadOnlyObjectWrapper<AxisRange> xRange = new ReadOnlyObjectWrapper<>(this, "xRange");
+    private final ReadOnlyObjectWrapper<AxisRange> yRange = new ReadOnlyObjectWrapper<>(this, "yRange");
+    private List<BandTrend> trends = List.of();
+    private double allowedLossDb = Double.NaN;
+
+    public TrendPlotModel(PlotAxes axes) {
+        this.axes = axes;
+        axes.axisProperty().addListener((o, was, is) -> recompute());
+        axes.scaleProperty().addListener((o, was, is) -> recompute());
+    }
+
+    public PlotAxes axes() {
+        return axes;
+    }
+
+    public ReadOnlyStringProperty titleProperty() {
+        return title.getReadOnlyProperty();
+    }
+
+    public ReadOnlyStringProperty placeholderProperty() {
+        return placeholder.getReadOnlyProperty();
+    }
+
+    public ReadOnlyObjectProperty<List<TrendLine>> linesProperty() {
+        return lines.getReadOnlyProperty();
+    }
+
+    /** Time across, days since 1970-01-01, ticks a whole number of months or years apart. */
+    public ReadOnlyObjectProperty<AxisRange> xRangeProperty() {
+        return xRange.getReadOnlyProperty();
+    }
+
+    public ReadOnlyObjectProperty<AxisRange> yRangeProperty() {
+        return yRange.getReadOnlyProperty();
+    }
+
+    public void show(String caption, List<BandTrend> bandTrends, double allowedDb) {
+        if (caption.equals(title.get()) && bandTrends.equals(trends) && Double.compare(allowedDb, allowedLossDb) == 0) {
+            // a re-evaluation after an edit of the path brings the same history: nothing to redraw
+            return;
+        }
+        title.set(caption);
+        trends = List.copyOf(bandTrends);
+        allowedLossDb = allowedDb;
+        boolean any = trends.stream().anyMatch(t -> !t.readings().isEmpty());
+        placeholder.set(any ? "" : "No loop scan with light in a band yet: nothing to trend");
+        recompute();
+    }
+
+    public void clear(String caption, String message) {
+        title.set(caption);
+        placeholder.set(message);
+        trends = List.of();
+        recompute();
+    }
+
+    /** Days since 1970-01-01 UTC, fractional. */
+    public static double epochDay(Instant t) {
+        return t.getEpochSecond() / 86_400.0 + t.getNano() / 86_400e9;
+    }
+
+    /** A tick label for an epoch day: the nearest month, "2026-03" (ticks a whole number of average months apart drift by a day or two). */
+    public static String monthOf(double epochDay) {
+        return MONTH.format(LocalDate.ofEpochDay((long) Math.floor(epochDay + 15)));
+    }
+
+    private void recompute() {
+        LossScale y = axes.scaleProperty().get();
+        SpectralAxis x = axes.axisProperty().get();
+        List<TrendLine> out = new ArrayList<>();
+        Instant first = null;
+        Instant end = null;
+        boolean trended = false;
+        for (int b = 0; b < trends.size(); b++) {
+            BandTrend t = trends.get(b);
+            if (t.readings().isEmpty()) {
+                continue;
+            }
+            String colour = CurveStyle.series(b);
+            List<LossReading> readings = t.readings();
+            Instant from = readings.get(0).time();
+            Instant last = readings.get(readings.size() - 1).time();
+            Instant until = lookAhead(t, last);
+            first = first == null || from.isBefore(first) ? from : first;
+            end = end == null || until.isAfter(end) ? until : end;
+
+            // one legend entry per band (its markers); the trend and forecast lines explain themselves once, below
+            String band = bandText(t.band(), x);
+            String summary = t.trend().map(tr -> String.format(Locale.ROOT, ": %+.2f dB/yr, ", tr.slopeDbPerYear())
+                    + forecastText(t)).orElse(": too few scans for a trend");
+            out.add(new TrendLine(band + summary + (t.noLight().isEmpty() ? "" : " (" + t.noLight().size() + " scans without light)"),
+                    t.trend().map(TrendPlotModel::trendText).orElse(""),
+                    CurveStyle.markers(colour),
+                    readings.stream().map(r -> new TimePoint(epochDay(r.time()), y.fromLossDb(r.lossDb()))).toList()));
+            if (t.trend().isPresent()) {
+                LossTrend trend = t.trend().get();
+                trended = true;
+                out.add(new TrendLine("", "", CurveStyle.line(colour, 2), along(trend, from, last, y)));
+                out.add(new TrendLine("", "", CurveStyle.dashed(colour, 2), along(trend, last, until, y)));
+            }
+        }
+        if (first != null && Double.isFinite(allowedLossDb)) {
+            double a = y.fromLossDb(allowedLossDb);
+            out.add(new TrendLine(y == LossScale.LOSS_DB
+                    ? String.format(Locale.ROOT, "allowed loss %.1f dB", allowedLossDb)
+                    : String.format(Locale.ROOT, "allowed: %.2g %% transmittance (%.1f dB)", a, allowedLossDb),
+                    "", CurveStyle.dashed(CurveStyle.VERMILLION, 2.5),
+                    List.of(new TimePoint(epochDay(first), a), new TimePoint(epochDay(end), a))));
+        }
+        if (trended) {
+            out.add(new TrendLine("Theil\u2013Sen trend", "", CurveStyle.line(CurveStyle.GREY, 2), List.of()));
+            out.add(new TrendLine("forecast", "", CurveStyle.dashed(CurveStyle.GREY, 2), List.of()));
+        }
+        lines.set(List.copyOf(out));
+        ranges(out);
+    }
+
+    private void ranges(List<TrendLine> shown) {
+        double xLo = Double.POSITIVE_INFINITY;
+        double xHi = Double.NEGATIVE_INFINITY;
+        double yLo = Double.POSITIVE_INFINITY;
+        double yHi = Double.NEGATIVE_INFINITY;
+        for (TrendLine l : shown) {
+            for (TimePoint p : l.points()) {
+                xLo = Math.min(xLo, p.epochDay());
+                xHi = Math.max(xHi, p.epochDay());
+                yLo = Math.min(yLo, p.y());
+                yHi = Math.max(yHi, p.y());
+            }
+        }
+        if (xLo > xHi) {
+            xRange.set(null);
+            yRange.set(null);
+            return;
+        }
+        double spanDays = Math.max(xHi - xLo, 30);
+        double tick = MONTH_STEPS_DAYS[MONTH_STEPS_DAYS.length - 1];
+        for (double step : MONTH_STEPS_DAYS) {
+            if (spanDays / step <= 6) {
+                tick = step;
+                break;
+            }
+        }
+        // start on the first of a month so the month labels fall where the ticks are
+        double start = LocalDate.ofEpochDay((long) Math.floor(xLo)).withDayOfMonth(1).toEpochDay();
+        xRange.set(new AxisRange(start, Math.max(xHi, start + tick), tick));
+        yRange.set(AxisRange.rounded(yLo, yHi, 5));
+    }
+
+    private static Instant lookAhead(BandTrend t, Instant last) {
+        double years = DEFAULT_LOOK_AHEAD_YEARS;
+        if (t.outlook().isPresent() && t.outlook().get().status() == MarginForecast.Status.PROJECTED) {
+            years = Math.max(years, Math.min(MAX_LOOK_AHEAD_YEARS, t.outlook().get().yearsToZero() * 1.1));
+        }
+        return YearScale.plusYears(last, years);
+    }
+
+    private static List<TimePoint> along(LossTrend trend, Instant from, Instant to, LossScale y) {
+        List<TimePoint> points = new ArrayList<>(TREND_POINTS + 1);
+        double span = YearScale.yearsBetween(from, to);
+        for (int i = 0; i <= TREND_POINTS; i++) {
+            Instant t = YearScale.plusYears(from, span * i / TREND_POINTS);
+            points.add(new TimePoint(epochDay(t), y.fromLossDb(trend.lossDbAt(t))));
+        }
+        return points;
+    }
+
+    static String bandText(WavelengthBand band, SpectralAxis x) {
+        if (x == SpectralAxis.WAVELENGTH_NM) {
+            return String.format(Locale.ROOT, "%s %.0f\u2013%.0f nm", band.name(), band.fromNm(), band.toNm());
+        }
+        return String.format(Locale.ROOT, "%s %.0f\u2013%.0f cm\u207B\u00B9", band.name(), x.fromNm(band.toNm()),
+                x.fromNm(band.fromNm()));
+    }
+
+    private static String trendText(LossTrend trend) {
+        String slope = String.format(Locale.ROOT, "Theil\u2013Sen trend %+.2f dB/year", trend.slopeDbPerYear());
+        if (!trend.slopeIsBounded()) {
+            return slope + " (too few scans to bound it)";
+        }
+        return slope + String.format(Locale.ROOT, ", %.0f %% confidence interval %+.2f to %+.2f dB/year",
+                100 * trend.confidenceLevel(), trend.lowerSlopeDbPerYear(), trend.upperSlopeDbPerYear());
+    }
+
+    private static String forecastText(BandTrend t) {
+        if (t.outlook().isEmpty()) {
+            return "no forecast";
+        }
+        MarginForecast.Outlook o = t.outlook().get();
+        return switch (o.status()) {
+            case ALREADY_EXHAUSTED -> "margin used up";
+            case NOT_SHRINKING -> "margin holds";
+            case BEYOND_HORIZON -> "margin lasts " + Math.round(MarginForecast.DEFAULT_HORIZON_YEARS) + "+ yr";
+            case PROJECTED -> "margin used up \u2248 " + o.expectedDate().map(d -> MONTH.format(d)).orElse("?")
+                    + o.earliestDate().map(d -> " (" + MONTH.format(d)
+                    + o.latestDate().map(l -> "\u2026" + MONTH.format(l)).orElse("\u2026") + ")").orElse("");
+        };
+    }
+}

@@ -1,0 +1,17 @@
+package org.strandbook.app.ui.workbook;
+
+/** What the point's view model tells the workbook's view model. */
+interface PointEvents {
+
+    /** The point's legs changed in memory (the save follows in the background). */
+    void legsChanged(String pointTag);
+
+    /** The point was evaluated from the workbook. */
+    void evaluated(PointStatus status);
+
+    /** Saving failed; the workbook file holds something else than the sheets show. */
+    void saveFailed(Exception e);
+
+    /** Anything else worth a line in the status bar. */
+    void failed(Exception e);
+}

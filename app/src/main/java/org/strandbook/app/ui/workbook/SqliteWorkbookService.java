@@ -1,0 +1,278 @@
+package org.strandbook.app.ui.workbook;
+
+import java.io.IOException;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.UUID;
+import java.util.function.IntPredicate;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+import org.strandbook.app.ui.task.JobProgress;
+import org.strandbook.evaluation.PointEvaluation;
+import org.strandbook.evaluation.PointEvaluator;
+import org.strandbook.evaluation.PointInputs;
+import org.strandbook.intake.ScanFileImporter;
+import org.strandbook.intake.ScheduleImporter;
+import org.strandbook.samplesite.DemoSite;
+import org.strandbook.samplesite.ScanGenerator;
+import org.strandbook.site.Analyzer;
+import org.strandbook.site.Catalog;
+import org.strandbook.site.ConnectorType;
+import org.strandbook.site.FiberType;
+import org.strandbook.site.MeasurementPoint;
+import org.strandbook.site.PathDirection;
+import org.strandbook.site.PathLeg;
+import org.strandbook.site.ProbeType;
+import org.strandbook.site.ScanRecord;
+import org.strandbook.site.Site;
+import org.strandbook.store.Workbook;
+
+/**
+ * The window's workbook on a SQLite file through core's {@link Workbook}: one connection, opened,
+ * used and closed by the task executor's single worker thread. Every change goes through the
+ * store's repositories, so it is one transaction and lands in the audit trail under the user's name.
+ */
+public final class SqliteWorkbookService implements WorkbookService {
+
+    private static final Pattern COUNT = Pattern.compile("(\\d+) of (\\d+)");
+
+    private final String user;
+    private final PointEvaluator evaluator = PointEvaluator.withDefaults();
+    private Workbook workbook;
+
+    /** @param user the name the audit trail records for every change */
+    public SqliteWorkbookService(String user) {
+        this.user = user;
+    }
+
+    @Override
+    public synchronized LoadedSite open(Path file, JobProgress progress) {
+        progress.update(-1, "opening " + file.getFileName());
+        return switchTo(Workbook.open(file, user), progress);
+    }
+
+    @Override
+    public synchronized LoadedSite create(Path file, Site site, JobProgress progress) {
+        progress.update(-1, "creating " + file.getFileName());
+        return switchTo(Workbook.create(file, site, user), progress);
+    }
+
+    @Override
+    public synchronized LoadedSite openSample(Path folder, JobProgress progress) {
+        Path file = folder.resolve(DemoSite.WORKBOOK_NAME);
+        if (!Files.exists(file)) {
+            try {
+                DemoSite.build(folder, ScanGenerator.DEMO_SEED, step -> progress.update(fractionOf(step), step));
+            } catch (IOException e) {
+                throw new WorkbookProblem("cannot build the sample site in " + folder + " (" + e.getMessage() + ")", e);
+            }
+        }
+        return open(file, progress);
+    }
+
+    /** The build says "imported 108 of 270 scan files" as it goes: enough for a progress bar. */
+    private static double fractionOf(String step) {
+        Matcher m = COUNT.matcher(step);
+        return m.find() ? Double.parseDouble(m.group(1)) / Math.max(1, Double.parseDouble(m.group(2))) : -1;
+    }
+
+    @Override
+    public synchronized LoadedSite reload(JobProgress progress) {
+        return read(require(), progress);
+    }
+
+    private static LoadedSite read(Workbook wb, JobProgress progress) {
+        Site site = wb.site().get();
+        List<Analyzer> analyzers = wb.site().analyzers();
+        List<MeasurementPoint> points = wb.points().list();
+        Map<String, List<PathLeg>> legs = new HashMap<>();
+        for (int i = 0; i < points.size(); i++) {
+            String tag = points.get(i).tag();
+            if (i % 25 == 0) {
+                progress.update((double) i / points.size(), String.format(Locale.ROOT, "light paths, %d of %d points",
+                        i, points.size()));
+            }
+            legs.put(tag, wb.paths().legs(tag));
+        }
+        return new LoadedSite(wb.file(), site, analyzers, points, wb.catalog().fiberTypes(),
+                wb.catalog().connectorTypes(), wb.catalog().probeTypes(), legs);
+    }
+
+    @Override
+    public synchronized Path saveAs(Path file, JobProgress progress) {
+        Workbook wb = require();
+        Path source = wb.file().toAbsolutePath().normalize();
+        Path target = file.toAbsolutePath().normalize();
+        if (source.equals(target)) {
+            return target;
+        }
+        progress.update(-1, "copying to " + target.getFileName());
+        // closing folds the write-ahead log into the file, so the file alone is the whole workbook
+        wb.close();
+        workbook = null;
+        try {
+            Path log = Path.of(source + "-wal");
+            if (Files.exists(log) && Files.size(log) > 0) {
+                throw new WorkbookProblem("another program still has " + source.getFileName()
+                        + " open; close it there before saving a copy");
+            }
+            Path draft = target.resolveSibling("." + target.getFileName() + "." + UUID.randomUUID() + ".copying");
+            try {
+                Files.copy(source, draft);
+                move(draft, target);
+            } finally {
+                Files.deleteIfExists(draft);
+            }
+            workbook = Workbook.open(target, user);
+            return target;
+        } catch (IOException e) {
+            throw new WorkbookProblem("cannot save a copy as " + target + " (" + e.getMessage() + ")", e);
+        } finally {
+            if (workbook == null) {
+                workbook = Workbook.open(source, user);
+            }
+        }
+    }
+
+    private static void move(Path draft, Path target) throws IOException {
+        try {
+            Files.move(draft, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+        } catch (AtomicMoveNotSupportedException e) {
+            Files.move(draft, target, StandardCopyOption.REPLACE_EXISTING);
+        }
+    }
+
+    @Override
+    public synchronized Optional<Path> file() {
+        return workbook == null ? Optional.empty() : Optional.of(workbook.file());
+    }
+
+    @Override
+    public synchronized List<ScanRecord> scans(String pointTag) {
+        return require().scans().list(pointTag);
+    }
+
+    @Override
+    public synchronized void savePoints(List<MeasurementPoint> points) {
+        Workbook wb = require();
+        wb.inTransaction(() -> points.forEach(wb.points()::save));
+    }
+
+    @Override
+    public synchronized void saveLegs(String pointTag, List<PathLeg> legs) {
+        require().paths().replaceLegs(pointTag, legs);
+    }
+
+    @Override
+    public synchronized void saveCatalog(List<FiberType> fibers, List<ConnectorType> connectors, List<ProbeType> probes) {
+        Workbook wb = require();
+        wb.inTransaction(() -> {
+            fibers.forEach(wb.catalog()::saveFiberType);
+            connectors.forEach(wb.catalog()::saveConnectorType);
+            probes.forEach(wb.catalog()::saveProbeType);
+        });
+    }
+
+    @Override
+    public synchronized PointEvaluation evaluatePoint(String pointTag) {
+        Workbook wb = require();
+        Catalog catalog = Catalog.of(wb.catalog().fiberTypes(), wb.catalog().connectorTypes(), wb.catalog().probeTypes());
+        return evaluator.evaluate(inputs(wb, wb.site().get(), catalog, pointTag));
+    }
+
+    @Override
+    public synchronized List<PointStatus> evaluatePoints(List<String> pointTags, IntPredicate pointDone) {
+        Workbook wb = require();
+        Site site = wb.site().get();
+        Catalog catalog = Catalog.of(wb.catalog().fiberTypes(), wb.catalog().connectorTypes(), wb.catalog().probeTypes());
+        List<PointStatus> out = new ArrayList<>();
+        for (int i = 0; i < pointTags.size(); i++) {
+            String tag = pointTags.get(i);
+            try {
+                PointEvaluation e = evaluator.evaluate(inputs(wb, site, catalog, tag));
+                out.add(new PointStatus(tag, Optional.of(e.status()), e.shortFinding()));
+            } catch (IllegalArgumentException e) {
+                out.add(new PointStatus(tag, Optional.empty(), e.getMessage()));
+            }
+            if (!pointDone.test(i + 1)) {
+                break;
+            }
+        }
+        return out;
+    }
+
+    private static PointInputs inputs(Workbook wb, Site site, Catalog catalog, String tag) {
+        MeasurementPoint point = wb.points().get(tag)
+                .orElseThrow(() -> new IllegalArgumentException("no point tagged '" + tag + "' in this workbook"));
+        Analyzer analyzer = wb.site().analyzer(point.analyzerTag()).orElseThrow(() ->
+                new IllegalArgumentException("point " + tag + ": unknown analyzer '" + point.analyzerTag() + "'"));
+        List<PathLeg> legs = wb.paths().legs(tag);
+        PathLeg send = leg(legs, PathDirection.SEND, tag);
+        PathLeg ret = leg(legs, PathDirection.RETURN, tag);
+        return new PointInputs(site, point, analyzer, send, ret, catalog, wb.scans().list(tag),
+                id -> wb.scans().spectrum(id));
+    }
+
+    private static PathLeg leg(List<PathLeg> legs, PathDirection direction, String tag) {
+        return legs.stream().filter(l -> l.direction() == direction).findFirst().orElseThrow(() ->
+                new IllegalArgumentException("point " + tag + ": no " + direction.name().toLowerCase(Locale.ROOT)
+                        + " leg recorded"));
+    }
+
+    @Override
+    public synchronized ScanFileImporter.Summary importScans(ScanFileImporter.Request request,
+                                                             ScanFileImporter.Progress progress) {
+        return new ScanFileImporter().importFiles(require(), request, progress);
+    }
+
+    @Override
+    public synchronized ScheduleImporter.Outcome importSchedule(Path file) {
+        return new ScheduleImporter().importFile(require(), file);
+    }
+
+    @Override
+    public synchronized void exportDossier(DossierExport export, Path target, JobProgress progress) throws Exception {
+        export.export(require(), target, progress);
+    }
+
+    @Override
+    public synchronized void close() {
+        if (workbook != null) {
+            workbook.close();
+            workbook = null;
+        }
+    }
+
+    /** Reads {@code next} and only then closes the workbook open before, so a failure leaves that one open. */
+    private LoadedSite switchTo(Workbook next, JobProgress progress) {
+        LoadedSite loaded;
+        try {
+            loaded = read(next, progress);
+        } catch (RuntimeException e) {
+            next.close();
+            throw e;
+        }
+        Workbook before = workbook;
+        workbook = next;
+        if (before != null) {
+            before.close();
+        }
+        return loaded;
+    }
+
+    private Workbook require() {
+        if (workbook == null) {
+            throw new WorkbookProblem("no workbook is open");
+        }
+        return workbook;
+    }
+}

@@ -1,0 +1,70 @@
+package org.strandbook.app.ui.plot;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.time.Instant;
+import java.time.ZoneOffset;
+import java.util.List;
+import java.util.Optional;
+
+import org.junit.jupiter.api.Test;
+import org.strandbook.app.ui.MemoryPreferences;
+import org.strandbook.evaluation.BandTrend;
+import org.strandbook.site.WavelengthBand;
+import org.strandbook.trend.LossReading;
+import org.strandbook.trend.LossTrend;
+import org.strandbook.trend.MarginForecast;
+import org.strandbook.trend.TheilSenTrend;
+
+class TrendPlotModelTest {
+
+    private static final WavelengthBand BAND = new WavelengthBand("C-H 1st overtone", 1650, 1780);
+    private static final Instant T0 = Instant.parse("2025-01-01T00:00:00Z");
+
+    private static BandTrend growing() {
+        // invented readings: 1 dB/year exactly, one a quarter
+        List<LossReading> readings = List.of(new LossReading(T0, 10), new LossReading(T0.plusSeconds(7_889_400), 10.25),
+                new LossReading(T0.plusSeconds(15_778_800), 10.5), new LossReading(T0.plusSeconds(23_668_200), 10.75));
+        LossTrend trend = TheilSenTrend.withDefaults().fit(readings);
+        MarginForecast.Outlook outlook = MarginForecast.withDefaults().forecast(2.0, readings.get(3).time(), trend, ZoneOffset.UTC);
+        return new BandTrend(BAND, readings, List.of(), Optional.of(trend), List.of(), Optional.of(outlook));
+    }
+
+    @Test
+    void forecastLineRunsOnFromTheLastScanAlongTheTrend() {
+        TrendPlotModel model = new TrendPlotModel(new PlotAxes(new MemoryPreferences()));
+
+        model.show("test", List.of(growing()), 12.75);
+
+        List<TrendPlotModel.TrendLine> lines = model.linesProperty().get();
+        TrendPlotModel.TrendLine forecast = lines.get(2);
+        TrendPlotModel.TimePoint last = forecast.points().get(forecast.points().size() - 1);
+        // Theil–Sen through exactly collinear readings is that line: 1 dB/year; 2 dB of margin is
+        // used up two years after the last scan (MarginForecast: margin / slope)
+        assertEquals(10.75 + 2 * 1.1, last.y(), 0.01);
+        assertTrue(lines.get(0).label().contains("+1.00 dB/yr, margin used up \u2248 2027-10"), lines.get(0).label());
+        assertEquals("allowed loss 12.8 dB", lines.get(3).label());
+    }
+
+    @Test
+    void bandRangeFollowsTheChosenSpectralUnit() {
+        PlotAxes axes = new PlotAxes(new MemoryPreferences());
+        TrendPlotModel model = new TrendPlotModel(axes);
+        model.show("test", List.of(growing()), 12.75);
+
+        axes.axisProperty().set(SpectralAxis.WAVENUMBER_CM);
+
+        // 10⁷ / 1780 nm = 5618 cm⁻¹ and 10⁷ / 1650 nm = 6061 cm⁻¹ (ISO 80000-7, wavenumber = 1/λ)
+        assertTrue(model.linesProperty().get().get(0).label().startsWith("C-H 1st overtone 5618\u20136061 cm\u207B\u00B9"),
+                model.linesProperty().get().get(0).label());
+    }
+
+    @Test
+    void monthTicksLabelTheNearestMonth() {
+        double jan2025 = TrendPlotModel.epochDay(T0);
+
+        assertEquals("2025-01", TrendPlotModel.monthOf(jan2025));
+        assertEquals("2025-04", TrendPlotModel.monthOf(jan2025 + 365.25 / 4));
+    }
+}
