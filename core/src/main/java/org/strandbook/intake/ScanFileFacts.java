@@ -6,6 +6,8 @@ import java.time.OffsetDateTime;
 import java.time.ZoneOffset;
 import java.time.format.DateTimeFormatter;
 import java.time.format.DateTimeParseException;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
@@ -31,7 +33,12 @@ record ScanFileFacts(Optional<Instant> takenAt, Optional<String> operator, Optio
     private static final DateTimeFormatter JCAMP_LONGDATE = DateTimeFormatter.ofPattern("uuuu/MM/dd HH:mm:ss",
             Locale.ROOT);
 
-    static ScanFileFacts of(Map<String, String> metadata) {
+    static ScanFileFacts of(Map<String, String> labelled) {
+        // keys are normalised once per file, not once per key looked for: this runs for every imported file
+        List<Map.Entry<String, String>> metadata = new ArrayList<>(labelled.size());
+        for (Map.Entry<String, String> e : labelled.entrySet()) {
+            metadata.add(Map.entry(normalize(e.getKey()), e.getValue()));
+        }
         Optional<String> time = find(metadata, "LONGDATE", "TAKENAT", "DATETIME");
         Optional<Instant> takenAt = time.map(ScanFileFacts::parseTime);
         Optional<String> operator = find(metadata, "OPERATOR", "OWNER").filter(s -> !s.isBlank());
@@ -42,10 +49,11 @@ record ScanFileFacts(Optional<Instant> takenAt, Optional<String> operator, Optio
         return new ScanFileFacts(takenAt, operator, integration, coAdded);
     }
 
-    private static Optional<String> find(Map<String, String> metadata, String... keys) {
+    /** The first value, in file order, under the first of {@code keys} present; entries hold normalised keys. */
+    private static Optional<String> find(List<Map.Entry<String, String>> metadata, String... keys) {
         for (String wanted : keys) {
-            for (Map.Entry<String, String> e : metadata.entrySet()) {
-                if (normalize(e.getKey()).equals(wanted)) {
+            for (Map.Entry<String, String> e : metadata) {
+                if (e.getKey().equals(wanted)) {
                     return Optional.of(e.getValue().strip());
                 }
             }
@@ -53,8 +61,17 @@ record ScanFileFacts(Optional<Instant> takenAt, Optional<String> operator, Optio
         return Optional.empty();
     }
 
+    /** The key in capitals with everything but A-Z and 0-9 left out. */
     private static String normalize(String key) {
-        return key.toUpperCase(Locale.ROOT).replaceAll("[^A-Z0-9]", "");
+        String upper = key.toUpperCase(Locale.ROOT);
+        StringBuilder sb = new StringBuilder(upper.length());
+        for (int i = 0; i < upper.length(); i++) {
+            char c = upper.charAt(i);
+            if ((c >= 'A' && c <= 'Z') || (c >= '0' && c <= '9')) {
+                sb.append(c);
+            }
+        }
+        return sb.toString();
     }
 
     private static double number(String text) {
@@ -72,15 +89,19 @@ record ScanFileFacts(Optional<Instant> takenAt, Optional<String> operator, Optio
     /** ISO-8601 with or without offset, or the JCAMP-DX LONGDATE form; no offset means UTC. */
     static Instant parseTime(String text) {
         String t = text.strip();
-        try {
-            return OffsetDateTime.parse(t).toInstant();
-        } catch (DateTimeParseException ignored) {
-            // try the next form
-        }
-        try {
-            return LocalDateTime.parse(t.replace(' ', 'T')).toInstant(ZoneOffset.UTC);
-        } catch (DateTimeParseException ignored) {
-            // try the JCAMP-DX form
+        // no ISO-8601 date-time holds a '/': a JCAMP-DX date goes straight to its own form, sparing two
+        // thrown exceptions per imported file
+        if (t.indexOf('/') < 0) {
+            try {
+                return OffsetDateTime.parse(t).toInstant();
+            } catch (DateTimeParseException ignored) {
+                // try the next form
+            }
+            try {
+                return LocalDateTime.parse(t.replace(' ', 'T')).toInstant(ZoneOffset.UTC);
+            } catch (DateTimeParseException ignored) {
+                // try the JCAMP-DX form
+            }
         }
         String[] parts = t.split("\\s+");
         try {
