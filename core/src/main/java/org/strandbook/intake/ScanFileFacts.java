@@ -3,6 +3,7 @@ package org.strandbook.intake;
 import java.time.Instant;
 import java.time.LocalDateTime;
 import java.time.OffsetDateTime;
+import java.time.DateTimeException;
 import java.time.ZoneOffset;
 import java.time.format.DateTimeFormatter;
 import java.time.format.DateTimeParseException;
@@ -103,15 +104,43 @@ record ScanFileFacts(Optional<Instant> takenAt, Optional<String> operator, Optio
                 // try the JCAMP-DX form
             }
         }
-        String[] parts = t.split("\\s+");
+        List<String> parts = words(t);
         try {
-            LocalDateTime local = LocalDateTime.parse(parts[0] + " " + (parts.length > 1 ? parts[1] : "00:00:00"),
+            LocalDateTime local = LocalDateTime.parse(parts.get(0) + " " + (parts.size() > 1 ? parts.get(1) : "00:00:00"),
                     JCAMP_LONGDATE);
-            ZoneOffset offset = parts.length > 2 ? ZoneOffset.of(parts[2].substring(0, 3) + ":" + parts[2].substring(3))
-                    : ZoneOffset.UTC;
+            ZoneOffset offset = parts.size() > 2
+                    ? ZoneOffset.of(parts.get(2).substring(0, 3) + ":" + parts.get(2).substring(3)) : ZoneOffset.UTC;
             return local.toInstant(offset);
-        } catch (DateTimeParseException | StringIndexOutOfBoundsException e) {
+        } catch (DateTimeException | IndexOutOfBoundsException e) {
             throw new IllegalArgumentException("time '" + text + "' is neither ISO-8601 nor YYYY/MM/DD HH:MM:SS");
         }
+    }
+
+    /**
+     * The runs of characters between blanks (space, tab, line breaks, form feed), as
+     * {@code split("\\s+")} gives them for stripped text, without compiling a pattern for every
+     * imported file.
+     */
+    private static List<String> words(String text) {
+        List<String> out = new ArrayList<>(3);
+        int n = text.length();
+        int i = 0;
+        while (i < n) {
+            while (i < n && isBlank(text.charAt(i))) {
+                i++;
+            }
+            int start = i;
+            while (i < n && !isBlank(text.charAt(i))) {
+                i++;
+            }
+            if (i > start) {
+                out.add(text.substring(start, i));
+            }
+        }
+        return out;
+    }
+
+    private static boolean isBlank(char c) {
+        return c == ' ' || c == '\t' || c == '\n' || c == '\u000B' || c == '\f' || c == '\r';
     }
 }
