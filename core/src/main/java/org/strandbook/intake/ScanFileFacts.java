@@ -1,6 +1,7 @@
 package org.strandbook.intake;
 
 import java.time.Instant;
+import java.time.LocalDate;
 import java.time.LocalDateTime;
 import java.time.OffsetDateTime;
 import java.time.DateTimeException;
@@ -105,6 +106,10 @@ record ScanFileFacts(Optional<Instant> takenAt, Optional<String> operator, Optio
             }
         }
         List<String> parts = words(t);
+        Instant plain = plainLongDate(parts);
+        if (plain != null) {
+            return plain;
+        }
         try {
             LocalDateTime local = LocalDateTime.parse(parts.get(0) + " " + (parts.size() > 1 ? parts.get(1) : "00:00:00"),
                     JCAMP_LONGDATE);
@@ -114,6 +119,70 @@ record ScanFileFacts(Optional<Instant> takenAt, Optional<String> operator, Optio
         } catch (DateTimeException | IndexOutOfBoundsException e) {
             throw new IllegalArgumentException("time '" + text + "' is neither ISO-8601 nor YYYY/MM/DD HH:MM:SS");
         }
+    }
+
+    /**
+     * The usual JCAMP-DX LONGDATE, {@code YYYY/MM/DD HH:MM:SS [±hhmm]} with ordinary field values, read
+     * digit by digit as every imported file needs it; null for any other spelling, which the
+     * formatter then reads and resolves as it always did.
+     */
+    private static Instant plainLongDate(List<String> parts) {
+        if (parts.size() < 2 || parts.size() > 3 || !shaped(parts.get(0), "0000/00/00")
+                || !shaped(parts.get(1), "00:00:00")) {
+            return null;
+        }
+        String date = parts.get(0);
+        String time = parts.get(1);
+        int hour = decimal(time, 0, 2);
+        int minute = decimal(time, 3, 2);
+        int second = decimal(time, 6, 2);
+        if (hour > 23 || minute > 59 || second > 59) {
+            return null;
+        }
+        int offsetSeconds = 0;
+        if (parts.size() == 3) {
+            String offset = parts.get(2);
+            if (!shaped(offset, "+0000") && !shaped(offset, "-0000")) {
+                return null;
+            }
+            int hours = decimal(offset, 1, 2);
+            int minutes = decimal(offset, 3, 2);
+            offsetSeconds = hours * 3600 + minutes * 60;
+            // the limits ZoneOffset.of applies: at most 18:00, minutes below 60
+            if (minutes > 59 || offsetSeconds > 18 * 3600) {
+                return null;
+            }
+            offsetSeconds = offset.charAt(0) == '-' ? -offsetSeconds : offsetSeconds;
+        }
+        LocalDate day;
+        try {
+            day = LocalDate.of(decimal(date, 0, 4), decimal(date, 5, 2), decimal(date, 8, 2));
+        } catch (DateTimeException e) {
+            return null;
+        }
+        return Instant.ofEpochSecond(day.toEpochDay() * 86_400 + hour * 3600L + minute * 60L + second - offsetSeconds);
+    }
+
+    /** True when {@code text} has the shape's length, a digit wherever the shape has 0 and its other characters. */
+    private static boolean shaped(String text, String shape) {
+        if (text.length() != shape.length()) {
+            return false;
+        }
+        for (int i = 0; i < shape.length(); i++) {
+            char c = text.charAt(i);
+            if (shape.charAt(i) == '0' ? c < '0' || c > '9' : c != shape.charAt(i)) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static int decimal(String text, int at, int width) {
+        int value = 0;
+        for (int i = at; i < at + width; i++) {
+            value = 10 * value + (text.charAt(i) - '0');
+        }
+        return value;
     }
 
     /**
