@@ -33,7 +33,8 @@ import org.strandbook.store.Workbook;
 public final class ScanFileImporter {
 
     private static final int READ_AHEAD_THREADS = 3;
-    private static final int READ_AHEAD_FILES = 16;
+    /** Enough parsed files to keep the readers busy while a commit is written (a few MB at 2,000 points). */
+    private static final int READ_AHEAD_FILES = 64;
 
     /** Told after each file; returns false to stop before the next. */
     @FunctionalInterface
@@ -86,8 +87,9 @@ public final class ScanFileImporter {
         List<Rejected> rejected = new ArrayList<>();
         boolean stopped = false;
         List<Path> files = request.files();
-        // files are read and parsed ahead on the other cores while this thread stores them in order
-        int threads = Math.max(1, Math.min(READ_AHEAD_THREADS, Runtime.getRuntime().availableProcessors() - 1));
+        // files are read and parsed ahead while this thread stores them in order; storing spends much
+        // of its time waiting for the disk, so the readers may have every core
+        int threads = Math.max(1, Math.min(READ_AHEAD_THREADS, Runtime.getRuntime().availableProcessors()));
         ExecutorService readers = Executors.newFixedThreadPool(threads, r -> {
             Thread t = new Thread(r, "scan-file-reader");
             t.setDaemon(true);

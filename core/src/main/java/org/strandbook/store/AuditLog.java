@@ -30,11 +30,16 @@ public final class AuditLog {
 
     private static final String APPEND_SQL = "INSERT INTO audit_entry (id, at, user_name, action, table_name, "
             + "row_key, old_values, new_values, row_sha256, prev_hash, hash) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)";
+    private static final String SCAN_ROW_SQL = "SELECT * FROM scan WHERE id = ?";
     private static final String HEAD_SQL = "SELECT id, hash FROM audit_entry ORDER BY id DESC LIMIT 1";
     private static final String ENTRIES_SQL = "SELECT id, at, user_name, action, table_name, row_key, old_values, "
             + "new_values, row_sha256, prev_hash, hash FROM audit_entry WHERE id > ? ORDER BY id LIMIT ?";
 
     private final Session session;
+    /** The newest row as this connection wrote it, valid while the session's write generation is {@link #headGeneration}. */
+    private long headId;
+    private String headHash;
+    private long headGeneration = -1;
 
     AuditLog(Session session) {
         this.session = session;
@@ -83,6 +88,25 @@ public final class AuditLog {
         append("INSERT", table.tableName(), Long.toString(key), null, now.json(), now.sha256());
     }
 
+    /**
+     * Records a scan just inserted with its spectrum, from the scan row read back and the spectrum
+     * bytes the caller has just written. This is the image {@link AuditedTable#SCAN} gives, whose
+     * digest the verifier recomputes from the stored BLOB, so a spectrum changed later is still
+     * found; it only spares reading the 16 bytes per point straight back.
+     */
+    void insertedScan(long scanId, byte[] spectrum) throws SQLException {
+        PreparedStatement ps = session.prepared(SCAN_ROW_SQL);
+        ps.setLong(1, scanId);
+        RowImage now;
+        try (ResultSet rs = ps.executeQuery()) {
+            if (!rs.next()) {
+                throw new IllegalStateException("scan row " + scanId + " vanished inside its own transaction");
+            }
+            now = RowImage.of(rs).withBlob(AuditedTable.SCAN_SPECTRUM_COLUMN, spectrum);
+        }
+        append("INSERT", AuditedTable.SCAN.tableName(), Long.toString(scanId), null, now.json(), now.sha256());
+    }
+
     /** Records a row just updated; an update that changed nothing leaves no trace. */
     void updated(AuditedTable table, long key, RowImage before) throws SQLException {
         RowImage now = capture(table, key).orElseThrow(() -> new IllegalStateException(
@@ -127,15 +151,13 @@ public final class AuditLog {
 
     private void append(String action, String table, String key, String oldValues, String newValues,
                         String rowSha256) throws SQLException {
-        long prevId = 0;
-        String prevHash = Sha256.GENESIS;
-        try (ResultSet rs = session.prepared(HEAD_SQL).executeQuery()) {
-            if (rs.next()) {
-                prevId = rs.getLong(1);
-                prevHash = rs.getString(2);
-            }
+        // the head is read once per write transaction: while it is open no other program can append,
+        // and the generation moves on at every rollback that might have taken our own rows away
+        if (headGeneration != session.writeGeneration()) {
+            readHead();
         }
-        long id = prevId + 1;
+        String prevHash = headHash;
+        long id = headId + 1;
         String at = StoredTime.format(StoredTime.now());
         String user = session.user();
         String hash = chainHash(prevHash, id, at, user, action, table, key, oldValues, newValues, rowSha256);
@@ -152,6 +174,22 @@ public final class AuditLog {
         ps.setString(10, prevHash);
         ps.setString(11, hash);
         ps.executeUpdate();
+        headId = id;
+        headHash = hash;
+    }
+
+    private void readHead() throws SQLException {
+        long id = 0;
+        String hash = Sha256.GENESIS;
+        try (ResultSet rs = session.prepared(HEAD_SQL).executeQuery()) {
+            if (rs.next()) {
+                id = rs.getLong(1);
+                hash = rs.getString(2);
+            }
+        }
+        headId = id;
+        headHash = hash;
+        headGeneration = session.writeGeneration();
     }
 
     static String chainHash(String prevHash, long id, String at, String user, String action, String table,

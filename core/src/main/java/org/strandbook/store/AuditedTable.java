@@ -20,11 +20,17 @@ enum AuditedTable {
     POINT_BAND("point_band"),
     PATH_ELEMENT("path_element"),
     SEGMENT_BEND("segment_bend"),
-    SCAN("scan", "SELECT s.*, d.data AS spectrum FROM scan s LEFT JOIN scan_spectrum d ON d.scan_id = s.id",
-            "s.id", List.of("scan_spectrum")),
+    SCAN("scan", "SELECT s.*, d.data AS " + AuditedTable.SCAN_SPECTRUM_COLUMN
+            + " FROM scan s LEFT JOIN scan_spectrum d ON d.scan_id = s.id", "s.id", List.of("scan_spectrum")),
     INSPECTION("inspection"),
     SIGN_OFF("sign_off"),
     NOTE("note");
+
+    /**
+     * The last column of a scan's image, its spectrum: {@link AuditLog} builds the image of a new
+     * scan from the scan row and the bytes just written under this name (see RowImage#withBlob).
+     */
+    static final String SCAN_SPECTRUM_COLUMN = "spectrum";
 
     private final String tableName;
     private final String imageSql;

@@ -53,6 +53,14 @@ final class RowImage {
         return new RowImage(List.copyOf(columns));
     }
 
+    /** This image with one more column holding {@code bytes}, as {@link #of} shows a BLOB column. */
+    RowImage withBlob(String name, byte[] bytes) {
+        List<Column> more = new ArrayList<>(columns.size() + 1);
+        more.addAll(columns);
+        more.add(new Column(name, new BlobSummary(Sha256.hex(bytes), bytes.length)));
+        return new RowImage(List.copyOf(more));
+    }
+
     String json() {
         StringBuilder sb = new StringBuilder(64 + 24 * columns.size()).append('{');
         for (int i = 0; i < columns.size(); i++) {

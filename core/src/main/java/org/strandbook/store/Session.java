@@ -36,6 +36,7 @@ final class Session implements AutoCloseable {
     private final Map<String, PreparedStatement> statements = new HashMap<>();
     private int depth;
     private boolean writing;
+    private long writeGeneration;
 
     Session(Connection connection, Path file, String user) {
         this.connection = connection;
@@ -53,6 +54,16 @@ final class Session implements AutoCloseable {
 
     Connection connection() {
         return connection;
+    }
+
+    /**
+     * A number that changes whenever what this connection last wrote may no longer be what the file
+     * holds: at the start of every write transaction (another program may have written since) and
+     * at every rollback, whole or to a savepoint. Code that keeps a value read or written inside a
+     * write transaction may trust it while the number stays the same.
+     */
+    long writeGeneration() {
+        return writeGeneration;
     }
 
     /** A statement prepared once for this connection. Do not close it; close its result sets. */
@@ -76,6 +87,7 @@ final class Session implements AutoCloseable {
             exec(depth == 0 ? "BEGIN IMMEDIATE" : "SAVEPOINT " + savepoint);
             if (depth == 0) {
                 writing = true;
+                writeGeneration++;
             }
             depth++;
             boolean done = false;
@@ -116,6 +128,7 @@ final class Session implements AutoCloseable {
             exec("BEGIN IMMEDIATE");
             depth = 1;
             writing = true;
+            writeGeneration++;
         } catch (SQLException e) {
             lock.unlock();
             throw SqlFailures.translate(e, file);
@@ -191,6 +204,7 @@ final class Session implements AutoCloseable {
 
     /** Undo steps may find SQLite already rolled back (disk full, I/O error); that is the wanted state. */
     private void rollbackQuietly(String sql) {
+        writeGeneration++;
         try {
             exec(sql);
         } catch (SQLException ignored) {

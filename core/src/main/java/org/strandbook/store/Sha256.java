@@ -19,7 +19,18 @@ final class Sha256 {
     private Sha256() {
     }
 
+    /** A fresh digest is a copy of this one: several are made per scan stored, and a provider lookup each time costs more. */
+    private static final MessageDigest PROTOTYPE = lookUp();
+
     static MessageDigest newDigest() {
+        try {
+            return (MessageDigest) PROTOTYPE.clone();
+        } catch (CloneNotSupportedException e) {
+            return lookUp();
+        }
+    }
+
+    private static MessageDigest lookUp() {
         try {
             return MessageDigest.getInstance("SHA-256");
         } catch (NoSuchAlgorithmException e) {

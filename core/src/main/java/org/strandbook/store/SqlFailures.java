@@ -47,6 +47,11 @@ final class SqlFailures {
                 || se.getResultCode() == SQLiteErrorCode.SQLITE_CONSTRAINT_PRIMARYKEY);
     }
 
+    /** True when SQLite refused a row for a NOT NULL constraint. */
+    static boolean isNotNullViolation(SQLException e) {
+        return e instanceof SQLiteException se && se.getResultCode() == SQLiteErrorCode.SQLITE_CONSTRAINT_NOTNULL;
+    }
+
     private static int primaryCode(SQLException e) {
         if (e instanceof SQLiteException se) {
             return se.getResultCode().code & 0xff;

@@ -21,6 +21,7 @@ import java.util.List;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.strandbook.site.Note;
 import org.strandbook.site.Site;
 
 /**
@@ -94,6 +95,48 @@ class AuditTrailTest {
                 assertEquals(HexFormat.of().formatHex(md.digest()), e.hash(), "row " + e.id());
                 prev = e.hash();
             }
+        }
+    }
+
+    @Test
+    void aNewScanIsRecordedWithTheImageTheVerifierReadsBack() throws SQLException {
+        // the insert builds the spectrum's digest from the bytes it writes; the verifier hashes the stored BLOB
+        try (Workbook wb = Workbook.open(file, DemoSite.USER)) {
+            long id = DemoSite.insertScan(wb, DemoSite.POINT_A, 3, Instant.parse("2024-03-06T09:00:00Z"));
+            AuditEntry recorded = last(wb);
+            RowImage stored = wb.session().read(() -> wb.audit().capture(AuditedTable.SCAN, id)).orElseThrow();
+            assertEquals(stored.json(), recorded.newValues());
+            assertEquals(stored.sha256(), recorded.rowSha256());
+        }
+    }
+
+    @Test
+    void aChangeUndoneInsideATransactionLeavesNoGapInTheChain() {
+        try (Workbook wb = Workbook.open(file, DemoSite.USER)) {
+            long before = last(wb).id();
+            wb.inTransaction(() -> {
+                assertThrows(IllegalStateException.class, () -> wb.inTransaction((Runnable) () -> {
+                    wb.notes().add(new Note(DemoSite.POINT_A, Instant.parse("2024-03-07T08:00:00Z"), "x", "undone"));
+                    throw new IllegalStateException("given up after the note was written");
+                }));
+                wb.notes().add(new Note(DemoSite.POINT_A, Instant.parse("2024-03-07T08:05:00Z"), "x", "kept"));
+            });
+            assertEquals(before + 1, last(wb).id(), "the undone note's audit row went with it");
+            AuditReport report = wb.audit().verify();
+            assertTrue(report.intact(), report::toString);
+        }
+    }
+
+    @Test
+    void changesOfAnotherConnectionBetweenOursKeepTheChainWhole() {
+        try (Workbook mine = Workbook.open(file, DemoSite.USER);
+             Workbook theirs = Workbook.open(file, "m.okonedo")) {
+            for (int i = 0; i < 3; i++) {
+                mine.notes().add(new Note(DemoSite.POINT_A, Instant.parse("2024-03-08T08:00:00Z"), "x", "mine " + i));
+                theirs.notes().add(new Note(DemoSite.POINT_B, Instant.parse("2024-03-08T08:00:00Z"), "y", "theirs " + i));
+            }
+            AuditReport report = mine.audit().verify();
+            assertTrue(report.intact(), report::toString);
         }
     }
 
@@ -187,6 +230,11 @@ class AuditTrailTest {
         AuditReport r = verify();
         assertTrue(r.chainBreak().isEmpty(), "the chain itself stays whole when its end is cut");
         assertFalse(r.unrecordedChanges().isEmpty(), r::toString);
+    }
+
+    private static AuditEntry last(Workbook wb) {
+        List<AuditEntry> all = wb.audit().entries(0, 10_000);
+        return all.get(all.size() - 1);
     }
 
     /** Runs one statement as another program would: triggers dropped, no audit row. Gives a changed key. */

@@ -21,6 +21,19 @@ class Sha256Test {
     }
 
     @Test
+    void digestsMadeOneAfterAnotherKeepTheirOwnState() {
+        // FIPS 180-4 example "abc" again, fed to two digests in interleaved pieces
+        java.security.MessageDigest first = Sha256.newDigest();
+        first.update((byte) 'a');
+        java.security.MessageDigest second = Sha256.newDigest();
+        second.update(new byte[] {'a', 'b', 'c'});
+        first.update(new byte[] {'b', 'c'});
+        String abc = "ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad";
+        assertEquals(abc, Sha256.toHex(second.digest()));
+        assertEquals(abc, Sha256.toHex(first.digest()));
+    }
+
+    @Test
     void normalisesCaseAndRefusesAnythingButSixtyFourHexDigits() {
         assertEquals("ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad",
                 Sha256.normalized(" BA7816BF8F01CFEA414140DE5DAE2223B00361A396177A9CB410FF61F20015AD ", "f"));

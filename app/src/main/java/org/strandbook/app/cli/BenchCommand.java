@@ -16,6 +16,7 @@ import picocli.CommandLine.Spec;
             OpticsBenchCommand.class,
             ImportBenchCommand.class,
             EvaluateBenchCommand.class,
+            ListingBenchCommand.class,
             EditBenchCommand.class,
         })
 public final class BenchCommand implements Runnable {
