@@ -15,6 +15,7 @@ import picocli.CommandLine.Spec;
         subcommands = {
             OpticsBenchCommand.class,
             EvaluateBenchCommand.class,
+            ExportBenchCommand.class,
         })
 public final class BenchCommand implements Runnable {
 

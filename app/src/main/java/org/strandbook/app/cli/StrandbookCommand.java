@@ -20,6 +20,7 @@ import picocli.CommandLine.Command;
             ScansCommand.class,
             ScanCommand.class,
             AuditCommand.class,
+            ExportCommand.class,
             BenchCommand.class,
         })
 public final class StrandbookCommand implements Runnable {
