@@ -28,12 +28,22 @@ final class ContinuationSheets {
     /** Packs blocks of rows greedily, as the writer will, and adds the sheets they need. */
     private static void add(XSSFWorkbook workbook, DossierSheet which, List<Integer> blocks) {
         int capacity = TableSheet.capacity(workbook.getSheet(which.title()).getLastRowNum() + 1);
+        copies(workbook, which, partsFor(blocks, capacity, which.title()) - 1);
+    }
+
+    /**
+     * Sheets needed for blocks of rows kept whole, filled in order: a block that does not fit the
+     * rest of a sheet starts the next one.
+     *
+     * @throws IllegalArgumentException when a block alone is longer than a sheet
+     */
+    static int partsFor(List<Integer> blocks, int capacity, String sheet) {
         int parts = 1;
         long used = 0;
         for (int rows : blocks) {
             if (rows > capacity) {
-                throw new IllegalArgumentException("one point needs " + rows + " rows on sheet '" + which.title()
-                        + "', more than a sheet holds");
+                throw new IllegalArgumentException("one point needs " + rows + " rows on sheet '" + sheet
+                        + "', more than a sheet holds (" + capacity + ")");
             }
             if (used + rows > capacity) {
                 parts++;
@@ -41,7 +51,7 @@ final class ContinuationSheets {
             }
             used += rows;
         }
-        copies(workbook, which, parts - 1);
+        return parts;
     }
 
     private static void copies(XSSFWorkbook workbook, DossierSheet which, int count) {

@@ -58,7 +58,7 @@ final class LossBudgetRows {
         WavelengthGrid grid = budget.grid();
         Row head = t.newRow();
         t.headerText(head, DossierColumn.BUDGET_TAG, 0, "Point tag");
-        t.headerText(head, DossierColumn.BUDGET_NUMBER, 0, "No.");
+        t.headerText(head, DossierColumn.BUDGET_NUMBER, 0, "Element (no.)");
         t.headerText(head, DossierColumn.BUDGET_LEG, 0, "Leg");
         t.headerText(head, DossierColumn.BUDGET_ELEMENT, 0, "Element");
         t.headerText(head, DossierColumn.BUDGET_KIND, 0, "Kind");
