@@ -36,6 +36,9 @@ final class DossierCharts {
     static final String MEASURED = "Measured";
     static final String DEVIATION = "Deviation (measured − predicted)";
 
+    /** How far a spectrum chart's scale reaches above the allowed loss, dB. */
+    static final double ABOVE_ALLOWED_DB = 10.0;
+
     /** Least span of a trend chart's loss scale, dB. */
     static final double MIN_TREND_SPAN_DB = 2.0;
 
@@ -52,20 +55,28 @@ final class DossierCharts {
     private DossierCharts() {
     }
 
+    /**
+     * @param lossScaleDb the top of the loss scale, dB (see {@link #lossScaleTopDb})
+     * @param lowestDb    the lowest value plotted (a deviation may be negative), dB
+     */
     static XSSFChart spectrum(XSSFDrawing drawing, int firstRow, String title, String wavelengthRange,
                               String predictedRange, String measuredRange, String deviationRange,
-                              double firstNm, double lastNm) {
+                              double firstNm, double lastNm, double lossScaleDb, double lowestDb) {
         XSSFChart chart = chart(drawing, firstRow, ChartPlacement.SPECTRUM_ROWS, ChartPlacement.COLUMNS, title);
         XDDFValueAxis x = chart.createValueAxis(AxisPosition.BOTTOM);
         x.setTitle("Wavelength (nm)");
-        double unit = niceStep(lastNm - firstNm);
-        x.setMinimum(Math.floor(firstNm / unit) * unit);
-        x.setMaximum(Math.ceil(lastNm / unit) * unit);
-        x.setMajorUnit(unit);
+        x.setMinimum(firstNm);
+        x.setMaximum(lastNm);
+        x.setMajorUnit(niceStep(lastNm - firstNm));
         x.setNumberFormat("0");
         XDDFValueAxis y = chart.createValueAxis(AxisPosition.LEFT);
         y.setTitle("Loss (dB)");
         y.setNumberFormat("0.0");
+        double bottom = Math.min(0, Math.floor(lowestDb));
+        double step = niceStep(lossScaleDb - bottom);
+        y.setMinimum(Math.floor(bottom / step) * step);
+        y.setMaximum(Math.ceil(lossScaleDb / step) * step);
+        y.setMajorUnit(step);
         XDDFScatterChartData data = axes(chart, x, y);
         RangeSource wl = new RangeSource(wavelengthRange);
         series(data, wl, predictedRange, PREDICTED, BLUE, 2.0, false, false);
@@ -148,6 +159,18 @@ final class DossierCharts {
             line.setPresetDash(new XDDFPresetLineDash(PresetLineDash.DASH));
         }
         return line;
+    }
+
+    /**
+     * The top of a spectrum chart's loss scale: enough for the highest measured loss and a little
+     * above the analyzer's allowed loss, but no higher: beyond it the analyzer sees no light, and a
+     * prediction climbing to hundreds of dB at the fiber's infrared edge would flatten the part
+     * that matters. A predicted line above the top is cut at the plot's edge.
+     */
+    static double lossScaleTopDb(double allowedDb, double highestMeasuredDb, double highestPredictedDb) {
+        double top = Math.max(Double.isFinite(allowedDb) ? allowedDb + ABOVE_ALLOWED_DB : 0,
+                Double.isFinite(highestMeasuredDb) ? highestMeasuredDb + 2 : 0);
+        return Math.max(1, Math.min(top > 0 ? top : highestPredictedDb + 2, highestPredictedDb + 2));
     }
 
     /** A round axis step giving five to ten labels over {@code spanNm}. */

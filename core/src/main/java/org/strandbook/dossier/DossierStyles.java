@@ -26,7 +26,7 @@ final class DossierStyles {
     /** Letters of ordinary text per digit width: most letters are narrower than a digit. */
     private static final double PROPORTIONAL_CHARS_PER_DIGIT = 1.15;
     /** Letters of a fixed-pitch font per digit width of the default font, size for size. */
-    private static final double FIXED_PITCH_CHARS_PER_DIGIT = 0.8;
+    private static final double FIXED_PITCH_CHARS_PER_DIGIT = 1.1;
 
     private record Key(short base, Look look, boolean quoted) {
     }

@@ -336,11 +336,12 @@ public final class DossierTemplateBuilder {
         }
         row++;
         Row note = sheet.createRow(row);
-        note.setHeightInPoints(2 * LINE_HEIGHT_POINTS);
+        note.setHeightInPoints(3 * LINE_HEIGHT_POINTS);
         cell(note, 1, "Every page carries the site, revision and document status in its header and its page number"
                 + " in its footer. Times are UTC. Numbers use a decimal point; units are in every column header."
                 + " Status is written as symbol and word (" + Status.PASS.label() + ", " + Status.REVIEW.label()
-                + ", " + Status.FAIL.label() + "); colour only repeats it.", valueWrap);
+                + ", " + Status.FAIL.label() + "); colour only repeats it. The last three sheets are appendices of"
+                + " full tables: print them only when needed, their charts and summaries come before them.", valueWrap);
         sheet.addMergedRegion(new CellRangeAddress(row, row, 1, last));
         page(sheet, true);
     }

@@ -191,7 +191,7 @@ public final class DossierWriter {
             done[0] = 0;
             List<HistoryRows.Block> history = HistoryRows.fill(sheets.get(DossierSheet.HISTORY), content,
                     () -> step("writing " + DossierSheet.HISTORY.title(), ++done[0], n));
-            charts += SpectrumChartRows.fill(sheets.get(DossierSheet.CHARTS), spectra, caches);
+            charts += SpectrumChartRows.fill(sheets.get(DossierSheet.CHARTS), content, spectra, caches);
             charts += TrendRows.fill(sheets.get(DossierSheet.TREND), content, history, caches);
             AcceptanceRows.fill(sheets.get(DossierSheet.ACCEPTANCE), content);
             FindingRows.fill(sheets.get(DossierSheet.FINDINGS), content);

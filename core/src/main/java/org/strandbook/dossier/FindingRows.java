@@ -35,6 +35,8 @@ final class FindingRows {
     static final String SOURCE_INSPECTION = "Inspection";
     static final String SOURCE_TREND = "Trend";
     static final String SOURCE_NOTE = "Note";
+    /** The size of a finding that took all the light (a break). */
+    static final String ALL_LIGHT_LOST = "all light";
     /** The point-tag cell of notes on the whole site. */
     static final String SITE_TAG = "(site)";
 
@@ -92,7 +94,11 @@ final class FindingRows {
         t.text(r, DossierColumn.FINDING_CAUSE, f.cause().words());
         t.text(r, DossierColumn.FINDING_OTHER_CAUSES, f.candidates().stream().skip(1).map(Cause::words)
                 .collect(Collectors.joining("; ")));
-        t.number(r, DossierColumn.FINDING_AMOUNT_DB, f.amountDb());
+        if (Double.isInfinite(f.amountDb())) {
+            t.text(r, DossierColumn.FINDING_AMOUNT_DB, ALL_LIGHT_LOST);
+        } else {
+            t.number(r, DossierColumn.FINDING_AMOUNT_DB, f.amountDb());
+        }
         t.number(r, DossierColumn.FINDING_AT_NM, f.atNm());
         t.number(r, DossierColumn.FINDING_SHARE_PERCENT, f.sharePercent());
     }

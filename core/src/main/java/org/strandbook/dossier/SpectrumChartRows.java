@@ -17,7 +17,7 @@ final class SpectrumChartRows {
     private SpectrumChartRows() {
     }
 
-    static int fill(TableSheet t, List<SpectraRows.Block> blocks, ChartCaches caches) {
+    static int fill(TableSheet t, DossierContent content, List<SpectraRows.Block> blocks, ChartCaches caches) {
         t.sheet().createDrawingPatriarch();
         XSSFDrawing drawing = t.sheet().getDrawingPatriarch();
         int charts = 0;
@@ -38,14 +38,44 @@ final class SpectrumChartRows {
             caches.register(predicted, () -> SpectrumColumns.of(e).predictedDb());
             caches.register(measured, () -> SpectrumColumns.of(e).measuredDb());
             caches.register(deviation, () -> SpectrumColumns.of(e).deviationDb());
-            double[] grid = e.predicted().grid().wavelengthsNm();
+            SpectrumColumns columns = SpectrumColumns.of(e);
+            double[] grid = columns.wavelengthNm();
+            double top = DossierCharts.lossScaleTopDb(allowedDb(content, p), max(columns.measuredDb()),
+                    max(columns.predictedDb()));
+            double lowest = Math.min(min(columns.deviationDb()), min(columns.predictedDb()));
             DossierCharts.spectrum(drawing, t.nextRowIndex(), p.tag() + ": measured against predicted loop loss", wl,
-                    predicted, measured, deviation, grid[0], grid[grid.length - 1]);
+                    predicted, measured, deviation, grid[0], grid[grid.length - 1], top, lowest);
             t.skipRows(ChartPlacement.SPECTRUM_ROWS + 1);
             charts++;
             t.sheet().setRowBreak(t.nextRowIndex() - 1);
         }
         return charts;
+    }
+
+    private static double allowedDb(DossierContent content, DossierPoint p) {
+        return content.analyzer(p.point().analyzerTag()).map(a -> a.allowedLossDb()).orElse(Double.NaN);
+    }
+
+    /** Largest finite value, NaN when none. */
+    private static double max(double[] values) {
+        double m = Double.NaN;
+        for (double v : values) {
+            if (Double.isFinite(v) && !(v <= m)) {
+                m = v;
+            }
+        }
+        return m;
+    }
+
+    /** Smallest finite value, 0 when none. */
+    private static double min(double[] values) {
+        double m = 0;
+        for (double v : values) {
+            if (Double.isFinite(v) && v < m) {
+                m = v;
+            }
+        }
+        return m;
     }
 
     private static String verdicts(PointEvaluation e) {
