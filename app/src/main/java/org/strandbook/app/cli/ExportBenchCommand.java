@@ -25,7 +25,7 @@ import picocli.CommandLine.Spec;
  * {@code strandbook bench export}: seconds and heap to write the dossier of a synthetic site of N
  * points (2,000-point spectra, 50 scans each), against the floor of the bare streaming workbook
  * writing as many cells ({@link StreamingFloor}). Each size runs its dossier and its floor in turn,
- * best of {@value #TRIALS}, so that load from other programs hits both alike.
+ * best of {@code --trials}, so that load from other programs hits both alike.
  */
 @Command(name = "export",
         mixinStandardHelpOptions = true,
@@ -37,7 +37,6 @@ import picocli.CommandLine.Spec;
 public final class ExportBenchCommand implements Callable<Integer> {
 
     static final List<Integer> DEFAULT_SIZES = List.of(20, 200, 1000);
-    static final int TRIALS = 3;
     private static final int WARM_UPS = 2;
     private static final double MB = 1024.0 * 1024.0;
 
@@ -55,6 +54,10 @@ public final class ExportBenchCommand implements Callable<Integer> {
             description = "Points per spectrum (default: ${DEFAULT-VALUE}).")
     int wavelengths;
 
+    @Option(names = "--trials", defaultValue = "3", paramLabel = "T",
+            description = "Runs of each size, the best counts (default: ${DEFAULT-VALUE}).")
+    int trials;
+
     /** The best of a size's trials: wall and CPU seconds, and the largest heap any trial used. */
     private record Run(int points, double seconds, double cpuSeconds, long cells, long bytes, HeapWatch.Use heap,
                        DossierSummary summary) {
@@ -70,19 +73,19 @@ public final class ExportBenchCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
-        if ((points != null && points < 1) || scans < 1 || wavelengths < 2) {
-            throw new UsageProblem("--points and --scans must be at least 1, --wavelengths at least 2");
+        if ((points != null && points < 1) || scans < 1 || wavelengths < 2 || trials < 1) {
+            throw new UsageProblem("--points, --scans and --trials must be at least 1, --wavelengths at least 2");
         }
         List<Integer> sizes = points == null ? DEFAULT_SIZES : List.of(points);
         PrintWriter out = spec.commandLine().getOut();
         out.printf(Locale.ROOT, "export bench: synthetic site, %d-point spectra, %d scans per point, shipped template;"
-                + " best of %d; heap max %.0f MB%n", wavelengths, scans, TRIALS, Runtime.getRuntime().maxMemory() / MB);
+                + " best of %d; heap max %.0f MB%n", wavelengths, scans, trials, Runtime.getRuntime().maxMemory() / MB);
         out.println("warming up both ...");
         out.flush();
         Path dir = Files.createTempDirectory("strandbook-bench-export");
         try {
             DossierContent warm = SyntheticDossier.build(Math.min(20, sizes.get(0)), scans, wavelengths);
-            for (int w = 0; w < WARM_UPS; w++) {
+            for (int w = 0; w < Math.min(WARM_UPS, trials); w++) {
                 floor(0, ours(warm, dir).summary(), dir);
             }
             Run first = null;
@@ -92,7 +95,7 @@ public final class ExportBenchCommand implements Callable<Integer> {
                 DossierContent content = SyntheticDossier.build(n, scans, wavelengths);
                 Run o = null;
                 Run f = null;
-                for (int t = 0; t < TRIALS; t++) {
+                for (int t = 0; t < trials; t++) {
                     Run oi = ours(content, dir);
                     Run fi = floor(n, oi.summary(), dir);
                     o = o == null ? oi : o.best(oi);

@@ -21,7 +21,8 @@ class BenchCommandTest {
     @Test
     void exportBenchMeasuresItsFloorAndEndsWithTheRatioLine() {
         // tiny run: the bench's shape, not its speed
-        CliRun run = CliRun.of("bench", "export", "--points", "2", "--scans", "3", "--wavelengths", "40");
+        CliRun run = CliRun.of("bench", "export", "--points", "2", "--scans", "3", "--wavelengths", "40",
+                "--trials", "1");
         assertEquals(0, run.exitCode(), run.err());
         List<String> lines = run.out().lines().toList();
         assertTrue(lines.stream().anyMatch(l -> l.startsWith("floor   N=2 ")), run.out());

@@ -48,7 +48,7 @@ class ExportLibreOfficeCheck {
             assertEquals(5, in.read(head));
         }
         assertEquals("%PDF-", new String(head, StandardCharsets.US_ASCII));
-        assertTrue(Files.size(pdf) > 50_000, "a dossier of twelve sheets and six charts: " + Files.size(pdf) + " bytes");
+        assertTrue(Files.size(pdf) > 50_000, "a dossier of twelve sheets and four charts: " + Files.size(pdf) + " bytes");
         int pages = pages(pdf);
         assertTrue(pages < 0 || pages >= 12, "at least a page per sheet, was " + pages);
     }
