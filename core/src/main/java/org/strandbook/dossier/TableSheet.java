@@ -146,10 +146,6 @@ final class TableSheet {
         return keys > 0;
     }
 
-    DossierSheet which() {
-        return which;
-    }
-
     /** The part being filled. */
     SXSSFSheet sheet() {
         return sheet;
@@ -182,10 +178,6 @@ final class TableSheet {
     /** The 0-based column of a field, or −1 when the template dropped it. */
     int column(DossierColumn column) {
         return columns.getOrDefault(column, -1);
-    }
-
-    boolean has(DossierColumn column) {
-        return columns.containsKey(column);
     }
 
     /** Index of the row {@link #newRow()} will make next. */
@@ -226,10 +218,6 @@ final class TableSheet {
 
     long rowsWritten() {
         return rowsWritten;
-    }
-
-    long cellsWritten() {
-        return textCells + numberCells;
     }
 
     long textCells() {
