@@ -71,7 +71,7 @@ final class DossierCharts {
         x.setNumberFormat("0");
         XDDFValueAxis y = chart.createValueAxis(AxisPosition.LEFT);
         y.setTitle("Loss (dB)");
-        y.setNumberFormat("0.0");
+        y.setNumberFormat("0.0#");
         double bottom = Math.min(0, Math.floor(lowestDb));
         double step = niceStep(lossScaleDb - bottom);
         y.setMinimum(Math.floor(bottom / step) * step);
@@ -99,7 +99,7 @@ final class DossierCharts {
         x.setNumberFormat("yyyy-mm-dd");
         XDDFValueAxis y = chart.createValueAxis(AxisPosition.LEFT);
         y.setTitle("Band-mean loss (dB)");
-        y.setNumberFormat("0.0");
+        y.setNumberFormat("0.0#");
         // a scale of at least MIN_TREND_SPAN_DB keeps scan-to-scan noise of hundredths of a dB from looking like a trend
         double min = Math.floor(lowestDb - 0.5);
         double max = Math.max(Math.ceil(highestDb + 0.5), min + MIN_TREND_SPAN_DB);

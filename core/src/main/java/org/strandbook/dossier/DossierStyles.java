@@ -25,6 +25,8 @@ final class DossierStyles {
 
     /** Letters of ordinary text per digit width: most letters are narrower than a digit. */
     private static final double PROPORTIONAL_CHARS_PER_DIGIT = 1.15;
+    /** Bold letters are wider. */
+    private static final double BOLD_CHARS_PER_DIGIT = 1.0;
     /** Letters of a fixed-pitch font per digit width of the default font, size for size. */
     private static final double FIXED_PITCH_CHARS_PER_DIGIT = 1.1;
 
@@ -89,8 +91,9 @@ final class DossierStyles {
             double scale = 11.0 / Math.max(6, f.getFontHeightInPoints());
             boolean fixedPitch = f.getFontName() != null
                     && f.getFontName().toLowerCase(java.util.Locale.ROOT).contains("courier");
-            return new Metrics(style.getWrapText(), 1.3f * f.getFontHeightInPoints() + 1f,
-                    scale * (fixedPitch ? FIXED_PITCH_CHARS_PER_DIGIT : PROPORTIONAL_CHARS_PER_DIGIT));
+            double perDigit = fixedPitch ? FIXED_PITCH_CHARS_PER_DIGIT
+                    : f.getBold() ? BOLD_CHARS_PER_DIGIT : PROPORTIONAL_CHARS_PER_DIGIT;
+            return new Metrics(style.getWrapText(), 1.3f * f.getFontHeightInPoints() + 1f, scale * perDigit);
         });
     }
 
