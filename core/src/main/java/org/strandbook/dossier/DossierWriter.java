@@ -34,6 +34,9 @@ import org.strandbook.templates.Templates;
  */
 public final class DossierWriter {
 
+    /** Rows of a sheet held in memory while writing; the rest are already on disk. */
+    public static final int ROWS_IN_MEMORY_PER_SHEET = DossierWorkbook.ROW_WINDOW;
+
     /** Opens a template; the caller closes the stream. */
     @FunctionalInterface
     public interface TemplateSource {

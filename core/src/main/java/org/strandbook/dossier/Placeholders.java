@@ -37,11 +37,23 @@ final class Placeholders {
                     if (!filled.equals(text)) {
                         cell.setCellValue(filled);
                         cell.setCellStyle(styles.forText(cell.getCellStyle(), DossierStyles.Look.PLAIN, filled));
+                        growForLines(row, cell, filled, styles);
                     }
                 }
             }
             fill(sheet.getHeader(), values);
             fill(sheet.getFooter(), values);
+        }
+    }
+
+    /** A value of several lines (one analyzer per line, say) gets the height it needs. */
+    private static void growForLines(Row row, Cell cell, String text, DossierStyles styles) {
+        int lines = (int) text.chars().filter(c -> c == '\n').count() + 1;
+        if (lines > 1 && styles.wraps(cell.getCellStyle())) {
+            float needed = lines * styles.lineHeightPoints(cell.getCellStyle()) + 2f;
+            if (needed > row.getHeightInPoints()) {
+                row.setHeightInPoints(needed);
+            }
         }
     }
 

@@ -115,9 +115,9 @@ public final class ExportBenchCommand implements Callable<Integer> {
                                 + " as XML until the file is written, their cached values are not (they are written"
                                 + " from the site's data as the file is); rows stream to disk, %d rows per sheet in"
                                 + " memory%n", first.points(), lastOurs.points(), (double) lastOurs.cells() / first.cells(),
-                        grownMb, perChartKb, 200);
+                        grownMb, perChartKb, DossierWriter.ROWS_IN_MEMORY_PER_SHEET);
             }
-            out.printf(Locale.ROOT, "on CPU time (less sensitive to other programs on the machine): %.3f%n",
+            out.printf(Locale.ROOT, "CPU-time ratio (less sensitive to other programs on the machine): %.3f%n",
                     lastFloor.cpuSeconds() / lastOurs.cpuSeconds());
             out.printf(Locale.ROOT, "ratio: %.3f%n", lastFloor.seconds() / lastOurs.seconds());
             out.flush();
