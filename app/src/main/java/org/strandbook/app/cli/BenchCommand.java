@@ -18,6 +18,7 @@ import picocli.CommandLine.Spec;
             EvaluateBenchCommand.class,
             ListingBenchCommand.class,
             EditBenchCommand.class,
+            ExportBenchCommand.class,
         })
 public final class BenchCommand implements Runnable {
 

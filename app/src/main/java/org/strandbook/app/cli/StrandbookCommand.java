@@ -26,6 +26,7 @@ import picocli.CommandLine.Command;
             EvaluateCommand.class,
             TrendCommand.class,
             AuditCommand.class,
+            ExportCommand.class,
             BenchCommand.class,
         })
 public final class StrandbookCommand implements Runnable {

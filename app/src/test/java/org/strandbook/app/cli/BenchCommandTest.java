@@ -28,6 +28,17 @@ class BenchCommandTest {
     }
 
     @Test
+    void exportBenchMeasuresItsFloorAndEndsWithTheRatioLine() {
+        // tiny run: the bench's shape, not its speed
+        CliRun run = CliRun.of("bench", "export", "--points", "2", "--scans", "3", "--wavelengths", "40",
+                "--trials", "1");
+        assertEquals(0, run.exitCode(), run.err());
+        List<String> lines = run.out().lines().toList();
+        assertTrue(lines.stream().anyMatch(l -> l.startsWith("floor   N=2 ")), run.out());
+        assertTrue(lines.get(lines.size() - 1).matches("ratio: \\d+\\.\\d{3}"), run.out());
+    }
+
+    @Test
     void benchWithoutABenchmarkIsWrongUsage() {
         // a parent command needs a subcommand
         CliRun run = CliRun.of("bench");
