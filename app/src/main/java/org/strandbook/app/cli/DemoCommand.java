@@ -4,9 +4,16 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.UncheckedIOException;
 import java.nio.file.Path;
+import java.time.Instant;
 import java.util.List;
 import java.util.concurrent.Callable;
 
+import org.strandbook.dossier.DossierContent;
+import org.strandbook.dossier.DossierProgress;
+import org.strandbook.dossier.DossierScope;
+import org.strandbook.dossier.DossierWriter;
+import org.strandbook.dossier.WorkbookDossier;
+import org.strandbook.evaluation.PointEvaluator;
 import org.strandbook.evaluation.SiteEvaluation;
 import org.strandbook.evaluation.SiteEvaluator;
 import org.strandbook.samplesite.DemoSite;
@@ -24,7 +31,7 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "demo", mixinStandardHelpOptions = true,
         description = {"Build the invented demo plant (cable schedule, two years of scan files, workbook),",
-            "evaluate it and print a summary per point."})
+            "evaluate it, write its commissioning dossier (XLSX) and print a summary per point."})
 final class DemoCommand implements Callable<Integer> {
 
     @Option(names = "--out", paramLabel = "DIR",
@@ -58,9 +65,18 @@ final class DemoCommand implements Callable<Integer> {
         o.printf(java.util.Locale.ROOT, "workbook  %s%nschedule  %s%nscans     %d files under %s%n",
                 built.workbook(), built.schedule(), built.scanFiles(), built.scanFolder());
         SiteEvaluation site;
+        Path dossier = folder.resolve("saltmarsh-ridge-dossier.xlsx");
         try (Workbook wb = Workbook.open(built.workbook(), DemoSite.USER)) {
             site = SiteEvaluator.withDefaults().evaluate(wb, List.of(), SiteEvaluator.Progress.NONE);
+            err.println("  writing the commissioning dossier");
+            err.flush();
+            DossierContent content = WorkbookDossier.read(wb, DossierScope.everything(), PointEvaluator.withDefaults(),
+                    Instant.now(), new StrandbookVersion().getVersion()[0], DossierProgress.NONE);
+            DossierWriter.withShippedTemplate().write(content, dossier, false, DossierProgress.NONE);
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot write the dossier " + dossier + ": " + e.getMessage(), e);
         }
+        o.printf(java.util.Locale.ROOT, "dossier   %s%n", dossier);
         o.println();
         EvaluationText.summary(site, o);
         o.println();
