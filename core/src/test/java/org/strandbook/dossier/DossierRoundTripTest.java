@@ -132,6 +132,19 @@ class DossierRoundTripTest {
     }
 
     @Test
+    void cautionsAndMethodStateThePairingRuleAndTheAcceptanceNumbersInForce() {
+        String text = file.text("Cautions and method");
+        assertAll(
+                () -> assertTrue(text.contains("Pairing of scans: " + content.pairingRule() + "."), text),
+                () -> assertTrue(text.contains("site default of 1.00 dB")),
+                () -> assertTrue(text.contains("less than 50 % of the band")),
+                () -> assertTrue(text.contains("exceeds 3 tolerances")),
+                () -> assertTrue(text.contains("evaluated on a 2 nm wavelength grid")),
+                () -> assertTrue(text.contains("IEC 60079-28")),
+                () -> assertFalse(text.contains("{"), "every placeholder is filled"));
+    }
+
+    @Test
     void pointRegisterMatchesTheWorkbookRecords() {
         List<Map<String, Cell>> rows = file.rows("Point register");
         assertEquals(List.of("AT-201", "AT-202", "AT-203"), rows.stream().map(r -> DossierFile.string(r, "tag")).toList());
