@@ -87,8 +87,8 @@ public final class ScanFileImporter {
         List<Rejected> rejected = new ArrayList<>();
         boolean stopped = false;
         List<Path> files = request.files();
-        // files are read and parsed ahead while this thread stores them in order; storing spends much
-        // of its time waiting for the disk, so the readers may have every core
+        // files are read and parsed ahead while this thread stores them in order; it waits for the disk
+        // at every commit, so the readers may have every core
         int threads = Math.max(1, Math.min(READ_AHEAD_THREADS, Runtime.getRuntime().availableProcessors()));
         ExecutorService readers = Executors.newFixedThreadPool(threads, r -> {
             Thread t = new Thread(r, "scan-file-reader");
