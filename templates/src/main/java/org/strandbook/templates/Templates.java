@@ -10,6 +10,9 @@ public final class Templates {
     /** The cable schedule a contractor fills in (sheets of analyzers, points, bands, segments, joints, catalogs). */
     public static final String CABLE_SCHEDULE = "cable-schedule.xlsx";
 
+    /** The commissioning dossier's template, filled by core's dossier writer. */
+    public static final String DOSSIER = "dossier-template.xlsx";
+
     /** Shipped fiber types, CSV with the columns of the schedule's 'Fiber types' sheet plus 'Basis'. */
     public static final String FIBER_TYPES = "fiber-types.csv";
 
@@ -20,7 +23,7 @@ public final class Templates {
     public static final String PROBE_TYPES = "probe-types.csv";
 
     /** Every XLSX template shipped here. */
-    public static final List<String> XLSX_TEMPLATES = List.of(CABLE_SCHEDULE);
+    public static final List<String> XLSX_TEMPLATES = List.of(CABLE_SCHEDULE, DOSSIER);
 
     /** Every component catalog shipped here. */
     public static final List<String> CATALOGS = List.of(FIBER_TYPES, CONNECTOR_TYPES, PROBE_TYPES);
