@@ -193,8 +193,8 @@ public final class CableScheduleReader {
         } catch (IOException | RuntimeException e) {
             return name + " is a damaged OLE2 compound file, not an XLSX workbook";
         }
-        return name + " is an old binary Excel workbook (.xls) or another OLE2 document;"
-                + " save it as an Excel Workbook (.xlsx) and import that";
+        return name + " is an old binary spreadsheet (.xls) or another OLE2 document;"
+                + " save it as an XLSX workbook and import that";
     }
 
     private static String describeNonZip(byte[] head, int n, String name) {
@@ -202,7 +202,7 @@ public final class CableScheduleReader {
             case PDF -> "a PDF document";
             case PNG, JPEG, GIF, TIFF, BMP, WMF, EMF -> "an image";
             case RTF, WORD2, MSWRITE -> "a word-processor document";
-            case BIFF2, BIFF3, BIFF4 -> "a very old Excel worksheet";
+            case BIFF2, BIFF3, BIFF4 -> "a very old binary worksheet";
             default -> null;
         };
         if (kind != null) {
@@ -222,11 +222,11 @@ public final class CableScheduleReader {
         }
         if (text && n > start && head[start] == '<') {
             return name + " is a web page or XML file, not an XLSX workbook; open it in a spreadsheet program"
-                    + " and save it as an Excel Workbook (.xlsx)";
+                    + " and save it as an XLSX workbook";
         }
         if (text) {
             return name + " is a text file (CSV or similar), not an XLSX workbook; open it in a spreadsheet program"
-                    + " and save it as an Excel Workbook (.xlsx)";
+                    + " and save it as an XLSX workbook";
         }
         return name + " is not an XLSX workbook (its content is neither a ZIP archive nor text)";
     }

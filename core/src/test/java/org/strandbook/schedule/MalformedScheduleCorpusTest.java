@@ -112,7 +112,7 @@ class MalformedScheduleCorpusTest {
                 file("PDF saved as .xlsx", () -> ascii("%PDF-1.7\n%\u00e2\u00e3\n1 0 obj\n"), "is a PDF document"),
                 file("PNG saved as .xlsx", () -> png(), "is an image"),
                 file("password-protected workbook", MalformedScheduleCorpusTest::encrypted, "encrypted"),
-                file("old binary .xls workbook", MalformedScheduleCorpusTest::oldXls, "old binary Excel workbook"),
+                file("old binary .xls workbook", MalformedScheduleCorpusTest::oldXls, "old binary spreadsheet"),
                 file("OLE2 signature then random bytes", () -> ole2Garbage(12), "damaged OLE2"),
                 file("ZIP bomb beyond the unpack limit", MalformedScheduleCorpusTest::zipBomb, "unpacks to more than"),
                 // POI's own ZIP-bomb guard (minimum inflate ratio, default left in force) catches this one
