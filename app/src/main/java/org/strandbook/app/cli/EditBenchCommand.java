@@ -51,8 +51,6 @@ public final class EditBenchCommand implements Callable<Integer> {
                     + "warm-up takes two trials of each kind.")
     int trialMs;
 
-    private volatile double sink;
-
     private record Edit(DemoPlant.DemoPoint point, List<PathLeg> legs, LightPath path, OpticsCache cache) {
     }
 
@@ -90,17 +88,18 @@ public final class EditBenchCommand implements Callable<Integer> {
             Edit e = edits.get(i);
             return LossBudget.of(e.path(), e.cache()).totalLossDbAt(i % 100);
         };
+        TrialRate rate = new TrialRate(trialMs);
         out.println("warming up both ...");
         out.flush();
         for (int w = 0; w < 2; w++) {
-            rate(predict, edits.size());
-            rate(floor, edits.size());
+            rate.perSecond(predict, edits.size());
+            rate.perSecond(floor, edits.size());
         }
         double best = 0;
         double bestFloor = 0;
         for (int t = 0; t < TRIALS; t++) {
-            best = Math.max(best, rate(predict, edits.size()));
-            bestFloor = Math.max(bestFloor, rate(floor, edits.size()));
+            best = Math.max(best, rate.perSecond(predict, edits.size()));
+            bestFloor = Math.max(bestFloor, rate.perSecond(floor, edits.size()));
         }
         out.println(String.format(Locale.ROOT, "predictions: %.0f per second, %.1f \u00B5s each (records mapped, budget, "
                 + "figures at each band centre; best of %d trials)", best, 1e6 / best, TRIALS));
@@ -119,23 +118,5 @@ public final class EditBenchCommand implements Callable<Integer> {
             }
         }
         return new PathLeg(leg.pointTag(), leg.direction(), elements);
-    }
-
-    /** Operations per second over at least {@link #trialMs}, whole passes. */
-    private double rate(IntToDoubleFunction work, int count) {
-        long budgetNs = trialMs * 1_000_000L;
-        long start = System.nanoTime();
-        long done = 0;
-        double acc = 0;
-        long elapsed;
-        do {
-            for (int i = 0; i < count; i++) {
-                acc += work.applyAsDouble(i);
-            }
-            done += count;
-            elapsed = System.nanoTime() - start;
-        } while (elapsed < budgetNs);
-        sink += acc;
-        return done / (elapsed * 1e-9);
     }
 }

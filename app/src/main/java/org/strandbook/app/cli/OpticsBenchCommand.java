@@ -65,8 +65,6 @@ public final class OpticsBenchCommand implements Callable<Integer> {
                     + "warm-up takes two trials of each kind.")
     int trialMs;
 
-    private volatile double sink;
-
     @Override
     public Integer call() {
         if (paths < 1) {
@@ -119,17 +117,18 @@ public final class OpticsBenchCommand implements Callable<Integer> {
             return total[i % GRID_POINTS];
         };
 
+        TrialRate rate = new TrialRate(trialMs);
         out.println("warming up both ...");
         out.flush();
         for (int w = 0; w < 2; w++) {
-            rate(budget);
-            rate(floor);
+            rate.perSecond(budget, paths);
+            rate.perSecond(floor, paths);
         }
         double bestBudget = 0;
         double bestFloor = 0;
         for (int t = 0; t < TRIALS; t++) {
-            bestBudget = Math.max(bestBudget, rate(budget));
-            bestFloor = Math.max(bestFloor, rate(floor));
+            bestBudget = Math.max(bestBudget, rate.perSecond(budget, paths));
+            bestFloor = Math.max(bestFloor, rate.perSecond(floor, paths));
         }
         out.println(String.format(Locale.ROOT, "budgets: %.0f per second (total + %d contributions each, contributions held as scaled cached spectra; best of %d trials)",
                 bestBudget, elements, TRIALS));
@@ -141,23 +140,6 @@ public final class OpticsBenchCommand implements Callable<Integer> {
         return StrandbookCommand.EXIT_OK;
     }
 
-    /** Paths per second over at least {@link #trialMs}, whole passes over all paths. */
-    private double rate(IntToDoubleFunction work) {
-        long budgetNs = trialMs * 1_000_000L;
-        long start = System.nanoTime();
-        long done = 0;
-        double acc = 0;
-        long elapsed;
-        do {
-            for (int i = 0; i < paths; i++) {
-                acc += work.applyAsDouble(i);
-            }
-            done += paths;
-            elapsed = System.nanoTime() - start;
-        } while (elapsed < budgetNs);
-        sink += acc;
-        return done / (elapsed * 1e-9);
-    }
 
     /** Light paths as a site catalog would give them: few fiber and connector types, varied lengths. */
     static List<LightPath> typicalPaths(int count, SplittableRandom random) {
