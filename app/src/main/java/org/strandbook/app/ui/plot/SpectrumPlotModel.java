@@ -4,10 +4,6 @@ import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
 
-import javafx.beans.property.ReadOnlyObjectProperty;
-import javafx.beans.property.ReadOnlyObjectWrapper;
-import javafx.beans.property.ReadOnlyStringProperty;
-import javafx.beans.property.ReadOnlyStringWrapper;
 
 /**
  * What one spectral plot shows: curves in nm and dB, turned into points in the axes the user chose
@@ -16,7 +12,7 @@ import javafx.beans.property.ReadOnlyStringWrapper;
  * {@link #MAX_POINTS} points per curve: the evaluation grid's 2 nm steps are finer than a plot a
  * few hundred pixels wide can show, and fewer points keep a redraw inside a frame.
  */
-public final class SpectrumPlotModel {
+public final class SpectrumPlotModel extends PlotModel<SpectrumPlotModel.PlotLine> {
 
     static final int MAX_POINTS = 400;
 
@@ -32,46 +28,11 @@ public final class SpectrumPlotModel {
         }
     }
 
-    private final PlotAxes axes;
-    private final ReadOnlyStringWrapper title = new ReadOnlyStringWrapper(this, "title", "");
-    private final ReadOnlyStringWrapper placeholder = new ReadOnlyStringWrapper(this, "placeholder", "No point selected");
-    private final ReadOnlyObjectWrapper<List<PlotLine>> lines = new ReadOnlyObjectWrapper<>(this, "lines", List.of());
-    private final ReadOnlyObjectWrapper<AxisRange> xRange = new ReadOnlyObjectWrapper<>(this, "xRange");
-    private final ReadOnlyObjectWrapper<AxisRange> yRange = new ReadOnlyObjectWrapper<>(this, "yRange");
     private List<Curve> curves = List.of();
     private double ceilingDb = Double.POSITIVE_INFINITY;
 
     public SpectrumPlotModel(PlotAxes axes) {
-        this.axes = axes;
-        axes.axisProperty().addListener((o, was, is) -> recompute());
-        axes.scaleProperty().addListener((o, was, is) -> recompute());
-    }
-
-    public PlotAxes axes() {
-        return axes;
-    }
-
-    public ReadOnlyStringProperty titleProperty() {
-        return title.getReadOnlyProperty();
-    }
-
-    /** What to say where the plot would be when there is nothing to draw. */
-    public ReadOnlyStringProperty placeholderProperty() {
-        return placeholder.getReadOnlyProperty();
-    }
-
-    public ReadOnlyObjectProperty<List<PlotLine>> linesProperty() {
-        return lines.getReadOnlyProperty();
-    }
-
-    /** The x axis: the curves' own span, so the plot starts and ends where the analyzer does. */
-    public ReadOnlyObjectProperty<AxisRange> xRangeProperty() {
-        return xRange.getReadOnlyProperty();
-    }
-
-    /** The y axis: the curves' span, in dB no higher than the ceiling given with them. */
-    public ReadOnlyObjectProperty<AxisRange> yRangeProperty() {
-        return yRange.getReadOnlyProperty();
+        super(axes);
     }
 
     /** The curves shown now, in nm and dB. */
@@ -104,9 +65,10 @@ public final class SpectrumPlotModel {
         recompute();
     }
 
-    private void recompute() {
-        SpectralAxis x = axes.axisProperty().get();
-        LossScale y = axes.scaleProperty().get();
+    @Override
+    protected void recompute() {
+        SpectralAxis x = axes().axisProperty().get();
+        LossScale y = axes().scaleProperty().get();
         List<PlotLine> out = new ArrayList<>(curves.size());
         for (Curve c : curves) {
             out.add(new PlotLine(c.label(y), c.style(), runs(c, x, y)));

@@ -7,10 +7,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
-import javafx.beans.property.ReadOnlyObjectProperty;
-import javafx.beans.property.ReadOnlyObjectWrapper;
-import javafx.beans.property.ReadOnlyStringProperty;
-import javafx.beans.property.ReadOnlyStringWrapper;
 
 import org.strandbook.evaluation.BandTrend;
 import org.strandbook.site.WavelengthBand;
@@ -25,7 +21,7 @@ import org.strandbook.trend.YearScale;
  * forecast), and the analyzer's allowed loss. Time runs across in days since 1970-01-01 (UTC); the
  * y axis follows the user's loss/transmittance choice and the band ranges follow the nm/cm⁻¹ one.
  */
-public final class TrendPlotModel {
+public final class TrendPlotModel extends PlotModel<TrendPlotModel.TrendLine> {
 
     /** How far past the last scan the plot looks when the forecast gives no date, years. */
     static final double DEFAULT_LOOK_AHEAD_YEARS = 1;
@@ -51,44 +47,11 @@ public final class TrendPlotModel {
         }
     }
 
-    private final PlotAxes axes;
-    private final ReadOnlyStringWrapper title = new ReadOnlyStringWrapper(this, "title", "");
-    private final ReadOnlyStringWrapper placeholder = new ReadOnlyStringWrapper(this, "placeholder", "No point selected");
-    private final ReadOnlyObjectWrapper<List<TrendLine>> lines = new ReadOnlyObjectWrapper<>(this, "lines", List.of());
-    private final ReadOnlyObjectWrapper<AxisRange> xRange = new ReadOnlyObjectWrapper<>(this, "xRange");
-    private final ReadOnlyObjectWrapper<AxisRange> yRange = new ReadOnlyObjectWrapper<>(this, "yRange");
     private List<BandTrend> trends = List.of();
     private double allowedLossDb = Double.NaN;
 
     public TrendPlotModel(PlotAxes axes) {
-        this.axes = axes;
-        axes.axisProperty().addListener((o, was, is) -> recompute());
-        axes.scaleProperty().addListener((o, was, is) -> recompute());
-    }
-
-    public PlotAxes axes() {
-        return axes;
-    }
-
-    public ReadOnlyStringProperty titleProperty() {
-        return title.getReadOnlyProperty();
-    }
-
-    public ReadOnlyStringProperty placeholderProperty() {
-        return placeholder.getReadOnlyProperty();
-    }
-
-    public ReadOnlyObjectProperty<List<TrendLine>> linesProperty() {
-        return lines.getReadOnlyProperty();
-    }
-
-    /** Time across, days since 1970-01-01, ticks a whole number of months or years apart. */
-    public ReadOnlyObjectProperty<AxisRange> xRangeProperty() {
-        return xRange.getReadOnlyProperty();
-    }
-
-    public ReadOnlyObjectProperty<AxisRange> yRangeProperty() {
-        return yRange.getReadOnlyProperty();
+        super(axes);
     }
 
     public void show(String caption, List<BandTrend> bandTrends, double allowedDb) {
@@ -121,9 +84,10 @@ public final class TrendPlotModel {
         return MONTH.format(LocalDate.ofEpochDay((long) Math.floor(epochDay + 15)));
     }
 
-    private void recompute() {
-        LossScale y = axes.scaleProperty().get();
-        SpectralAxis x = axes.axisProperty().get();
+    @Override
+    protected void recompute() {
+        LossScale y = axes().scaleProperty().get();
+        SpectralAxis x = axes().axisProperty().get();
         List<TrendLine> out = new ArrayList<>();
         Instant first = null;
         Instant end = null;
