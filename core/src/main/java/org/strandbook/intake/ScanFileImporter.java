@@ -14,6 +14,7 @@ import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
+import java.util.concurrent.FutureTask;
 
 import org.strandbook.scanfile.SpectrumFile;
 import org.strandbook.scanfile.SpectrumFileException;
@@ -21,6 +22,7 @@ import org.strandbook.scanfile.SpectrumFiles;
 import org.strandbook.site.ScanConditions;
 import org.strandbook.site.ScanKind;
 import org.strandbook.site.Spectrum;
+import org.strandbook.store.EncodedScan;
 import org.strandbook.store.NewScan;
 import org.strandbook.store.ScanImport;
 import org.strandbook.store.Workbook;
@@ -32,9 +34,10 @@ import org.strandbook.store.Workbook;
  */
 public final class ScanFileImporter {
 
-    private static final int READ_AHEAD_THREADS = 3;
-    /** Enough parsed files to keep the readers busy while a commit is written (a few MB at 2,000 points). */
-    private static final int READ_AHEAD_FILES = 64;
+    /** Beyond a few readers the disk and the one writing thread set the pace. */
+    private static final int MAX_READERS = 4;
+    /** Parsed files waiting to be stored, at most: about 100 kB each at 2,000 points. */
+    private static final int READ_AHEAD_FILES = 128;
 
     /** Told after each file; returns false to stop before the next. */
     @FunctionalInterface
@@ -87,29 +90,35 @@ public final class ScanFileImporter {
         List<Rejected> rejected = new ArrayList<>();
         boolean stopped = false;
         List<Path> files = request.files();
-        // files are read and parsed ahead while this thread stores them in order; it waits for the disk
-        // at every commit, so the readers may have every core
-        int threads = Math.max(1, Math.min(READ_AHEAD_THREADS, Runtime.getRuntime().availableProcessors()));
+        // files are read, parsed, encoded and digested ahead on one reader per core while this thread
+        // stores them in order; when the next file is not ready it reads that one itself rather than wait
+        int threads = Math.max(1, Math.min(MAX_READERS, Runtime.getRuntime().availableProcessors()));
         ExecutorService readers = Executors.newFixedThreadPool(threads, r -> {
             Thread t = new Thread(r, "scan-file-reader");
             t.setDaemon(true);
             return t;
         });
         try (ScanImport batch = workbook.scans().startImport()) {
-            Deque<Future<Parsed>> ahead = new ArrayDeque<>();
+            Deque<FutureTask<Parsed>> ahead = new ArrayDeque<>();
             int submitted = 0;
             for (int i = 0; i < files.size(); i++) {
                 while (submitted < files.size() && ahead.size() < READ_AHEAD_FILES) {
                     Path next = files.get(submitted++);
-                    ahead.add(readers.submit(() -> parse(next, request)));
+                    FutureTask<Parsed> task = new FutureTask<>(() -> parse(next, request));
+                    readers.execute(task);
+                    ahead.add(task);
                 }
                 Path file = files.get(i);
-                Parsed parsed = await(ahead.removeFirst());
+                FutureTask<Parsed> head = ahead.removeFirst();
+                // runs the task here if no reader has started it, and returns at once if one has
+                head.run();
+                Parsed parsed = await(head);
                 if (parsed.problem() != null) {
                     rejected.add(new Rejected(file, parsed.problem()));
                 } else {
-                    NewScan scan = parsed.prepared().scan();
-                    ScanImport.Outcome outcome = batch.add(scan);
+                    EncodedScan encoded = parsed.prepared().scan();
+                    NewScan scan = encoded.scan();
+                    ScanImport.Outcome outcome = batch.add(encoded);
                     if (outcome.result() == ScanImport.Result.ALREADY_STORED) {
                         rejected.add(new Rejected(file, file.getFileName() + ":0: the same file is already stored as"
                                 + " scan " + outcome.scanId() + " (same SHA-256)"));
@@ -129,7 +138,8 @@ public final class ScanFileImporter {
         return new Summary(accepted, rejected, stopped);
     }
 
-    private record Prepared(NewScan scan, String timeSource) {
+    /** A scan ready to store: its spectrum is encoded and digested on the reading thread. */
+    private record Prepared(EncodedScan scan, String timeSource) {
     }
 
     /** A file read and parsed, or why it cannot be stored. */
@@ -179,9 +189,9 @@ public final class ScanFileImporter {
         ScanConditions conditions = new ScanConditions(facts.operator().orElse(request.operator()),
                 facts.integrationMs().orElse(0), facts.coAdded().orElse(1), OptionalDouble.empty(),
                 OptionalDouble.empty());
-        Spectrum spectrum = new Spectrum(read.wavelengthsNm(), read.values());
-        return new Prepared(new NewScan(request.pointTag(), request.kind(), takenAt, conditions, spectrum,
-                file.getFileName().toString(), read.sha256Hex()), timeSource);
+        Spectrum spectrum = read.spectrum();
+        return new Prepared(EncodedScan.of(new NewScan(request.pointTag(), request.kind(), takenAt, conditions,
+                spectrum, file.getFileName().toString(), read.sha256Hex())), timeSource);
     }
 
     private static Instant modified(Path file) {

@@ -49,7 +49,8 @@ final class AsdfDecoder {
     private double abscissaQuantum;
     private boolean endsInDif;
 
-    private CharSequence text;
+    /** The line being decoded, copied into a reused buffer: array reads are cheaper than charAt per character. */
+    private char[] text = new char[128];
     private int end;
     private int pos;
     private double lastQuantum;
@@ -68,9 +69,9 @@ final class AsdfDecoder {
         if (pos >= end) {
             throw new SyntaxError("empty data line");
         }
-        if (!isAffnStart(text.charAt(pos))) {
+        if (!isAffnStart(text[pos])) {
             throw new SyntaxError("a data line must start with its abscissa (X value), found "
-                    + describe(text.charAt(pos)) + " (column " + (pos + 1) + ")");
+                    + describe(text[pos]) + " (column " + (pos + 1) + ")");
         }
         abscissa = readAffn();
         abscissaQuantum = lastQuantum;
@@ -82,7 +83,7 @@ final class AsdfDecoder {
             if (pos >= end) {
                 break;
             }
-            char c = text.charAt(pos);
+            char c = text[pos];
             int column = pos + 1;
             if (isAffnStart(c)) {
                 add(readAffn(), maxOrdinates);
@@ -142,7 +143,7 @@ final class AsdfDecoder {
             if (pos >= end) {
                 break;
             }
-            char c = text.charAt(pos);
+            char c = text[pos];
             if (c == '?') {
                 throw new SyntaxError("'?' (value unknown) at column " + (pos + 1) + ": a spectrum needs every value");
             }
@@ -180,8 +181,18 @@ final class AsdfDecoder {
     }
 
     private void start(CharSequence line) {
-        text = line;
-        end = line.length();
+        int length = line.length();
+        if (text.length < length) {
+            text = new char[Math.max(length, 2 * text.length)];
+        }
+        if (line instanceof String s) {
+            s.getChars(0, length, text, 0);
+        } else {
+            for (int i = 0; i < length; i++) {
+                text[i] = line.charAt(i);
+            }
+        }
+        end = length;
         pos = 0;
         count = 0;
         endsInDif = false;
@@ -189,7 +200,7 @@ final class AsdfDecoder {
 
     private void skipSeparators(boolean semicolonToo) {
         while (pos < end) {
-            char c = text.charAt(pos);
+            char c = text[pos];
             if (c == ' ' || c == '\t' || c == ',' || (semicolonToo && c == ';')) {
                 pos++;
             } else {
@@ -230,7 +241,7 @@ final class AsdfDecoder {
     private double readAffn() throws SyntaxError {
         int start = pos;
         boolean negative = false;
-        char c = text.charAt(pos);
+        char c = text[pos];
         if (c == '+' || c == '-') {
             negative = c == '-';
             pos++;
@@ -240,7 +251,7 @@ final class AsdfDecoder {
         int decimals = 0;
         boolean point = false;
         while (pos < end) {
-            c = text.charAt(pos);
+            c = text[pos];
             if (c >= '0' && c <= '9') {
                 if (digits < 18) {
                     mantissa = mantissa * 10 + (c - '0');
@@ -258,19 +269,19 @@ final class AsdfDecoder {
             }
         }
         if (digits == 0) {
-            throw new SyntaxError(NumberField.quote(text.subSequence(start, Math.min(end, pos + 1)).toString())
+            throw new SyntaxError(NumberField.quote(new String(text, start, Math.min(end, pos + 1) - start))
                     + " at column " + (start + 1) + " is not a number");
         }
         int exponent = 0;
         boolean hasExponent = false;
-        if (pos + 1 < end && (text.charAt(pos) == 'E' || text.charAt(pos) == 'e')
-                && (text.charAt(pos + 1) == '+' || text.charAt(pos + 1) == '-')) {
-            boolean negativeExponent = text.charAt(pos + 1) == '-';
+        if (pos + 1 < end && (text[pos] == 'E' || text[pos] == 'e')
+                && (text[pos + 1] == '+' || text[pos + 1] == '-')) {
+            boolean negativeExponent = text[pos + 1] == '-';
             pos += 2;
             int exponentDigits = 0;
-            while (pos < end && NumberField.isDigit(text.charAt(pos))) {
+            while (pos < end && NumberField.isDigit(text[pos])) {
                 if (exponentDigits < 6) {
-                    exponent = exponent * 10 + (text.charAt(pos) - '0');
+                    exponent = exponent * 10 + (text[pos] - '0');
                 }
                 exponentDigits++;
                 pos++;
@@ -283,7 +294,7 @@ final class AsdfDecoder {
         }
         double value;
         if (hasExponent || digits > 15 || decimals >= POWERS_OF_TEN.length) {
-            value = Double.parseDouble(text.subSequence(start, pos).toString());
+            value = Double.parseDouble(new String(text, start, pos - start));
         } else {
             value = decimals == 0 ? mantissa : mantissa / POWERS_OF_TEN[decimals];
             value = negative ? -value : value;
@@ -297,6 +308,29 @@ final class AsdfDecoder {
      * followed by plain digits and, leniently, a decimal point with more digits.
      */
     private double readPseudoDigits(int signedFirstDigit) throws SyntaxError {
+        // the usual token: a few plain digits, read with locals and no double arithmetic
+        char[] t = text;
+        int p = pos + 1;
+        long whole = Math.abs(signedFirstDigit);
+        int wholeDigits = 1;
+        while (p < end && wholeDigits < 18) {
+            int d = t[p] - '0';
+            if (d < 0 || d > 9) {
+                break;
+            }
+            whole = whole * 10 + d;
+            wholeDigits++;
+            p++;
+        }
+        if (p >= end || (t[p] != '.' && (t[p] < '0' || t[p] > '9'))) {
+            pos = p;
+            return signedFirstDigit < 0 ? -(double) whole : (double) whole;
+        }
+        return readPseudoDigitsInFull(signedFirstDigit);
+    }
+
+    /** {@link #readPseudoDigits} for tokens with a decimal point or 18 digits and more. */
+    private double readPseudoDigitsInFull(int signedFirstDigit) throws SyntaxError {
         int start = pos;
         pos++;
         boolean negative = signedFirstDigit < 0;
@@ -307,7 +341,7 @@ final class AsdfDecoder {
         boolean exact = true;
         double big = mantissa;
         while (pos < end) {
-            char c = text.charAt(pos);
+            char c = text[pos];
             if (c >= '0' && c <= '9') {
                 if (digits < 18) {
                     mantissa = mantissa * 10 + (c - '0');

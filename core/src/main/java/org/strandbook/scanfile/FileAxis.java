@@ -6,6 +6,10 @@ package org.strandbook.scanfile;
  * <p>The file may run up or down (analyzers in wavenumbers often write from high to low), but it
  * must run one way: a repeated abscissa or an axis that turns back is a damaged or concatenated
  * file, and importing it sorted would hide that.
+ *
+ * <p>The arrays handed in are the reader's own scratch: they are converted and turned in place,
+ * since every file of a batch import passes through here and copies would only feed the garbage
+ * collector. Messages are built in separate methods that run only on a bad file.
  */
 final class FileAxis {
 
@@ -17,9 +21,9 @@ final class FileAxis {
     }
 
     /**
-     * @param x     abscissae in file order and file unit
-     * @param y     ordinates in file order
-     * @param lines the 1-based file line of each point, for messages
+     * @param x     abscissae in file order and file unit; becomes the wavelengths (nm), ascending
+     * @param y     ordinates in file order; becomes the values in wavelength order
+     * @param lines the 1-based file line of each point, for messages; not changed
      */
     static Ascending toAscendingNm(String fileName, XUnit unit, double[] x, double[] y, int[] lines)
             throws SpectrumFileException {
@@ -30,58 +34,63 @@ final class FileAxis {
         }
         for (int i = 0; i < n; i++) {
             if (!(x[i] > 0)) {
-                throw new SpectrumFileException(fileName, lines[i], "abscissa " + NumberField.plain(x[i]) + " "
-                        + unit.symbol() + " is not positive: a " + (unit == XUnit.WAVENUMBER_CM ? "wavenumber" : "wavelength")
-                        + " must be greater than zero");
+                throw notPositive(fileName, unit, x[i], lines[i]);
             }
         }
         boolean ascending = x[1] > x[0];
         for (int i = 1; i < n; i++) {
-            if (x[i] == x[i - 1]) {
-                throw new SpectrumFileException(fileName, lines[i], "abscissa " + NumberField.plain(x[i]) + " "
-                        + unit.symbol() + " repeats the point on line " + lines[i - 1]);
-            }
-            if ((x[i] > x[i - 1]) != ascending) {
-                throw new SpectrumFileException(fileName, lines[i], "the axis turns back: " + NumberField.plain(x[i])
-                        + " after " + NumberField.plain(x[i - 1]) + " " + unit.symbol() + " in "
-                        + (ascending ? "an ascending" : "a descending") + " axis (rows must be sorted by abscissa)");
+            if (x[i] == x[i - 1] || (x[i] > x[i - 1]) != ascending) {
+                throw outOfOrder(fileName, unit, x, lines, i, ascending);
             }
         }
-        double[] nm = new double[n];
         for (int i = 0; i < n; i++) {
-            nm[i] = unit.toNm(x[i]);
-            if (!Double.isFinite(nm[i])) {
-                throw new SpectrumFileException(fileName, lines[i], "abscissa " + NumberField.plain(x[i]) + " "
-                        + unit.symbol() + " is outside any wavelength range Strandbook can hold");
+            double nm = unit.toNm(x[i]);
+            if (!Double.isFinite(nm)) {
+                throw outOfRange(fileName, unit, x[i], lines[i]);
             }
+            x[i] = nm;
         }
-        double[] values = y.clone();
-        int[] order = lines.clone();
-        if (nm[n - 1] < nm[0]) {
-            reverse(nm);
-            reverse(values);
-            reverse(order);
+        boolean reversed = x[n - 1] < x[0];
+        if (reversed) {
+            reverse(x);
+            reverse(y);
         }
         for (int i = 1; i < n; i++) {
-            if (!(nm[i] > nm[i - 1])) {
-                throw new SpectrumFileException(fileName, order[i], "abscissa on this line and on line " + order[i - 1]
-                        + " give the same wavelength in nm (" + NumberField.plain(nm[i]) + ")");
+            if (!(x[i] > x[i - 1])) {
+                int line = lines[reversed ? n - 1 - i : i];
+                int previousLine = lines[reversed ? n - i : i - 1];
+                throw new SpectrumFileException(fileName, line, "abscissa on this line and on line " + previousLine
+                        + " give the same wavelength in nm (" + NumberField.plain(x[i]) + ")");
             }
         }
-        return new Ascending(nm, values);
+        return new Ascending(x, y);
+    }
+
+    private static SpectrumFileException notPositive(String fileName, XUnit unit, double x, int line) {
+        return new SpectrumFileException(fileName, line, "abscissa " + NumberField.plain(x) + " "
+                + unit.symbol() + " is not positive: a " + (unit == XUnit.WAVENUMBER_CM ? "wavenumber" : "wavelength")
+                + " must be greater than zero");
+    }
+
+    private static SpectrumFileException outOfOrder(String fileName, XUnit unit, double[] x, int[] lines, int i,
+                                                    boolean ascending) {
+        if (x[i] == x[i - 1]) {
+            return new SpectrumFileException(fileName, lines[i], "abscissa " + NumberField.plain(x[i]) + " "
+                    + unit.symbol() + " repeats the point on line " + lines[i - 1]);
+        }
+        return new SpectrumFileException(fileName, lines[i], "the axis turns back: " + NumberField.plain(x[i])
+                + " after " + NumberField.plain(x[i - 1]) + " " + unit.symbol() + " in "
+                + (ascending ? "an ascending" : "a descending") + " axis (rows must be sorted by abscissa)");
+    }
+
+    private static SpectrumFileException outOfRange(String fileName, XUnit unit, double x, int line) {
+        return new SpectrumFileException(fileName, line, "abscissa " + NumberField.plain(x) + " "
+                + unit.symbol() + " is outside any wavelength range Strandbook can hold");
     }
 
     private static void reverse(double[] a) {
         for (int i = 0, j = a.length - 1; i < j; i++, j--) {
             double t = a[i];
-            a[i] = a[j];
-            a[j] = t;
-        }
-    }
-
-    private static void reverse(int[] a) {
-        for (int i = 0, j = a.length - 1; i < j; i++, j--) {
-            int t = a[i];
             a[i] = a[j];
             a[j] = t;
         }

@@ -80,8 +80,23 @@ public final class SpectrumFiles {
 
     /** SHA-256 of the bytes as 64 lower-case hex digits (FIPS 180-4). */
     public static String sha256Hex(byte[] content) {
+        return HexFormat.of().formatHex(newSha256().digest(content));
+    }
+
+    /** Copying a digest is cheaper than looking one up from the providers, which a batch import does per file. */
+    private static final MessageDigest SHA256_PROTOTYPE = lookUpSha256();
+
+    private static MessageDigest newSha256() {
         try {
-            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(content));
+            return (MessageDigest) SHA256_PROTOTYPE.clone();
+        } catch (CloneNotSupportedException e) {
+            return lookUpSha256();
+        }
+    }
+
+    private static MessageDigest lookUpSha256() {
+        try {
+            return MessageDigest.getInstance("SHA-256");
         } catch (NoSuchAlgorithmException e) {
             throw new IllegalStateException("every Java runtime provides SHA-256", e);
         }

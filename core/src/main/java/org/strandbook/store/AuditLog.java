@@ -92,9 +92,10 @@ public final class AuditLog {
      * Records a scan just inserted with its spectrum, from the scan row read back and the spectrum
      * bytes the caller has just written. This is the image {@link AuditedTable#SCAN} gives, whose
      * digest the verifier recomputes from the stored BLOB, so a spectrum changed later is still
-     * found; it only spares reading the 16 bytes per point straight back.
+     * found; it only spares reading the 16 bytes per point straight back and digesting them on the
+     * writing thread.
      */
-    void insertedScan(long scanId, byte[] spectrum) throws SQLException {
+    void insertedScan(long scanId, int spectrumBytes, String spectrumSha256) throws SQLException {
         PreparedStatement ps = session.prepared(SCAN_ROW_SQL);
         ps.setLong(1, scanId);
         RowImage now;
@@ -102,7 +103,7 @@ public final class AuditLog {
             if (!rs.next()) {
                 throw new IllegalStateException("scan row " + scanId + " vanished inside its own transaction");
             }
-            now = RowImage.of(rs).withBlob(AuditedTable.SCAN_SPECTRUM_COLUMN, spectrum);
+            now = RowImage.of(rs).withBlob(AuditedTable.SCAN_SPECTRUM_COLUMN, spectrumSha256, spectrumBytes);
         }
         append("INSERT", AuditedTable.SCAN.tableName(), Long.toString(scanId), null, now.json(), now.sha256());
     }

@@ -53,11 +53,14 @@ final class RowImage {
         return new RowImage(List.copyOf(columns));
     }
 
-    /** This image with one more column holding {@code bytes}, as {@link #of} shows a BLOB column. */
-    RowImage withBlob(String name, byte[] bytes) {
+    /**
+     * This image with one more column holding bytes of the given digest and length, as {@link #of}
+     * shows a BLOB column.
+     */
+    RowImage withBlob(String name, String sha256, int bytes) {
         List<Column> more = new ArrayList<>(columns.size() + 1);
         more.addAll(columns);
-        more.add(new Column(name, new BlobSummary(Sha256.hex(bytes), bytes.length)));
+        more.add(new Column(name, new BlobSummary(sha256, bytes)));
         return new RowImage(List.copyOf(more));
     }
 

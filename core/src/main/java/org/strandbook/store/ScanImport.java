@@ -11,8 +11,10 @@ import java.time.Duration;
  * before, each whole.
  *
  * <p>Between commits this import holds the workbook's write lock: other writers wait (up to their
- * busy timeout), readers do not. Use it from one thread and close it in a finally block or
- * try-with-resources.
+ * busy timeout), readers do not. While it runs, committed pages are copied from the write-ahead
+ * log into the file by a {@link WalCheckpointer} beside it rather than inside each commit; closing
+ * the import copies what is left, so the file ends as after any other commit. Use it from one
+ * thread and close it in a finally block or try-with-resources.
  */
 public final class ScanImport implements AutoCloseable {
 
@@ -39,6 +41,8 @@ public final class ScanImport implements AutoCloseable {
     private long openedAt;
     private int stored;
     private int alreadyStored;
+    private boolean checkpointerTried;
+    private WalCheckpointer checkpointer;
 
     ScanImport(Session session, ScanRepository scans, int scansPerCommit, Duration commitInterval) {
         if (scansPerCommit < 1) {
@@ -57,10 +61,18 @@ public final class ScanImport implements AutoCloseable {
      * @throws WorkbookBusyException when another writer held the workbook beyond the busy timeout
      */
     public Outcome add(NewScan scan) {
+        return add(EncodedScan.of(scan));
+    }
+
+    /** Stores one scan already encoded (see {@link EncodedScan}); otherwise as {@link #add(NewScan)}. */
+    public Outcome add(EncodedScan scan) {
         if (closed) {
             throw new IllegalStateException("this import is closed");
         }
         if (!open) {
+            if (!checkpointerTried) {
+                startCheckpointer();
+            }
             session.beginOpenWrite();
             open = true;
             openedAt = System.nanoTime();
@@ -90,19 +102,44 @@ public final class ScanImport implements AutoCloseable {
         return alreadyStored;
     }
 
+    private void startCheckpointer() {
+        checkpointerTried = true;
+        checkpointer = WalCheckpointer.start(session.file()).orElse(null);
+        if (checkpointer != null) {
+            session.setAutoCheckpointPages(0);
+        }
+    }
+
     private void commit() {
         open = false;
         sinceCommit = 0;
         session.commitOpenWrite();
+        if (checkpointer != null) {
+            checkpointer.request();
+        }
     }
 
-    /** Commits what was added since the last commit. */
+    private void stopCheckpointer() {
+        if (checkpointer == null) {
+            return;
+        }
+        checkpointer.close();
+        checkpointer = null;
+        session.setAutoCheckpointPages(Workbook.AUTO_CHECKPOINT_PAGES);
+        session.checkpoint();
+    }
+
+    /** Commits what was added since the last commit and copies the log into the file. */
     @Override
     public void close() {
         if (!closed) {
             closed = true;
-            if (open) {
-                commit();
+            try {
+                if (open) {
+                    commit();
+                }
+            } finally {
+                stopCheckpointer();
             }
         }
     }

@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.sql.Connection;
 import java.sql.PreparedStatement;
 import java.sql.SQLException;
+import java.sql.Statement;
 import java.util.HashMap;
 import java.util.Map;
 import java.util.concurrent.locks.ReentrantLock;
@@ -74,6 +75,45 @@ final class Session implements AutoCloseable {
             statements.put(sql, ps);
         }
         return ps;
+    }
+
+    /**
+     * Sets how many pages the write-ahead log may hold before a commit copies them into the file
+     * (0: never; SQLite's default is 1000). Outside transactions only.
+     */
+    void setAutoCheckpointPages(int pages) {
+        withoutTransaction(() -> {
+            try (Statement s = connection.createStatement()) {
+                s.execute("PRAGMA wal_autocheckpoint=" + pages);
+            }
+        });
+    }
+
+    /** Copies what the write-ahead log holds into the file, as far as no reader needs it. */
+    void checkpoint() {
+        withoutTransaction(() -> {
+            try (Statement s = connection.createStatement()) {
+                s.execute("PRAGMA wal_checkpoint(PASSIVE)");
+            }
+        });
+    }
+
+    private interface SqlStep {
+        void run() throws SQLException;
+    }
+
+    private void withoutTransaction(SqlStep step) {
+        lock.lock();
+        try {
+            if (depth > 0) {
+                throw new IllegalStateException("not inside a transaction");
+            }
+            step.run();
+        } catch (SQLException e) {
+            throw SqlFailures.translate(e, file);
+        } finally {
+            lock.unlock();
+        }
     }
 
     /** Runs {@code work} in a write transaction (or a savepoint of the enclosing one). */

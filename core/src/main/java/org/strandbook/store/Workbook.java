@@ -36,6 +36,8 @@ public final class Workbook implements AutoCloseable {
 
     /** SQLite page cache per open workbook, KiB; taken only as pages are read or written. */
     private static final int CACHE_KIB = 32 * 1024;
+    /** SQLite's own default: the write-ahead log is copied into the file when it passes 1000 pages. */
+    static final int AUTO_CHECKPOINT_PAGES = 1000;
 
     private final Session session;
     private final AuditLog audit;

@@ -39,6 +39,17 @@ class BenchCommandTest {
     }
 
     @Test
+    void importBenchTimesEveryTrialAndEndsWithTheRatioLine() {
+        // tiny run: the bench's shape (a line per trial, the first marked cold), not its speed
+        CliRun run = CliRun.of("bench", "import", "--files", "3", "--trials", "2");
+        assertEquals(0, run.exitCode(), run.err());
+        List<String> lines = run.out().lines().toList();
+        assertTrue(lines.stream().anyMatch(l -> l.startsWith("trial 1 (cold): import ")), run.out());
+        assertTrue(lines.stream().anyMatch(l -> l.startsWith("trial 2: import ")), run.out());
+        assertTrue(lines.get(lines.size() - 1).matches("ratio: \\d+\\.\\d\\d"), run.out());
+    }
+
+    @Test
     void benchWithoutABenchmarkIsWrongUsage() {
         // a parent command needs a subcommand
         CliRun run = CliRun.of("bench");
