@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Locale;
 
 import org.strandbook.evaluation.Status;
+import org.strandbook.site.SignedDecimal;
 
 /**
  * The dossier's fixed wording and how it writes numbers and times in text: always with a decimal
@@ -46,7 +47,7 @@ final class DossierText {
     }
 
     static String signed(double value, int digits) {
-        return String.format(Locale.ROOT, "%+." + digits + "f", value);
+        return SignedDecimal.of(value, digits);
     }
 
     static String words(Enum<?> value) {

@@ -12,6 +12,7 @@ import org.strandbook.evaluation.BandVerdict;
 import org.strandbook.evaluation.PointEvaluation;
 import org.strandbook.evaluation.SiteEvaluation;
 import org.strandbook.evaluation.Urgency;
+import org.strandbook.site.SignedDecimal;
 import org.strandbook.throughput.MaskedRange;
 import org.strandbook.trend.LossReading;
 import org.strandbook.trend.LossTrend;
@@ -174,9 +175,9 @@ final class EvaluationText {
                         b == 0 ? e.status().label() : "", tr.band().name(),
                         Integer.toString(tr.readings().size()) + (tr.noLight().isEmpty() ? ""
                                 : " (+" + tr.noLight().size() + " dark)"),
-                        lt.map(x -> String.format(Locale.ROOT, "%+.3f", x.slopeDbPerYear())).orElse("—"),
-                        lt.map(x -> String.format(Locale.ROOT, "%+.3f … %+.3f", x.lowerSlopeDbPerYear(),
-                                x.upperSlopeDbPerYear())).orElse("—"),
+                        lt.map(x -> SignedDecimal.of(x.slopeDbPerYear(), 3)).orElse("—"),
+                        lt.map(x -> SignedDecimal.of(x.lowerSlopeDbPerYear(), 3) + " … "
+                                + SignedDecimal.of(x.upperSlopeDbPerYear(), 3)).orElse("—"),
                         Integer.toString(tr.steps().size()), db(margin), outlook(tr));
             }
             rank++;

@@ -9,6 +9,7 @@ import java.util.Locale;
 
 
 import org.strandbook.evaluation.BandTrend;
+import org.strandbook.site.SignedDecimal;
 import org.strandbook.site.WavelengthBand;
 import org.strandbook.trend.LossReading;
 import org.strandbook.trend.LossTrend;
@@ -107,7 +108,7 @@ public final class TrendPlotModel extends PlotModel<TrendPlotModel.TrendLine> {
 
             // one legend entry per band (its markers); the trend and forecast lines explain themselves once, below
             String band = bandText(t.band(), x);
-            String summary = t.trend().map(tr -> String.format(Locale.ROOT, ": %+.2f dB/yr, ", tr.slopeDbPerYear())
+            String summary = t.trend().map(tr -> ": " + SignedDecimal.of(tr.slopeDbPerYear(), 2) + " dB/yr, "
                     + forecastText(t)).orElse(": too few scans for a trend");
             out.add(new TrendLine(band + summary + (t.noLight().isEmpty() ? "" : " (" + t.noLight().size() + " scans without light)"),
                     t.trend().map(TrendPlotModel::trendText).orElse(""),
@@ -195,12 +196,13 @@ public final class TrendPlotModel extends PlotModel<TrendPlotModel.TrendLine> {
     }
 
     private static String trendText(LossTrend trend) {
-        String slope = String.format(Locale.ROOT, "Theil\u2013Sen trend %+.2f dB/year", trend.slopeDbPerYear());
+        String slope = "Theil\u2013Sen trend " + SignedDecimal.of(trend.slopeDbPerYear(), 2) + " dB/year";
         if (!trend.slopeIsBounded()) {
             return slope + " (too few scans to bound it)";
         }
-        return slope + String.format(Locale.ROOT, ", %.0f %% confidence interval %+.2f to %+.2f dB/year",
-                100 * trend.confidenceLevel(), trend.lowerSlopeDbPerYear(), trend.upperSlopeDbPerYear());
+        return slope + String.format(Locale.ROOT, ", %.0f %% confidence interval %s to %s dB/year",
+                100 * trend.confidenceLevel(), SignedDecimal.of(trend.lowerSlopeDbPerYear(), 2),
+                SignedDecimal.of(trend.upperSlopeDbPerYear(), 2));
     }
 
     private static String forecastText(BandTrend t) {

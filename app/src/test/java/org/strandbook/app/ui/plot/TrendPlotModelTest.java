@@ -48,6 +48,22 @@ class TrendPlotModelTest {
     }
 
     @Test
+    void aFlatHistoryShowsNoSignedZeroSlope() {
+        // invented readings falling by 0.0004 dB a quarter: the slope rounds to zero, and a legend
+        // reading "-0.00 dB/yr" would suggest a change (ISO 80000-1 writes zero unsigned)
+        List<LossReading> readings = List.of(new LossReading(T0, 10), new LossReading(T0.plusSeconds(7_889_400), 9.9996),
+                new LossReading(T0.plusSeconds(15_778_800), 9.9992), new LossReading(T0.plusSeconds(23_668_200), 9.9988));
+        LossTrend trend = TheilSenTrend.withDefaults().fit(readings);
+        BandTrend flat = new BandTrend(BAND, readings, List.of(), Optional.of(trend), List.of(), Optional.empty());
+        TrendPlotModel model = new TrendPlotModel(new PlotAxes(new MemoryPreferences()));
+
+        model.show("test", List.of(flat), 12.75);
+
+        String label = model.linesProperty().get().get(0).label();
+        assertTrue(label.contains(": +0.00 dB/yr"), label);
+    }
+
+    @Test
     void bandRangeFollowsTheChosenSpectralUnit() {
         PlotAxes axes = new PlotAxes(new MemoryPreferences());
         TrendPlotModel model = new TrendPlotModel(axes);
