@@ -98,6 +98,19 @@ final class Session implements AutoCloseable {
         });
     }
 
+    /**
+     * Writes a consistent snapshot of the whole database, compacted, to a new file (SQLite's
+     * {@code VACUUM INTO}). Other programs may read and write the workbook meanwhile.
+     */
+    void vacuumInto(Path newFile) {
+        withoutTransaction(() -> {
+            try (PreparedStatement ps = connection.prepareStatement("VACUUM INTO ?")) {
+                ps.setString(1, newFile.toAbsolutePath().toString());
+                ps.execute();
+            }
+        });
+    }
+
     private interface SqlStep {
         void run() throws SQLException;
     }

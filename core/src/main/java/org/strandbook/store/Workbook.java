@@ -1,10 +1,12 @@
 package org.strandbook.store;
 
 import java.io.IOException;
+import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
 import java.nio.file.LinkOption;
 import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
 import java.sql.Connection;
 import java.sql.SQLException;
 import java.time.Duration;
@@ -196,6 +198,39 @@ public final class Workbook implements AutoCloseable {
 
     public Path file() {
         return session.file();
+    }
+
+    /**
+     * Writes a copy of the whole workbook to {@code target}, replacing a file there, while this
+     * workbook stays open. The copy is one consistent snapshot, compacted, taken even while other
+     * programs use the workbook (SQLite {@code VACUUM INTO}); it is written under a hidden name
+     * beside the target and moved into place only when complete, so a failure leaves the target
+     * as it was.
+     *
+     * @throws WorkbookException when the target is this workbook's own file or cannot be written
+     */
+    public void copyTo(Path target) {
+        Path to = target.toAbsolutePath().normalize();
+        if (to.equals(file().toAbsolutePath().normalize())) {
+            throw new WorkbookException("a workbook cannot be copied onto itself (" + to + ")");
+        }
+        Path draft = to.resolveSibling("." + to.getFileName() + "." + UUID.randomUUID() + ".copying");
+        try {
+            session.vacuumInto(draft);
+            try {
+                Files.move(draft, to, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            } catch (AtomicMoveNotSupportedException e) {
+                Files.move(draft, to, StandardCopyOption.REPLACE_EXISTING);
+            }
+        } catch (IOException e) {
+            throw new WorkbookException("cannot write the copy " + to + " (" + e.getMessage() + ")", e);
+        } finally {
+            try {
+                Files.deleteIfExists(draft);
+            } catch (IOException ignored) {
+                // a leftover draft under a hidden name does no harm
+            }
+        }
     }
 
     /** Who this workbook was opened for: the name the audit trail records. */

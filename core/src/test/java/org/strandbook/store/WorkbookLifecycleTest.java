@@ -46,6 +46,40 @@ class WorkbookLifecycleTest {
     }
 
     @Test
+    void aCopyWrittenWhileAnotherProgramHasTheWorkbookOpenIsWholeAndVerifies() throws IOException {
+        // VACUUM INTO writes one consistent snapshot without an exclusive lock (sqlite.org/lang_vacuum.html)
+        Path file = dir.resolve("source.sqlite");
+        Path copy = dir.resolve("elsewhere").resolve("copy.sqlite");
+        Files.createDirectories(copy.getParent());
+        try (Workbook wb = Workbook.create(file, DemoSite.site(), DemoSite.USER);
+             Workbook otherProgram = Workbook.open(file, "s.varga")) {
+            DemoSite.populate(wb);
+            otherProgram.points().list();
+            Files.writeString(copy, "an older copy, replaced");
+
+            wb.copyTo(copy);
+
+            assertEquals(DemoSite.site(), wb.site().get());
+            try (Workbook c = Workbook.open(copy, "m.okonedo")) {
+                assertEquals(wb.points().list(), c.points().list());
+                assertEquals(wb.site().get(), c.site().get());
+                assertTrue(c.audit().verify().intact(), c.audit().verify()::toString);
+            }
+        }
+        try (var left = Files.list(copy.getParent())) {
+            assertEquals(1, left.count(), "no draft left beside the copy");
+        }
+    }
+
+    @Test
+    void aWorkbookIsNotCopiedOntoItself() {
+        Path file = dir.resolve("self.sqlite");
+        try (Workbook wb = Workbook.create(file, DemoSite.site(), DemoSite.USER)) {
+            assertThrows(WorkbookException.class, () -> wb.copyTo(dir.resolve(".").resolve("self.sqlite")));
+        }
+    }
+
+    @Test
     void createRefusesAnExistingFileAndLeavesItAlone() throws IOException {
         Path file = dir.resolve("taken.sqlite");
         Files.writeString(file, "someone's notes");

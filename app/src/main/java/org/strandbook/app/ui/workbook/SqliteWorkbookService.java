@@ -1,17 +1,14 @@
 package org.strandbook.app.ui.workbook;
 
 import java.io.IOException;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
-import java.util.UUID;
 import java.util.function.IntPredicate;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
@@ -35,6 +32,7 @@ import org.strandbook.site.ProbeType;
 import org.strandbook.site.ScanRecord;
 import org.strandbook.site.Site;
 import org.strandbook.store.Workbook;
+import org.strandbook.store.WorkbookException;
 
 /**
  * The window's workbook on a SQLite file through core's {@link Workbook}: one connection, opened,
@@ -116,39 +114,17 @@ public final class SqliteWorkbookService implements WorkbookService {
             return target;
         }
         progress.update(-1, "copying to " + target.getFileName());
-        // closing folds the write-ahead log into the file, so the file alone is the whole workbook
+        // one consistent snapshot written beside the target and moved into place; the window then
+        // works on in the copy, as Save As does in any editor
+        try {
+            wb.copyTo(target);
+        } catch (WorkbookException e) {
+            throw new WorkbookProblem(e.getMessage(), e);
+        }
+        Workbook copy = Workbook.open(target, user);
         wb.close();
-        workbook = null;
-        try {
-            Path log = Path.of(source + "-wal");
-            if (Files.exists(log) && Files.size(log) > 0) {
-                throw new WorkbookProblem("another program still has " + source.getFileName()
-                        + " open; close it there before saving a copy");
-            }
-            Path draft = target.resolveSibling("." + target.getFileName() + "." + UUID.randomUUID() + ".copying");
-            try {
-                Files.copy(source, draft);
-                move(draft, target);
-            } finally {
-                Files.deleteIfExists(draft);
-            }
-            workbook = Workbook.open(target, user);
-            return target;
-        } catch (IOException e) {
-            throw new WorkbookProblem("cannot save a copy as " + target + " (" + e.getMessage() + ")", e);
-        } finally {
-            if (workbook == null) {
-                workbook = Workbook.open(source, user);
-            }
-        }
-    }
-
-    private static void move(Path draft, Path target) throws IOException {
-        try {
-            Files.move(draft, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-        } catch (AtomicMoveNotSupportedException e) {
-            Files.move(draft, target, StandardCopyOption.REPLACE_EXISTING);
-        }
+        workbook = copy;
+        return target;
     }
 
     @Override
