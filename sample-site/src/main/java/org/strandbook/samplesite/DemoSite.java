@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.CancellationException;
 
 import org.strandbook.intake.ScanFileImporter;
 import org.strandbook.intake.ScheduleImporter;
@@ -44,10 +45,15 @@ public final class DemoSite {
     private static final DateTimeFormatter JCAMP_TIME = DateTimeFormatter.ofPattern("uuuu/MM/dd HH:mm:ss",
             Locale.ROOT).withZone(ZoneOffset.UTC);
 
-    /** Told what the build is doing, for a progress line. */
+    /** Told what the build is doing, for a progress line; may ask the build to stop. */
     @FunctionalInterface
     public interface Progress {
         void step(String what);
+
+        /** Asked between steps and between scan files: true stops the build, which then leaves no workbook. */
+        default boolean stopRequested() {
+            return false;
+        }
     }
 
     /** What was built, and what the generator injected at each point. */
@@ -80,36 +86,65 @@ public final class DemoSite {
         Path scanFolder = folder.resolve("scans");
         Map<String, List<Path>> groups = new LinkedHashMap<>();
         for (GeneratedScan s : scans) {
+            stopIfRequested(progress);
             Path file = writeScanFile(scanFolder, s, plant);
             groups.computeIfAbsent(s.pointTag() + "\u0000" + s.kind().name(), k -> new ArrayList<>()).add(file);
         }
 
+        stopIfRequested(progress);
         progress.step("creating workbook " + workbookFile.getFileName());
-        try (Workbook workbook = Workbook.create(workbookFile, plant.site(), USER)) {
-            progress.step("importing the cable schedule");
-            ScheduleImporter.Outcome outcome = new ScheduleImporter().importFile(workbook, schedule);
-            if (!outcome.written()) {
-                throw new IllegalStateException("the demo's own schedule was refused: "
-                        + outcome.problems().stream().map(ScheduleProblem::toString).toList());
+        // built under a hidden name and moved into place when whole: a stopped or failed build
+        // leaves no half-filled sample site for the next open to find
+        Path draft = folder.resolve("." + WORKBOOK_NAME + ".building");
+        deleteWorkbookFiles(draft);
+        try {
+            try (Workbook workbook = Workbook.create(draft, plant.site(), USER)) {
+                fill(workbook, schedule, groups, scans.size(), progress);
             }
-            int done = 0;
-            for (Map.Entry<String, List<Path>> g : groups.entrySet()) {
-                String[] key = g.getKey().split("\u0000");
-                ScanFileImporter.Summary summary = new ScanFileImporter().importFiles(workbook,
-                        new ScanFileImporter.Request(key[0], ScanKind.valueOf(key[1]), g.getValue(), Optional.empty(),
-                                USER), ScanFileImporter.Progress.NONE);
-                if (!summary.rejected().isEmpty()) {
-                    throw new IllegalStateException("the demo's own scan file was refused: "
-                            + summary.rejected().get(0).reason());
-                }
-                int before = done;
-                done += g.getValue().size();
-                if (done * 5 / scans.size() > before * 5 / scans.size()) {
-                    progress.step(String.format(Locale.ROOT, "imported %d of %d scan files", done, scans.size()));
-                }
-            }
+            Files.move(draft, workbookFile);
+        } finally {
+            deleteWorkbookFiles(draft);
         }
         return new Built(workbookFile, schedule, scanFolder, scans.size(), generator.injected());
+    }
+
+    private static void fill(Workbook workbook, Path schedule, Map<String, List<Path>> groups, int scanFiles,
+                             Progress progress) {
+        progress.step("importing the cable schedule");
+        ScheduleImporter.Outcome outcome = new ScheduleImporter().importFile(workbook, schedule);
+        if (!outcome.written()) {
+            throw new IllegalStateException("the demo's own schedule was refused: "
+                    + outcome.problems().stream().map(ScheduleProblem::toString).toList());
+        }
+        int done = 0;
+        for (Map.Entry<String, List<Path>> g : groups.entrySet()) {
+            String[] key = g.getKey().split("\u0000");
+            ScanFileImporter.Summary summary = new ScanFileImporter().importFiles(workbook,
+                    new ScanFileImporter.Request(key[0], ScanKind.valueOf(key[1]), g.getValue(), Optional.empty(),
+                            USER), (n, total, file) -> !progress.stopRequested());
+            stopIfRequested(progress);
+            if (!summary.rejected().isEmpty()) {
+                throw new IllegalStateException("the demo's own scan file was refused: "
+                        + summary.rejected().get(0).reason());
+            }
+            int before = done;
+            done += g.getValue().size();
+            if (done * 5 / scanFiles > before * 5 / scanFiles) {
+                progress.step(String.format(Locale.ROOT, "imported %d of %d scan files", done, scanFiles));
+            }
+        }
+    }
+
+    private static void stopIfRequested(Progress progress) {
+        if (progress.stopRequested()) {
+            throw new CancellationException("the sample site build was stopped");
+        }
+    }
+
+    private static void deleteWorkbookFiles(Path file) throws IOException {
+        for (String suffix : new String[] {"", "-wal", "-shm", "-journal"}) {
+            Files.deleteIfExists(file.resolveSibling(file.getFileName() + suffix));
+        }
     }
 
     /** The demo plant as the contractor's schedule: its analyzers, points, legs and its own catalog. */

@@ -69,7 +69,17 @@ public final class SqliteWorkbookService implements WorkbookService {
         Path file = folder.resolve(DemoSite.WORKBOOK_NAME);
         if (!Files.exists(file)) {
             try {
-                DemoSite.build(folder, ScanGenerator.DEMO_SEED, step -> progress.update(fractionOf(step), step));
+                DemoSite.build(folder, ScanGenerator.DEMO_SEED, new DemoSite.Progress() {
+                    @Override
+                    public void step(String what) {
+                        progress.update(fractionOf(what), what);
+                    }
+
+                    @Override
+                    public boolean stopRequested() {
+                        return progress.isCancelled();
+                    }
+                });
             } catch (IOException e) {
                 throw new WorkbookProblem("cannot build the sample site in " + folder + " (" + e.getMessage() + ")", e);
             }
