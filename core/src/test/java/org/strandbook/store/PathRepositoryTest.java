@@ -2,16 +2,11 @@ package org.strandbook.store;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
-import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.nio.file.Path;
 import java.util.List;
 import java.util.OptionalDouble;
 
-import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
 import org.strandbook.site.Bend;
 import org.strandbook.site.CableSegment;
 import org.strandbook.site.InspectionGrade;
@@ -20,24 +15,10 @@ import org.strandbook.site.LossBasis;
 import org.strandbook.site.PathDirection;
 import org.strandbook.site.PathLeg;
 
-class PathRepositoryTest {
+class PathRepositoryTest extends PopulatedWorkbookTest {
 
-    @TempDir
-    Path dir;
-
-    private Workbook wb;
-
-    @BeforeEach
-    void open() {
-        wb = Workbook.create(dir.resolve("paths.sqlite"), DemoSite.site(), DemoSite.USER);
-        DemoSite.populate(wb);
-    }
-
-    @AfterEach
-    void checkTrailAndClose() {
-        AuditReport report = wb.audit().verify();
-        wb.close();
-        assertTrue(report.intact(), report::toString);
+    PathRepositoryTest() {
+        super("paths.sqlite");
     }
 
     @Test

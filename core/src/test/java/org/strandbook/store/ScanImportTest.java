@@ -2,7 +2,6 @@ package org.strandbook.store;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
-import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -13,31 +12,14 @@ import java.sql.Statement;
 import java.time.Duration;
 import java.time.Instant;
 
-import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
 import org.strandbook.site.ScanConditions;
 import org.strandbook.site.ScanKind;
 
-class ScanImportTest {
+class ScanImportTest extends PopulatedWorkbookTest {
 
-    @TempDir
-    Path dir;
-
-    private Workbook wb;
-
-    @BeforeEach
-    void open() {
-        wb = Workbook.create(dir.resolve("import.sqlite"), DemoSite.site(), DemoSite.USER);
-        DemoSite.populate(wb);
-    }
-
-    @AfterEach
-    void checkTrailAndClose() {
-        AuditReport report = wb.audit().verify();
-        wb.close();
-        assertTrue(report.intact(), report::toString);
+    ScanImportTest() {
+        super("import.sqlite");
     }
 
     private static NewScan scan(String tag, int seq) {

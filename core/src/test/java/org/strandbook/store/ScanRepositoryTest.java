@@ -6,7 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.nio.file.Path;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
@@ -15,36 +14,19 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalDouble;
 
-import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
 import org.strandbook.site.ScanConditions;
 import org.strandbook.site.ScanKind;
 import org.strandbook.site.ScanRecord;
 import org.strandbook.site.Spectrum;
 
-class ScanRepositoryTest {
+class ScanRepositoryTest extends PopulatedWorkbookTest {
+
+    ScanRepositoryTest() {
+        super("scans.sqlite");
+    }
 
     private static final Instant T0 = Instant.parse("2024-03-05T14:07:00Z");
-
-    @TempDir
-    Path dir;
-
-    private Workbook wb;
-
-    @BeforeEach
-    void open() {
-        wb = Workbook.create(dir.resolve("scans.sqlite"), DemoSite.site(), DemoSite.USER);
-        DemoSite.populate(wb);
-    }
-
-    @AfterEach
-    void checkTrailAndClose() {
-        AuditReport report = wb.audit().verify();
-        wb.close();
-        assertTrue(report.intact(), report::toString);
-    }
 
     @Test
     void storedSpectrumComesBackBitForBit() {

@@ -4,15 +4,11 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.nio.file.Path;
 import java.time.Instant;
 import java.util.List;
 import java.util.OptionalDouble;
 
-import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
 import org.strandbook.site.AttenuationPoint;
 import org.strandbook.site.FiberType;
 import org.strandbook.site.Inspection;
@@ -25,24 +21,10 @@ import org.strandbook.site.SignOffRole;
 import org.strandbook.site.WavelengthBand;
 
 /** Every site record comes back from the workbook as it went in, and every change leaves the trail whole. */
-class SiteRecordsRoundTripTest {
+class SiteRecordsRoundTripTest extends PopulatedWorkbookTest {
 
-    @TempDir
-    Path dir;
-
-    private Workbook wb;
-
-    @BeforeEach
-    void open() {
-        wb = Workbook.create(dir.resolve("site.sqlite"), DemoSite.site(), DemoSite.USER);
-        DemoSite.populate(wb);
-    }
-
-    @AfterEach
-    void checkTrailAndClose() {
-        AuditReport report = wb.audit().verify();
-        wb.close();
-        assertTrue(report.intact(), report::toString);
+    SiteRecordsRoundTripTest() {
+        super("site.sqlite");
     }
 
     @Test
