@@ -7,6 +7,8 @@ import org.apache.poi.ss.usermodel.CellStyle;
 import org.apache.poi.ss.usermodel.Font;
 import org.apache.poi.ss.usermodel.Workbook;
 
+import org.strandbook.spreadsheet.FormulaText;
+
 /**
  * The styles the writer derives from the template's: each made once per workbook and cached by
  * purpose and base style, so a dossier of any length holds a fixed handful of styles.

@@ -29,7 +29,7 @@ import org.strandbook.templates.Templates;
  * <p>Nothing half-written: a file is written under a temporary name in the target's folder and
  * moved into place only when complete; a failure or a cancel deletes it. Every text goes into a
  * string cell, never a formula, and text that looks like a formula gets a quote-prefixed style
- * ({@link FormulaText}). Times are UTC, numbers written with a decimal point, whatever the machine's
+ * ({@link org.strandbook.spreadsheet.FormulaText}). Times are UTC, numbers written with a decimal point, whatever the machine's
  * locale and zone.
  */
 public final class DossierWriter {

@@ -15,7 +15,7 @@
  * field of each table column, {@link org.strandbook.dossier.Placeholder} tokens mark the values of the
  * cover, page headers and footers. What the writer promises: long tables stream (bounded memory),
  * chart caches are filled as the file is written, every text is a string cell and formula-like text
- * is quote-prefixed ({@link org.strandbook.dossier.FormulaText}), times are UTC and numbers carry a
+ * is quote-prefixed ({@link org.strandbook.spreadsheet.FormulaText}), times are UTC and numbers carry a
  * decimal point whatever the machine, and a file appears complete or not at all.
  */
 package org.strandbook.dossier;

@@ -29,6 +29,7 @@ import org.strandbook.site.PathElement;
 import org.strandbook.site.PathLeg;
 import org.strandbook.site.ProbeType;
 import org.strandbook.site.WavelengthBand;
+import org.strandbook.spreadsheet.FormulaText;
 import org.strandbook.templates.Templates;
 
 /**
@@ -77,15 +78,6 @@ public final class CableScheduleWriter {
             new Filling(workbook).fill(schedule);
             workbook.write(out);
         }
-    }
-
-    /** True for text a spreadsheet could take as the start of a formula (OWASP "CSV Injection"). */
-    static boolean looksLikeFormula(String text) {
-        if (text.isEmpty()) {
-            return false;
-        }
-        char c = text.charAt(0);
-        return c == '=' || c == '+' || c == '-' || c == '@' || c == '\t' || c == '\r';
     }
 
     /** One filling of one workbook; its two text styles are made once and shared by every cell. */
@@ -224,7 +216,7 @@ public final class CableScheduleWriter {
             }
             Cell cell = row.createCell(column.index());
             cell.setCellValue(value);
-            cell.setCellStyle(looksLikeFormula(value) ? quotedTextStyle : textStyle);
+            cell.setCellStyle(FormulaText.startsLikeFormula(value) ? quotedTextStyle : textStyle);
         }
 
         private void number(Row row, ScheduleColumn column, double value) {

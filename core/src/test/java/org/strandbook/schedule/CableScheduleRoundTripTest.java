@@ -84,16 +84,6 @@ class CableScheduleRoundTripTest {
         assertEquals(original, back);
     }
 
-    @Test
-    void plainTextIsNotQuotePrefixed() {
-        assertEquals(false, CableScheduleWriter.looksLikeFormula("Reactor outlet"));
-        assertEquals(true, CableScheduleWriter.looksLikeFormula("+1 spare"));
-        assertEquals(true, CableScheduleWriter.looksLikeFormula("-3 dB margin"));
-        assertEquals(true, CableScheduleWriter.looksLikeFormula("@SUM(A1)"));
-        assertEquals(true, CableScheduleWriter.looksLikeFormula("\tcmd"));
-        assertEquals(true, CableScheduleWriter.looksLikeFormula("\rcmd"));
-    }
-
     // ISO 80000-1:2009 (numbers): the decimal sign is a comma or a point on the line.
     @Test
     void lengthTypedAsTextWithDecimalCommaOrPointIsAccepted() throws IOException {

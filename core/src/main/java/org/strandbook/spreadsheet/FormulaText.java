@@ -1,11 +1,11 @@
-package org.strandbook.dossier;
+package org.strandbook.spreadsheet;
 
 /**
  * Text that a spreadsheet program could take for the start of a formula. The list of lead
  * characters ({@code = + - @}, tab, carriage return) is that of the OWASP "CSV Injection" guidance.
- * The dossier writes every text with {@code Cell.setCellValue(String)}, which always makes a string
- * cell, and gives such text a quote-prefixed style too, so that it stays text even when someone
- * edits the cell later.
+ * Strandbook's XLSX writers (dossier, cable schedule) write every text with
+ * {@code Cell.setCellValue(String)}, which always makes a string cell, and give such text a
+ * quote-prefixed style too, so that it stays text even when someone edits the cell later.
  */
 public final class FormulaText {
 
