@@ -43,7 +43,7 @@ class DarkNoiseMedianTest {
         }
     }
 
-    /** Arrays that hit the sampled path, its fallback and ties. */
+    /** Arrays that reach the bucketed path, its end buckets, its fallback and ties. */
     enum LongScan {
         GAUSSIAN_NOISE {
             double value(int i, int n, Random rnd) {
@@ -70,8 +70,14 @@ class DarkNoiseMedianTest {
                 return 3.5;
             }
         },
+        SPREAD_BEYOND_THE_DOUBLE_RANGE {
+            // the sample's spread overflows, so the whole array is selected from
+            double value(int i, int n, Random rnd) {
+                return (i % 2 == 0 ? 1e308 : -1e308) * rnd.nextDouble();
+            }
+        },
         SAMPLE_POSITIONS_MISLEADING {
-            // every sampled index holds a large value, so the bracket misses and the whole array is searched
+            // every sampled index holds a large value, so the median lies in the bucket below the sample
             double value(int i, int n, Random rnd) {
                 return isSampledIndex(i, n) ? 1e6 + i : rnd.nextGaussian();
             }
