@@ -51,6 +51,8 @@ public final class OneCordThroughput {
     /** dL/dT·T: the loss change in dB for a small relative change of signal. */
     private static final double DB_PER_RELATIVE_CHANGE = 10 / Math.log(10);
 
+    private static final DecimalFormatSymbols ROOT_SYMBOLS = DecimalFormatSymbols.getInstance(Locale.ROOT);
+
     private final double noiseWidths;
 
     private OneCordThroughput(double noiseWidths) {
@@ -237,9 +239,12 @@ public final class OneCordThroughput {
         return fromNm == toNm ? number.format(fromNm) + " nm" : number.format(fromNm) + "–" + number.format(toNm) + " nm";
     }
 
-    /** Made once per measurement: building the format costs more than the few numbers it writes. */
+    /**
+     * Made once per measurement: building the format costs more than the few numbers it writes.
+     * The symbols are shared read-only; the format copies them.
+     */
     private static DecimalFormat numberFormat() {
-        return new DecimalFormat("0.#", DecimalFormatSymbols.getInstance(Locale.ROOT));
+        return new DecimalFormat("0.#", ROOT_SYMBOLS);
     }
 
     private static double square(double v) {
