@@ -168,9 +168,10 @@ public final class PointEvaluator {
         return fetched.computeIfAbsent(scan.id(), id -> {
             Spectrum s = source.spectrum(id);
             double[] counts = s.values();
-            RawSpectrum raw = new RawSpectrum(regridder.axisNm(s.wavelengthsNm()), counts, OptionalDouble.empty());
             // a dark's noise is estimated once, however many scans it serves
-            return scan.kind() == ScanKind.DARK ? raw.withNoiseCounts(DarkNoise.sigmaCounts(counts)) : raw;
+            OptionalDouble noise = scan.kind() == ScanKind.DARK
+                    ? OptionalDouble.of(DarkNoise.sigmaCounts(counts)) : OptionalDouble.empty();
+            return new RawSpectrum(regridder.axisNm(s.wavelengthsNm()), counts, noise);
         });
     }
 

@@ -148,7 +148,7 @@ public final class OneCordThroughput {
         }
 
         DecimalFormat number = numberFormat();
-        String k = number.format(noiseWidths);
+        String k = formatNumber(noiseWidths, number);
         List<MaskedRange> masked = maskedRanges(grid, reasons, k, number);
         List<ThroughputResult.NegativeLossRange> negative = negativeLossRanges(grid, usable, lossDb, sigmaDb);
 
@@ -236,14 +236,27 @@ public final class OneCordThroughput {
     }
 
     private static String formatRange(double fromNm, double toNm, DecimalFormat number) {
-        return fromNm == toNm ? number.format(fromNm) + " nm" : number.format(fromNm) + "–" + number.format(toNm) + " nm";
+        return fromNm == toNm ? formatNumber(fromNm, number) + " nm"
+                : formatNumber(fromNm, number) + "–" + formatNumber(toNm, number) + " nm";
+    }
+
+    /**
+     * {@code value} as {@code number} ("0.#") writes it. Whole wavelengths, which most grid points
+     * are, skip the general decimal conversion: the pattern has no grouping and no fraction digit
+     * to show, so they come out as the whole number's digits.
+     */
+    static String formatNumber(double value, DecimalFormat number) {
+        if (value >= 1 && value < 1e9 && value == Math.rint(value)) {
+            return Long.toString((long) value);
+        }
+        return number.format(value);
     }
 
     /**
      * Made once per measurement: building the format costs more than the few numbers it writes.
      * The symbols are shared read-only; the format copies them.
      */
-    private static DecimalFormat numberFormat() {
+    static DecimalFormat numberFormat() {
         return new DecimalFormat("0.#", ROOT_SYMBOLS);
     }
 
