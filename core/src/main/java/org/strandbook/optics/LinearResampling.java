@@ -69,9 +69,12 @@ public final class LinearResampling {
         for (int i = 0; i < interiorFrom; i++) {
             out[i] = firstValue;
         }
-        for (int i = interiorFrom; i < interiorTo; i++) {
-            int j = lowerIndex[i - interiorFrom];
-            out[i] = values[j] + fraction[i - interiorFrom] * (values[j + 1] - values[j]);
+        int[] lower = lowerIndex;
+        double[] part = fraction;
+        for (int p = 0; p < lower.length; p++) {
+            int j = lower[p];
+            double below = values[j];
+            out[interiorFrom + p] = below + part[p] * (values[j + 1] - below);
         }
         double lastValue = values[values.length - 1];
         for (int i = interiorTo; i < out.length; i++) {
