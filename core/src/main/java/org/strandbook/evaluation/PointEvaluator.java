@@ -7,6 +7,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.OptionalDouble;
 import java.util.concurrent.ConcurrentHashMap;
 
 import org.strandbook.diagnosis.DeviationDiagnoser;
@@ -21,6 +22,7 @@ import org.strandbook.site.ScanKind;
 import org.strandbook.throughput.DarkNoise;
 import org.strandbook.throughput.OneCordThroughput;
 import org.strandbook.throughput.RawSpectrum;
+import org.strandbook.throughput.ScanRegridder;
 import org.strandbook.throughput.ThroughputResult;
 import org.strandbook.throughput.ThroughputScans;
 import org.strandbook.trend.LossReading;
@@ -84,6 +86,7 @@ public final class PointEvaluator {
         List<String> problems = new ArrayList<>();
         pairs.unpaired().forEach(u -> problems.add(u.reason()));
 
+        ScanRegridder regridder = new ScanRegridder(grid);
         Map<Long, RawSpectrum> fetched = new HashMap<>();
         List<List<LossReading>> readings = new ArrayList<>();
         List<List<Instant>> dark = new ArrayList<>();
@@ -95,9 +98,11 @@ public final class PointEvaluator {
         ScanPair latestPair = null;
         for (ScanPair pair : pairs.paired()) {
             ThroughputResult result = throughput.measure(new ThroughputScans(
-                    raw(pair.loop(), in.spectra(), fetched), raw(pair.loopDark(), in.spectra(), fetched),
-                    raw(pair.reference(), in.spectra(), fetched), raw(pair.referenceDark(), in.spectra(), fetched)),
-                    grid);
+                    raw(pair.loop(), in.spectra(), fetched, regridder),
+                    raw(pair.loopDark(), in.spectra(), fetched, regridder),
+                    raw(pair.reference(), in.spectra(), fetched, regridder),
+                    raw(pair.referenceDark(), in.spectra(), fetched, regridder)),
+                    regridder);
             double[] loss = result.lossDb();
             for (int b = 0; b < bands.size(); b++) {
                 double mean = bandMean(grid, loss, bands.get(b));
@@ -158,12 +163,15 @@ public final class PointEvaluator {
         return new BandTrend(band, readings, noLight, trend, events, outlook);
     }
 
-    private static RawSpectrum raw(ScanRecord scan, SpectrumSource source, Map<Long, RawSpectrum> fetched) {
+    private static RawSpectrum raw(ScanRecord scan, SpectrumSource source, Map<Long, RawSpectrum> fetched,
+                                   ScanRegridder regridder) {
         return fetched.computeIfAbsent(scan.id(), id -> {
             Spectrum s = source.spectrum(id);
-            RawSpectrum raw = RawSpectrum.ofNm(s.wavelengthsNm(), s.values());
+            double[] counts = s.values();
             // a dark's noise is estimated once, however many scans it serves
-            return scan.kind() == ScanKind.DARK ? raw.withNoiseCounts(DarkNoise.sigmaCounts(s.values())) : raw;
+            OptionalDouble noise = scan.kind() == ScanKind.DARK
+                    ? OptionalDouble.of(DarkNoise.sigmaCounts(counts)) : OptionalDouble.empty();
+            return new RawSpectrum(regridder.axisNm(s.wavelengthsNm()), counts, noise);
         });
     }
 

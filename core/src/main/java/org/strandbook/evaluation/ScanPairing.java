@@ -30,12 +30,15 @@ public final class ScanPairing {
     public static final Duration DEFAULT_WINDOW = Duration.ofHours(12);
 
     private final Duration window;
+    private final String rule;
 
     private ScanPairing(Duration window) {
         if (window.isNegative() || window.isZero()) {
             throw new IllegalArgumentException("pairing window must be positive, was " + window);
         }
         this.window = window;
+        this.rule = String.format(Locale.ROOT, "same point; nearest reference and nearest dark within %d h of each"
+                + " scan; darks of equal integration time preferred", window.toHours());
     }
 
     public static ScanPairing withDefaults() {
@@ -52,8 +55,7 @@ public final class ScanPairing {
 
     /** The rule in one line, for reports. */
     public String describe() {
-        return String.format(Locale.ROOT, "same point; nearest reference and nearest dark within %d h of each scan;"
-                + " darks of equal integration time preferred", window.toHours());
+        return rule;
     }
 
     /** Pairs every loop scan of one point; {@code scans} may hold all kinds, in any order. */
@@ -78,7 +80,7 @@ public final class ScanPairing {
                         + window.toHours() + " h of the " + lacking.kind().word() + " scan taken " + lacking.takenAt()));
                 continue;
             }
-            paired.add(new ScanPair(loop, ref.get(), loopDark.get(), refDark.get(), describe()));
+            paired.add(new ScanPair(loop, ref.get(), loopDark.get(), refDark.get(), rule));
         }
         return new Pairings(paired, unpaired);
     }
@@ -89,10 +91,34 @@ public final class ScanPairing {
         if (matchIntegration) {
             order = Comparator.comparing((ScanRecord c) -> !sameIntegration(c, to)).thenComparing(order);
         }
-        return candidates.stream()
-                .filter(c -> c.pointTag().equals(to.pointTag()))
-                .filter(c -> distance(c, to).compareTo(window) <= 0)
-                .min(order);
+        // candidates are in time order, so those within the window are one run of them
+        ScanRecord best = null;
+        for (int i = firstNotBeforeWindow(candidates, to); i < candidates.size(); i++) {
+            ScanRecord c = candidates.get(i);
+            if (distance(c, to).compareTo(window) > 0) {
+                break;
+            }
+            if (c.pointTag().equals(to.pointTag()) && (best == null || order.compare(best, c) > 0)) {
+                best = c;
+            }
+        }
+        return Optional.ofNullable(best);
+    }
+
+    /** Index of the first candidate not taken longer than the window before {@code to}. */
+    private int firstNotBeforeWindow(List<ScanRecord> candidates, ScanRecord to) {
+        int lo = 0;
+        int hi = candidates.size();
+        while (lo < hi) {
+            int mid = (lo + hi) >>> 1;
+            ScanRecord c = candidates.get(mid);
+            if (c.takenAt().isBefore(to.takenAt()) && distance(c, to).compareTo(window) > 0) {
+                lo = mid + 1;
+            } else {
+                hi = mid;
+            }
+        }
+        return lo;
     }
 
     private static boolean sameIntegration(ScanRecord a, ScanRecord b) {
@@ -102,7 +128,9 @@ public final class ScanPairing {
     }
 
     private static Duration distance(ScanRecord a, ScanRecord b) {
-        return Duration.between(a.takenAt(), b.takenAt()).abs();
+        // Duration.abs() negates through BigDecimal; measuring the other way round is exact and cheap
+        return a.takenAt().isAfter(b.takenAt()) ? Duration.between(b.takenAt(), a.takenAt())
+                : Duration.between(a.takenAt(), b.takenAt());
     }
 
     private static List<ScanRecord> ofKind(List<ScanRecord> scans, ScanKind kind) {

@@ -156,32 +156,20 @@ public final class WavelengthGrid {
 
     /**
      * The spectrum {@code values} (on this grid) linearly resampled onto {@code target}, end values
-     * held outside this grid. Both axes ascend, so one merged walk serves every target point.
+     * held outside this grid. Callers resampling many spectra of this grid keep
+     * {@link #resamplingOnto} instead.
      */
     public double[] resample(double[] values, WavelengthGrid target) {
         requireSameLength(values);
-        double[] src = wavelengthsNm;
-        double[] dst = target.wavelengthsNm;
-        int n = src.length;
-        double[] out = new double[dst.length];
-        int j = 0;
-        for (int i = 0; i < out.length; i++) {
-            double w = dst[i];
-            if (n == 1 || w <= src[0]) {
-                out[i] = values[0];
-                continue;
-            }
-            if (w >= src[n - 1]) {
-                out[i] = values[n - 1];
-                continue;
-            }
-            while (src[j + 1] < w) {
-                j++;
-            }
-            double f = (w - src[j]) / (src[j + 1] - src[j]);
-            out[i] = values[j] + f * (values[j + 1] - values[j]);
-        }
-        return out;
+        return resamplingOnto(target).apply(values);
+    }
+
+    /**
+     * The linear interpolation from this grid onto {@code target}, worked out once for any number of
+     * spectra on this grid.
+     */
+    public LinearResampling resamplingOnto(WavelengthGrid target) {
+        return new LinearResampling(this, target);
     }
 
     /** Throws unless {@code spectrum} has one value per grid point. */

@@ -37,63 +37,16 @@ public final class DarkNoise {
         for (int i = 0; i < differences.length; i++) {
             differences[i] = darkCounts[i + 1] - darkCounts[i];
         }
-        double centre = median(differences);
+        double[] scratch = new double[differences.length];
+        double centre = MedianSelection.median(differences, scratch);
         for (int i = 0; i < differences.length; i++) {
             differences[i] = Math.abs(differences[i] - centre);
         }
-        return MAD_TO_SIGMA * median(differences) / Math.sqrt(2);
+        return MAD_TO_SIGMA * MedianSelection.median(differences, scratch) / Math.sqrt(2);
     }
 
-    /**
-     * Median by in-place selection (Hoare's FIND, Commun. ACM 4, 321 (1961)); the values are
-     * reordered. Written out because a site evaluation estimates thousands of dark scans and the
-     * general-purpose percentile copies and checks its input on every call. Even counts average the
-     * two middle values, as {@code org.apache.commons.math3.stat.descriptive.rank.Median} does.
-     */
+    /** Median of {@code values}, which may be reordered; see {@link MedianSelection}. */
     static double median(double[] values) {
-        int n = values.length;
-        double upper = select(values, n / 2);
-        if (n % 2 == 1) {
-            return upper;
-        }
-        double lower = Double.NEGATIVE_INFINITY;
-        for (int i = 0; i < n / 2; i++) {
-            lower = Math.max(lower, values[i]);
-        }
-        return lower + 0.5 * (upper - lower);
-    }
-
-    /** The k-th smallest value (0-based); afterwards values[0..k-1] ≤ values[k] ≤ values[k+1..]. */
-    private static double select(double[] a, int k) {
-        int lo = 0;
-        int hi = a.length - 1;
-        while (lo < hi) {
-            double pivot = a[(lo + hi) >>> 1];
-            int i = lo;
-            int j = hi;
-            while (i <= j) {
-                while (a[i] < pivot) {
-                    i++;
-                }
-                while (a[j] > pivot) {
-                    j--;
-                }
-                if (i <= j) {
-                    double t = a[i];
-                    a[i] = a[j];
-                    a[j] = t;
-                    i++;
-                    j--;
-                }
-            }
-            if (k <= j) {
-                hi = j;
-            } else if (k >= i) {
-                lo = i;
-            } else {
-                return a[k];
-            }
-        }
-        return a[k];
+        return MedianSelection.median(values, new double[values.length]);
     }
 }

@@ -51,6 +51,8 @@ public final class OneCordThroughput {
     /** dL/dT·T: the loss change in dB for a small relative change of signal. */
     private static final double DB_PER_RELATIVE_CHANGE = 10 / Math.log(10);
 
+    private static final DecimalFormatSymbols ROOT_SYMBOLS = DecimalFormatSymbols.getInstance(Locale.ROOT);
+
     private final double noiseWidths;
 
     private OneCordThroughput(double noiseWidths) {
@@ -72,6 +74,15 @@ public final class OneCordThroughput {
 
     /** Loss spectrum of the path on {@code grid}. */
     public ThroughputResult measure(ThroughputScans scans, WavelengthGrid grid) {
+        return measure(scans, new ScanRegridder(grid));
+    }
+
+    /**
+     * Loss spectrum of the path on the regridder's grid; the regridder carries the interpolation of
+     * each scan axis from one measurement of an evaluation to the next.
+     */
+    public ThroughputResult measure(ThroughputScans scans, ScanRegridder regridder) {
+        WavelengthGrid grid = regridder.grid();
         double loopDarkSigma = noise(scans.loopDark(), "loop dark scan");
         double loopSigma = scans.loop().noiseCounts().orElse(loopDarkSigma);
         double refDarkSigma = noise(scans.referenceDark(), "reference dark scan");
@@ -79,35 +90,45 @@ public final class OneCordThroughput {
         double loopNoise = Math.hypot(loopSigma, loopDarkSigma);
         double refNoise = Math.hypot(refSigma, refDarkSigma);
 
-        double[] loop = scans.loop().resampledOnto(grid);
-        double[] loopDark = scans.loopDark().resampledOnto(grid);
-        double[] ref = scans.reference().resampledOnto(grid);
-        double[] refDark = scans.referenceDark().resampledOnto(grid);
+        double[] loop = regridder.onGrid(scans.loop());
+        double[] loopDark = regridder.onGrid(scans.loopDark());
+        double[] ref = regridder.onGrid(scans.reference());
+        // one dark often serves both the loop and its reference
+        double[] refDark = scans.referenceDark() == scans.loopDark() ? loopDark : regridder.onGrid(scans.referenceDark());
 
         int n = grid.size();
         MaskReason[] reasons = new MaskReason[n];
-        double[] netLoop = new double[n];
-        double[] netRef = new double[n];
+        double[] lossDb = new double[n];
+        double[] sigmaDb = new double[n];
+        boolean[] usable = new boolean[n];
         int referenceLit = 0;
         double loopSumWhereReferenceLit = 0;
         for (int i = 0; i < n; i++) {
             double nm = grid.wavelengthNm(i);
-            netLoop[i] = loop[i] - loopDark[i];
-            netRef[i] = ref[i] - refDark[i];
+            double netLoop = loop[i] - loopDark[i];
+            double netRef = ref[i] - refDark[i];
             if (!scans.loop().covers(nm)) {
                 reasons[i] = MaskReason.OUTSIDE_LOOP_SCAN;
             } else if (!scans.reference().covers(nm)) {
                 reasons[i] = MaskReason.OUTSIDE_REFERENCE_SCAN;
             } else if (!scans.loopDark().covers(nm) || !scans.referenceDark().covers(nm)) {
                 reasons[i] = MaskReason.OUTSIDE_DARK_SCAN;
-            } else if (!(netRef[i] > noiseWidths * refNoise)) {
+            } else if (!(netRef > noiseWidths * refNoise)) {
                 reasons[i] = MaskReason.REFERENCE_AT_DARK;
             } else {
                 referenceLit++;
-                loopSumWhereReferenceLit += netLoop[i];
-                if (!(netLoop[i] > noiseWidths * loopNoise)) {
+                loopSumWhereReferenceLit += netLoop;
+                if (!(netLoop > noiseWidths * loopNoise)) {
                     reasons[i] = MaskReason.LOOP_AT_DARK;
                 }
+            }
+            if (reasons[i] == null) {
+                usable[i] = true;
+                lossDb[i] = -10 * Math.log10(netLoop / netRef);
+                sigmaDb[i] = DB_PER_RELATIVE_CHANGE * Math.sqrt(square(loopNoise / netLoop) + square(refNoise / netRef));
+            } else {
+                lossDb[i] = Double.NaN;
+                sigmaDb[i] = Double.NaN;
             }
         }
         // Judged on the whole spectrum, not point by point: in pure noise about one point in 740
@@ -115,26 +136,20 @@ public final class OneCordThroughput {
         boolean noLight = referenceLit > 0
                 && !(loopSumWhereReferenceLit > noiseWidths * loopNoise * Math.sqrt(referenceLit));
         boolean noReference = referenceLit == 0 && hasReason(reasons, MaskReason.REFERENCE_AT_DARK);
-
-        double[] lossDb = new double[n];
-        double[] sigmaDb = new double[n];
-        boolean[] usable = new boolean[n];
-        for (int i = 0; i < n; i++) {
-            if (noLight && reasons[i] == null) {
-                reasons[i] = MaskReason.LOOP_AT_DARK;
-            }
-            if (reasons[i] == null) {
-                usable[i] = true;
-                lossDb[i] = -10 * Math.log10(netLoop[i] / netRef[i]);
-                sigmaDb[i] = DB_PER_RELATIVE_CHANGE * Math.sqrt(square(loopNoise / netLoop[i]) + square(refNoise / netRef[i]));
-            } else {
-                lossDb[i] = Double.NaN;
-                sigmaDb[i] = Double.NaN;
+        if (noLight) {
+            for (int i = 0; i < n; i++) {
+                if (reasons[i] == null) {
+                    reasons[i] = MaskReason.LOOP_AT_DARK;
+                    usable[i] = false;
+                    lossDb[i] = Double.NaN;
+                    sigmaDb[i] = Double.NaN;
+                }
             }
         }
 
-        String k = formatNumber(noiseWidths);
-        List<MaskedRange> masked = maskedRanges(grid, reasons, k);
+        DecimalFormat number = numberFormat();
+        String k = formatNumber(noiseWidths, number);
+        List<MaskedRange> masked = maskedRanges(grid, reasons, k, number);
         List<ThroughputResult.NegativeLossRange> negative = negativeLossRanges(grid, usable, lossDb, sigmaDb);
 
         List<String> warnings = new ArrayList<>();
@@ -146,7 +161,7 @@ public final class OneCordThroughput {
             warnings.add("no reference light: lamp off, shutter closed or launch cord broken");
         }
         for (ThroughputResult.NegativeLossRange r : negative) {
-            warnings.add(formatRange(r.fromNm(), r.toNm()) + ": loss down to "
+            warnings.add(formatRange(r.fromNm(), r.toNm(), number) + ": loss down to "
                     + String.format(Locale.ROOT, "%.2f", r.minLossDb()) + " dB, below zero by more than " + k
                     + "σ: bad reference (re-reference through the launch cord alone)");
         }
@@ -165,7 +180,8 @@ public final class OneCordThroughput {
         }
     }
 
-    private static List<MaskedRange> maskedRanges(WavelengthGrid grid, MaskReason[] reasons, String k) {
+    private static List<MaskedRange> maskedRanges(WavelengthGrid grid, MaskReason[] reasons, String k,
+                                                  DecimalFormat number) {
         List<MaskedRange> ranges = new ArrayList<>();
         int i = 0;
         while (i < reasons.length) {
@@ -179,7 +195,7 @@ public final class OneCordThroughput {
             }
             double from = grid.wavelengthNm(i);
             double to = grid.wavelengthNm(j);
-            ranges.add(new MaskedRange(from, to, reasons[i], formatRange(from, to) + ": " + reasons[i].describe(k)));
+            ranges.add(new MaskedRange(from, to, reasons[i], formatRange(from, to, number) + ": " + reasons[i].describe(k)));
             i = j + 1;
         }
         return ranges;
@@ -219,12 +235,29 @@ public final class OneCordThroughput {
         return false;
     }
 
-    private static String formatRange(double fromNm, double toNm) {
-        return fromNm == toNm ? formatNumber(fromNm) + " nm" : formatNumber(fromNm) + "–" + formatNumber(toNm) + " nm";
+    private static String formatRange(double fromNm, double toNm, DecimalFormat number) {
+        return fromNm == toNm ? formatNumber(fromNm, number) + " nm"
+                : formatNumber(fromNm, number) + "–" + formatNumber(toNm, number) + " nm";
     }
 
-    private static String formatNumber(double value) {
-        return new DecimalFormat("0.#", DecimalFormatSymbols.getInstance(Locale.ROOT)).format(value);
+    /**
+     * {@code value} as {@code number} ("0.#") writes it. Whole wavelengths, which most grid points
+     * are, skip the general decimal conversion: the pattern has no grouping and no fraction digit
+     * to show, so they come out as the whole number's digits.
+     */
+    static String formatNumber(double value, DecimalFormat number) {
+        if (value >= 1 && value < 1e9 && value == Math.rint(value)) {
+            return Long.toString((long) value);
+        }
+        return number.format(value);
+    }
+
+    /**
+     * Made once per measurement: building the format costs more than the few numbers it writes.
+     * The symbols are shared read-only; the format copies them.
+     */
+    static DecimalFormat numberFormat() {
+        return new DecimalFormat("0.#", ROOT_SYMBOLS);
     }
 
     private static double square(double v) {

@@ -4,6 +4,7 @@ import java.util.Arrays;
 import java.util.Objects;
 import java.util.OptionalDouble;
 
+import org.strandbook.optics.LinearResampling;
 import org.strandbook.optics.WavelengthGrid;
 
 /**
@@ -64,9 +65,12 @@ public record RawSpectrum(WavelengthGrid axis, double[] counts, OptionalDouble n
         return axis.covers(wavelengthNm);
     }
 
-    /** The scan linearly interpolated onto {@code grid} (end values held outside the axis). */
-    double[] resampledOnto(WavelengthGrid grid) {
-        return axis.resample(counts, grid);
+    /** The scan carried onto another grid by {@code resampling}, whose source is this scan's axis. */
+    double[] resampledBy(LinearResampling resampling) {
+        if (!resampling.source().equals(axis)) {
+            throw new IllegalArgumentException("resampling from " + resampling.source() + " given a scan on " + axis);
+        }
+        return resampling.apply(counts);
     }
 
     @Override

@@ -42,9 +42,12 @@ public final class TheilSenTrend {
     public static final double DEFAULT_CONFIDENCE = 0.95;
 
     private final double confidenceLevel;
+    /** The two-sided normal quantile of the confidence level: set up once, a site fits thousands of trends. */
+    private final double z;
 
     private TheilSenTrend(double confidenceLevel) {
         this.confidenceLevel = confidenceLevel;
+        this.z = new NormalDistribution().inverseCumulativeProbability(0.5 + confidenceLevel / 2);
     }
 
     /** 95 % confidence limits. */
@@ -106,7 +109,6 @@ public final class TheilSenTrend {
         double intercept = median.evaluate(y) - slope * median.evaluate(t);
 
         double varianceS = (n * (n - 1.0) * (2.0 * n + 5.0) - tieTerm(y) - tieTerm(t)) / 18.0;
-        double z = new NormalDistribution().inverseCumulativeProbability(0.5 + confidenceLevel / 2);
         double halfWidth = z * Math.sqrt(Math.max(varianceS, 0));
         long lowerRank = Math.round((count - halfWidth) / 2);
         long upperRank = Math.round((count + halfWidth) / 2 + 1);

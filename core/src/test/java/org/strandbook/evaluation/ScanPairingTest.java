@@ -75,4 +75,33 @@ class ScanPairingTest {
         ScanRecord loop = scan("P1", ScanKind.LOOP, "2025-04-01T08:10:00Z", 50);
         assertTrue(ScanPairing.withDefaults().pair(List.of(dark, ref, loop)).paired().isEmpty());
     }
+
+    @Test
+    void eachOfManyVisitsPairsWithinItself() {
+        List<ScanRecord> scans = new java.util.ArrayList<>();
+        for (int day = 1; day <= 28; day++) {
+            String date = String.format(java.util.Locale.ROOT, "2025-02-%02d", day);
+            scans.add(scan("P1", ScanKind.LOOP, date + "T08:10:00Z", 50));
+            scans.add(scan("P1", ScanKind.REFERENCE, date + "T08:05:00Z", 50));
+            scans.add(scan("P1", ScanKind.DARK, date + "T08:00:00Z", 50));
+        }
+        ScanPairing.Pairings p = ScanPairing.withDefaults().pair(scans);
+        assertEquals(28, p.paired().size());
+        for (ScanPair pair : p.paired()) {
+            java.time.LocalDate visit = pair.loop().takenAt().atZone(java.time.ZoneOffset.UTC).toLocalDate();
+            assertEquals(visit, pair.reference().takenAt().atZone(java.time.ZoneOffset.UTC).toLocalDate());
+            assertEquals(visit, pair.loopDark().takenAt().atZone(java.time.ZoneOffset.UTC).toLocalDate());
+        }
+    }
+
+    @Test
+    void earlierOfTwoEquallyNearReferencesIsTaken() {
+        // the rule as printed with every result: an earlier reference wins a tie
+        ScanRecord dark = scan("P1", ScanKind.DARK, "2025-04-01T08:00:00Z", 50);
+        ScanRecord before = scan("P1", ScanKind.REFERENCE, "2025-04-01T08:05:00Z", 50);
+        ScanRecord loop = scan("P1", ScanKind.LOOP, "2025-04-01T08:10:00Z", 50);
+        ScanRecord after = scan("P1", ScanKind.REFERENCE, "2025-04-01T08:15:00Z", 50);
+        ScanPair pair = ScanPairing.withDefaults().pair(List.of(after, loop, before, dark)).paired().get(0);
+        assertEquals(before, pair.reference());
+    }
 }

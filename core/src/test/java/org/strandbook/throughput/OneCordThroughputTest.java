@@ -279,4 +279,30 @@ class OneCordThroughputTest {
                 () -> METHOD.measure(scans, WavelengthGrid.ofNm(nm)));
         assertTrue(e.getMessage().startsWith("loop dark scan"), e.getMessage());
     }
+
+    // reference: java.text.DecimalFormat with pattern "0.#" and Locale.ROOT symbols (Java SE 17 API),
+    // the format the wavelengths of masked and negative ranges are written in
+    @ParameterizedTest
+    @CsvSource(textBlock = """
+            1
+            3
+            1000
+            1402
+            2500
+            123456789
+            999999999
+            1e9
+            0.5
+            1.25
+            1.35
+            2.05
+            1401.9999999999998
+            1402.04
+            3.0000000001
+            """)
+    void rangeWavelengthsAreWrittenAsTheDecimalFormatWritesThem(double value) {
+        java.text.DecimalFormat reference = new java.text.DecimalFormat("0.#",
+                java.text.DecimalFormatSymbols.getInstance(java.util.Locale.ROOT));
+        assertEquals(reference.format(value), OneCordThroughput.formatNumber(value, OneCordThroughput.numberFormat()));
+    }
 }
