@@ -4,7 +4,12 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.time.Instant;
+import java.time.LocalDate;
+import java.time.ZoneOffset;
+import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
+import java.util.OptionalDouble;
 
 import org.junit.jupiter.api.Test;
 import org.strandbook.site.ScanConditions;
@@ -22,7 +27,7 @@ class ScanPairingTest {
 
     private static ScanRecord scan(String point, ScanKind kind, String at, double integrationMs) {
         return new ScanRecord(ids++, point, kind, Instant.parse(at), new ScanConditions("op", integrationMs, 1,
-                java.util.OptionalDouble.empty(), java.util.OptionalDouble.empty()), 10, 1000, 2000, "f", "");
+                OptionalDouble.empty(), OptionalDouble.empty()), 10, 1000, 2000, "f", "");
     }
 
     @Test
@@ -78,9 +83,9 @@ class ScanPairingTest {
 
     @Test
     void eachOfManyVisitsPairsWithinItself() {
-        List<ScanRecord> scans = new java.util.ArrayList<>();
+        List<ScanRecord> scans = new ArrayList<>();
         for (int day = 1; day <= 28; day++) {
-            String date = String.format(java.util.Locale.ROOT, "2025-02-%02d", day);
+            String date = String.format(Locale.ROOT, "2025-02-%02d", day);
             scans.add(scan("P1", ScanKind.LOOP, date + "T08:10:00Z", 50));
             scans.add(scan("P1", ScanKind.REFERENCE, date + "T08:05:00Z", 50));
             scans.add(scan("P1", ScanKind.DARK, date + "T08:00:00Z", 50));
@@ -88,9 +93,9 @@ class ScanPairingTest {
         ScanPairing.Pairings p = ScanPairing.withDefaults().pair(scans);
         assertEquals(28, p.paired().size());
         for (ScanPair pair : p.paired()) {
-            java.time.LocalDate visit = pair.loop().takenAt().atZone(java.time.ZoneOffset.UTC).toLocalDate();
-            assertEquals(visit, pair.reference().takenAt().atZone(java.time.ZoneOffset.UTC).toLocalDate());
-            assertEquals(visit, pair.loopDark().takenAt().atZone(java.time.ZoneOffset.UTC).toLocalDate());
+            LocalDate visit = pair.loop().takenAt().atZone(ZoneOffset.UTC).toLocalDate();
+            assertEquals(visit, pair.reference().takenAt().atZone(ZoneOffset.UTC).toLocalDate());
+            assertEquals(visit, pair.loopDark().takenAt().atZone(ZoneOffset.UTC).toLocalDate());
         }
     }
 
