@@ -151,7 +151,7 @@ public final class ScanImportViewModel {
                 summary.stoppedEarly() ? "Stopped: stored" : "Stored", summary.accepted().size(), files.size(),
                 files.size() == 1 ? "" : "s", pointTag,
                 summary.rejected().isEmpty() ? "" : ", " + summary.rejected().size() + " refused",
-                summary.stoppedEarly() ? "; the files not reached were not read" : ""));
+                summary.stoppedEarly() ? "; the files not reached were not stored" : ""));
         running.set(false);
         finished.set(true);
         imported.accept(summary);
