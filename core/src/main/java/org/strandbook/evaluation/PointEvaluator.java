@@ -171,7 +171,7 @@ public final class PointEvaluator {
             // a dark's noise is estimated once, however many scans it serves
             OptionalDouble noise = scan.kind() == ScanKind.DARK
                     ? OptionalDouble.of(DarkNoise.sigmaCounts(counts)) : OptionalDouble.empty();
-            return new RawSpectrum(regridder.axisNm(s.wavelengthsNm()), counts, noise);
+            return new RawSpectrum(regridder.axisOf(s), counts, noise);
         });
     }
 

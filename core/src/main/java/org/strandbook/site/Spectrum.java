@@ -43,6 +43,11 @@ public final class Spectrum {
         return values.clone();
     }
 
+    /** True when this spectrum lies on exactly these wavelengths, nm; compares without a copy. */
+    public boolean hasAxisNm(double[] wavelengthsNm) {
+        return Arrays.equals(this.wavelengthsNm, wavelengthsNm);
+    }
+
     public double minNm() {
         return wavelengthsNm[0];
     }

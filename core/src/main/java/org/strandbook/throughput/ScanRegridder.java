@@ -6,6 +6,7 @@ import java.util.List;
 
 import org.strandbook.optics.LinearResampling;
 import org.strandbook.optics.WavelengthGrid;
+import org.strandbook.site.Spectrum;
 
 /**
  * Puts the scans of one evaluation onto its common grid. The scans of one analyzer share one axis,
@@ -29,9 +30,20 @@ public final class ScanRegridder {
     }
 
     /**
-     * The scan axis of the given wavelengths (strictly ascending, nm): the same instance for every
-     * scan on an axis this regridder has seen, so its interpolation is shared.
+     * The axis of a scan: the same instance for every scan on an axis this regridder has seen, so
+     * its interpolation is shared.
      */
+    public WavelengthGrid axisOf(Spectrum scan) {
+        // most scans of a site share a few axes: compare in place rather than copy each scan's axis out
+        for (int i = 0; i < knownAxesNm.size(); i++) {
+            if (scan.hasAxisNm(knownAxesNm.get(i))) {
+                return knownAxes.get(i);
+            }
+        }
+        return axisNm(scan.wavelengthsNm());
+    }
+
+    /** As {@link #axisOf(Spectrum)}, for an axis given as its wavelengths (strictly ascending, nm). */
     public WavelengthGrid axisNm(double[] wavelengthsNm) {
         for (int i = 0; i < knownAxesNm.size(); i++) {
             if (Arrays.equals(knownAxesNm.get(i), wavelengthsNm)) {

@@ -9,6 +9,7 @@ import java.util.function.DoubleUnaryOperator;
 
 import org.junit.jupiter.api.Test;
 import org.strandbook.optics.WavelengthGrid;
+import org.strandbook.site.Spectrum;
 
 class ScanRegridderTest {
 
@@ -51,5 +52,14 @@ class ScanRegridderTest {
         regridder.axisNm(axis(990, 2.5, 2010));
 
         assertSame(first, regridder.axisNm(axis(1000, 0.5, 2000)));
+    }
+
+    @Test
+    void aScanOnAKnownAxisGetsThatAxis() {
+        ScanRegridder regridder = new ScanRegridder(WavelengthGrid.uniformNm(1000, 2000, 11));
+        double[] nm = axis(1000, 0.5, 2000);
+        WavelengthGrid known = regridder.axisNm(nm);
+
+        assertSame(known, regridder.axisOf(new Spectrum(nm, new double[nm.length])));
     }
 }
