@@ -1,6 +1,5 @@
 package org.strandbook.store;
 
-import java.security.MessageDigest;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
@@ -195,17 +194,7 @@ public final class AuditLog {
 
     static String chainHash(String prevHash, long id, String at, String user, String action, String table,
                             String key, String oldValues, String newValues, String rowSha256) {
-        MessageDigest md = Sha256.newDigest();
-        Sha256.field(md, prevHash);
-        Sha256.field(md, Long.toString(id));
-        Sha256.field(md, at);
-        Sha256.field(md, user);
-        Sha256.field(md, action);
-        Sha256.field(md, table);
-        Sha256.field(md, key);
-        Sha256.field(md, oldValues);
-        Sha256.field(md, newValues);
-        Sha256.field(md, rowSha256);
-        return Sha256.toHex(md.digest());
+        return new Sha256.Fields().add(prevHash).add(Long.toString(id)).add(at).add(user).add(action).add(table)
+                .add(key).add(oldValues).add(newValues).add(rowSha256).hex();
     }
 }

@@ -1,6 +1,5 @@
 package org.strandbook.store;
 
-import java.security.MessageDigest;
 import java.sql.ResultSet;
 import java.sql.ResultSetMetaData;
 import java.sql.SQLException;
@@ -87,29 +86,24 @@ final class RowImage {
     }
 
     String sha256() {
-        MessageDigest md = Sha256.newDigest();
+        Sha256.Fields fields = new Sha256.Fields();
         for (Column c : columns) {
             Object v = c.value();
             if (v == null) {
                 continue;
             }
-            Sha256.field(md, c.name());
+            fields.add(c.name());
             if (v instanceof Long k) {
-                Sha256.field(md, "I");
-                Sha256.field(md, Long.toString(k));
+                fields.add("I").add(Long.toString(k));
             } else if (v instanceof Double d) {
-                Sha256.field(md, "R");
-                Sha256.field(md, bitsHex(d));
+                fields.add("R").add(bitsHex(d));
             } else if (v instanceof BlobSummary b) {
-                Sha256.field(md, "B");
-                Sha256.field(md, b.sha256());
-                Sha256.field(md, Integer.toString(b.bytes()));
+                fields.add("B").add(b.sha256()).add(Integer.toString(b.bytes()));
             } else {
-                Sha256.field(md, "T");
-                Sha256.field(md, v.toString());
+                fields.add("T").add(v.toString());
             }
         }
-        return Sha256.toHex(md.digest());
+        return fields.hex();
     }
 
     private static String bitsHex(double d) {

@@ -39,4 +39,21 @@ class Sha256Test {
                 Sha256.normalized(" BA7816BF8F01CFEA414140DE5DAE2223B00361A396177A9CB410FF61F20015AD ", "f"));
         assertThrows(IllegalArgumentException.class, () -> Sha256.normalized("ba7816bf", "f"));
     }
+
+    @Test
+    void fieldsAreDigestedLengthPrefixedWithADashForNull() throws Exception {
+        // the trail's documented field encoding, digested by the JDK's own SHA-256 (FIPS 180-4) as reference
+        String expected = Sha256.toHex(java.security.MessageDigest.getInstance("SHA-256")
+                .digest("3:abc-6:µm·s".getBytes(java.nio.charset.StandardCharsets.UTF_8)));
+        assertEquals(expected, new Sha256.Fields().add("abc").add(null).add("µm·s").hex());
+    }
+
+    @Test
+    void aFieldLongerThanTheBufferIsDigestedWhole() throws Exception {
+        // a 2,000-character JSON image outgrows the first buffer; the JDK's SHA-256 is the reference
+        String big = "x".repeat(2000);
+        String expected = Sha256.toHex(java.security.MessageDigest.getInstance("SHA-256")
+                .digest(("2000:" + big).getBytes(java.nio.charset.StandardCharsets.UTF_8)));
+        assertEquals(expected, new Sha256.Fields().add(big).hex());
+    }
 }
