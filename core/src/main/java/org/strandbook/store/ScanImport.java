@@ -132,15 +132,30 @@ public final class ScanImport implements AutoCloseable {
     /** Commits what was added since the last commit and copies the log into the file. */
     @Override
     public void close() {
-        if (!closed) {
-            closed = true;
-            try {
-                if (open) {
-                    commit();
-                }
-            } finally {
-                stopCheckpointer();
+        if (closed) {
+            return;
+        }
+        closed = true;
+        RuntimeException failure = null;
+        try {
+            if (open) {
+                commit();
             }
+        } catch (RuntimeException e) {
+            failure = e;
+        }
+        try {
+            stopCheckpointer();
+        } catch (RuntimeException e) {
+            // the commit's failure is the one to report; this one rides along
+            if (failure == null) {
+                failure = e;
+            } else {
+                failure.addSuppressed(e);
+            }
+        }
+        if (failure != null) {
+            throw failure;
         }
     }
 }

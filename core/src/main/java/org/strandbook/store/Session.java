@@ -89,11 +89,17 @@ final class Session implements AutoCloseable {
         });
     }
 
-    /** Copies what the write-ahead log holds into the file, as far as no reader needs it. */
+    /**
+     * Copies what the write-ahead log holds into the file, as far as no reader needs it. Best effort:
+     * a checkpoint that cannot run now (another program is checkpointing) loses nothing, since the
+     * log keeps every committed page until some checkpoint copies it, so it is not an error.
+     */
     void checkpoint() {
         withoutTransaction(() -> {
             try (Statement s = connection.createStatement()) {
                 s.execute("PRAGMA wal_checkpoint(PASSIVE)");
+            } catch (SQLException e) {
+                // see above: the next checkpoint, or the last connection's close, copies the pages
             }
         });
     }
