@@ -69,6 +69,11 @@ class ScanFileImporterTest {
         return wb;
     }
 
+    private static ScanFileImporter.Summary importInto(Workbook wb, List<Path> batch, ScanFileImporter.Progress progress) {
+        return new ScanFileImporter().importFiles(wb,
+                new ScanFileImporter.Request("P-1", ScanKind.LOOP, batch, Optional.empty(), "tester"), progress);
+    }
+
     @Test
     void filesAreStoredInTheOrderGivenWithBadAndRepeatedOnesReportedInPlace() throws IOException {
         // the batch rule of the import: all or nothing per file, the batch goes on, the same file twice is refused
@@ -78,9 +83,7 @@ class ScanFileImporterTest {
         batch.add(7, broken);
         batch.add(20, files.get(3));
         try (Workbook wb = workbook()) {
-            ScanFileImporter.Summary s = new ScanFileImporter().importFiles(wb,
-                    new ScanFileImporter.Request("P-1", ScanKind.LOOP, batch, Optional.empty(), "tester"),
-                    ScanFileImporter.Progress.NONE);
+            ScanFileImporter.Summary s = importInto(wb, batch, ScanFileImporter.Progress.NONE);
 
             assertEquals(files, s.accepted().stream().map(ScanFileImporter.Accepted::file).toList());
             for (int i = 1; i < s.accepted().size(); i++) {
@@ -98,9 +101,7 @@ class ScanFileImporterTest {
     void aStopAfterTheSeventhFileLeavesExactlyTheFirstSeven() {
         // files read ahead but not reached are not stored (the progress callback's contract)
         try (Workbook wb = workbook()) {
-            ScanFileImporter.Summary s = new ScanFileImporter().importFiles(wb,
-                    new ScanFileImporter.Request("P-1", ScanKind.LOOP, files, Optional.empty(), "tester"),
-                    (done, total, file) -> done < 7);
+            ScanFileImporter.Summary s = importInto(wb, files, (done, total, file) -> done < 7);
 
             assertTrue(s.stoppedEarly());
             assertEquals(files.subList(0, 7), s.accepted().stream().map(ScanFileImporter.Accepted::file).toList());
@@ -113,9 +114,7 @@ class ScanFileImporterTest {
     void aStopAtTheLastFileIsNotAnEarlyStop() {
         // stopping once everything is done leaves nothing undone
         try (Workbook wb = workbook()) {
-            ScanFileImporter.Summary s = new ScanFileImporter().importFiles(wb,
-                    new ScanFileImporter.Request("P-1", ScanKind.LOOP, files, Optional.empty(), "tester"),
-                    (done, total, file) -> done < total);
+            ScanFileImporter.Summary s = importInto(wb, files, (done, total, file) -> done < total);
 
             assertFalse(s.stoppedEarly());
             assertEquals(files.size(), wb.scans().count());
