@@ -25,6 +25,10 @@ class ScanPairingTest {
 
     private static long ids = 1;
 
+    private static ScanPairing.Pairings pairings(ScanRecord... scans) {
+        return ScanPairing.withDefaults().pair(List.of(scans));
+    }
+
     private static ScanRecord scan(String point, ScanKind kind, String at, double integrationMs) {
         return new ScanRecord(ids++, point, kind, Instant.parse(at), new ScanConditions("op", integrationMs, 1,
                 OptionalDouble.empty(), OptionalDouble.empty()), 10, 1000, 2000, "f", "");
@@ -36,7 +40,7 @@ class ScanPairingTest {
         ScanRecord dark = scan("P1", ScanKind.DARK, "2025-04-01T08:00:00Z", 50);
         ScanRecord ref = scan("P1", ScanKind.REFERENCE, "2025-04-01T08:05:00Z", 50);
         ScanRecord loop = scan("P1", ScanKind.LOOP, "2025-04-01T08:10:00Z", 50);
-        ScanPairing.Pairings p = ScanPairing.withDefaults().pair(List.of(loop, oldRef, ref, dark));
+        ScanPairing.Pairings p = pairings(loop, oldRef, ref, dark);
         assertEquals(1, p.paired().size());
         ScanPair pair = p.paired().get(0);
         assertEquals(ref, pair.reference());
@@ -49,7 +53,7 @@ class ScanPairingTest {
         ScanRecord oldRef = scan("P1", ScanKind.REFERENCE, "2025-01-01T08:00:00Z", 50);
         ScanRecord dark = scan("P1", ScanKind.DARK, "2025-04-01T08:00:00Z", 50);
         ScanRecord loop = scan("P1", ScanKind.LOOP, "2025-04-01T08:10:00Z", 50);
-        ScanPairing.Pairings p = ScanPairing.withDefaults().pair(List.of(loop, oldRef, dark));
+        ScanPairing.Pairings p = pairings(loop, oldRef, dark);
         assertTrue(p.paired().isEmpty());
         assertEquals(1, p.unpaired().size());
         assertTrue(p.unpaired().get(0).reason().startsWith("no reference scan of P1 within 12 h"));
@@ -59,7 +63,7 @@ class ScanPairingTest {
     void loopWithoutADarkIsReported() {
         ScanRecord ref = scan("P1", ScanKind.REFERENCE, "2025-04-01T08:05:00Z", 50);
         ScanRecord loop = scan("P1", ScanKind.LOOP, "2025-04-01T08:10:00Z", 50);
-        ScanPairing.Pairings p = ScanPairing.withDefaults().pair(List.of(loop, ref));
+        ScanPairing.Pairings p = pairings(loop, ref);
         assertTrue(p.unpaired().get(0).reason().startsWith("no dark scan of P1"));
     }
 
@@ -69,7 +73,7 @@ class ScanPairingTest {
         ScanRecord dark20 = scan("P1", ScanKind.DARK, "2025-04-01T08:09:00Z", 20);
         ScanRecord ref = scan("P1", ScanKind.REFERENCE, "2025-04-01T08:05:00Z", 50);
         ScanRecord loop = scan("P1", ScanKind.LOOP, "2025-04-01T08:10:00Z", 50);
-        ScanPair pair = ScanPairing.withDefaults().pair(List.of(dark50, dark20, ref, loop)).paired().get(0);
+        ScanPair pair = pairings(dark50, dark20, ref, loop).paired().get(0);
         assertEquals(dark50, pair.loopDark());
     }
 
@@ -78,7 +82,7 @@ class ScanPairingTest {
         ScanRecord dark = scan("P2", ScanKind.DARK, "2025-04-01T08:00:00Z", 50);
         ScanRecord ref = scan("P2", ScanKind.REFERENCE, "2025-04-01T08:05:00Z", 50);
         ScanRecord loop = scan("P1", ScanKind.LOOP, "2025-04-01T08:10:00Z", 50);
-        assertTrue(ScanPairing.withDefaults().pair(List.of(dark, ref, loop)).paired().isEmpty());
+        assertTrue(pairings(dark, ref, loop).paired().isEmpty());
     }
 
     @Test
@@ -106,7 +110,7 @@ class ScanPairingTest {
         ScanRecord before = scan("P1", ScanKind.REFERENCE, "2025-04-01T08:05:00Z", 50);
         ScanRecord loop = scan("P1", ScanKind.LOOP, "2025-04-01T08:10:00Z", 50);
         ScanRecord after = scan("P1", ScanKind.REFERENCE, "2025-04-01T08:15:00Z", 50);
-        ScanPair pair = ScanPairing.withDefaults().pair(List.of(after, loop, before, dark)).paired().get(0);
+        ScanPair pair = pairings(after, loop, before, dark).paired().get(0);
         assertEquals(before, pair.reference());
     }
 }
