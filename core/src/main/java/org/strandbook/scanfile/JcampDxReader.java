@@ -334,7 +334,13 @@ final class JcampDxReader {
     private record Table(double[] x, double[] y, int[] lines) {
     }
 
-    private Table readXyData(Record table, double xFactor, double yFactor) throws SpectrumFileException {
+    /** The (X++(Y..Y)) table's declared axis: ##NPOINTS=, ##FIRSTX=, ##LASTX= and the spacing they give. */
+    private record DeclaredAxis(int n, double firstX, double lastX, double dx, Record nRecord, Record firstXRecord) {
+    }
+
+    // kept apart from the table's loop so that the JIT compiles two small methods, not one large one:
+    // a batch import runs both once per file
+    private DeclaredAxis declaredAxis(Record table) throws SpectrumFileException {
         Record nRecord = required("NPOINTS", table);
         Record firstXRecord = required("FIRSTX", table);
         Record lastXRecord = required("LASTX", table);
@@ -357,6 +363,16 @@ final class JcampDxReader {
                         + lastXRecord.line + ", ##NPOINTS= on line " + nRecord.line + ")");
             }
         }
+        return new DeclaredAxis(n, firstX, lastX, dx, nRecord, firstXRecord);
+    }
+
+    private Table readXyData(Record table, double xFactor, double yFactor) throws SpectrumFileException {
+        DeclaredAxis axis = declaredAxis(table);
+        int n = axis.n();
+        double firstX = axis.firstX();
+        double dx = axis.dx();
+        Record nRecord = axis.nRecord();
+        Record firstXRecord = axis.firstXRecord();
         double[] y = new double[n];
         int[] pointLines = new int[n];
         int count = 0;
@@ -393,15 +409,7 @@ final class JcampDxReader {
             if (count + m - skip > n) {
                 throw fail(lineNo, "more ordinates than ##NPOINTS= " + n + " (line " + nRecord.line + ")");
             }
-            for (int j = skip; j < m; j++) {
-                double v = scale(decoder.ordinate(j), yFactor);
-                if (!Double.isFinite(v)) {
-                    throw fail(lineNo, "ordinate × YFACTOR is too large to store");
-                }
-                y[count] = v;
-                pointLines[count] = lineNo;
-                count++;
-            }
+            count = takeOrdinates(decoder, skip, yFactor, y, pointLines, count, lineNo);
             lastOrdinate = decoder.ordinate(m - 1);
             checkPending = decoder.endsInDif();
             lastDataLine = lineNo;
@@ -414,12 +422,33 @@ final class JcampDxReader {
                     + " (line " + nRecord.line + ")");
         }
         checkFirstY(y[0] / yFactor, yFactor, y[0], pointLines[0]);
+        return new Table(evenlySpaced(firstX, dx, axis.lastX(), n), y, pointLines);
+    }
+
+    /** Appends the line's ordinates from {@code skip} on, scaled, at {@code count}; gives the new count. */
+    private int takeOrdinates(AsdfDecoder decoder, int skip, double yFactor, double[] y, int[] pointLines, int count,
+                              int lineNo) throws SpectrumFileException {
+        int at = count;
+        for (int j = skip; j < decoder.count(); j++) {
+            double v = scale(decoder.ordinate(j), yFactor);
+            if (!Double.isFinite(v)) {
+                throw fail(lineNo, "ordinate × YFACTOR is too large to store");
+            }
+            y[at] = v;
+            pointLines[at] = lineNo;
+            at++;
+        }
+        return at;
+    }
+
+    /** The n abscissae firstX, firstX + dx, ..., ending exactly on lastX as declared. */
+    private static double[] evenlySpaced(double firstX, double dx, double lastX, int n) {
         double[] x = new double[n];
         for (int i = 0; i < n; i++) {
             x[i] = firstX + i * dx;
         }
         x[n - 1] = lastX;
-        return new Table(x, y, pointLines);
+        return x;
     }
 
     private void checkAbscissa(int lineNo, AsdfDecoder decoder, double xFactor, double firstX, double dx,
