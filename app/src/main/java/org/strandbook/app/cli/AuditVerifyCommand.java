@@ -19,9 +19,8 @@ import picocli.CommandLine.Spec;
  * broken link and the rows changed behind Strandbook's back.
  */
 @Command(name = "verify", mixinStandardHelpOptions = true,
-        description = {
-            "Check the audit trail: its hash chain, and that every data row is as the trail last recorded it.",
-            "Note the head hash it prints in a signed record: it pins the trail's end."})
+        description = "Check the audit trail: its hash chain, and that every data row is as the trail last "
+            + "recorded it. Note the head hash it prints in a signed record: it pins the trail's end.")
 final class AuditVerifyCommand implements Callable<Integer> {
 
     private static final int FINDINGS_SHOWN = 20;

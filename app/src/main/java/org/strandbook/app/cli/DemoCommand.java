@@ -30,8 +30,8 @@ import picocli.CommandLine.Spec;
  * scan files written, imported into a fresh workbook, evaluated, and summarised point by point.
  */
 @Command(name = "demo", mixinStandardHelpOptions = true,
-        description = {"Build the invented demo plant (cable schedule, two years of scan files, workbook),",
-            "evaluate it, write its commissioning dossier (XLSX) and print a summary per point."})
+        description = "Build the invented demo plant (cable schedule, two years of scan files, workbook), "
+            + "evaluate it, write its commissioning dossier (XLSX) and print a summary per point.")
 final class DemoCommand implements Callable<Integer> {
 
     @Option(names = "--out", paramLabel = "DIR",

@@ -33,10 +33,8 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "edit",
         mixinStandardHelpOptions = true,
-        description = {
-            "Re-predictions per second after a segment-length edit, the window's work per typed cell,",
-            "on the sample plant's points, against the floor: the bare loss budget of the same path.",
-        })
+        description = "Re-predictions per second after a segment-length edit, the window's work per typed cell, "
+            + "on the sample plant's points, against the floor: the bare loss budget of the same path.")
 public final class EditBenchCommand implements Callable<Integer> {
 
     private static final int TRIALS = 3;

@@ -33,10 +33,9 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "evaluate",
         mixinStandardHelpOptions = true,
-        description = {
-            "Points evaluated per second (diagnosis and trend included) for a synthetic site of N points",
-            "with M visits each, against the bare budget and deviation arithmetic; last line 'ratio: R'.",
-        })
+        description = "Points evaluated per second (diagnosis and trend included) for a synthetic site of N "
+            + "points with M visits each, against the bare budget and deviation arithmetic; last line "
+            + "'ratio: R'.")
 public final class EvaluateBenchCommand implements Callable<Integer> {
 
     private static final int TRIALS = 3;

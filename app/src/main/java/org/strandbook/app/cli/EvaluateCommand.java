@@ -13,8 +13,8 @@ import picocli.CommandLine.Spec;
 
 /** {@code strandbook evaluate SITE [--point TAG] [--json]}: measured against predicted, per point. */
 @Command(name = "evaluate", mixinStandardHelpOptions = true,
-        description = {"Compare each point's latest loop scan with its predicted loss: PASS, REVIEW or FAIL per band,",
-            "with the diagnosis of what is wrong and the element to check first."})
+        description = "Compare each point's latest loop scan with its predicted loss: PASS, REVIEW or FAIL per "
+            + "band, with the diagnosis of what is wrong and the element to check first.")
 final class EvaluateCommand implements Callable<Integer> {
 
     @Mixin

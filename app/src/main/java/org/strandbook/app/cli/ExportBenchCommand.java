@@ -28,11 +28,9 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "export",
         mixinStandardHelpOptions = true,
-        description = {
-            "Seconds and peak heap to export the dossier of a synthetic site of N points (20, 200 and 1000",
-            "unless --points picks one), against a bare streaming workbook filling the same cells;",
-            "last line 'ratio: R' (our speed over the floor's, for the largest N).",
-        })
+        description = "Seconds and peak heap to export the dossier of a synthetic site of N points (20, 200 and "
+            + "1000 unless --points picks one), against a bare streaming workbook filling the same "
+            + "cells; last line 'ratio: R' (our speed over the floor's, for the largest N).")
 public final class ExportBenchCommand implements Callable<Integer> {
 
     static final List<Integer> DEFAULT_SIZES = List.of(20, 200, 1000);

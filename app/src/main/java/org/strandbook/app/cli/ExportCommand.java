@@ -35,11 +35,10 @@ import picocli.CommandLine.Spec;
  * replace an existing file unless told to; writes nothing at all when anything fails.
  */
 @Command(name = "export", mixinStandardHelpOptions = true,
-        description = {
-            "Write the commissioning dossier of a workbook: an XLSX file filled from the dossier template, with",
-            "the status of every point and band, findings, point register, cable schedule, loss budgets,",
-            "measured-against-predicted and trend charts, the cautions and method, and the audit log.",
-        })
+        description = "Write the commissioning dossier of a workbook: an XLSX file filled from the dossier "
+            + "template, with the status of every point and band, findings, point register, cable "
+            + "schedule, loss budgets, measured-against-predicted and trend charts, the cautions and "
+            + "method, and the audit log.")
 final class ExportCommand implements Callable<Integer> {
 
     @Mixin

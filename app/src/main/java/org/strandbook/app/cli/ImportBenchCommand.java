@@ -55,9 +55,9 @@ import picocli.CommandLine.Spec;
  * what a technician's first import of the day costs.
  */
 @Command(name = "import", mixinStandardHelpOptions = true,
-        description = {"Spectra imported per second from N 2000-point JCAMP-DX files into a new workbook,",
-            "against a bare prepared-statement BLOB insert in one transaction; best of T trials each,",
-            "the first (cold) trial shown too; last line 'ratio: R'."})
+        description = "Spectra per second imported from N 2000-point JCAMP-DX files into a new workbook, "
+            + "against bare BLOB inserts in one transaction; best of T trials of each, the first (cold) "
+            + "one shown too; last line 'ratio: R'.")
 public final class ImportBenchCommand implements Callable<Integer> {
 
     private static final int POINTS = 2000;

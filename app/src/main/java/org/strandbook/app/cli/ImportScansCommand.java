@@ -25,9 +25,9 @@ import picocli.CommandLine.Spec;
  * Exit 0 when every file was stored, 1 when any was rejected.
  */
 @Command(name = "import-scans", mixinStandardHelpOptions = true,
-        description = {"Import spectrum files (JCAMP-DX, or comma/semicolon/tab-separated text) for one point.",
-            "The time taken comes from the file (JCAMP-DX ##LONGDATE, or a '# taken_at:' line),",
-            "else from --taken-at, else from the file's modification time (said in the summary)."})
+        description = "Import spectrum files (JCAMP-DX, or comma/semicolon/tab-separated text) for one point. "
+            + "The time taken comes from the file (JCAMP-DX ##LONGDATE, or a '# taken_at:' line), else "
+            + "from --taken-at, else from the file's modification time (said in the summary).")
 final class ImportScansCommand implements Callable<Integer> {
 
     @Mixin

@@ -19,8 +19,8 @@ import picocli.CommandLine.Spec;
  * problem as {@code Sheet!Cell: what is wrong}; writes only a clean schedule, in one transaction.
  */
 @Command(name = "import-schedule", mixinStandardHelpOptions = true,
-        description = {"Import a filled cable-schedule XLSX (the template ships in the templates module).",
-            "Nothing is written unless every row is valid."})
+        description = "Import a filled cable-schedule XLSX (the template ships in the templates module). "
+            + "Nothing is written unless every row is valid.")
 final class ImportScheduleCommand implements Callable<Integer> {
 
     @Mixin

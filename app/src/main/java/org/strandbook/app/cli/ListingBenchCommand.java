@@ -48,8 +48,9 @@ import picocli.CommandLine.Spec;
  * connection already open (best of 5 each).
  */
 @Command(name = "listing", mixinStandardHelpOptions = true,
-        description = {"Opening a workbook of P points with weekly scans for W weeks and listing one point's",
-            "scans, against a bare SELECT of the same rows on an open connection; last line 'ratio: R'."})
+        description = "Opening a workbook of P points with weekly scans for W weeks and listing one point's "
+            + "scans, against a bare SELECT of the same rows on an open connection; last line 'ratio: "
+            + "R'.")
 public final class ListingBenchCommand implements Callable<Integer> {
 
     /** Spectrum points per scan: the listing never reads spectra, so small ones keep the build short. */

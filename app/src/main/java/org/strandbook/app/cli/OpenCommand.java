@@ -12,8 +12,8 @@ import picocli.CommandLine.Parameters;
 
 /** {@code strandbook open SITE}: the workbook window on one workbook. */
 @Command(name = "open", mixinStandardHelpOptions = true,
-        description = {"Open the workbook window on SITE (a display is needed).",
-            "Without a command, 'strandbook' opens the window on the last workbook or offers the sample site."})
+        description = "Open the workbook window on SITE (a display is needed). Without a command, 'strandbook' "
+            + "opens the window on the last workbook or offers the sample site.")
 final class OpenCommand implements Callable<Integer> {
 
     @Parameters(index = "0", paramLabel = "SITE", description = "The site's workbook file.")

@@ -42,11 +42,9 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "optics",
         mixinStandardHelpOptions = true,
-        description = {
-            "Loss budgets per second for N typical light paths (launch face, forward fiber, 4 joints,",
-            "probe, return fiber, detector face) on a 2000-point grid, contributions included,",
-            "against the floor: adding 9 precomputed spectra per path into a fresh total.",
-        })
+        description = "Loss budgets per second for N typical light paths (launch face, forward fiber, 4 joints, "
+            + "probe, return fiber, detector face) on a 2000-point grid, contributions included, "
+            + "against the floor: adding 9 precomputed spectra per path into a fresh total.")
 public final class OpticsBenchCommand implements Callable<Integer> {
 
     static final int GRID_POINTS = 2000;

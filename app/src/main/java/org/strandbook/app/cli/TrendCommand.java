@@ -12,8 +12,9 @@ import picocli.CommandLine.Spec;
 
 /** {@code strandbook trend SITE [--point TAG] [--json]}: loss over time and when margins run out. */
 @Command(name = "trend", mixinStandardHelpOptions = true,
-        description = {"Loss history per point and band: Theil-Sen slope with its 95 % interval, step changes,",
-            "and the date the margin to the analyzer's allowed loss runs out; points ranked by urgency."})
+        description = "Loss history per point and band: Theil-Sen slope with its 95 %% interval, step changes, "
+            + "and the date the margin to the analyzer's allowed loss runs out; points ranked by "
+            + "urgency.")
 final class TrendCommand implements Callable<Integer> {
 
     @Mixin
