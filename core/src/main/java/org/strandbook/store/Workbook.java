@@ -214,9 +214,17 @@ public final class Workbook implements AutoCloseable {
         if (to.equals(file().toAbsolutePath().normalize())) {
             throw new WorkbookException("a workbook cannot be copied onto itself (" + to + ")");
         }
+        Path folder = to.getParent();
+        if (folder == null || !Files.isDirectory(folder)) {
+            throw new WorkbookException("cannot write the copy " + to + ": the folder " + folder + " does not exist");
+        }
         Path draft = to.resolveSibling("." + to.getFileName() + "." + UUID.randomUUID() + ".copying");
         try {
-            session.vacuumInto(draft);
+            try {
+                session.vacuumInto(draft);
+            } catch (WorkbookException e) {
+                throw new WorkbookException("cannot write the copy " + to + " (" + e.getMessage() + ")", e);
+            }
             try {
                 Files.move(draft, to, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
             } catch (AtomicMoveNotSupportedException e) {

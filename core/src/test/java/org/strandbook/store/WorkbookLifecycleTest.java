@@ -72,6 +72,17 @@ class WorkbookLifecycleTest {
     }
 
     @Test
+    void aCopyIntoAMissingFolderNamesThatFolder() {
+        // the technician must see what to fix: the target's folder, not the open workbook
+        try (Workbook wb = Workbook.create(dir.resolve("source.sqlite"), DemoSite.site(), DemoSite.USER)) {
+            WorkbookException e = assertThrows(WorkbookException.class,
+                    () -> wb.copyTo(dir.resolve("no-such-folder").resolve("copy.sqlite")));
+            assertTrue(e.getMessage().contains("no-such-folder") && e.getMessage().contains("does not exist"),
+                    e.getMessage());
+        }
+    }
+
+    @Test
     void aWorkbookIsNotCopiedOntoItself() {
         Path file = dir.resolve("self.sqlite");
         try (Workbook wb = Workbook.create(file, DemoSite.site(), DemoSite.USER)) {
