@@ -3,11 +3,9 @@ package org.strandbook.dossier;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.OutputStream;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.Date;
 import java.util.EnumMap;
 import java.util.List;
@@ -18,6 +16,7 @@ import org.apache.poi.ooxml.POIXMLProperties;
 import org.apache.poi.ss.util.CellRangeAddress;
 import org.apache.poi.xssf.streaming.SXSSFSheet;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
+import org.strandbook.files.FileReplacement;
 import org.strandbook.templates.Templates;
 
 /**
@@ -91,11 +90,7 @@ public final class DossierWriter {
 
     private static void publish(Path partial, Path target, boolean replace, Path asGiven) throws IOException {
         if (replace) {
-            try {
-                Files.move(partial, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(partial, target, StandardCopyOption.REPLACE_EXISTING);
-            }
+            FileReplacement.moveOver(partial, target);
             return;
         }
         try {

@@ -1,10 +1,10 @@
 package org.strandbook.scanfile;
 
 import java.io.IOException;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
+
+import org.strandbook.files.FileReplacement;
 
 /**
  * Replaces a file's content all at once: the bytes go to a temporary file beside the target, which
@@ -21,11 +21,7 @@ final class AtomicFile {
         Path temporary = Files.createTempFile(directory, "." + absolute.getFileName(), ".part");
         try {
             Files.write(temporary, content);
-            try {
-                Files.move(temporary, absolute, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(temporary, absolute, StandardCopyOption.REPLACE_EXISTING);
-            }
+            FileReplacement.moveOver(temporary, absolute);
         } finally {
             Files.deleteIfExists(temporary);
         }

@@ -3,10 +3,8 @@ package org.strandbook.schedule;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.OutputStream;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
@@ -17,6 +15,7 @@ import org.apache.poi.ss.usermodel.CellStyle;
 import org.apache.poi.ss.usermodel.Row;
 import org.apache.poi.ss.usermodel.Sheet;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
+import org.strandbook.files.FileReplacement;
 import org.strandbook.site.Analyzer;
 import org.strandbook.site.AttenuationPoint;
 import org.strandbook.site.Bend;
@@ -61,11 +60,7 @@ public final class CableScheduleWriter {
             try (OutputStream out = Files.newOutputStream(partial)) {
                 write(schedule, out);
             }
-            try {
-                Files.move(partial, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(partial, target, StandardCopyOption.REPLACE_EXISTING);
-            }
+            FileReplacement.moveOver(partial, target);
         } finally {
             Files.deleteIfExists(partial);
         }

@@ -1,12 +1,10 @@
 package org.strandbook.store;
 
 import java.io.IOException;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
 import java.nio.file.LinkOption;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.sql.Connection;
 import java.sql.SQLException;
 import java.time.Duration;
@@ -15,6 +13,7 @@ import java.util.function.Supplier;
 
 import org.sqlite.SQLiteConfig;
 import org.sqlite.SQLiteOpenMode;
+import org.strandbook.files.FileReplacement;
 import org.strandbook.site.Site;
 
 /**
@@ -225,11 +224,7 @@ public final class Workbook implements AutoCloseable {
             } catch (WorkbookException e) {
                 throw new WorkbookException("cannot write the copy " + to + " (" + e.getMessage() + ")", e);
             }
-            try {
-                Files.move(draft, to, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(draft, to, StandardCopyOption.REPLACE_EXISTING);
-            }
+            FileReplacement.moveOver(draft, to);
         } catch (IOException e) {
             throw new WorkbookException("cannot write the copy " + to + " (" + e.getMessage() + ")", e);
         } finally {
