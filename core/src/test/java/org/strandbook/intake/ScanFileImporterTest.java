@@ -76,7 +76,7 @@ class ScanFileImporterTest {
 
     @Test
     void filesAreStoredInTheOrderGivenWithBadAndRepeatedOnesReportedInPlace() throws IOException {
-        // the batch rule of the import: all or nothing per file, the batch goes on, the same file twice is refused
+        // common practice for batch imports: all or nothing per file, the batch goes on, the same file twice is refused
         Path broken = dir.resolve("broken.jdx");
         Files.writeString(broken, "##TITLE= cut short\n##JCAMP-DX= 4.24\n");
         List<Path> batch = new ArrayList<>(files);
@@ -99,7 +99,7 @@ class ScanFileImporterTest {
 
     @Test
     void aStopAfterTheSeventhFileLeavesExactlyTheFirstSeven() {
-        // files read ahead but not reached are not stored (the progress callback's contract)
+        // common practice for a cancelled batch: files read ahead but not reached are not stored
         try (Workbook wb = workbook()) {
             ScanFileImporter.Summary s = importInto(wb, files, (done, total, file) -> done < 7);
 
@@ -112,7 +112,7 @@ class ScanFileImporterTest {
 
     @Test
     void aStopAtTheLastFileIsNotAnEarlyStop() {
-        // stopping once everything is done leaves nothing undone
+        // common practice: a stop after the last file is no early stop
         try (Workbook wb = workbook()) {
             ScanFileImporter.Summary s = importInto(wb, files, (done, total, file) -> done < total);
 
