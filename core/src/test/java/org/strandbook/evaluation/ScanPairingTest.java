@@ -87,6 +87,7 @@ class ScanPairingTest {
 
     @Test
     void eachOfManyVisitsPairsWithinItself() {
+        // one-cord method (from memory, as above): each visit's loop is divided by that visit's reference
         List<ScanRecord> scans = new ArrayList<>();
         for (int day = 1; day <= 28; day++) {
             String date = String.format(Locale.ROOT, "2025-02-%02d", day);
@@ -105,7 +106,7 @@ class ScanPairingTest {
 
     @Test
     void earlierOfTwoEquallyNearReferencesIsTaken() {
-        // the rule as printed with every result: an earlier reference wins a tie
+        // common practice, and the rule printed with every result: an earlier reference wins a tie
         ScanRecord dark = scan("P1", ScanKind.DARK, "2025-04-01T08:00:00Z", 50);
         ScanRecord before = scan("P1", ScanKind.REFERENCE, "2025-04-01T08:05:00Z", 50);
         ScanRecord loop = scan("P1", ScanKind.LOOP, "2025-04-01T08:10:00Z", 50);
