@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Locale;
 
 import org.strandbook.evaluation.Status;
+import org.strandbook.evaluation.SubBands;
 import org.strandbook.site.SignedDecimal;
 
 /**
@@ -158,9 +159,15 @@ final class DossierText {
                     + " loss minus the highest measured loss in the band.");
 
     static final List<String> TREND_METHOD = List.of(
-            "The trend of a band is the Theil–Sen slope of its band-mean loss readings against time, with Sen's"
-                    + " confidence interval; steps and single outliers between consecutive scans are flagged"
-                    + " when larger than the scan-to-scan noise.",
+            "Each band is cut into sub-bands of at most " + decimal(SubBands.MAX_WIDTH_NM, 0) + " nm. In every"
+                    + " sub-band the highest measured loss of each scan is trended against time by the Theil–Sen"
+                    + " slope with Sen's confidence interval, and its margin (allowed loss minus that loss at the"
+                    + " latest scan) is extended along its own slope. The sub-band whose margin reaches zero"
+                    + " first (or, when none is shrinking, the one with the least margin) is the band's driving"
+                    + " range: its slope, date and history are the ones shown. A band's mean would hide loss that"
+                    + " grows at one place in the band and date the run-out years too late.",
+            "Steps and single outliers between consecutive scans of the driving range are flagged when larger"
+                    + " than the scan-to-scan noise.",
             "The forecast extends the present margin along the slope and its confidence limits to the date the"
                     + " margin would reach zero. It is an extrapolation for planning maintenance, not a guarantee.");
 

@@ -1,7 +1,6 @@
 package org.strandbook.evaluation;
 
 import java.time.Instant;
-import java.time.ZoneOffset;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
@@ -25,11 +24,8 @@ import org.strandbook.throughput.RawSpectrum;
 import org.strandbook.throughput.ScanRegridder;
 import org.strandbook.throughput.ThroughputResult;
 import org.strandbook.throughput.ThroughputScans;
-import org.strandbook.trend.LossReading;
-import org.strandbook.trend.LossTrend;
 import org.strandbook.trend.MarginForecast;
 import org.strandbook.trend.StepDetector;
-import org.strandbook.trend.StepReport;
 import org.strandbook.trend.TheilSenTrend;
 
 /**
@@ -88,12 +84,7 @@ public final class PointEvaluator {
 
         ScanRegridder regridder = new ScanRegridder(grid);
         Map<Long, RawSpectrum> fetched = new HashMap<>();
-        List<List<LossReading>> readings = new ArrayList<>();
-        List<List<Instant>> dark = new ArrayList<>();
-        for (int b = 0; b < bands.size(); b++) {
-            readings.add(new ArrayList<>());
-            dark.add(new ArrayList<>());
-        }
+        List<BandHistory> histories = bands.stream().map(BandHistory::new).toList();
         ThroughputResult latest = null;
         ScanPair latestPair = null;
         for (ScanPair pair : pairs.paired()) {
@@ -104,13 +95,8 @@ public final class PointEvaluator {
                     raw(pair.referenceDark(), in.spectra(), fetched, regridder)),
                     regridder);
             double[] loss = result.lossDb();
-            for (int b = 0; b < bands.size(); b++) {
-                double mean = bandMean(grid, loss, bands.get(b));
-                if (Double.isNaN(mean)) {
-                    dark.get(b).add(pair.loop().takenAt());
-                } else {
-                    readings.get(b).add(new LossReading(pair.loop().takenAt(), mean));
-                }
+            for (BandHistory history : histories) {
+                history.add(pair.loop().takenAt(), grid, loss);
             }
             latest = result;
             latestPair = pair;
@@ -137,30 +123,11 @@ public final class PointEvaluator {
                 PathEvidence.of(in.point(), in.send(), in.ret(), in.catalog()));
         Instant asOf = latestPair.loop().takenAt();
         List<BandTrend> trends = new ArrayList<>();
-        for (int b = 0; b < bands.size(); b++) {
-            trends.add(trend(bands.get(b), readings.get(b), dark.get(b), verdicts.get(b), asOf));
+        for (BandHistory history : histories) {
+            trends.add(history.trend(allowed, asOf, theilSen, steps, forecast));
         }
         return new PointEvaluation(in.point(), status, predicted, Optional.of(latestPair), Optional.of(latest),
                 verdicts, Optional.of(diagnosis), trends, problems);
-    }
-
-    private BandTrend trend(WavelengthBand band, List<LossReading> readings, List<Instant> noLight,
-                            BandVerdict latest, Instant asOf) {
-        Optional<LossTrend> trend = Optional.empty();
-        List<org.strandbook.trend.StepEvent> events = List.of();
-        Optional<MarginForecast.Outlook> outlook = Optional.empty();
-        if (readings.size() >= 2) {
-            LossTrend t = theilSen.fit(readings);
-            trend = Optional.of(t);
-            if (readings.size() >= 3) {
-                StepReport report = steps.detect(readings);
-                events = report.events();
-            }
-            if (Double.isFinite(latest.marginDb())) {
-                outlook = Optional.of(forecast.forecast(latest.marginDb(), asOf, t, ZoneOffset.UTC));
-            }
-        }
-        return new BandTrend(band, readings, noLight, trend, events, outlook);
     }
 
     private static RawSpectrum raw(ScanRecord scan, SpectrumSource source, Map<Long, RawSpectrum> fetched,
@@ -173,18 +140,5 @@ public final class PointEvaluator {
                     ? OptionalDouble.of(DarkNoise.sigmaCounts(counts)) : OptionalDouble.empty();
             return new RawSpectrum(regridder.axisOf(s), counts, noise);
         });
-    }
-
-    /** Mean measured loss over the band's measured grid points; NaN when none was measured. */
-    static double bandMean(WavelengthGrid grid, double[] lossDb, WavelengthBand band) {
-        double sum = 0;
-        int n = 0;
-        for (int i = 0; i < grid.size(); i++) {
-            if (band.contains(grid.wavelengthNm(i)) && !Double.isNaN(lossDb[i])) {
-                sum += lossDb[i];
-                n++;
-            }
-        }
-        return n == 0 ? Double.NaN : sum / n;
     }
 }

@@ -11,6 +11,7 @@ import org.strandbook.evaluation.BandTrend;
 import org.strandbook.evaluation.BandVerdict;
 import org.strandbook.evaluation.PointEvaluation;
 import org.strandbook.evaluation.SiteEvaluation;
+import org.strandbook.evaluation.SubBands;
 import org.strandbook.evaluation.Urgency;
 import org.strandbook.site.SignedDecimal;
 import org.strandbook.throughput.MaskedRange;
@@ -161,10 +162,10 @@ final class EvaluationText {
     /** The site's points ranked by urgency, one line per point and band. */
     static void trendTable(SiteEvaluation site, PrintWriter out) {
         TextTable t = new TextTable(
-                new String[] {"Rank", "Point", "Status", "Band", "Scans", "Slope", "95 % interval", "Steps", "Margin",
-                    "Margin runs out"},
-                new String[] {"", "", "", "", "", "(dB/year)", "(dB/year)", "", "(dB)", "(date)"})
-                .leftAligned(1, 2, 3, 9);
+                new String[] {"Rank", "Point", "Status", "Band", "Scans", "Driving range", "Slope", "95 % interval",
+                    "Steps", "Margin", "Margin runs out"},
+                new String[] {"", "", "", "", "", "(nm)", "(dB/year)", "(dB/year)", "", "(dB)", "(date)"})
+                .leftAligned(1, 2, 3, 10);
         int rank = 1;
         for (PointEvaluation e : site.points()) {
             for (int b = 0; b < e.trends().size(); b++) {
@@ -175,6 +176,7 @@ final class EvaluationText {
                         b == 0 ? e.status().label() : "", tr.band().name(),
                         Integer.toString(tr.readings().size()) + (tr.noLight().isEmpty() ? ""
                                 : " (+" + tr.noLight().size() + " dark)"),
+                        String.format(Locale.ROOT, "%.0f–%.0f", tr.drivingFromNm(), tr.drivingToNm()),
                         lt.map(x -> SignedDecimal.of(x.slopeDbPerYear(), 3)).orElse("—"),
                         lt.map(x -> SignedDecimal.of(x.lowerSlopeDbPerYear(), 3) + " … "
                                 + SignedDecimal.of(x.upperSlopeDbPerYear(), 3)).orElse("—"),
@@ -183,6 +185,8 @@ final class EvaluationText {
             rank++;
         }
         t.print(out);
+        out.println(String.format(Locale.ROOT, "Slope and date follow the highest loss in the driving range: the part of the band (sub-bands of at"
+                + " most %.0f nm) whose margin runs out first.", SubBands.MAX_WIDTH_NM));
         for (PointEvaluation e : site.points()) {
             for (BandTrend tr : e.trends()) {
                 for (StepEvent s : tr.steps()) {
@@ -227,6 +231,8 @@ final class EvaluationText {
             for (int i = 0; i < e.trends().size(); i++) {
                 BandTrend tr = e.trends().get(i);
                 b.append(i == 0 ? "" : ",").append("{\"band\":").append(JsonText.string(tr.band().name()))
+                        .append(",\"driving_from_nm\":").append(JsonText.number(tr.drivingFromNm()))
+                        .append(",\"driving_to_nm\":").append(JsonText.number(tr.drivingToNm()))
                         .append(",\"readings\":[");
                 for (int r = 0; r < tr.readings().size(); r++) {
                     LossReading lr = tr.readings().get(r);
