@@ -3,10 +3,12 @@ package org.strandbook.evaluation;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import java.util.Set;
 import java.util.concurrent.ConcurrentHashMap;
 
 import org.strandbook.diagnosis.DeviationDiagnoser;
@@ -34,6 +36,12 @@ import org.strandbook.trend.TheilSenTrend;
  * Thread-safe: the optics cache is shared per grid, everything else is per call.
  */
 public final class PointEvaluator {
+
+    /**
+     * Design choice: a measurement whose scans are clipped over at least this share of their
+     * common range is refused; the rest is too little, and too near the clipped parts, to judge.
+     */
+    public static final double REFUSED_SATURATED_FRACTION = 0.8;
 
     private final ScanPairing pairing;
     private final OneCordThroughput throughput;
@@ -83,26 +91,35 @@ public final class PointEvaluator {
         pairs.unpaired().forEach(u -> problems.add(u.reason()));
 
         ScanRegridder regridder = new ScanRegridder(grid);
-        Map<Long, RawSpectrum> fetched = new HashMap<>();
+        Map<ScaledScan, RawSpectrum> fetched = new HashMap<>();
         List<BandHistory> histories = bands.stream().map(BandHistory::new).toList();
         ThroughputResult latest = null;
         ScanPair latestPair = null;
+        Instant lastJudged = null;
+        int unjudged = 0;
         for (ScanPair pair : pairs.paired()) {
+            ScanExposure exposure = pair.exposure();
             ThroughputResult result = throughput.measure(new ThroughputScans(
-                    raw(pair.loop(), in.spectra(), fetched, regridder),
-                    raw(pair.loopDark(), in.spectra(), fetched, regridder),
-                    raw(pair.reference(), in.spectra(), fetched, regridder),
-                    raw(pair.referenceDark(), in.spectra(), fetched, regridder)),
+                    raw(pair.loop(), exposure, in.spectra(), fetched, regridder),
+                    raw(pair.loopDark(), exposure, in.spectra(), fetched, regridder),
+                    raw(pair.reference(), exposure, in.spectra(), fetched, regridder),
+                    raw(pair.referenceDark(), exposure, in.spectra(), fetched, regridder)),
                     regridder);
-            double[] loss = result.lossDb();
-            for (BandHistory history : histories) {
-                history.add(pair.loop().takenAt(), grid, loss);
+            if (exposure.judgeable() && !clippedNearlyEverywhere(result)) {
+                double[] loss = result.lossDb();
+                for (BandHistory history : histories) {
+                    history.add(pair.loop().takenAt(), grid, loss);
+                }
+                lastJudged = pair.loop().takenAt();
+            } else {
+                unjudged++;
             }
             latest = result;
             latestPair = pair;
             // spectra of earlier visits are not needed again
-            fetched.keySet().retainAll(List.of(pair.loopDark().id(), pair.referenceDark().id(),
+            Set<Long> keep = new HashSet<>(List.of(pair.loopDark().id(), pair.referenceDark().id(),
                     pair.reference().id()));
+            fetched.keySet().removeIf(k -> !keep.contains(k.id()));
         }
         if (latest == null) {
             problems.add(0, pairs.paired().isEmpty() && pairs.unpaired().isEmpty()
@@ -112,29 +129,97 @@ public final class PointEvaluator {
         }
         double tolerance = in.point().effectiveToleranceDb(in.site());
         double allowed = in.analyzer().allowedLossDb();
+        ScanExposure exposure = latestPair.exposure();
+        Optional<String> refusal = exposure.problem();
+        if (refusal.isEmpty() && clippedNearlyEverywhere(latest)) {
+            refusal = Optional.of(String.format(java.util.Locale.ROOT, "not judged: %.0f %% of the range is clipped: %s",
+                    100 * latest.saturatedFraction(), String.join("; ", latest.saturationReasons())));
+        }
         List<BandVerdict> verdicts = new ArrayList<>();
         Status status = Status.PASS;
         for (WavelengthBand band : bands) {
             BandVerdict v = Acceptance.judge(grid, latest.lossDb(), predictedLoss, band, tolerance, allowed);
+            if (refusal.isPresent()) {
+                v = notJudged(v, refusal.get());
+            } else if (v.measuredFraction() < Acceptance.MIN_MEASURED_FRACTION
+                    && 2 * saturatedShare(latest, grid, band) > 1 - v.measuredFraction()) {
+                // most of what could not be measured was clipped: that, not the light, is the finding
+                v = notJudged(v, String.format(java.util.Locale.ROOT, "not judged: %.0f %% of the band is clipped: %s",
+                        100 * saturatedShare(latest, grid, band), String.join("; ", latest.saturationReasons())));
+            }
             verdicts.add(v);
             status = status.worse(v.status());
         }
-        Diagnosis diagnosis = diagnoser.diagnose(latest, predictedLoss,
-                PathEvidence.of(in.point(), in.send(), in.ret(), in.catalog()));
-        Instant asOf = latestPair.loop().takenAt();
+        Optional<Diagnosis> diagnosis = Optional.empty();
+        if (refusal.isEmpty()) {
+            diagnosis = Optional.of(diagnoser.diagnose(latest, predictedLoss,
+                    PathEvidence.of(in.point(), in.send(), in.ret(), in.catalog())));
+        } else {
+            problems.add(0, refusal.get());
+        }
+        int earlierUnjudged = unjudged - (refusal.isPresent() ? 1 : 0);
+        if (earlierUnjudged > 0) {
+            problems.add(earlierUnjudged + " earlier loop scan(s) left out of the trend: clipped nearly everywhere,"
+                    + " or their integration times do not show that loop and reference are on one scale");
+        }
         List<BandTrend> trends = new ArrayList<>();
         for (BandHistory history : histories) {
-            trends.add(history.trend(allowed, asOf, theilSen, steps, forecast));
+            trends.add(history.trend(allowed, lastJudged == null ? latestPair.loop().takenAt() : lastJudged,
+                    theilSen, steps, forecast));
         }
         return new PointEvaluation(in.point(), status, predicted, Optional.of(latestPair), Optional.of(latest),
-                verdicts, Optional.of(diagnosis), trends, problems);
+                verdicts, diagnosis, trends, problems);
     }
 
-    private static RawSpectrum raw(ScanRecord scan, SpectrumSource source, Map<Long, RawSpectrum> fetched,
-                                   ScanRegridder regridder) {
-        return fetched.computeIfAbsent(scan.id(), id -> {
-            Spectrum s = source.spectrum(id);
+    /** Share of the band's grid points masked because a detector was saturated or clipped. */
+    private static double saturatedShare(ThroughputResult result, WavelengthGrid grid, WavelengthBand band) {
+        int inBand = 0;
+        int saturated = 0;
+        for (int i = 0; i < grid.size(); i++) {
+            double nm = grid.wavelengthNm(i);
+            if (!band.contains(nm)) {
+                continue;
+            }
+            inBand++;
+            for (org.strandbook.throughput.MaskedRange r : result.maskedRanges()) {
+                if (r.reason().isSaturation() && nm >= r.fromNm() && nm <= r.toNm()) {
+                    saturated++;
+                    break;
+                }
+            }
+        }
+        return inBand == 0 ? 0 : (double) saturated / inBand;
+    }
+
+    private static boolean clippedNearlyEverywhere(ThroughputResult result) {
+        return result.saturatedFraction() >= REFUSED_SATURATED_FRACTION;
+    }
+
+    /**
+     * A band the evaluation refuses to judge: REVIEW, the reason first and the figures as measured
+     * after it (they are shown, not trusted).
+     */
+    private static BandVerdict notJudged(BandVerdict v, String why) {
+        return new BandVerdict(v.band(), Status.REVIEW, v.meanDeviationDb(), v.worstDeviationDb(), v.worstAtNm(),
+                v.predictedLossDb(), v.worstMeasuredLossDb(), v.marginDb(), v.measuredFraction(),
+                v.measuredFraction() == 0 ? why : why + "; as measured: " + v.reason());
+    }
+
+    /** A stored scan with the divisor its counts were put on the pair's common scale by. */
+    private record ScaledScan(long id, double divisor) {
+    }
+
+    private static RawSpectrum raw(ScanRecord scan, ScanExposure exposure, SpectrumSource source,
+                                   Map<ScaledScan, RawSpectrum> fetched, ScanRegridder regridder) {
+        double divisor = exposure.divisor(scan.conditions());
+        return fetched.computeIfAbsent(new ScaledScan(scan.id(), divisor), key -> {
+            Spectrum s = source.spectrum(key.id());
             double[] counts = s.values();
+            if (divisor != 1) {
+                for (int i = 0; i < counts.length; i++) {
+                    counts[i] /= divisor;
+                }
+            }
             // a dark's noise is estimated once, however many scans it serves
             OptionalDouble noise = scan.kind() == ScanKind.DARK
                     ? OptionalDouble.of(DarkNoise.sigmaCounts(counts)) : OptionalDouble.empty();

@@ -59,6 +59,7 @@ final class EvaluationText {
         out.println(e.point().tag() + " — " + e.point().service() + ": " + e.status().label());
         e.latest().ifPresent(p -> out.printf(Locale.ROOT, "  loop scan %d taken %s; reference %d, darks %d and %d%n",
                 p.loop().id(), p.loop().takenAt(), p.reference().id(), p.loopDark().id(), p.referenceDark().id()));
+        e.latest().ifPresent(p -> out.println("  integration: " + p.exposure().describeNormalisation()));
         TextTable bands = new TextTable(
                 new String[] {"Band", "From", "To", "Status", "Predicted", "Measured max", "Mean dev.", "Worst dev.",
                     "Margin", "Reason"},
@@ -107,7 +108,13 @@ final class EvaluationText {
                     .append(",\"reference_scan_id\":").append(p.reference().id())
                     .append(",\"loop_dark_scan_id\":").append(p.loopDark().id())
                     .append(",\"reference_dark_scan_id\":").append(p.referenceDark().id())
-                    .append(",\"taken_at\":").append(JsonText.string(p.loop().takenAt().toString())));
+                    .append(",\"taken_at\":").append(JsonText.string(p.loop().takenAt().toString()))
+                    .append(",\"loop_integration_ms\":").append(integrationMs(p.loop().conditions().integrationMs()))
+                    .append(",\"reference_integration_ms\":")
+                    .append(integrationMs(p.reference().conditions().integrationMs()))
+                    .append(",\"loop_co_added\":").append(p.loop().conditions().coAdded())
+                    .append(",\"reference_co_added\":").append(p.reference().conditions().coAdded())
+                    .append(",\"integration\":").append(JsonText.string(p.exposure().describeNormalisation())));
             b.append(",\"bands\":[").append(e.verdicts().stream().map(EvaluationText::json)
                     .collect(Collectors.joining(","))).append(']');
             b.append(",\"findings\":[");
@@ -122,6 +129,11 @@ final class EvaluationText {
         }
         b.append("],\"problems\":").append(strings(site.problems())).append("}\n");
         return b.toString();
+    }
+
+    /** A recorded integration time, or null when the scan file did not give one. */
+    private static String integrationMs(double ms) {
+        return ms > 0 ? JsonText.number(ms) : "null";
     }
 
     private static String json(BandVerdict v) {
