@@ -136,8 +136,21 @@ final class DossierText {
                     + " reference cord, so the loss reported is that of the installed loop. The probe was measured"
                     + " as found; its process contents add to the loss.",
             "Pairing of scans: " + Placeholder.PAIRING_RULE.token() + ".",
+            "Detector counts grow with the integration time and, where a scan file records co-added scans,"
+                    + " with their number; so do dark counts. Loop and reference are therefore compared as"
+                    + " (scan − dark) / (integration time × co-added scans), each with a dark of its own"
+                    + " integration time. Where the integration time of the loop, the reference or a dark is not"
+                    + " recorded, the two cannot be shown to be on one scale: the bands are marked "
+                    + Status.REVIEW.label() + " with that reason and are not judged, and the scan is left out of"
+                    + " the trend.",
             "Wavelengths where the loop or the reference signal lies within a few noise widths of its dark"
                     + " level could not be measured; the Spectra sheet leaves them empty and gives the reason.",
+            "A saturated detector or clipped converter shows a flat top (readings held at full scale, runs of"
+                    + " equal highest counts, or a top flattened below full scale with its flanks still climbing);"
+                    + " a clipped reference would make the loop look better than it is. Such wavelengths are"
+                    + " left out with their reason (e.g. reference saturated: shorten the integration time and"
+                    + " re-take it) and never enter the fit; a band mostly clipped, or a measurement clipped over"
+                    + " most of its range, is not judged.",
             "Predicted loss comes from the recorded path: fiber attenuation (Rayleigh scattering, infrared and"
                     + " OH absorption in silica, or the maker's datasheet), Gloge bend loss for recorded bends (the"
                     + " tightest bend of a segment, charged once), joint allowances (the entered loss, else the"
