@@ -65,8 +65,10 @@ public final class DetectorClipping {
             return List.of();
         }
         double max = Double.NEGATIVE_INFINITY;
+        double min = Double.POSITIVE_INFINITY;
         for (double c : counts) {
             max = Math.max(max, c);
+            min = Math.min(min, c);
         }
         if (fullScaleCounts.isPresent()) {
             for (int i = 0; i < n; i++) {
@@ -75,7 +77,7 @@ public final class DetectorClipping {
         }
         // a scan that does not rise well above its lowest reading (a dark, a loop at its dark level)
         // has no top to clip: its repeated highest value is quantisation, not a limit
-        if (max > min(counts) + Math.max(RISE_NOISE_WIDTHS * noiseCounts, Math.ulp(max))) {
+        if (max > min + Math.max(RISE_NOISE_WIDTHS * noiseCounts, Math.ulp(max))) {
             markEqualMaximumRuns(counts, max, clipped);
             if (noiseCounts > 0) {
                 markFlattenedTop(counts, max, noiseCounts, clipped);
@@ -174,14 +176,6 @@ public final class DetectorClipping {
         double slope = (points * sxy - sx * sy) / (points * sxx - sx * sx);
         double intercept = (sy - slope * sx) / points;
         return intercept + slope * at;
-    }
-
-    private static double min(double[] counts) {
-        double min = Double.POSITIVE_INFINITY;
-        for (double c : counts) {
-            min = Math.min(min, c);
-        }
-        return min;
     }
 
     private static List<Run> runs(boolean[] clipped) {

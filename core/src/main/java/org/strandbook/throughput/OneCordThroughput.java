@@ -197,7 +197,7 @@ public final class OneCordThroughput {
     /** Grid points that fall within a clipped run of {@code scan} (its widened ends included). */
     private boolean[] clippedOnGrid(RawSpectrum scan, double sigmaCounts, WavelengthGrid grid) {
         boolean[] out = new boolean[grid.size()];
-        List<DetectorClipping.Run> runs = DetectorClipping.find(scan.counts(), sigmaCounts, fullScaleCounts);
+        List<DetectorClipping.Run> runs = DetectorClipping.find(scan.countsView(), sigmaCounts, fullScaleCounts);
         for (DetectorClipping.Run r : runs) {
             double from = scan.axis().wavelengthNm(r.from());
             double to = scan.axis().wavelengthNm(r.to());
