@@ -64,7 +64,8 @@ public record PointEvaluation(MeasurementPoint point, Status status, PredictedBu
             String size = Double.isInfinite(f.amountDb()) ? "no light"
                     : Double.isNaN(f.atNm()) || f.signature() == org.strandbook.diagnosis.Signature.FLAT_EXCESS
                     ? String.format(java.util.Locale.ROOT, "≈%.1f dB, wavelength-flat", f.amountDb())
-                    : String.format(java.util.Locale.ROOT, "≈%.1f dB at %.0f nm", f.amountDb(), f.atNm());
+                    : String.format(java.util.Locale.ROOT, "%s%.1f dB at %.0f nm", f.atLeast() ? "≥" : "≈",
+                    f.amountDb(), f.atNm());
             return f.cause().words() + ", " + size + (f.checkFirst().isEmpty() ? "" : "; check " + f.checkFirst());
         }).orElse("as predicted");
     }
