@@ -334,9 +334,11 @@ public final class DeviationDiagnoser {
         if (!at.atLeast()) {
             return "";
         }
-        return String.format(Locale.ROOT, " Only a lower bound: the band at %.0f nm, where this shape is"
-                + " stronger, is %s, so the fit saw only its weaker part.", at.unmeasuredNm(),
-                range.whyNotMeasured(at.unmeasuredNm()));
+        String where = at.unmeasuredNm().stream()
+                .map(nm -> String.format(Locale.ROOT, "at %.0f nm it is %s", nm, range.whyNotMeasured(nm)))
+                .collect(Collectors.joining("; "));
+        return " Only a lower bound: where this shape is stronger it was not measured (" + where
+                + "), so the fit saw only its weaker part.";
     }
 
     private static Finding hydrogenFinding(double x, StatedAmount at, double share, PathEvidence evidence,

@@ -1,7 +1,7 @@
 package org.strandbook.diagnosis;
 
+import java.util.ArrayList;
 import java.util.List;
-import java.util.Optional;
 
 /**
  * Where a fitted shape's amount is stated, and whether it is only a lower bound.
@@ -13,21 +13,27 @@ import java.util.Optional;
  *
  * @param atNm          the wavelength the amount is stated at, nm
  * @param shapeValue    the shape's value there (the amount is coefficient × shape value)
- * @param atLeast       true when a preferred band was dark or masked
- * @param unmeasuredNm  the first preferred band that was not measured, nm; NaN when none
+ * @param unmeasuredNm  the preferred bands inside the grid that were not measured, nm; empty when none
  */
-record StatedAmount(double atNm, double shapeValue, boolean atLeast, double unmeasuredNm) {
+record StatedAmount(double atNm, double shapeValue, List<Double> unmeasuredNm) {
+
+    StatedAmount {
+        unmeasuredNm = List.copyOf(unmeasuredNm);
+    }
+
+    /** True when a preferred band was dark or masked: the amount is only a lower bound. */
+    boolean atLeast() {
+        return !unmeasuredNm.isEmpty();
+    }
 
     static StatedAmount of(MeasuredRange range, double[] shapeOnGrid, List<Double> candidatesNm) {
-        Optional<Double> unmeasured = Optional.empty();
+        List<Double> unmeasured = new ArrayList<>();
         for (double c : candidatesNm) {
             if (range.measuredAt(c)) {
-                boolean partial = unmeasured.isPresent();
-                return new StatedAmount(c, range.grid().interpolate(shapeOnGrid, c), partial,
-                        unmeasured.orElse(Double.NaN));
+                return new StatedAmount(c, range.grid().interpolate(shapeOnGrid, c), unmeasured);
             }
-            if (unmeasured.isEmpty() && range.grid().covers(c)) {
-                unmeasured = Optional.of(c);
+            if (range.grid().covers(c)) {
+                unmeasured.add(c);
             }
         }
         // no candidate measured: the strongest point of the shape that was
@@ -38,6 +44,6 @@ record StatedAmount(double atNm, double shapeValue, boolean atLeast, double unme
             }
         }
         double at = range.grid().wavelengthNm(best);
-        return new StatedAmount(at, shapeOnGrid[best], unmeasured.isPresent(), unmeasured.orElse(Double.NaN));
+        return new StatedAmount(at, shapeOnGrid[best], unmeasured);
     }
 }
