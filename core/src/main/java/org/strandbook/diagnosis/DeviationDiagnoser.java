@@ -335,10 +335,10 @@ public final class DeviationDiagnoser {
             return "";
         }
         String where = at.unmeasuredNm().stream()
-                .map(nm -> String.format(Locale.ROOT, "at %.0f nm it is %s", nm, range.whyNotMeasured(nm)))
+                .map(nm -> String.format(Locale.ROOT, "%.0f nm is %s", nm, range.whyNotMeasured(nm)))
                 .collect(Collectors.joining("; "));
-        return " Only a lower bound: where this shape is stronger it was not measured (" + where
-                + "), so the fit saw only its weaker part.";
+        return " Only a lower bound: this shape is stronger where nothing was measured, so the fit saw only its"
+                + " weaker part: " + where + ".";
     }
 
     private static Finding hydrogenFinding(double x, StatedAmount at, double share, PathEvidence evidence,

@@ -41,6 +41,11 @@ class FindingStatementsTest {
 
     /** Dark-corrected one-cord scans whose loss is the predicted loss plus {@code excessDb(λ)}. */
     private static ThroughputResult measured(WavelengthGrid grid, DoubleUnaryOperator excessDb, long seed) {
+        return measured(grid, excessDb, seed, FindingStatementsTest::referenceCounts);
+    }
+
+    private static ThroughputResult measured(WavelengthGrid grid, DoubleUnaryOperator excessDb, long seed,
+                                             DoubleUnaryOperator referenceCounts) {
         Random rnd = new Random(seed);
         double[] w = grid.wavelengthsNm();
         double[] dark = new double[w.length];
@@ -49,8 +54,9 @@ class FindingStatementsTest {
         for (int i = 0; i < w.length; i++) {
             double lossDb = PREDICTED_DB + excessDb.applyAsDouble(w[i]);
             dark[i] = 1000 + NOISE_COUNTS * rnd.nextGaussian();
-            ref[i] = 1000 + referenceCounts(w[i]) + NOISE_COUNTS * rnd.nextGaussian();
-            loop[i] = 1000 + referenceCounts(w[i]) * Math.pow(10, -lossDb / 10) + NOISE_COUNTS * rnd.nextGaussian();
+            double lamp = referenceCounts.applyAsDouble(w[i]);
+            ref[i] = 1000 + lamp + NOISE_COUNTS * rnd.nextGaussian();
+            loop[i] = 1000 + lamp * Math.pow(10, -lossDb / 10) + NOISE_COUNTS * rnd.nextGaussian();
         }
         RawSpectrum d = RawSpectrum.ofNm(w, dark).withNoiseCounts(NOISE_COUNTS);
         return OneCordThroughput.withDefaults().measure(new ThroughputScans(
@@ -132,9 +138,25 @@ class FindingStatementsTest {
         assertEquals(1240, f.atNm());
         assertTrue(f.atLeast(), f.text());
         assertTrue(f.text().startsWith("at least "), f.text());
-        assertTrue(f.text().contains("at 1383 nm it is dark"), f.text());
+        assertTrue(f.text().contains("1383 nm is dark"), f.text());
         // and it is a lower bound: the truth at 1240 nm is 2.5 dB/km/ppm × 1 ppm·km (from memory, as built above)
         assertTrue(f.amountDb() <= 2.5, f.text());
+    }
+
+    @Test
+    void darkeningWhoseShortEndWasNotMeasuredIsOnlyALowerBound() {
+        // radiation-induced loss peaks at the NBOHC band near 630 nm (1.97 eV) and rises into the UV
+        // (Girard et al., IEEE Trans. Nucl. Sci. 60 (2013), from memory); this reference has no light
+        // below 650 nm (a long-pass filter), so the darkening's strong end is masked
+        WavelengthGrid silicon = WavelengthGrid.uniformNm(600, 1100, 251);
+        DoubleUnaryOperator darkening = w -> 3.0 * band(w, 630, 80) + 2.0 * Math.exp(-(w - 600) / 60);
+        ThroughputResult scan = measured(silicon, darkening, 20, w -> w < 650 ? 0 : referenceCounts(w));
+        Finding f = DeviationDiagnoser.withDefaults().diagnose(scan, predicted(silicon), LOW_OH_PATH)
+                .first().orElseThrow();
+        assertEquals(Cause.RADIATION_DARKENING, f.cause());
+        assertTrue(f.atLeast(), f.text());
+        assertTrue(f.atNm() >= 650, f.text());
+        assertTrue(f.text().contains("600 nm is masked"), f.text());
     }
 
     @Test
