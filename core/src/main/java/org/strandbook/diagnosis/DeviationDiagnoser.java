@@ -29,7 +29,7 @@ import org.strandbook.throughput.ThroughputResult;
  * <p>The flat term is fitted signed: connectors are budgeted at a conservative allowance, so a
  * healthy path often loses a few tenths of a dB less than predicted, and a non-negative flat term
  * would push that shortfall into the other shapes. A positive flat excess is reported as a fault; a
- * negative one of at least {@link #BETTER_THAN_PREDICTED_DB} as a problem of the reference or records.
+ * negative one of at least 1 dB as a problem of the reference or the records.
  *
  * <p>Each band amount is stated where it was measured ({@link StatedAmount}): an OH excess at its
  * strongest measured band, and "at least" when a stronger band of the same shape was dark or masked.
@@ -48,12 +48,6 @@ public final class DeviationDiagnoser {
     public static final double HYDROGEN_2420_RELATIVE = 5.0;
     /** |cos| above which two signatures are reported as indistinguishable over the measured range. */
     public static final double COLLINEAR_COSINE = 0.95;
-    /**
-     * dB: a loop that loses at least this much less than predicted is reported as a reference or
-     * records problem. Larger than the reporting threshold because connector allowances are
-     * conservative and a healthy path often comes in a few tenths under budget (a design choice).
-     */
-    public static final double BETTER_THAN_PREDICTED_DB = 1.0;
 
     private final double minReportDb;
 
@@ -130,12 +124,11 @@ public final class DeviationDiagnoser {
             }
             double share = totalEffect > 0 ? 100 * effect[j] / totalEffect : 0;
             if (c.signature == Signature.FLAT_EXCESS && x[j] < 0) {
-                if (peak >= Math.max(minReportDb, BETTER_THAN_PREDICTED_DB)) {
-                    Finding f = FlatExcessRanking.betterThanPredicted(x[j], c.atNm, share,
-                            !measured.negativeLossRanges().isEmpty());
-                    findings.add(f);
-                    peaks.put(f, peak);
-                }
+                FlatExcessRanking.betterThanPredicted(x[j], c.atNm, share, minReportDb,
+                        !measured.negativeLossRanges().isEmpty()).ifPresent(f -> {
+                            findings.add(f);
+                            peaks.put(f, -f.amountDb());
+                        });
                 continue;
             }
             if (peak < minReportDb) {
@@ -233,23 +226,6 @@ public final class DeviationDiagnoser {
         return out;
     }
 
-    private static int indexOf(List<Column> columns, Signature signature) {
-        for (int j = 0; j < columns.size(); j++) {
-            if (columns.get(j).signature == signature) {
-                return j;
-            }
-        }
-        return -1;
-    }
-
-    private static double[] scaled(double[] shape, double coefficient) {
-        double[] out = new double[shape.length];
-        for (int i = 0; i < out.length; i++) {
-            out[i] = coefficient * shape[i];
-        }
-        return out;
-    }
-
     private static double[] rowsOf(double[] onGrid, int[] rows) {
         double[] v = new double[rows.length];
         for (int r = 0; r < rows.length; r++) {
@@ -282,19 +258,19 @@ public final class DeviationDiagnoser {
         return AttenuationShapes.SILICA_OH_BANDS.get(0).centerNm();
     }
 
-    private Finding finding(Column c, double x, double share, PathEvidence evidence, MeasuredRange range) {
+    private Finding finding(Column c, double amount, double share, PathEvidence evidence, MeasuredRange range) {
         return switch (c.signature) {
-            case FLAT_EXCESS -> FlatExcessRanking.finding(x, c.atNm, share, evidence);
-            case OH_BANDS -> ohFinding(x / AttenuationShapes.ohAbsorptionDbPerKmPerPpm(c.atNm),
+            case FLAT_EXCESS -> FlatExcessRanking.finding(amount, c.atNm, share, evidence);
+            case OH_BANDS -> ohFinding(amount / AttenuationShapes.ohAbsorptionDbPerKmPerPpm(c.atNm),
                     StatedAmount.of(range, c.onGrid, ohBandsStrongestFirst()), share, evidence, range);
-            case HYDROGEN -> hydrogenFinding(x, StatedAmount.of(range, c.onGrid, List.of(c.atNm)), share, evidence,
-                    range);
-            case DARKENING -> darkeningFinding(x, StatedAmount.of(range, c.onGrid, List.of(c.atNm)), share, evidence,
-                    range);
-            case REFERENCE_DRIFT -> new Finding(Signature.REFERENCE_DRIFT, List.of(Cause.REFERENCE_DRIFT), x,
+            case HYDROGEN -> hydrogenFinding(amount, StatedAmount.of(range, c.onGrid, List.of(c.atNm)), share,
+                    evidence, range);
+            case DARKENING -> darkeningFinding(amount, StatedAmount.of(range, c.onGrid, List.of(c.atNm)), share,
+                    evidence, range);
+            case REFERENCE_DRIFT -> new Finding(Signature.REFERENCE_DRIFT, List.of(Cause.REFERENCE_DRIFT), amount,
                     c.atNm, share, "", String.format(Locale.ROOT,
                     "loss tilts by %+.1f dB across the range: the lamp drifted since the reference scan;"
-                            + " re-take the reference through the patch cord, then the loop scan", x));
+                            + " re-take the reference through the patch cord, then the loop scan", amount));
             case FRINGES -> throw new IllegalStateException("fringes are not a fitted column");
         };
     }
@@ -436,5 +412,22 @@ public final class DeviationDiagnoser {
         double[] c = v.clone();
         java.util.Arrays.sort(c);
         return c[c.length / 2];
+    }
+
+    private static int indexOf(List<Column> columns, Signature signature) {
+        for (int j = 0; j < columns.size(); j++) {
+            if (columns.get(j).signature == signature) {
+                return j;
+            }
+        }
+        return -1;
+    }
+
+    private static double[] scaled(double[] shape, double coefficient) {
+        double[] out = new double[shape.length];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = coefficient * shape[i];
+        }
+        return out;
     }
 }

@@ -3,6 +3,7 @@ package org.strandbook.diagnosis;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.stream.Collectors;
 
 /**
@@ -21,6 +22,13 @@ import java.util.stream.Collectors;
  */
 final class FlatExcessRanking {
 
+    /**
+     * dB: a loop that loses at least this much less than predicted is reported as a reference or
+     * records problem. Larger than the reporting threshold because connector allowances are
+     * conservative and a healthy path often comes in a few tenths under budget (a design choice).
+     */
+    static final double BETTER_THAN_PREDICTED_DB = 1.0;
+
     private FlatExcessRanking() {
     }
 
@@ -35,7 +43,11 @@ final class FlatExcessRanking {
      * The loop loses {@code -amountDb} less than predicted at every wavelength. Fibers do not gain
      * light, so the reference or the records are wrong (one-cord method: IEC 61280-4-1, from memory).
      */
-    static Finding betterThanPredicted(double amountDb, double atNm, double share, boolean negativeLoss) {
+    static Optional<Finding> betterThanPredicted(double amountDb, double atNm, double share, double minReportDb,
+                                                 boolean negativeLoss) {
+        if (-amountDb < Math.max(minReportDb, BETTER_THAN_PREDICTED_DB)) {
+            return Optional.empty();
+        }
         String text = String.format(Locale.ROOT, "the loop loses ≈%.1f dB less than predicted at every wavelength:"
                 + " a fiber cannot gain light, so suspect the reference or the records. Check that the reference was"
                 + " taken through the launch cord alone (not a different cord, not through more than the cord), at"
@@ -44,8 +56,8 @@ final class FlatExcessRanking {
         if (negativeLoss) {
             text += "; the loss is even below zero in places, which only a bad reference explains";
         }
-        return new Finding(Signature.FLAT_EXCESS, List.of(Cause.REFERENCE_OR_RECORDS), amountDb, atNm, share,
-                "", text);
+        return Optional.of(new Finding(Signature.FLAT_EXCESS, List.of(Cause.REFERENCE_OR_RECORDS), amountDb, atNm,
+                share, "", text));
     }
 
     private static Finding withCoreStep(Finding f, CoreSizeStep step, PathEvidence evidence) {
