@@ -110,6 +110,17 @@ class LossBudgetTest {
     }
 
     @Test
+    void repeatedBendsAtOneRadiusAreChargedOnce() {
+        // the first bend strips the modes the radius cannot guide; later ones find them gone
+        // (Gloge, Bell Syst. Tech. J. 51, 1767 (1972): weak mode coupling; FED-STD-1037C "mandrel wrapping")
+        double one = LossBudget.of(LightPath.of("one", FiberSegment.bent("cord", FIBER, 5, 40, 1)), GRID).totalLossDbAt(30);
+        double five = LossBudget.of(LightPath.of("five", FiberSegment.bent("cord", FIBER, 5, 40, 5)), GRID).totalLossDbAt(30);
+        double straight = LossBudget.of(LightPath.of("none", FiberSegment.straight("cord", FIBER, 5)), GRID).totalLossDbAt(30);
+        assertTrue(one - straight > 0.5, "a 40 mm bend costs something: " + (one - straight));
+        assertEquals(one, five, 1e-12);
+    }
+
+    @Test
     void tightBendIsNotedWithTheMinimumRadius() {
         // long-term minimum 200× cladding radius = 22 mm for 220 µm cladding (common practice)
         LightPath path = LightPath.of("tight", FiberSegment.bent("patch cord", FIBER, 2, 15, 1));
