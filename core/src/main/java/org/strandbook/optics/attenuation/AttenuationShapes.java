@@ -161,7 +161,10 @@ public final class AttenuationShapes {
     /**
      * Shape of the molecular-hydrogen loss: 1 at the 1240 nm peak, {@code relativePeak2420} at the
      * 2420 nm peak, Gaussians in wavenumber. Band positions from the H₂-in-fiber literature
-     * (Electron. Lett. 1983 and J. Lightwave Technol. 1985 abstracts; IEC TR 62690 summary); the
+     * (the 2.42 µm fundamental: "Increased attenuation in optical fibres caused by diffusion of
+     * molecular hydrogen at room temperature", Electron. Lett. 1983, authors K. J. Beales, D. M.
+     * Cooper and J. D. Rush, vol. 19, p. 917 from memory; the 1.24 µm overtone: "Loss increase for
+     * optical fibers exposed to hydrogen atmosphere", 1985, from its abstract); the
      * band ratio and widths are parameters, not claims.
      */
     public static double hydrogenBandShape(double wavelengthNm, double relativePeak2420) {

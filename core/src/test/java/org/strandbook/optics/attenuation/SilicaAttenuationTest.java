@@ -32,7 +32,7 @@ class SilicaAttenuationTest {
 
     @Test
     void ohLossIsLinearInOhContent() {
-        // OH absorption is Beer–Lambert in OH concentration (Humbach et al., J. Non-Cryst. Solids 203, 19 (1996))
+        // OH absorption is linear in OH concentration (Beer–Lambert law)
         SilicaAttenuation dry = SilicaAttenuation.of(SilicaFiberGrade.LOW_OH, 0);
         for (double nm : new double[] {945, 1240, 1383, 2210}) {
             double five = lowOh.attenuationDbPerKm(nm) - dry.attenuationDbPerKm(nm);
@@ -87,7 +87,9 @@ class SilicaAttenuationTest {
 
     @Test
     void secondOvertoneBandAddsAboutOneDecibelPerKilometrePerPpm() {
-        // 945 nm band ≈ 1 dB/km per ppm OH (Keck, Maurer and Schultz, Appl. Phys. Lett. 22, 307 (1973))
+        // 945 nm band ≈ 1 dB/km per ppm OH (from memory; usually attributed to Keck, Maurer and Schultz,
+        // Appl. Phys. Lett. 22, 307 (1973), whose abstract says only that OH accounts for the absorption
+        // between 700 and 1100 nm to within ±0.7 dB/km)
         SilicaAttenuation dry = SilicaAttenuation.of(SilicaFiberGrade.LOW_OH, 0);
         double perPpm = lowOh.withOhPpm(1).attenuationDbPerKm(945) - dry.attenuationDbPerKm(945);
         assertEquals(1.0, perPpm, 0.2);
