@@ -90,7 +90,8 @@ class LossBudgetTest {
         assertEquals(Fresnel.faceLossDb(nSilica, 1.0), c.get(0).lossDbAt(i), 1e-12);
         // entered allowance, equal fibers: no mismatch
         assertEquals(ConnectorAllowance.DEFAULT.lossDb(), c.get(2).lossDbAt(i), 1e-12);
-        // probe: fixed 1 dB + sapphire window pair (1 − R)/(1 + R) + Beer–Lambert 10·A, A = 0.05/mm × 2 mm
+        // probe: fixed 1 dB + sapphire window pair (1 − R)/(1 + R) (series summed in FresnelTest) + Beer–Lambert
+        // 10·A, A = 0.05/mm × 2 mm
         double r = Fresnel.reflectance(nSapphire, 1.0);
         assertEquals(1.0 - 10 * Math.log10((1 - r) / (1 + r)) + 10 * 0.1, c.get(4).lossDbAt(i), 1e-9);
         // 200 → 100 µm core, gel-filled, aligned: (d2/d1)² = 1/4, about 6.02 dB, plus nearly no Fresnel
