@@ -13,7 +13,8 @@ import org.strandbook.optics.attenuation.AttenuationShapes;
  * two apart, so the two fitted amounts are reported as one finding that says so and ranks the
  * candidates by the point's records (hydrogen service, process temperature) without headlining
  * either. Band positions: Humbach et al., J. Non-Cryst. Solids 203, 19 (1996) for OH; the hydrogen
- * fundamental near 2.42 µm from memory.
+ * fundamental near 2.42 µm after Beales, Cooper and Rush, Electron. Lett. 19, 917 (1983), from memory.
+ * Ranking by the records is a design choice.
  */
 final class OhOrHydrogen {
 

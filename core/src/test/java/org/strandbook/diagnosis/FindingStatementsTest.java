@@ -89,8 +89,9 @@ class FindingStatementsTest {
     }
 
     /**
-     * Molecular hydrogen loss with {@code db1240} at its 1240 nm overtone band (position from memory:
-     * Mochizuki et al., Electron. Lett. 19, 743 (1983)), width from memory.
+     * Molecular hydrogen loss with {@code db1240} at its overtone band near 1.24 µm (position: "Loss
+     * increase for optical fibers exposed to hydrogen atmosphere", 1985, from its abstract, as
+     * AttenuationShapes cites it); centre 1244 nm and width from memory.
      */
     private static double hydrogenLossDb(double wavelengthNm, double db1240) {
         return db1240 * band(wavelengthNm, 1244, 35);
@@ -176,7 +177,7 @@ class FindingStatementsTest {
     @Test
     void shortRangeRanksHighOhFirstAmongTheTwoWithoutHydrogenService() {
         // the records rank what the spectrum cannot: no hydrogen service makes a wrong fiber the likelier
-        // (common practice)
+        // (design choice)
         Diagnosis d = diagnose(SHORT_RANGE, w -> ohLossDb(w, 0.4), path(200, false, List.of()), 14);
         Finding f = d.first().orElseThrow();
         assertEquals(List.of(Cause.OH_OR_HYDROGEN, Cause.HIGH_OH_FIBER, Cause.HYDROGEN_DARKENING), f.candidates());
