@@ -36,6 +36,9 @@ public final class DossierWriter {
     /** Rows of a sheet held in memory while writing; the rest are already on disk. */
     public static final int ROWS_IN_MEMORY_PER_SHEET = DossierWorkbook.ROW_WINDOW;
 
+    /** Deflate level of the file's parts. */
+    public static final int DEFLATE_LEVEL = DossierWorkbook.DEFLATE_LEVEL;
+
     /** Opens a template; the caller closes the stream. */
     @FunctionalInterface
     public interface TemplateSource {

@@ -1,4 +1,4 @@
-package org.strandbook.app.cli;
+package org.strandbook.app.bench;
 
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -31,14 +31,15 @@ import org.strandbook.site.ScanRecord;
 import org.strandbook.site.Site;
 import org.strandbook.site.Spectrum;
 import org.strandbook.site.WavelengthBand;
-import org.strandbook.store.BareScanListing;
 import org.strandbook.store.NewScan;
 import org.strandbook.store.ScanImport;
 import org.strandbook.store.Workbook;
 
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
 /**
@@ -74,7 +75,7 @@ public final class ListingBenchCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         if (points < 1 || weeks < 1) {
-            throw new UsageProblem("--points and --weeks must be at least 1");
+            throw new ParameterException(spec.commandLine(), "--points and --weeks must be at least 1");
         }
         PrintWriter out = spec.commandLine().getOut();
         Path dir;
@@ -136,7 +137,7 @@ public final class ListingBenchCommand implements Callable<Integer> {
                     + " taken_at on an open connection, best of %d)%n", floor.bestSeconds() * 1e3, TRIALS);
             out.printf(Locale.ROOT, "ratio: %.2f%n", floor.bestSeconds() / bestList);
             out.flush();
-            return StrandbookCommand.EXIT_OK;
+            return CommandLine.ExitCode.OK;
         } finally {
             deleteTree(dir);
         }
