@@ -91,7 +91,7 @@ final class ExportCommand implements Callable<Integer> {
         DossierProgress progress = System.console() == null ? DossierProgress.NONE : new ConsoleProgress(err);
         DossierContent content;
         DossierSummary summary;
-        try (Workbook wb = workbook.open()) {
+        try (Workbook wb = workbook.openForReading()) {
             content = WorkbookDossier.read(wb, scope, PointEvaluator.withDefaults(), Instant.now(),
                     new StrandbookVersion().getVersion()[0], progress);
             summary = writer.write(content, output, replace, progress);
