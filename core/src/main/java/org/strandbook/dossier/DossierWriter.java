@@ -3,9 +3,11 @@ package org.strandbook.dossier;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.OutputStream;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Arrays;
 import java.util.Date;
 import java.util.EnumMap;
 import java.util.List;
@@ -38,6 +40,9 @@ public final class DossierWriter {
 
     /** Deflate level of the file's parts. */
     public static final int DEFLATE_LEVEL = DossierWorkbook.DEFLATE_LEVEL;
+
+    /** "Database File Format", sqlite.org/fileformat.html, section 1.3: the 16-byte header string. */
+    private static final byte[] SQLITE_HEADER = "SQLite format 3\0".getBytes(StandardCharsets.US_ASCII);
 
     /** Opens a template; the caller closes the stream. */
     @FunctionalInterface
@@ -78,6 +83,7 @@ public final class DossierWriter {
         if (!replace && Files.exists(absolute)) {
             throw new FileAlreadyExistsException(target.toString(), null, "a file is already there");
         }
+        requireReplaceable(target);
         Path partial = Files.createTempFile(folder, "." + absolute.getFileName() + ".", ".part");
         try {
             DossierSummary summary;
@@ -88,6 +94,31 @@ public final class DossierWriter {
             return summary;
         } finally {
             Files.deleteIfExists(partial);
+        }
+    }
+
+    /**
+     * Refuses to replace a workbook, whatever its name: a dossier may replace an earlier dossier or
+     * any other file the user names with {@code replace}, never an SQLite database, which is what a
+     * workbook is. The content decides, recognised by the 16-byte header string of "Database File
+     * Format" (sqlite.org/fileformat.html, section 1.3).
+     *
+     * @throws IOException naming the file when it is a database or not a file at all
+     */
+    public static void requireReplaceable(Path target) throws IOException {
+        if (!Files.exists(target)) {
+            return;
+        }
+        if (!Files.isRegularFile(target)) {
+            throw new IOException(target + " is not a file, so no dossier can replace it");
+        }
+        byte[] head;
+        try (InputStream in = Files.newInputStream(target)) {
+            head = in.readNBytes(SQLITE_HEADER.length);
+        }
+        if (Arrays.equals(head, SQLITE_HEADER)) {
+            throw new IOException(target + " is an SQLite database, perhaps a Strandbook workbook; a dossier never"
+                    + " replaces one, so it was left as it is");
         }
     }
 

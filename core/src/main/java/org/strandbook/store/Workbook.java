@@ -8,6 +8,8 @@ import java.nio.file.Path;
 import java.sql.Connection;
 import java.sql.SQLException;
 import java.time.Duration;
+import java.util.List;
+import java.util.Locale;
 import java.util.UUID;
 import java.util.function.Supplier;
 
@@ -39,6 +41,10 @@ public final class Workbook implements AutoCloseable {
     private static final int CACHE_KIB = 32 * 1024;
     /** SQLite's own default: the write-ahead log is copied into the file when it passes 1000 pages. */
     static final int AUTO_CHECKPOINT_PAGES = 1000;
+
+    /** Names of spreadsheet and delimited-text files: a workbook never takes one (design choice). */
+    private static final List<String> SPREADSHEET_EXTENSIONS = List.of(".xlsx", ".xlsm", ".xltx", ".xltm", ".xls",
+            ".xlsb", ".ods", ".csv");
 
     private final Session session;
     private final AuditLog audit;
@@ -77,6 +83,7 @@ public final class Workbook implements AutoCloseable {
             throw new IllegalArgumentException("site missing");
         }
         Path target = file.toAbsolutePath().normalize();
+        refuseSpreadsheetName(file);
         if (Files.exists(target, LinkOption.NOFOLLOW_LINKS)) {
             throw refuseOverwrite(file);
         }
@@ -250,6 +257,22 @@ public final class Workbook implements AutoCloseable {
                 throw refuseOverwrite(asGiven);
             } catch (IOException e2) {
                 throw new WorkbookException("cannot create " + asGiven + " (" + e2.getMessage() + ")", e2);
+            }
+        }
+    }
+
+    /**
+     * A workbook named like a spreadsheet is easily taken for the dossier or a schedule, and written
+     * over by whatever writes those; the names are refused at the start.
+     */
+    private static void refuseSpreadsheetName(Path file) {
+        Path name = file.getFileName();
+        String lower = name == null ? "" : name.toString().toLowerCase(Locale.ROOT);
+        for (String extension : SPREADSHEET_EXTENSIONS) {
+            if (lower.endsWith(extension)) {
+                throw new WorkbookException("a workbook is not a spreadsheet: give " + file + " a name that does not"
+                        + " end in " + extension + " (for example " + name.toString().substring(0,
+                        name.toString().length() - extension.length()) + ".strandbook)");
             }
         }
     }

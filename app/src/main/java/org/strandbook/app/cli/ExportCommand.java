@@ -81,6 +81,9 @@ final class ExportCommand implements Callable<Integer> {
         if (!replace && Files.exists(output)) {
             throw new IllegalArgumentException("a file already exists at " + output + "; add --replace to replace it");
         }
+        if (replace) {
+            DossierWriter.requireReplaceable(output);
+        }
         if (template != null && !Files.isRegularFile(template)) {
             throw new IllegalArgumentException("no dossier template at " + template);
         }

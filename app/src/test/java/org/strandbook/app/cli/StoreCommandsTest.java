@@ -84,6 +84,17 @@ class StoreCommandsTest {
     }
 
     @Test
+    void initRefusesAWorkbookNamedLikeASpreadsheet() {
+        // a workbook called plant.xlsx is one "export -o plant.xlsx --replace" away from being lost
+        Path file = dir.resolve("plant.XLSX");
+        Run r = run("init", file.toString(), "--site-name", "Fennwick Basin Works");
+        assertEquals(1, r.exit());
+        assertEquals("strandbook: a workbook is not a spreadsheet: give " + file + " a name that does not end in .xlsx"
+                + " (for example plant.strandbook)\n", r.err());
+        assertTrue(Files.notExists(file));
+    }
+
+    @Test
     void theAuditTrailRecordsTheLoginNameWhenNoUserIsGiven() {
         Path file = dir.resolve("who.sqlite");
         assertEquals(0, run("init", file.toString(), "--site-name", "Fennwick Basin Works").exit());
