@@ -3,6 +3,7 @@ package org.strandbook.dossier;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.OutputStream;
+import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
@@ -16,9 +17,12 @@ import java.util.Optional;
 
 import org.apache.poi.ooxml.POIXMLProperties;
 import org.apache.poi.ss.util.CellRangeAddress;
+import org.apache.poi.util.DefaultTempFileCreationStrategy;
+import org.apache.poi.util.TempFile;
 import org.apache.poi.xssf.streaming.SXSSFSheet;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 import org.strandbook.files.FileReplacement;
+import org.strandbook.files.WorkInProgressFiles;
 import org.strandbook.templates.Templates;
 
 /**
@@ -84,7 +88,7 @@ public final class DossierWriter {
             throw new FileAlreadyExistsException(target.toString(), null, "a file is already there");
         }
         requireReplaceable(target);
-        Path partial = Files.createTempFile(folder, "." + absolute.getFileName() + ".", ".part");
+        Path partial = WorkInProgressFiles.partBeside(absolute);
         try {
             DossierSummary summary;
             try (OutputStream out = Files.newOutputStream(partial)) {
@@ -137,8 +141,32 @@ public final class DossierWriter {
         }
     }
 
-    /** Writes the dossier to {@code out}, which the caller closes. */
+    /**
+     * Writes the dossier to {@code out}, which the caller closes. The streaming workbook keeps the
+     * rows beyond its window in temporary files; they go to a scratch folder of this run only, not
+     * to the spreadsheet library's folder shared by every user of the machine, and the folder goes
+     * when the dossier is written (TempFile.withStrategy, POI's API documentation of
+     * org.apache.poi.util.TempFile).
+     */
     public DossierSummary write(DossierContent content, OutputStream out, DossierProgress progress)
+            throws IOException {
+        Path scratch = WorkInProgressFiles.scratchFolder();
+        try {
+            return TempFile.withStrategy(new DefaultTempFileCreationStrategy(scratch.toFile()), () -> {
+                try {
+                    return fill(content, out, progress);
+                } catch (IOException e) {
+                    throw new UncheckedIOException(e);
+                }
+            });
+        } catch (UncheckedIOException e) {
+            throw e.getCause();
+        } finally {
+            WorkInProgressFiles.deleteTree(scratch);
+        }
+    }
+
+    private DossierSummary fill(DossierContent content, OutputStream out, DossierProgress progress)
             throws IOException {
         XSSFWorkbook xssf;
         try (InputStream in = template.open()) {
