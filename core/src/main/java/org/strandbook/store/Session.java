@@ -221,11 +221,12 @@ final class Session implements AutoCloseable {
         checkedBeforeWriting = true;
     }
 
-    /** SQLite's quick check of the whole file; see {@link Workbook#checkIntegrity()}. */
+    /** SQLite's quick check of the whole file; see {@link Workbook#checkIntegrity()}. Once passed, writes skip it. */
     void checkIntegrity() {
         lock.lock();
         try {
             quickCheck();
+            checkedBeforeWriting = true;
         } catch (SQLException e) {
             throw SqlFailures.translate(e, file);
         } finally {

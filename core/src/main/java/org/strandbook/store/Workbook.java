@@ -195,7 +195,7 @@ public final class Workbook implements AutoCloseable {
      * SQLite's structural check of the whole file ({@code PRAGMA quick_check}): b-tree pages,
      * records and free list, without comparing indexes to their tables, which would cost a full
      * integrity check (sqlite.org/pragma.html#pragma_quick_check). A workbook runs it by itself
-     * before its first write.
+     * before its first write, unless it was called and passed before.
      *
      * @throws DamagedWorkbookException when the file is damaged
      */
