@@ -93,6 +93,8 @@ class ForeignFileTest {
 
     @Test
     void aWorkbookOfAnUnknownSchemaVersionIsRefusedInOurWords() throws Exception {
+        // design choice: versions are counted from 0 up (PRAGMA user_version, sqlite.org/pragma.html), so
+        // a negative one was never written by Strandbook; the wording is ours, not SQLite's
         Path file = dir.resolve("unknown.sqlite");
         Workbook.create(file, DemoSite.site(), DemoSite.USER).close();
         sql(file, "PRAGMA user_version = -3;");
@@ -105,7 +107,8 @@ class ForeignFileTest {
 
     @Test
     void aWorkbookWhoseTablesDoNotMatchItsSchemaVersionIsRefusedInOurWords() throws Exception {
-        // schema 2's tables under a version reset to 1: the upgrade to 2 cannot run
+        // schema 2's tables under a version reset to 1: the upgrade to 2 cannot run (design choice: our
+        // words, with SQLite's reason inside, and never its raw error code)
         Path file = dir.resolve("mismatched.sqlite");
         Workbook.create(file, DemoSite.site(), DemoSite.USER).close();
         sql(file, "PRAGMA user_version = 1;");

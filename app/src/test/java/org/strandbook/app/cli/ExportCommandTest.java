@@ -92,7 +92,8 @@ class ExportCommandTest {
 
     @Test
     void anExportNeverReplacesAWorkbookWhateverItIsCalled() throws IOException {
-        // a workbook copied under a dossier's name: its content, not its name, keeps it
+        // a workbook copied under a dossier's name: its content, not its name, keeps it; a workbook is
+        // an SQLite file, known by its header string (sqlite.org/fileformat.html, section 1.3)
         Path workbookCopy = dir.resolve("plant.xlsx");
         Files.copy(site, workbookCopy);
         byte[] before = Files.readAllBytes(workbookCopy);

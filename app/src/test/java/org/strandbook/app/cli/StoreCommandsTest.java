@@ -93,7 +93,8 @@ class StoreCommandsTest {
 
     @Test
     void initRefusesAWorkbookNamedLikeASpreadsheet() {
-        // a workbook called plant.xlsx is one "export -o plant.xlsx --replace" away from being lost
+        // design choice: a workbook called plant.xlsx is one "export -o plant.xlsx --replace" away from
+        // being lost
         Path file = dir.resolve("plant.XLSX");
         Run r = run("init", file.toString(), "--site-name", "Fennwick Basin Works");
         assertEquals(1, r.exit());
