@@ -65,14 +65,7 @@ public final class PointEvaluator {
     public PointEvaluation evaluate(PointInputs in) {
         WavelengthGrid grid = EvaluationGrid.forAnalyzer(in.analyzer());
         OpticsCache cache = caches.computeIfAbsent(grid, OpticsCache::new);
-        PredictedBudget predicted;
-        try {
-            predicted = new PointBudgetBuilder(in.catalog()).build(in.point(), in.send(), in.ret(), cache);
-        } catch (IllegalArgumentException e) {
-            throw new IllegalArgumentException("point " + in.point().tag() + ": cannot predict its loss: "
-                    + e.getMessage(), e);
-        }
-        double[] predictedLoss = predicted.totalLossDb();
+        PredictedBudget predictedToday = predict(in, in.send(), in.ret(), cache);
         List<WavelengthBand> bands = in.point().bands();
         for (WavelengthBand band : bands) {
             if (band.fromNm() < grid.firstNm() || band.toNm() > grid.lastNm()) {
@@ -121,9 +114,14 @@ public final class PointEvaluator {
         if (latest == null) {
             problems.add(0, pairs.paired().isEmpty() && pairs.unpaired().isEmpty()
                     ? "no loop scan recorded yet" : "no loop scan could be paired with a reference and dark");
-            return new PointEvaluation(in.point(), Status.REVIEW, predicted, Optional.empty(), Optional.empty(),
+            return new PointEvaluation(in.point(), Status.REVIEW, predictedToday, Optional.empty(), Optional.empty(),
                     List.of(), Optional.empty(), List.of(), problems);
         }
+        // the latest scan is judged against the path it went through, graded as inspected by then
+        PathTimeline.Legs then = in.history().at(latestPair.loop().takenAt());
+        PredictedBudget predicted = then.send().equals(in.send()) && then.ret().equals(in.ret())
+                ? predictedToday : predict(in, then.send(), then.ret(), cache);
+        double[] predictedLoss = predicted.totalLossDb();
         double tolerance = in.point().effectiveToleranceDb(in.site());
         double allowed = in.analyzer().allowedLossDb();
         List<BandVerdict> verdicts = new ArrayList<>();
@@ -134,7 +132,7 @@ public final class PointEvaluator {
             status = status.worse(v.status());
         }
         Diagnosis diagnosis = diagnoser.diagnose(latest, predictedLoss,
-                PathEvidence.of(in.point(), in.send(), in.ret(), in.catalog()));
+                PathEvidence.of(in.point(), then.send(), then.ret(), in.catalog()));
         Instant asOf = latestPair.loop().takenAt();
         List<BandTrend> trends = new ArrayList<>();
         for (int b = 0; b < bands.size(); b++) {
@@ -142,6 +140,16 @@ public final class PointEvaluator {
         }
         return new PointEvaluation(in.point(), status, predicted, Optional.of(latestPair), Optional.of(latest),
                 verdicts, Optional.of(diagnosis), trends, problems);
+    }
+
+    private static PredictedBudget predict(PointInputs in, org.strandbook.site.PathLeg send,
+                                           org.strandbook.site.PathLeg ret, OpticsCache cache) {
+        try {
+            return new PointBudgetBuilder(in.catalog()).build(in.point(), send, ret, cache);
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException("point " + in.point().tag() + ": cannot predict its loss: "
+                    + e.getMessage(), e);
+        }
     }
 
     private BandTrend trend(WavelengthBand band, List<LossReading> readings, List<Instant> noLight,

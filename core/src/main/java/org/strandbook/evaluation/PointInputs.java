@@ -12,11 +12,20 @@ import org.strandbook.site.Site;
 /**
  * Everything the evaluation of one point reads: its records, its catalog, its scans' listing and a
  * way to fetch a scan's spectrum on demand (so that years of scans are never all in memory).
+ * {@code send} and {@code ret} are the path of today; {@code history} gives the path at the time
+ * of a scan.
  */
 public record PointInputs(Site site, MeasurementPoint point, Analyzer analyzer, PathLeg send, PathLeg ret,
-                          Catalog catalog, List<ScanRecord> scans, SpectrumSource spectra) {
+                          Catalog catalog, List<ScanRecord> scans, SpectrumSource spectra, PathTimeline history) {
 
     public PointInputs {
         scans = List.copyOf(scans);
+        history = history == null ? PathTimeline.fixed(send, ret) : history;
+    }
+
+    /** Inputs of a point whose path has no recorded history. */
+    public PointInputs(Site site, MeasurementPoint point, Analyzer analyzer, PathLeg send, PathLeg ret,
+                       Catalog catalog, List<ScanRecord> scans, SpectrumSource spectra) {
+        this(site, point, analyzer, send, ret, catalog, scans, spectra, null);
     }
 }

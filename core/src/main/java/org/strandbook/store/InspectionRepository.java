@@ -10,8 +10,10 @@ import org.strandbook.site.Inspection;
 import org.strandbook.site.InspectionGrade;
 
 /**
- * End-face inspections of joints. They name the joint by label, so a point's history of
- * inspections outlives a replacement of its legs. Every addition is audited.
+ * End-face inspections of joints, as dated events: a joint's grade at a moment is its latest
+ * inspection up to then ({@link org.strandbook.site.InspectionHistory}). They name the joint by
+ * label, so a point's history of inspections outlives a replacement of its legs; the joint must be
+ * on the point's path now or in its history. Every addition is audited.
  */
 public final class InspectionRepository {
 
@@ -35,10 +37,9 @@ public final class InspectionRepository {
     public long add(Inspection inspection) {
         return session.write(() -> {
             long pointId = RowKeys.requirePoint(session, inspection.pointTag());
-            if (inspection.inspectedAt() == null) {
-                throw new IllegalArgumentException("inspection of " + inspection.pointTag() + " "
-                        + inspection.jointLabel() + ": time missing");
-            }
+            String what = "inspection of " + inspection.pointTag() + " " + inspection.jointLabel();
+            FieldRecordTime.require(inspection.inspectedAt(), what);
+            PathHistory.requireElement(session, pointId, inspection.pointTag(), inspection.jointLabel(), "JOINT");
             try (PreparedStatement ps = session.connection().prepareStatement("INSERT INTO inspection (point_id, "
                     + "joint_label, inspected_at, inspector, grade, remark) VALUES (?, ?, ?, ?, ?, ?) RETURNING id")) {
                 ps.setLong(1, pointId);

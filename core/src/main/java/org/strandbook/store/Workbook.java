@@ -50,6 +50,7 @@ public final class Workbook implements AutoCloseable {
     private final InspectionRepository inspections;
     private final SignOffRepository signOffs;
     private final NoteRepository notes;
+    private final MaintenanceRepository maintenance;
 
     private Workbook(Session session, AuditLog audit) {
         this.session = session;
@@ -60,8 +61,9 @@ public final class Workbook implements AutoCloseable {
         this.paths = new PathRepository(session, audit);
         this.scans = new ScanRepository(session, audit);
         this.inspections = new InspectionRepository(session, audit);
-        this.signOffs = new SignOffRepository(session, audit);
+        this.signOffs = new SignOffRepository(session, audit, site);
         this.notes = new NoteRepository(session, audit);
+        this.maintenance = new MaintenanceRepository(session, audit, paths);
     }
 
     /**
@@ -276,6 +278,10 @@ public final class Workbook implements AutoCloseable {
 
     public NoteRepository notes() {
         return notes;
+    }
+
+    public MaintenanceRepository maintenance() {
+        return maintenance;
     }
 
     public AuditLog audit() {
