@@ -12,7 +12,7 @@ import java.util.stream.Collectors;
 
 import org.strandbook.evaluation.PointEvaluation;
 import org.strandbook.evaluation.PointEvaluator;
-import org.strandbook.evaluation.PointInputs;
+import org.strandbook.evaluation.WorkbookInputs;
 import org.strandbook.site.Analyzer;
 import org.strandbook.site.Catalog;
 import org.strandbook.site.Inspection;
@@ -120,8 +120,7 @@ public final class WorkbookDossier {
             problems.add("no scan of " + point.tag() + " among " + scope.describeDates());
         }
         try {
-            return Optional.of(evaluator.evaluate(new PointInputs(site, point, analyzer, send.get(), ret.get(), catalog,
-                    inRange, id -> workbook.scans().spectrum(id))));
+            return Optional.of(evaluator.evaluate(WorkbookInputs.of(workbook, site, point, analyzer, catalog, inRange)));
         } catch (IllegalArgumentException e) {
             problems.add(e.getMessage());
             return Optional.empty();

@@ -1,21 +1,16 @@
 package org.strandbook.evaluation;
 
 import java.time.Clock;
-import java.time.Instant;
 import java.util.ArrayList;
 import java.util.Collection;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.function.Function;
 import java.util.stream.Collectors;
 
 import org.strandbook.site.Analyzer;
 import org.strandbook.site.Catalog;
-import org.strandbook.site.InspectionHistory;
 import org.strandbook.site.MeasurementPoint;
-import org.strandbook.site.PathDirection;
-import org.strandbook.site.PathLeg;
 import org.strandbook.site.Site;
 import org.strandbook.store.Workbook;
 
@@ -90,23 +85,6 @@ public final class SiteEvaluator {
         if (analyzer == null) {
             throw new IllegalArgumentException("point " + point.tag() + ": unknown analyzer '" + point.analyzerTag() + "'");
         }
-        InspectionHistory inspected = new InspectionHistory(workbook.inspections().list(point.tag()));
-        PathTimeline history = when -> legs(point.tag(), workbook.paths().legsAt(point.tag(), when), inspected, when);
-        PathTimeline.Legs today = legs(point.tag(), workbook.paths().legs(point.tag()), inspected, Instant.MAX);
-        return new PointInputs(site, point, analyzer, today.send(), today.ret(), catalog,
-                workbook.scans().list(point.tag()), id -> workbook.scans().spectrum(id), history);
-    }
-
-    /** Send and return legs from a point's legs, each joint graded as inspected by {@code when}. */
-    private static PathTimeline.Legs legs(String tag, List<PathLeg> legs, InspectionHistory inspected, Instant when) {
-        PathLeg send = leg(tag, legs, PathDirection.SEND);
-        PathLeg ret = leg(tag, legs, PathDirection.RETURN);
-        return new PathTimeline.Legs(inspected.gradedAt(send, when), inspected.gradedAt(ret, when));
-    }
-
-    private static PathLeg leg(String tag, List<PathLeg> legs, PathDirection direction) {
-        return legs.stream().filter(l -> l.direction() == direction).findFirst().orElseThrow(() ->
-                new IllegalArgumentException("point " + tag + ": no " + direction.name().toLowerCase(Locale.ROOT)
-                        + " leg recorded"));
+        return WorkbookInputs.of(workbook, site, point, analyzer, catalog, workbook.scans().list(point.tag()));
     }
 }

@@ -17,6 +17,7 @@ import org.strandbook.app.ui.task.JobProgress;
 import org.strandbook.evaluation.PointEvaluation;
 import org.strandbook.evaluation.PointEvaluator;
 import org.strandbook.evaluation.PointInputs;
+import org.strandbook.evaluation.WorkbookInputs;
 import org.strandbook.intake.ScanFileImporter;
 import org.strandbook.intake.ScheduleImporter;
 import org.strandbook.samplesite.DemoSite;
@@ -26,7 +27,6 @@ import org.strandbook.site.Catalog;
 import org.strandbook.site.ConnectorType;
 import org.strandbook.site.FiberType;
 import org.strandbook.site.MeasurementPoint;
-import org.strandbook.site.PathDirection;
 import org.strandbook.site.PathLeg;
 import org.strandbook.site.ProbeType;
 import org.strandbook.site.ScanRecord;
@@ -201,17 +201,7 @@ public final class SqliteWorkbookService implements WorkbookService {
                 .orElseThrow(() -> new IllegalArgumentException("no point tagged '" + tag + "' in this workbook"));
         Analyzer analyzer = wb.site().analyzer(point.analyzerTag()).orElseThrow(() ->
                 new IllegalArgumentException("point " + tag + ": unknown analyzer '" + point.analyzerTag() + "'"));
-        List<PathLeg> legs = wb.paths().legs(tag);
-        PathLeg send = leg(legs, PathDirection.SEND, tag);
-        PathLeg ret = leg(legs, PathDirection.RETURN, tag);
-        return new PointInputs(site, point, analyzer, send, ret, catalog, wb.scans().list(tag),
-                id -> wb.scans().spectrum(id));
-    }
-
-    private static PathLeg leg(List<PathLeg> legs, PathDirection direction, String tag) {
-        return legs.stream().filter(l -> l.direction() == direction).findFirst().orElseThrow(() ->
-                new IllegalArgumentException("point " + tag + ": no " + direction.name().toLowerCase(Locale.ROOT)
-                        + " leg recorded"));
+        return WorkbookInputs.of(wb, site, point, analyzer, catalog, wb.scans().list(tag));
     }
 
     @Override
