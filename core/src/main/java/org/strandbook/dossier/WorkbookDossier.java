@@ -21,10 +21,12 @@ import org.strandbook.site.Note;
 import org.strandbook.site.PathDirection;
 import org.strandbook.site.PathLeg;
 import org.strandbook.site.ScanRecord;
+import org.strandbook.handover.SignatureText;
 import org.strandbook.site.SignOff;
 import org.strandbook.site.Site;
 import org.strandbook.store.AuditFinding;
 import org.strandbook.store.AuditReport;
+import org.strandbook.store.SignatureState;
 import org.strandbook.store.Workbook;
 
 /**
@@ -56,7 +58,12 @@ public final class WorkbookDossier {
         Map<String, List<Inspection>> inspections = workbook.inspections().listAll().stream()
                 .collect(Collectors.groupingBy(Inspection::pointTag));
         List<Note> notes = workbook.notes().list();
-        List<SignOff> signOffs = workbook.signOffs().list();
+        List<SignOff> signOffs = shownSignOffs(workbook);
+        String revision = workbook.signOffs().dossierRevision();
+        if (!revision.equals(site.revision())) {
+            // the signed revision changed since: this dossier is the next one, not yet signed
+            site = new Site(site.name(), site.plantArea(), revision, site.defaultToleranceDb());
+        }
 
         List<DossierPoint> points = new ArrayList<>();
         Set<String> analyzerTags = new LinkedHashSet<>();
@@ -85,6 +92,29 @@ public final class WorkbookDossier {
                 notes.stream().filter(n -> n.pointTag().isEmpty()).toList(),
                 signOffs.stream().filter(s -> s.pointTag().isEmpty()).toList(), audit, issuedAt, software,
                 workbook.file().getFileName().toString());
+    }
+
+    /**
+     * The signatures as the dossier shows them: a point's superseded signature says so in its remark;
+     * the cover carries only the current signatures of the revision it shows.
+     */
+    private static List<SignOff> shownSignOffs(Workbook workbook) {
+        String revision = workbook.signOffs().dossierRevision();
+        List<SignOff> out = new ArrayList<>();
+        for (SignatureState state : workbook.signOffs().states()) {
+            SignOff s = state.signOff();
+            boolean current = state.standing() == SignatureState.Standing.CURRENT
+                    || state.standing() == SignatureState.Standing.NO_DIGEST;
+            if (s.onSite()) {
+                if (current && (s.revision().isEmpty() || s.revision().equalsIgnoreCase(revision))) {
+                    out.add(s);
+                }
+            } else {
+                out.add(current ? s : new SignOff(s.role(), s.name(), s.signedAt(), s.pointTag(),
+                        SignatureText.line(state), s.jobTitle(), s.revision(), s.contentSha256()));
+            }
+        }
+        return out;
     }
 
     private static List<MeasurementPoint> choose(List<MeasurementPoint> all, DossierScope scope) {

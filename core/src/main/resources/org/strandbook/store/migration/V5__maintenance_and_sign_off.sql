@@ -49,3 +49,6 @@ ALTER TABLE sign_off ADD COLUMN audit_head_id INTEGER;
 
 -- A note on one joint or cable segment of its point.
 ALTER TABLE note ADD COLUMN element_label TEXT;
+
+-- The file name of an end-face picture taken with the inspection, if any.
+ALTER TABLE inspection ADD COLUMN picture_file TEXT;

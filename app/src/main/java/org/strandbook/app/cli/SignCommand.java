@@ -1,0 +1,94 @@
+package org.strandbook.app.cli;
+
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+
+import org.strandbook.evaluation.PointEvaluation;
+import org.strandbook.evaluation.SiteEvaluation;
+import org.strandbook.evaluation.SiteEvaluator;
+import org.strandbook.site.SignOff;
+import org.strandbook.site.SignOffRole;
+import org.strandbook.store.Workbook;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code strandbook sign SITE [--point TAG] --role ROLE --name NAME}: signs a point, or the site
+ * record (the dossier revision), keeping a digest of what was signed.
+ */
+@Command(name = "sign", mixinStandardHelpOptions = true,
+        description = "Sign a point (--point) or the site record, i.e. the dossier revision, as prepared, checked "
+            + "or approved. The signature keeps a digest of what it signed (a point's evaluation inputs, or the "
+            + "audit trail's head); a later change shows it as superseded, and signing a changed revision opens "
+            + "the next revision letter. A point is signed only once it has been evaluated.")
+final class SignCommand implements Callable<Integer> {
+
+    @Mixin
+    WorkbookFileOptions workbook;
+
+    @Option(names = "--point", paramLabel = "TAG", description = "The point signed (default: the site record).")
+    String point;
+
+    @Option(names = "--role", required = true, paramLabel = "ROLE", description = "prepared, checked or approved.")
+    String role;
+
+    @Option(names = "--name", required = true, paramLabel = "NAME", description = "The signer's name.")
+    String name;
+
+    @Option(names = "--title", paramLabel = "TEXT", description = "The signer's job title, e.g. commissioning lead.")
+    String title;
+
+    @Option(names = "--comment", paramLabel = "TEXT", description = "An optional comment.")
+    String comment;
+
+    @Option(names = "--at", paramLabel = "TIME", description = "When: 2026-05-03, 2026-05-03T10:15 (UTC) or an "
+            + "ISO-8601 instant (default: now). A time in the future is refused.")
+    String at;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        SignOffRole r = parseRole(role);
+        SignOff signOff = new SignOff(r, name, FieldTime.parse("--at", at), point, comment, title, "", "");
+        String revision;
+        try (Workbook wb = workbook.open()) {
+            if (point != null) {
+                requireEvaluated(wb, point);
+            }
+            wb.signOffs().add(signOff);
+            revision = wb.site().get().revision();
+        }
+        spec.commandLine().getOut().println("signed: " + r.name().toLowerCase(Locale.ROOT) + " by "
+                + signOff.name() + (point == null ? ", site record" : ", point " + signOff.pointTag())
+                + ", revision " + revision);
+        spec.commandLine().getOut().flush();
+        return StrandbookCommand.EXIT_OK;
+    }
+
+    private static void requireEvaluated(Workbook wb, String tag) {
+        SiteEvaluation e = SiteEvaluator.withDefaults().evaluate(wb, List.of(tag), SiteEvaluator.Progress.NONE);
+        PointEvaluation p = e.points().stream().findFirst().orElseThrow(() ->
+                new IllegalArgumentException("point " + tag + " cannot be evaluated: "
+                        + String.join("; ", e.problems()) + "; nothing to sign"));
+        if (p.measured().isEmpty()) {
+            throw new IllegalArgumentException("point " + tag + " has not been evaluated (" + p.finding()
+                    + "); nothing to sign");
+        }
+    }
+
+    private static SignOffRole parseRole(String text) {
+        for (SignOffRole r : SignOffRole.values()) {
+            if (r.name().equalsIgnoreCase(text == null ? "" : text.strip())) {
+                return r;
+            }
+        }
+        throw new UsageProblem("--role '" + text + "' is not one of prepared, checked, approved");
+    }
+}
