@@ -1,36 +1,20 @@
 package org.strandbook.app.cli;
 
 import java.time.Instant;
-import java.time.LocalDate;
-import java.time.LocalDateTime;
-import java.time.ZoneOffset;
-import java.time.format.DateTimeParseException;
 
-/**
- * The {@code --at} time of a record made in the field: an ISO-8601 instant, a date and time (UTC),
- * or a date alone (noon UTC, so the day is the same in every time zone of a plant); now when absent.
- */
+import org.strandbook.handover.RecordedTime;
+
+/** The {@code --at} time of a record made in the field (see {@link RecordedTime}); a bad one is wrong usage. */
 final class FieldTime {
 
     private FieldTime() {
     }
 
     static Instant parse(String option, String text) {
-        if (text == null || text.isBlank()) {
-            return Instant.now();
-        }
-        String t = text.strip();
         try {
-            if (t.endsWith("Z") || t.matches(".*[+-]\\d\\d:\\d\\d$")) {
-                return java.time.OffsetDateTime.parse(t).toInstant();
-            }
-            if (t.contains("T")) {
-                return LocalDateTime.parse(t).toInstant(ZoneOffset.UTC);
-            }
-            return LocalDate.parse(t).atTime(12, 0).toInstant(ZoneOffset.UTC);
-        } catch (DateTimeParseException e) {
-            throw new UsageProblem(option + " '" + text + "' is not a date (2026-05-03), a date and time in UTC "
-                    + "(2026-05-03T10:15) or an ISO-8601 instant (2026-05-03T10:15:00Z)");
+            return RecordedTime.parse(text);
+        } catch (IllegalArgumentException e) {
+            throw new UsageProblem(option + " " + e.getMessage());
         }
     }
 }

@@ -1,12 +1,9 @@
 package org.strandbook.app.cli;
 
-import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 
-import org.strandbook.evaluation.PointEvaluation;
-import org.strandbook.evaluation.SiteEvaluation;
-import org.strandbook.evaluation.SiteEvaluator;
+import org.strandbook.handover.PointSigning;
 import org.strandbook.site.SignOff;
 import org.strandbook.site.SignOffRole;
 import org.strandbook.store.Workbook;
@@ -59,10 +56,7 @@ final class SignCommand implements Callable<Integer> {
         SignOff signOff = new SignOff(r, name, FieldTime.parse("--at", at), point, comment, title, "", "");
         String revision;
         try (Workbook wb = workbook.open()) {
-            if (point != null) {
-                requireEvaluated(wb, point);
-            }
-            wb.signOffs().add(signOff);
+            PointSigning.sign(wb, signOff);
             revision = wb.site().get().revision();
         }
         spec.commandLine().getOut().println("signed: " + r.name().toLowerCase(Locale.ROOT) + " by "
@@ -70,17 +64,6 @@ final class SignCommand implements Callable<Integer> {
                 + ", revision " + revision);
         spec.commandLine().getOut().flush();
         return StrandbookCommand.EXIT_OK;
-    }
-
-    private static void requireEvaluated(Workbook wb, String tag) {
-        SiteEvaluation e = SiteEvaluator.withDefaults().evaluate(wb, List.of(tag), SiteEvaluator.Progress.NONE);
-        PointEvaluation p = e.points().stream().findFirst().orElseThrow(() ->
-                new IllegalArgumentException("point " + tag + " cannot be evaluated: "
-                        + String.join("; ", e.problems()) + "; nothing to sign"));
-        if (p.measured().isEmpty()) {
-            throw new IllegalArgumentException("point " + tag + " has not been evaluated (" + p.finding()
-                    + "); nothing to sign");
-        }
     }
 
     private static SignOffRole parseRole(String text) {

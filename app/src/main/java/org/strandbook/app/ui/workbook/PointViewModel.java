@@ -77,6 +77,7 @@ public final class PointViewModel {
     private final SpectrumPlotModel budgetPlot;
     private final SpectrumPlotModel measuredPlot;
     private final TrendPlotModel trendPlot;
+    private final PointHistoryViewModel history;
 
     private final ReadOnlyStringWrapper context = new ReadOnlyStringWrapper(this, "context", "No point selected");
     private final ReadOnlyStringWrapper summary = new ReadOnlyStringWrapper(this, "summary", "");
@@ -92,6 +93,8 @@ public final class PointViewModel {
         this.budgetPlot = new SpectrumPlotModel(axes);
         this.measuredPlot = new SpectrumPlotModel(axes);
         this.trendPlot = new TrendPlotModel(axes);
+        this.history = new PointHistoryViewModel(service, tasks, () -> point == null ? List.of() : shownLegs(),
+                events::pathReplaced);
         this.segments = SegmentSheet.create(() -> site.fibers().stream().map(FiberType::code).toList(),
                 label -> point == null ? Optional.empty() : site.cableOwnerOtherThan(label, point.tag()),
                 this::segmentFigures);
@@ -117,6 +120,11 @@ public final class PointViewModel {
 
     public SheetModel<LegJoint> joints() {
         return joints;
+    }
+
+    /** The point's history and the records made from the window. */
+    public PointHistoryViewModel history() {
+        return history;
     }
 
     public SheetModel<ScanRecord> scans() {
@@ -198,6 +206,7 @@ public final class PointViewModel {
             finding.set("Reading the latest scans of " + p.tag() + "\u2026");
             findingVerdict.set(null);
             fetchMeasurements(p.tag());
+            history.show(p.tag());
         }
         showPrediction();
     }
@@ -218,6 +227,7 @@ public final class PointViewModel {
         budgetPlot.clear("", "No point selected");
         measuredPlot.clear("", "No point selected");
         trendPlot.clear("", "No point selected");
+        history.clear();
     }
 
     /** The point's own record changed (tolerance, probe, analyzer): the prediction follows. */

@@ -18,7 +18,14 @@ import org.strandbook.evaluation.PointEvaluation;
 import org.strandbook.evaluation.PointEvaluator;
 import org.strandbook.evaluation.PointInputs;
 import org.strandbook.evaluation.WorkbookInputs;
+import org.strandbook.handover.PointEvent;
+import org.strandbook.handover.PointHistory;
+import org.strandbook.handover.PointSigning;
 import org.strandbook.intake.ScanFileImporter;
+import org.strandbook.site.Inspection;
+import org.strandbook.site.MaintenanceAction;
+import org.strandbook.site.Note;
+import org.strandbook.site.SignOff;
 import org.strandbook.intake.ScheduleImporter;
 import org.strandbook.samplesite.DemoSite;
 import org.strandbook.samplesite.ScanGenerator;
@@ -202,6 +209,31 @@ public final class SqliteWorkbookService implements WorkbookService {
         Analyzer analyzer = wb.site().analyzer(point.analyzerTag()).orElseThrow(() ->
                 new IllegalArgumentException("point " + tag + ": unknown analyzer '" + point.analyzerTag() + "'"));
         return WorkbookInputs.of(wb, site, point, analyzer, catalog, wb.scans().list(tag));
+    }
+
+    @Override
+    public synchronized List<PointEvent> history(String pointTag) {
+        return PointHistory.read(require(), pointTag);
+    }
+
+    @Override
+    public synchronized void addInspection(Inspection inspection) {
+        require().inspections().add(inspection);
+    }
+
+    @Override
+    public synchronized void addMaintenance(MaintenanceAction action) {
+        require().maintenance().add(action);
+    }
+
+    @Override
+    public synchronized void addNote(Note note) {
+        require().notes().add(note);
+    }
+
+    @Override
+    public synchronized void signOff(SignOff signOff) {
+        PointSigning.sign(require(), signOff);
     }
 
     @Override
