@@ -61,7 +61,8 @@ final class EvaluateCommand implements Callable<Integer> {
         List<String> hazardous = field.stream().filter(e -> e.point().hazardousArea()).map(e -> e.point().tag()).toList();
         FieldCautions.fieldWork(err, "the findings for " + String.join(", ", field.stream().map(e -> e.point().tag())
                 .toList()) + " send someone to the fiber path in the field"
-                + (hazardous.isEmpty() ? "." : "; " + String.join(", ", hazardous) + " lie in a classified hazardous area."));
+                + (hazardous.isEmpty() ? "." : "; " + String.join(", ", hazardous) + (hazardous.size() == 1 ? " lies" : " lie")
+                        + " in a classified hazardous area."));
     }
 
     private static boolean sendsIntoTheField(PointEvaluation e) {
