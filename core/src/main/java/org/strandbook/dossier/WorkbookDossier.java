@@ -16,6 +16,7 @@ import org.strandbook.evaluation.WorkbookInputs;
 import org.strandbook.site.Analyzer;
 import org.strandbook.site.Catalog;
 import org.strandbook.site.Inspection;
+import org.strandbook.site.MaintenanceAction;
 import org.strandbook.site.MeasurementPoint;
 import org.strandbook.site.Note;
 import org.strandbook.site.PathDirection;
@@ -58,6 +59,8 @@ public final class WorkbookDossier {
         Map<String, List<Inspection>> inspections = workbook.inspections().listAll().stream()
                 .collect(Collectors.groupingBy(Inspection::pointTag));
         List<Note> notes = workbook.notes().list();
+        Map<String, List<MaintenanceAction>> actions = workbook.maintenance().listAll().stream()
+                .collect(Collectors.groupingBy(MaintenanceAction::pointTag));
         List<SignOff> signOffs = shownSignOffs(workbook);
         String revision = workbook.signOffs().dossierRevision();
         if (!revision.equals(site.revision())) {
@@ -76,7 +79,8 @@ public final class WorkbookDossier {
                     legs, catalog, scope, evaluator, problems);
             points.add(new DossierPoint(point, legs, inspections.getOrDefault(point.tag(), List.of()),
                     notes.stream().filter(n -> n.pointTag().equals(point.tag())).toList(),
-                    signOffs.stream().filter(s -> s.pointTag().equals(point.tag())).toList(), evaluation, problems));
+                    signOffs.stream().filter(s -> s.pointTag().equals(point.tag())).toList(), evaluation, problems,
+                    actions.getOrDefault(point.tag(), List.of())));
             if (!progress.advance("evaluating " + point.tag(), i + 1, chosen.size())) {
                 throw new DossierCancelledException("export cancelled while evaluating point " + point.tag());
             }

@@ -15,6 +15,8 @@ import org.strandbook.diagnosis.Diagnosis;
 import org.strandbook.diagnosis.PathEvidence;
 import org.strandbook.optics.WavelengthGrid;
 import org.strandbook.optics.path.OpticsCache;
+import org.strandbook.site.MaintenanceAction;
+import org.strandbook.site.MaintenanceKind;
 import org.strandbook.site.ScanRecord;
 import org.strandbook.site.Spectrum;
 import org.strandbook.site.WavelengthBand;
@@ -136,7 +138,8 @@ public final class PointEvaluator {
         Instant asOf = latestPair.loop().takenAt();
         List<BandTrend> trends = new ArrayList<>();
         for (int b = 0; b < bands.size(); b++) {
-            trends.add(trend(bands.get(b), readings.get(b), dark.get(b), verdicts.get(b), asOf));
+            trends.add(trend(bands.get(b), readings.get(b), dark.get(b), verdicts.get(b), asOf,
+                    latestRepair(in.actions(), asOf)));
         }
         return new PointEvaluation(in.point(), status, predicted, Optional.of(latestPair), Optional.of(latest),
                 verdicts, Optional.of(diagnosis), trends, problems);
@@ -152,13 +155,25 @@ public final class PointEvaluator {
         }
     }
 
+    /**
+     * The latest repair up to {@code asOf}: any action but a re-taken reference, which changes the
+     * baseline of no loop (design choice).
+     */
+    private static Optional<Instant> latestRepair(List<MaintenanceAction> actions, Instant asOf) {
+        return actions.stream().filter(a -> a.kind() != MaintenanceKind.RETAKE_REFERENCE)
+                .map(MaintenanceAction::performedAt).filter(t -> !t.isAfter(asOf)).max(Instant::compareTo);
+    }
+
     private BandTrend trend(WavelengthBand band, List<LossReading> readings, List<Instant> noLight,
-                            BandVerdict latest, Instant asOf) {
+                            BandVerdict latest, Instant asOf, Optional<Instant> repaired) {
         Optional<LossTrend> trend = Optional.empty();
         List<org.strandbook.trend.StepEvent> events = List.of();
         Optional<MarginForecast.Outlook> outlook = Optional.empty();
+        // after a repair the loss follows a new course: fit and forecast it alone once it has two readings
+        List<LossReading> regime = repaired.map(r -> readings.stream().filter(x -> x.time().isAfter(r)).toList())
+                .filter(after -> after.size() >= 2).orElse(readings);
         if (readings.size() >= 2) {
-            LossTrend t = theilSen.fit(readings);
+            LossTrend t = theilSen.fit(regime);
             trend = Optional.of(t);
             if (readings.size() >= 3) {
                 StepReport report = steps.detect(readings);

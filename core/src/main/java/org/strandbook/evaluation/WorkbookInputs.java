@@ -35,7 +35,7 @@ public final class WorkbookInputs {
         PathTimeline history = when -> legs(tag, workbook.paths().legsAt(tag, when), inspected, when);
         PathTimeline.Legs today = legs(tag, workbook.paths().legs(tag), inspected, Instant.MAX);
         return new PointInputs(site, point, analyzer, today.send(), today.ret(), catalog, scans,
-                id -> workbook.scans().spectrum(id), history);
+                id -> workbook.scans().spectrum(id), history, workbook.maintenance().list(tag));
     }
 
     /** Send and return legs from a point's legs, each joint graded as inspected by {@code when}. */

@@ -146,6 +146,18 @@ class HandoverCommandsTest {
     }
 
     @Test
+    void anEvaluationThatSendsSomeoneToAHazardousPointCautionsOnce() {
+        // the demo's FT-4103 has a crushed trunk (ScanGenerator) and lies in a classified area
+        CliRun r = run("evaluate", site, "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        assertEquals(1, r.err().split("CAUTION:", -1).length - 1, r.err());
+        assertTrue(r.err().contains("FT-4103 lies in a classified hazardous area"), r.err());
+        assertTrue(r.out().startsWith("{"), "the JSON on standard output stays clean");
+        CliRun healthy = run("evaluate", site, "--point", HEALTHY);
+        assertFalse(healthy.err().contains("CAUTION"), healthy.err());
+    }
+
+    @Test
     void helpPointsToTheSafetySection() {
         assertTrue(run("--help").out().contains("README's Safety section"));
     }

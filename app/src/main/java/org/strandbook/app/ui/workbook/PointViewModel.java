@@ -27,6 +27,7 @@ import org.strandbook.app.ui.plot.PlotAxes;
 import org.strandbook.app.ui.plot.PointCurves;
 import org.strandbook.app.ui.plot.SpectrumPlotModel;
 import org.strandbook.app.ui.plot.TrendPlotModel;
+import org.strandbook.handover.PointEvent;
 import org.strandbook.app.ui.sheet.CellFormats;
 import org.strandbook.app.ui.sheet.RowFigures;
 import org.strandbook.app.ui.sheet.SheetModel;
@@ -95,6 +96,11 @@ public final class PointViewModel {
         this.trendPlot = new TrendPlotModel(axes);
         this.history = new PointHistoryViewModel(service, tasks, () -> point == null ? List.of() : shownLegs(),
                 events::pathReplaced);
+        history.events().addListener((javafx.collections.ListChangeListener<PointEvent>) c -> trendPlot.marks(
+                history.events().stream().filter(e -> e.kind() == PointEvent.Kind.ACTION
+                                || e.kind() == PointEvent.Kind.INSPECTION)
+                        .map(e -> new TrendPlotModel.Mark(e.at(), e.kind().word() + (e.subject().isEmpty() ? "" : " "
+                                + e.subject()) + ": " + e.text())).toList()));
         this.segments = SegmentSheet.create(() -> site.fibers().stream().map(FiberType::code).toList(),
                 label -> point == null ? Optional.empty() : site.cableOwnerOtherThan(label, point.tag()),
                 this::segmentFigures);
