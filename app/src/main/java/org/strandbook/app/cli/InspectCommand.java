@@ -37,9 +37,8 @@ final class InspectCommand implements Callable<Integer> {
     @Option(names = "--by", required = true, paramLabel = "NAME", description = "Who inspected it.")
     String inspector;
 
-    @Option(names = "--at", paramLabel = "TIME", description = "When: 2026-05-03, 2026-05-03T10:15 (UTC) or an "
-            + "ISO-8601 instant (default: now). A time in the future is refused.")
-    String at;
+    @Mixin
+    RecordTimeOption at;
 
     @Option(names = "--remark", paramLabel = "TEXT", description = "What was seen.")
     String remark;
@@ -53,7 +52,7 @@ final class InspectCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         InspectionGrade g = parseGrade(grade);
-        Inspection inspection = new Inspection(point, joint, FieldTime.parse("--at", at), inspector, g, remark,
+        Inspection inspection = new Inspection(point, joint, at.instant(), inspector, g, remark,
                 picture);
         boolean hazardous;
         try (Workbook wb = workbook.open()) {

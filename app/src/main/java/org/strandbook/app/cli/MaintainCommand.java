@@ -56,9 +56,8 @@ final class MaintainCommand implements Callable<Integer> {
     @Option(names = "--by", required = true, paramLabel = "NAME", description = "Who did the work.")
     String by;
 
-    @Option(names = "--at", paramLabel = "TIME", description = "When: 2026-05-03, 2026-05-03T10:15 (UTC) or an "
-            + "ISO-8601 instant (default: now). A time in the future is refused.")
-    String at;
+    @Mixin
+    RecordTimeOption at;
 
     @Option(names = "--what", paramLabel = "TEXT", description = "What was done, in your words.")
     String what;
@@ -104,7 +103,7 @@ final class MaintainCommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             throw new UsageProblem("--action: " + e.getMessage());
         }
-        Instant when = FieldTime.parse("--at", at);
+        Instant when = at.instant();
         InspectionGrade after = gradeAfter == null ? null : InspectCommand.parseGrade(gradeAfter);
         if (after != null && kind.role() != MaintenanceKind.ElementRole.JOINT) {
             throw new UsageProblem("--grade-after applies to work on a joint, not to " + kind.words());

@@ -34,9 +34,8 @@ final class NoteCommand implements Callable<Integer> {
     @Option(names = "--by", required = true, paramLabel = "NAME", description = "Who writes it.")
     String by;
 
-    @Option(names = "--at", paramLabel = "TIME", description = "When: 2026-05-03, 2026-05-03T10:15 (UTC) or an "
-            + "ISO-8601 instant (default: now). A time in the future is refused.")
-    String at;
+    @Mixin
+    RecordTimeOption at;
 
     @Spec
     CommandSpec spec;
@@ -46,7 +45,7 @@ final class NoteCommand implements Callable<Integer> {
         if (element != null && point == null) {
             throw new UsageProblem("--element needs --point: a joint or cable belongs to a point");
         }
-        Note note = new Note(point, element, FieldTime.parse("--at", at), by, String.join(" ", text));
+        Note note = new Note(point, element, at.instant(), by, String.join(" ", text));
         try (Workbook wb = workbook.open()) {
             wb.notes().add(note);
         }

@@ -43,9 +43,8 @@ final class SignCommand implements Callable<Integer> {
     @Option(names = "--comment", paramLabel = "TEXT", description = "An optional comment.")
     String comment;
 
-    @Option(names = "--at", paramLabel = "TIME", description = "When: 2026-05-03, 2026-05-03T10:15 (UTC) or an "
-            + "ISO-8601 instant (default: now). A time in the future is refused.")
-    String at;
+    @Mixin
+    RecordTimeOption at;
 
     @Spec
     CommandSpec spec;
@@ -53,7 +52,7 @@ final class SignCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         SignOffRole r = parseRole(role);
-        SignOff signOff = new SignOff(r, name, FieldTime.parse("--at", at), point, comment, title, "", "");
+        SignOff signOff = new SignOff(r, name, at.instant(), point, comment, title, "", "");
         String revision;
         try (Workbook wb = workbook.open()) {
             PointSigning.sign(wb, signOff);

@@ -6,8 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.time.Instant;
-import java.util.List;
-import java.util.Optional;
 
 import javafx.scene.Node;
 import javafx.scene.control.Button;
@@ -15,7 +13,6 @@ import javafx.scene.control.ComboBox;
 import javafx.scene.control.Label;
 import javafx.scene.control.TextField;
 import javafx.stage.Stage;
-import javafx.stage.Window;
 
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.AfterEach;
@@ -24,9 +21,6 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
 import org.junit.jupiter.api.io.TempDir;
-import org.strandbook.app.ui.MemoryPreferences;
-import org.strandbook.app.ui.plot.PlotAxes;
-import org.strandbook.app.ui.task.DirectTaskExecutor;
 import org.strandbook.handover.PointEvent;
 import org.strandbook.site.InspectionGrade;
 import org.strandbook.site.MaintenanceKind;
@@ -45,6 +39,7 @@ class HistoryPanelFxTest {
 
     private static final String POINT = "FT-4102";
     private static SampleSite sample;
+    private static HeadlessWindow shown;
     private static WorkbookViewModel vm;
     private static Stage stage;
 
@@ -55,20 +50,12 @@ class HistoryPanelFxTest {
     @BeforeAll
     static void window(SampleSite built) throws Exception {
         sample = built;
-        stage = FxToolkit.registerPrimaryStage();
-        FxToolkit.setupStage(s -> {
-            MemoryPreferences preferences = new MemoryPreferences();
-            vm = new WorkbookViewModel(new SqliteWorkbookService("technician D"), new DirectTaskExecutor(),
-                    new PlotAxes(preferences), new RecentFiles(preferences), built.folder().resolveSibling("unused"),
-                    Optional.empty());
-            vm.setEvaluateOnOpen(false);
-            WorkbookWindow window = new WorkbookWindow(s, vm);
-            s.setWidth(900);
-            s.setHeight(560);
-            s.show();
-            window.tabs().getSelectionModel().select(
-                    window.tabs().getTabs().stream().filter(t -> "tab-history".equals(t.getId())).findFirst().orElseThrow());
-        });
+        shown = HeadlessWindow.show(built, "technician D");
+        stage = shown.stage();
+        vm = shown.vm();
+        WorkbookWindow window = shown.window();
+        FxToolkit.setupStage(s -> window.tabs().getSelectionModel().select(window.tabs().getTabs().stream()
+                .filter(t -> "tab-history".equals(t.getId())).findFirst().orElseThrow()));
     }
 
     @BeforeEach
@@ -82,14 +69,7 @@ class HistoryPanelFxTest {
 
     @AfterEach
     void closeDialogsAndWorkbook() {
-        robot.interact(() -> {
-            for (Window w : List.copyOf(Window.getWindows())) {
-                if (w != stage && w instanceof Stage s) {
-                    s.close();
-                }
-            }
-            vm.close();
-        });
+        shown.closeDialogsAndWorkbook(robot);
     }
 
     @AfterAll
