@@ -31,6 +31,8 @@ public final class PointHistoryViewModel {
     private final Supplier<List<PathLeg>> legs;
     private final Consumer<String> pathChanged;
     private final ObservableList<PointEvent> events = FXCollections.observableArrayList();
+    /** One read-only view, kept: listeners on a view that is dropped would go with it. */
+    private final ObservableList<PointEvent> shownEvents = FXCollections.unmodifiableObservableList(events);
     private final ReadOnlyStringWrapper message = new ReadOnlyStringWrapper(this, "message", "");
     private String pointTag;
 
@@ -47,7 +49,7 @@ public final class PointHistoryViewModel {
     }
 
     public ObservableList<PointEvent> events() {
-        return FXCollections.unmodifiableObservableList(events);
+        return shownEvents;
     }
 
     /** The outcome of the latest record, or why it was refused. */

@@ -146,6 +146,10 @@ class HistoryPanelFxTest {
         type("maintenance-why", "graded dirty");
         ok("maintenance-dialog");
         assertEquals(1, count(PointEvent.Kind.ACTION));
+        // the loss-over-time plot marks it at its date (a listener on the history, kept alive)
+        System.gc();
+        assertTrue(vm.point().trendPlot().linesProperty().get().stream()
+                .anyMatch(l -> l.detail().startsWith("action J2: clean joint")));
     }
 
     @Test
