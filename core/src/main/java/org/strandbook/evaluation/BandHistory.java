@@ -71,9 +71,11 @@ final class BandHistory {
      * The band's trend and forecast as of {@code asOf} (the latest scan's time).
      *
      * @param allowedLossDb the analyzer's allowed loss, dB
+     * @param repaired      the latest repair up to {@code asOf}: after it the loss follows a new
+     *                      course, fitted and forecast alone once it has two readings
      */
-    BandTrend trend(double allowedLossDb, Instant asOf, TheilSenTrend theilSen, StepDetector steps,
-                    MarginForecast forecast) {
+    BandTrend trend(double allowedLossDb, Instant asOf, Optional<Instant> repaired, TheilSenTrend theilSen,
+                    StepDetector steps, MarginForecast forecast) {
         int driving = 0;
         double drivingYears = Double.POSITIVE_INFINITY;
         double drivingMargin = Double.POSITIVE_INFINITY;
@@ -85,7 +87,9 @@ final class BandHistory {
             }
             double margin = allowedLossDb - lastLitWorst[k];
             List<LossReading> readings = perSubBand.get(k);
-            Optional<LossTrend> trend = readings.size() >= 2 ? Optional.of(theilSen.fit(readings)) : Optional.empty();
+            List<LossReading> regime = repaired.map(r -> readings.stream().filter(x -> x.time().isAfter(r)).toList())
+                    .filter(after -> after.size() >= 2).orElse(readings);
+            Optional<LossTrend> trend = readings.size() >= 2 ? Optional.of(theilSen.fit(regime)) : Optional.empty();
             double years = yearsToZero(margin, trend);
             if (years < drivingYears || (years == drivingYears && margin < drivingMargin)) {
                 driving = k;

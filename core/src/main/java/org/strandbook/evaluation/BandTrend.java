@@ -21,7 +21,8 @@ import org.strandbook.trend.StepEvent;
  * @param band          the band
  * @param readings      highest measured loss in the driving sub-band per paired loop scan, in time order (dB)
  * @param noLight       times of loop scans that returned no light anywhere in the band
- * @param trend         Theil–Sen trend of the readings, when there are at least two
+ * @param trend         Theil–Sen trend of the readings since the latest repair when there are at least
+ *                      two of them, else of all readings, when there are at least two
  * @param steps         step changes of the band-mean loss between consecutive scans larger than the noise
  *                      (a connector, bend or repair moves the whole band at once)
  * @param outlook       when the driving sub-band's margin against the analyzer's allowed loss runs out

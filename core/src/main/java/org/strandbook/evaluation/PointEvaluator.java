@@ -16,6 +16,8 @@ import org.strandbook.diagnosis.Diagnosis;
 import org.strandbook.diagnosis.PathEvidence;
 import org.strandbook.optics.WavelengthGrid;
 import org.strandbook.optics.path.OpticsCache;
+import org.strandbook.site.MaintenanceAction;
+import org.strandbook.site.MaintenanceKind;
 import org.strandbook.site.ScanRecord;
 import org.strandbook.site.Spectrum;
 import org.strandbook.site.WavelengthBand;
@@ -69,14 +71,7 @@ public final class PointEvaluator {
     public PointEvaluation evaluate(PointInputs in) {
         WavelengthGrid grid = EvaluationGrid.forAnalyzer(in.analyzer());
         OpticsCache cache = caches.computeIfAbsent(grid, OpticsCache::new);
-        PredictedBudget predicted;
-        try {
-            predicted = new PointBudgetBuilder(in.catalog()).build(in.point(), in.send(), in.ret(), cache);
-        } catch (IllegalArgumentException e) {
-            throw new IllegalArgumentException("point " + in.point().tag() + ": cannot predict its loss: "
-                    + e.getMessage(), e);
-        }
-        double[] predictedLoss = predicted.totalLossDb();
+        PredictedBudget predictedToday = predict(in, in.send(), in.ret(), cache);
         List<WavelengthBand> bands = in.point().bands();
         for (WavelengthBand band : bands) {
             if (band.fromNm() < grid.firstNm() || band.toNm() > grid.lastNm()) {
@@ -124,9 +119,14 @@ public final class PointEvaluator {
         if (latest == null) {
             problems.add(0, pairs.paired().isEmpty() && pairs.unpaired().isEmpty()
                     ? "no loop scan recorded yet" : "no loop scan could be paired with a reference and dark");
-            return new PointEvaluation(in.point(), Status.REVIEW, predicted, Optional.empty(), Optional.empty(),
+            return new PointEvaluation(in.point(), Status.REVIEW, predictedToday, Optional.empty(), Optional.empty(),
                     List.of(), Optional.empty(), List.of(), problems);
         }
+        // the latest scan is judged against the path it went through, graded as inspected by then
+        PathTimeline.Legs then = in.history().at(latestPair.loop().takenAt());
+        PredictedBudget predicted = then.send().equals(in.send()) && then.ret().equals(in.ret())
+                ? predictedToday : predict(in, then.send(), then.ret(), cache);
+        double[] predictedLoss = predicted.totalLossDb();
         double tolerance = in.point().effectiveToleranceDb(in.site());
         double allowed = in.analyzer().allowedLossDb();
         ScanExposure exposure = latestPair.exposure();
@@ -153,7 +153,7 @@ public final class PointEvaluator {
         Optional<Diagnosis> diagnosis = Optional.empty();
         if (refusal.isEmpty()) {
             diagnosis = Optional.of(diagnoser.diagnose(latest, predictedLoss,
-                    PathEvidence.of(in.point(), in.send(), in.ret(), in.catalog())));
+                    PathEvidence.of(in.point(), then.send(), then.ret(), in.catalog())));
         } else {
             problems.add(0, refusal.get());
         }
@@ -164,11 +164,30 @@ public final class PointEvaluator {
         }
         List<BandTrend> trends = new ArrayList<>();
         for (BandHistory history : histories) {
-            trends.add(history.trend(allowed, lastJudged == null ? latestPair.loop().takenAt() : lastJudged,
-                    theilSen, steps, forecast));
+            Instant asOf = lastJudged == null ? latestPair.loop().takenAt() : lastJudged;
+            trends.add(history.trend(allowed, asOf, latestRepair(in.actions(), asOf), theilSen, steps, forecast));
         }
         return new PointEvaluation(in.point(), status, predicted, Optional.of(latestPair), Optional.of(latest),
                 verdicts, diagnosis, trends, problems);
+    }
+
+    private static PredictedBudget predict(PointInputs in, org.strandbook.site.PathLeg send,
+                                           org.strandbook.site.PathLeg ret, OpticsCache cache) {
+        try {
+            return new PointBudgetBuilder(in.catalog()).build(in.point(), send, ret, cache);
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException("point " + in.point().tag() + ": cannot predict its loss: "
+                    + e.getMessage(), e);
+        }
+    }
+
+    /**
+     * The latest repair up to {@code asOf}: any action but a re-taken reference, which changes the
+     * baseline of no loop (design choice).
+     */
+    private static Optional<Instant> latestRepair(List<MaintenanceAction> actions, Instant asOf) {
+        return actions.stream().filter(a -> a.kind() != MaintenanceKind.RETAKE_REFERENCE)
+                .map(MaintenanceAction::performedAt).filter(t -> !t.isAfter(asOf)).max(Instant::compareTo);
     }
 
     /** Share of the band's grid points masked because a detector was saturated or clipped. */

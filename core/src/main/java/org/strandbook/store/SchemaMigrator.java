@@ -23,7 +23,7 @@ import java.util.List;
 final class SchemaMigrator {
 
     /** Schema version this Strandbook writes. */
-    static final int LATEST = 2;
+    static final int LATEST = 5;
 
     /** The version that created the audit trail; from it on, every step is itself audited. */
     static final int AUDIT_TRAIL = 2;
@@ -33,7 +33,8 @@ final class SchemaMigrator {
 
     private static final List<Step> STEPS = List.of(
             new Step(1, "V1__create_workbook.sql"),
-            new Step(2, "V2__audit_trail.sql"));
+            new Step(2, "V2__audit_trail.sql"),
+            new Step(5, "V5__maintenance_and_sign_off.sql"));
 
     private SchemaMigrator() {
     }
@@ -62,10 +63,15 @@ final class SchemaMigrator {
                 }
                 try (Statement st = session.connection().createStatement()) {
                     st.executeUpdate(script(step.script()));
+                } catch (SQLException e) {
+                    throw mismatch(session, current, step, e);
                 }
                 if (step.version() == AUDIT_TRAIL) {
                     for (AuditedTable table : AuditedTable.values()) {
-                        audit.baseline(table);
+                        // tables of later schemas do not exist yet, and are born audited
+                        if (tableExists(session, table.tableName())) {
+                            audit.baseline(table);
+                        }
                     }
                 }
                 if (step.version() >= AUDIT_TRAIL) {
@@ -76,6 +82,16 @@ final class SchemaMigrator {
                 }
                 return null;
             });
+        }
+    }
+
+    /** Checks, reading only, that the open file is a workbook of exactly this schema. */
+    static void checkCurrent(Session session) {
+        checkIdentity(session);
+        int version = schemaVersion(session);
+        if (version != LATEST) {
+            throw new WorkbookException("workbook " + session.file() + " is of schema " + version + " and must be"
+                    + " upgraded to schema " + LATEST + " before it is read; open it once for a change to upgrade it");
         }
     }
 
@@ -91,11 +107,33 @@ final class SchemaMigrator {
         });
     }
 
+    /**
+     * A step that fails on a file whose recorded version says it is due means the tables are not
+     * what that version had (the version was reset, or tables were changed by another program).
+     */
+    private static WorkbookException mismatch(Session session, int recorded, Step step, SQLException e) {
+        String detail = e.getMessage() == null ? "" : e.getMessage().replaceAll("\\s+", " ").replaceFirst(
+                "^\\[SQLITE_[A-Z_]+\\]\\s*", "").strip();
+        return new WorkbookException("workbook " + session.file() + " records schema " + recorded + " but its tables do"
+                + " not match it (upgrading to schema " + step.version() + " failed: " + detail + "); nothing was"
+                + " changed: restore the workbook from a backup", e);
+    }
+
     private static boolean isEmpty(Session session) throws SQLException {
         try (Statement st = session.connection().createStatement();
              ResultSet rs = st.executeQuery("SELECT count(*) FROM sqlite_master")) {
             rs.next();
             return rs.getInt(1) == 0 && pragma(session, "application_id") == 0;
+        }
+    }
+
+    private static boolean tableExists(Session session, String name) throws SQLException {
+        try (java.sql.PreparedStatement ps = session.connection().prepareStatement(
+                "SELECT 1 FROM sqlite_master WHERE type = 'table' AND name = ?")) {
+            ps.setString(1, name);
+            try (ResultSet rs = ps.executeQuery()) {
+                return rs.next();
+            }
         }
     }
 

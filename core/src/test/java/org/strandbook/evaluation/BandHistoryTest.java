@@ -53,7 +53,7 @@ class BandHistoryTest {
             t = FIRST.plus(YEAR.multipliedBy(k));
             h.add(t, GRID, loss.apply(k));
         }
-        return h.trend(ALLOWED_DB, t, TheilSenTrend.withDefaults(), StepDetector.withDefaults(),
+        return h.trend(ALLOWED_DB, t, Optional.empty(), TheilSenTrend.withDefaults(), StepDetector.withDefaults(),
                 MarginForecast.withDefaults());
     }
 
