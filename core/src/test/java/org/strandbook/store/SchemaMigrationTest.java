@@ -40,7 +40,7 @@ class SchemaMigrationTest {
     void aSchemaOneWorkbookUpgradesWithItsDataIntact() throws IOException {
         Path file = SchemaOneFixture.copyTo(dir.resolve("old.sqlite"));
         try (Workbook wb = Workbook.open(file, "t.vane")) {
-            assertEquals(2, wb.schemaVersion());
+            assertEquals(Workbook.latestSchemaVersion(), wb.schemaVersion());
             assertEquals(new Site("Harrowgate Salt Flats Plant", "Brine unit 2", "A", 1.2), wb.site().get());
             assertEquals("QB-3", wb.site().analyzers().get(0).tag());
             assertEquals(2, wb.catalog().fiberType("LOH-200").orElseThrow().datasheet().size());
@@ -66,12 +66,15 @@ class SchemaMigrationTest {
         try (Workbook wb = Workbook.open(file, "t.vane")) {
             List<AuditEntry> trail = wb.audit().entries(0, 1000);
             // site, analyzer, fiber type + 2 datasheet points, connector, probe, point + 2 bands,
-            // 3 path elements + 1 bend, 1 scan (with its spectrum), inspection, sign-off, note
-            assertEquals(18, trail.stream().filter(e -> e.action().equals("BASELINE")).count());
-            AuditEntry schema = trail.get(trail.size() - 1);
-            assertEquals("SCHEMA", schema.action());
-            assertEquals("t.vane", schema.user());
-            assertEquals("{\"schema\":2}", schema.newValues());
+            // 3 path elements + 1 bend, 1 scan (with its spectrum), inspection, sign-off, note; then
+            // schema 3 adds the scan's unit column and records the scan once more with it
+            assertEquals(18 + 1, trail.stream().filter(e -> e.action().equals("BASELINE")).count());
+            List<AuditEntry> schemaRows = trail.stream().filter(e -> e.action().equals("SCHEMA")).toList();
+            assertEquals(List.of("{\"schema\":2}", "{\"schema\":3}"), schemaRows.stream().map(AuditEntry::newValues).toList());
+            assertEquals("t.vane", schemaRows.get(0).user());
+            AuditEntry last = trail.get(trail.size() - 1);
+            assertEquals("BASELINE", last.action());
+            assertTrue(last.newValues().contains("\"y_unit\":\"\""), last.newValues());
             assertTrue(wb.audit().verify().intact(), () -> wb.audit().verify().toString());
             wb.notes().add(new org.strandbook.site.Note("", Instant.parse("2024-01-01T00:00:00Z"), "t.vane", "upgraded"));
             assertTrue(wb.audit().verify().intact());
@@ -83,7 +86,9 @@ class SchemaMigrationTest {
         Path file = SchemaOneFixture.copyTo(dir.resolve("old.sqlite"));
         Workbook.open(file, "t.vane").close();
         try (Workbook wb = Workbook.open(file, "t.vane")) {
-            assertEquals(1, wb.audit().entries(0, 1000).stream().filter(e -> e.action().equals("SCHEMA")).count());
+            // one SCHEMA row per step (1 → 2, 2 → 3), none more on the second opening
+            assertEquals(Workbook.latestSchemaVersion() - 1,
+                    wb.audit().entries(0, 1000).stream().filter(e -> e.action().equals("SCHEMA")).count());
         }
     }
 
@@ -99,15 +104,15 @@ class SchemaMigrationTest {
             };
             List<Future<Integer>> results = pool.invokeAll(List.of(opener, opener));
             for (Future<Integer> r : results) {
-                assertEquals(2, r.get());
+                assertEquals(Workbook.latestSchemaVersion(), r.get());
             }
         } finally {
             pool.shutdown();
         }
         try (Workbook wb = Workbook.open(file, "t.vane")) {
             List<AuditEntry> trail = wb.audit().entries(0, 1000);
-            assertEquals(1, trail.stream().filter(e -> e.action().equals("SCHEMA")).count());
-            assertEquals(18, trail.stream().filter(e -> e.action().equals("BASELINE")).count());
+            assertEquals(Workbook.latestSchemaVersion() - 1, trail.stream().filter(e -> e.action().equals("SCHEMA")).count());
+            assertEquals(18 + 1, trail.stream().filter(e -> e.action().equals("BASELINE")).count());
             assertTrue(wb.audit().verify().intact());
         }
     }
