@@ -33,6 +33,10 @@ final class JcampBlocks {
         List<Block> leaves = new ArrayList<>();
         int blocks = 0;
         for (int i = 0; i < lines.length; i++) {
+            // data lines, the bulk of a file, are passed over without building any string
+            if (!startsWithRecordMark(lines[i])) {
+                continue;
+            }
             String content = JcampDxReader.stripComment(lines[i]).strip();
             if (!content.startsWith("##")) {
                 continue;
@@ -62,5 +66,13 @@ final class JcampBlocks {
             return List.of();
         }
         return leaves;
+    }
+
+    private static boolean startsWithRecordMark(String line) {
+        int i = 0;
+        while (i < line.length() && Character.isWhitespace(line.charAt(i))) {
+            i++;
+        }
+        return line.startsWith("##", i);
     }
 }

@@ -10,19 +10,11 @@ import java.nio.file.Path;
 import java.time.Instant;
 import java.util.List;
 import java.util.Optional;
-import java.util.OptionalDouble;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.strandbook.site.Analyzer;
-import org.strandbook.site.DetectorType;
-import org.strandbook.site.MeasurementPoint;
-import org.strandbook.site.ProbeKind;
-import org.strandbook.site.ProbeType;
 import org.strandbook.site.ScanKind;
 import org.strandbook.site.ScanRecord;
-import org.strandbook.site.Site;
-import org.strandbook.site.WavelengthBand;
 import org.strandbook.store.Workbook;
 
 /** What the importer asks of a file beyond its format: a signal, a believable time, one spectrum. */
@@ -135,12 +127,7 @@ class ScanImportRulesTest {
     }
 
     private Workbook workbook() {
-        Workbook wb = Workbook.create(dir.resolve("site.strandbook"), new Site("Rules Works"), "tester");
-        wb.site().addAnalyzer(new Analyzer("AZ", "", 1000, 2500, 1, 20, DetectorType.EXTENDED_INGAAS));
-        wb.catalog().addProbeType(new ProbeType("PT", "", ProbeKind.TRANSMISSION, "SAPPHIRE", 2, 1, 1));
-        wb.points().add(new MeasurementPoint("P-1", "", "", "AZ", 1, "PT", List.of(new WavelengthBand("b", 1500, 1600)),
-                OptionalDouble.empty(), false, false, OptionalDouble.empty()));
-        return wb;
+        return OnePointWorkbook.create(dir.resolve("site.strandbook"), "Rules Works");
     }
 
     private static ScanFileImporter.Summary importInto(Workbook wb, List<Path> files, Optional<Instant> takenAt,

@@ -18,7 +18,7 @@ class JcampDxReaderTest {
     private static final double RELATIVE_TOLERANCE = 1e-12;
 
     /** The published ASDF example as a whole single-spectrum file (McDonald & Wilks 1988). */
-    private static final String PUBLISHED_EXAMPLE = """
+    static final String PUBLISHED_EXAMPLE = """
             ##TITLE= published ASDF example
             ##JCAMP-DX= 4.24
             ##DATA TYPE= INFRARED SPECTRUM

@@ -23,23 +23,7 @@ import org.junit.jupiter.api.io.TempDir;
 class ToleratedDeparturesTest {
 
     /** The published ASDF example as a whole single-spectrum file (McDonald & Wilks 1988). */
-    private static final String PUBLISHED_EXAMPLE = """
-            ##TITLE= published ASDF example
-            ##JCAMP-DX= 4.24
-            ##DATA TYPE= INFRARED SPECTRUM
-            ##XUNITS= NANOMETERS
-            ##YUNITS= ARBITRARY UNITS
-            ##XFACTOR= 1
-            ##YFACTOR= 1
-            ##FIRSTX= 1000
-            ##LASTX= 1009
-            ##NPOINTS= 10
-            ##FIRSTY= 1
-            ##XYDATA= (X++(Y..Y))
-            1000AJT%jX
-            1009c
-            ##END=
-            """;
+    private static final String PUBLISHED_EXAMPLE = JcampDxReaderTest.PUBLISHED_EXAMPLE;
 
     /** Twelve points 10 nm apart in AFFN, four to a line (McDonald & Wilks 1988, (X++(Y..Y))). */
     private static final String TEN_NM_STEPS = """
