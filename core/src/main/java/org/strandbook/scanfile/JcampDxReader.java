@@ -554,9 +554,9 @@ final class JcampDxReader {
     /**
      * Checks the line's abscissa against the declared axis. A file whose first line agrees with
      * FIRSTX and whose every later line sits exactly one point off that axis is accepted: McDonald &amp; Wilks (1988) make the
-     * line's X the abscissa of its first ordinate, but writers that count the DIF Y-check ordinate
-     * differently label every line one point off, and common readers build the axis from FIRSTX,
-     * LASTX and NPOINTS alone. The ordinate count must still equal NPOINTS, so no point is lost
+     * line's X the abscissa of its first ordinate, but some public collections (a national standards
+     * lab's gas-phase infrared files among them) label every line after the first with the point
+     * before it, and readers that build the axis from FIRSTX, LASTX and NPOINTS alone take them. The ordinate count must still equal NPOINTS, so no point is lost
      * unseen; a line that breaks the file's pattern is refused as before.
      */
     private void checkAbscissa(int lineNo, AsdfDecoder decoder, double xFactor, double firstX, double dx,
