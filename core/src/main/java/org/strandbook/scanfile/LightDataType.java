@@ -3,6 +3,7 @@ package org.strandbook.scanfile;
 import java.util.Arrays;
 import java.util.Locale;
 import java.util.Set;
+import java.util.regex.Pattern;
 import java.util.stream.Collectors;
 
 /**
@@ -28,6 +29,8 @@ final class LightDataType {
             "ENERGYLOSS", "EELS", "NMR", "MASS", "MS", "CHROMATOGRAM", "EPR", "ESR", "ELECTRON", "ION", "MOBILITY",
             "CIRCULAR", "DICHROISM", "CD", "XRAY", "DIFFRACTION");
 
+    private static final Pattern NOT_A_LETTER = Pattern.compile("[^A-Z]+");
+
     private LightDataType() {
     }
 
@@ -37,7 +40,7 @@ final class LightDataType {
                 .replace("ENERGY LOSS", "ENERGYLOSS").replace("ENERGY-LOSS", "ENERGYLOSS")
                 .replace("UV/VIS", "UVVIS").replace("UV-VIS", "UVVIS").replace("NEAR INFRARED", "NEARINFRARED")
                 .replace("NEAR-INFRARED", "NEARINFRARED");
-        Set<String> words = Arrays.stream(t.split("[^A-Z]+")).filter(w -> !w.isEmpty()).collect(Collectors.toSet());
+        Set<String> words = Arrays.stream(NOT_A_LETTER.split(t)).filter(w -> !w.isEmpty()).collect(Collectors.toSet());
         for (String w : words) {
             if (NOT_LIGHT.contains(w)) {
                 return "not an absorption or emission spectrum of light on an absolute axis (" + w.toLowerCase(Locale.ROOT)

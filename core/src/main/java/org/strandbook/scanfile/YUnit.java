@@ -37,7 +37,14 @@ public enum YUnit {
     /** The kind of value a label names; {@link #SIGNAL} when it names no ratio. */
     public static YUnit of(String label) {
         String l = label.toUpperCase(Locale.ROOT);
-        String compact = l.replaceAll("[^A-Z%0-9/]", "");
+        StringBuilder kept = new StringBuilder(l.length());
+        for (int i = 0; i < l.length(); i++) {
+            char c = l.charAt(i);
+            if ((c >= 'A' && c <= 'Z') || (c >= '0' && c <= '9') || c == '%' || c == '/') {
+                kept.append(c);
+            }
+        }
+        String compact = kept.toString();
         if (l.contains("ABSORBANCE") || l.contains("OPTICAL DENSITY") || compact.equals("OD")
                 || l.contains("EXTINCTION")) {
             return ABSORBANCE;

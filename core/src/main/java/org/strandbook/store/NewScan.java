@@ -53,9 +53,18 @@ public record NewScan(String pointTag, ScanKind kind, Instant takenAt, ScanCondi
         }
         sourceFile = sourceFile.strip();
         sha256 = Sha256.normalized(sha256, "scan file " + sourceFile);
-        yUnit = yUnit == null ? "" : yUnit.replaceAll("\\p{Cntrl}", " ").strip();
+        yUnit = yUnit == null ? "" : oneLine(yUnit);
         if (yUnit.length() > MAX_Y_UNIT_LENGTH) {
             yUnit = yUnit.substring(0, MAX_Y_UNIT_LENGTH);
         }
+    }
+
+    private static String oneLine(String text) {
+        for (int i = 0; i < text.length(); i++) {
+            if (Character.isISOControl(text.charAt(i))) {
+                return text.replaceAll("\\p{Cntrl}", " ").strip();
+            }
+        }
+        return text.strip();
     }
 }
