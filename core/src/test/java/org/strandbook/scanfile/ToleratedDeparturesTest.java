@@ -68,7 +68,7 @@ class ToleratedDeparturesTest {
 
     @Test
     void aDosEndOfFileByteAfterEndIsIgnored() throws Exception {
-        // MS-DOS text files may end with SUB (0x1A, ISO/IEC 6429 / ASCII control); it was refused as a control character
+        // MS-DOS text files may end with SUB (0x1A) (common practice); it was refused as a control character
         byte[] bytes = (PUBLISHED_EXAMPLE + "\u001A").getBytes(StandardCharsets.UTF_8);
         SpectrumFile s = SpectrumFiles.read("ex.jdx", bytes);
         assertEquals(10, s.size());
@@ -115,7 +115,7 @@ class ToleratedDeparturesTest {
     @Test
     void ramanShiftIsRefusedOnItsDataTypeLine() {
         // a Raman spectrum's 1/CM axis is a shift from the laser line, not an absolute wavenumber
-        // (IUPAC Gold Book, "Raman shift"); stored as light it would land at wrong wavelengths
+        // (from memory); stored as light it would land at wrong wavelengths
         SpectrumFileException e = assertThrows(SpectrumFileException.class, () -> read(PUBLISHED_EXAMPLE
                 .replace("INFRARED SPECTRUM", "RAMAN SPECTRUM").replace("NANOMETERS", "1/CM")));
         assertEquals(3, e.lineNumber(), e.getMessage());

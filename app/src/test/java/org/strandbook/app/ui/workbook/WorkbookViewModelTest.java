@@ -229,7 +229,7 @@ class WorkbookViewModelTest {
 
     @Test
     void recordingListsWhatAStoredFileHadTolerated() throws Exception {
-        // MS-DOS text files may end with SUB (0x1A): stored, and the dialog says it was ignored
+        // MS-DOS text files may end with SUB (0x1A) (common practice): stored, and the dialog says it was ignored
         vm.selectPoint("SW-4202");
         Path good = sample.newLoopScan("SW-4202", dir, 11);
         Files.write(good, java.util.Arrays.copyOf(Files.readAllBytes(good), (int) Files.size(good) + 1));
