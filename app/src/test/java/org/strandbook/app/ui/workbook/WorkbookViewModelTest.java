@@ -232,10 +232,10 @@ class WorkbookViewModelTest {
         // MS-DOS text files may end with SUB (0x1A) (common practice): stored, and the dialog says it was ignored
         vm.selectPoint("SW-4202");
         Path good = sample.newLoopScan("SW-4202", dir, 11);
-        Files.write(good, java.util.Arrays.copyOf(Files.readAllBytes(good), (int) Files.size(good) + 1));
         byte[] bytes = Files.readAllBytes(good);
-        bytes[bytes.length - 1] = 0x1A;
-        Files.write(good, bytes);
+        byte[] withEndOfFile = java.util.Arrays.copyOf(bytes, bytes.length + 1);
+        withEndOfFile[bytes.length] = 0x1A;
+        Files.write(good, withEndOfFile);
         ScanImportViewModel importer = vm.recordMeasurement().orElseThrow();
 
         importer.addFiles(List.of(good));
