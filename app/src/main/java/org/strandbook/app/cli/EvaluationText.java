@@ -143,6 +143,7 @@ final class EvaluationText {
                 + ",\"candidates\":" + strings(f.candidates().stream().map(Enum::name).toList())
                 + ",\"signature\":" + JsonText.string(f.signature().name())
                 + ",\"amount_db\":" + JsonText.number(f.amountDb())
+                + ",\"amount_at_least\":" + f.atLeast()
                 + ",\"at_nm\":" + JsonText.number(f.atNm())
                 + ",\"share_percent\":" + JsonText.number(f.sharePercent())
                 + ",\"check_first\":" + JsonText.string(f.checkFirst())
