@@ -27,6 +27,8 @@ import org.strandbook.site.PathLeg;
 import org.strandbook.site.ProbeKind;
 import org.strandbook.site.ProbeType;
 import org.strandbook.site.WavelengthBand;
+import org.strandbook.uncertainty.JointSource;
+import org.strandbook.uncertainty.PathUncertainty;
 
 /** A point's predicted budget is the sum of its parts, each from its published law. */
 class PointBudgetBuilderTest {
@@ -55,6 +57,22 @@ class PointBudgetBuilderTest {
                 + 0.65054713 * l2 / (l2 - 0.1193242 * 0.1193242)
                 + 5.3414021 * l2 / (l2 - 18.028251 * 18.028251);
         return Math.sqrt(n2);
+    }
+
+    @Test
+    void aJointIsMeasuredOnlyWhenALossWasMeasuredElseItsTypeDecides() {
+        // Design choice: a measured reading carries its own uncertainty; a joint without a reading
+        // carries its connector type's range (air gap here), whatever basis the row names.
+        PathLeg send = new PathLeg("T-1", PathDirection.SEND, List.of(
+                new CableSegment("S1", "F", 10, List.of()), joint("J1", OptionalDouble.of(0.5)),
+                new CableSegment("S2", "F", 30, List.of())));
+        PathLeg ret = new PathLeg("T-1", PathDirection.RETURN, List.of(
+                joint("J2", OptionalDouble.empty()), new CableSegment("R1", "F", 40, List.of())));
+        PredictedBudget b = new PointBudgetBuilder(CATALOG).build(POINT, send, ret, new OpticsCache(GRID));
+        assertEquals(List.of(JointSource.MEASURED, JointSource.ASSUMED_AIR_GAP), b.jointSources());
+        List<BandUncertainty> bands = BandUncertainty.of(b, POINT.bands(), PathUncertainty.standard());
+        assertEquals(1, bands.size());
+        assertEquals(1550, bands.get(0).atCentre().wavelengthNm(), 1e-9);
     }
 
     @Test
