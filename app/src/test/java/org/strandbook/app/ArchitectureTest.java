@@ -69,7 +69,7 @@ class ArchitectureTest {
     void physicsAndNumericsAreFreeOfStorageAndFiles() {
         ArchRule rule = noClasses().that()
                 .resideInAnyPackage("org.strandbook.optics..", "org.strandbook.fit..", "org.strandbook.trend..",
-                        "org.strandbook.throughput..", "org.strandbook.diagnosis..")
+                        "org.strandbook.throughput..", "org.strandbook.diagnosis..", "org.strandbook.uncertainty..")
                 .should().dependOnClassesThat().resideInAnyPackage("java.sql..", "java.nio.file..",
                         "org.strandbook.store..", "org.apache.poi..")
                 .because("physics and numerics are pure functions of their arguments");

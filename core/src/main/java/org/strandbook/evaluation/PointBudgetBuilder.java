@@ -17,8 +17,10 @@ import org.strandbook.site.Bend;
 import org.strandbook.site.CableSegment;
 import org.strandbook.site.Catalog;
 import org.strandbook.site.Joint;
+import org.strandbook.site.LossBasis;
 import org.strandbook.site.MeasurementPoint;
 import org.strandbook.site.PathLeg;
+import org.strandbook.uncertainty.JointSource;
 
 /**
  * Builds a point's predicted loop budget from what the workbook records.
@@ -43,15 +45,16 @@ public final class PointBudgetBuilder {
     public PredictedBudget build(MeasurementPoint point, PathLeg send, PathLeg ret, OpticsCache cache) {
         List<String> notes = new ArrayList<>();
         List<PathElement> elements = new ArrayList<>();
-        addLeg(send, elements, notes);
+        List<JointSource> jointSources = new ArrayList<>();
+        addLeg(send, elements, jointSources, notes);
         elements.add(OpticsMapping.probe(catalog.probe(point.probeTypeCode())));
-        addLeg(ret, elements, notes);
+        addLeg(ret, elements, jointSources, notes);
         LossBudget budget = LossBudget.of(new LightPath(point.tag(), elements), cache);
         notes.addAll(budget.notes());
-        return new PredictedBudget(point.tag(), budget, notes);
+        return new PredictedBudget(point.tag(), budget, notes, jointSources);
     }
 
-    private void addLeg(PathLeg leg, List<PathElement> out, List<String> notes) {
+    private void addLeg(PathLeg leg, List<PathElement> out, List<JointSource> jointSources, List<String> notes) {
         List<org.strandbook.site.PathElement> items = leg.elements();
         if (leg.segments().isEmpty()) {
             throw new IllegalArgumentException("point " + leg.pointTag() + ": the " + leg.direction().name()
@@ -66,6 +69,7 @@ public final class PointBudgetBuilder {
                 FiberSpec to = fiberNear(items, i, +1);
                 out.add(new JointElement(joint.label(), from == null ? to : from, to == null ? from : to,
                         OpticsMapping.allowance(joint, catalog)));
+                jointSources.add(jointSource(joint));
             }
         }
     }
@@ -83,6 +87,16 @@ public final class PointBudgetBuilder {
         }
         return new FiberSegment(segment.label(), spec, segment.lengthM(), OptionalDouble.of(tightest.radiusMm()),
                 recorded);
+    }
+
+    /** A measured loss carries its reading's uncertainty; an assumed one its connector type's range. */
+    private JointSource jointSource(Joint joint) {
+        if (joint.lossDb().isPresent() && joint.lossBasis() == LossBasis.MEASURED) {
+            return JointSource.MEASURED;
+        }
+        boolean airGap = catalog.connector(joint.connectorTypeA()).airGap()
+                || catalog.connector(joint.connectorTypeB()).airGap();
+        return airGap ? JointSource.ASSUMED_AIR_GAP : JointSource.ASSUMED_CONTACT;
     }
 
     /** The fiber of the nearest cable segment before (step −1) or after (+1) position {@code i}. */

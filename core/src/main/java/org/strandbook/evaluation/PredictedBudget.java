@@ -5,6 +5,7 @@ import java.util.List;
 import org.strandbook.optics.WavelengthGrid;
 import org.strandbook.optics.path.Contribution;
 import org.strandbook.optics.path.LossBudget;
+import org.strandbook.uncertainty.JointSource;
 
 /**
  * The predicted loss of one measurement point's loop (send leg, probe, return leg) on the
@@ -13,11 +14,14 @@ import org.strandbook.optics.path.LossBudget;
  * @param pointTag the point
  * @param budget   the optics engine's budget of the loop
  * @param notes    what the prediction assumed or flagged (bend radii, missing data), in words
+ * @param jointSources what each joint's loss rests on (type, air gap, measured), in path order,
+ *        for the prediction's uncertainty
  */
-public record PredictedBudget(String pointTag, LossBudget budget, List<String> notes) {
+public record PredictedBudget(String pointTag, LossBudget budget, List<String> notes, List<JointSource> jointSources) {
 
     public PredictedBudget {
         notes = List.copyOf(notes);
+        jointSources = List.copyOf(jointSources);
     }
 
     public WavelengthGrid grid() {

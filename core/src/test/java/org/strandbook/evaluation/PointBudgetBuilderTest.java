@@ -27,6 +27,8 @@ import org.strandbook.site.PathLeg;
 import org.strandbook.site.ProbeKind;
 import org.strandbook.site.ProbeType;
 import org.strandbook.site.WavelengthBand;
+import org.strandbook.uncertainty.JointSource;
+import org.strandbook.uncertainty.PathUncertainty;
 
 /** A point's predicted budget is the sum of its parts, each from its published law. */
 class PointBudgetBuilderTest {
@@ -57,14 +59,31 @@ class PointBudgetBuilderTest {
         return Math.sqrt(n2);
     }
 
-    @Test
-    void budgetIsJointsPlusFiberPlusProbeWindowsAndFixedLoss() {
+    /** 80 m of fiber: J1 measured at 0.5 dB on the send leg, J2 at its type's loss on the return. */
+    private static PredictedBudget measuredAndTypicalJointLoop() {
         PathLeg send = new PathLeg("T-1", PathDirection.SEND, List.of(
                 new CableSegment("S1", "F", 10, List.of()), joint("J1", OptionalDouble.of(0.5)),
                 new CableSegment("S2", "F", 30, List.of())));
         PathLeg ret = new PathLeg("T-1", PathDirection.RETURN, List.of(
                 joint("J2", OptionalDouble.empty()), new CableSegment("R1", "F", 40, List.of())));
         PredictedBudget b = new PointBudgetBuilder(CATALOG).build(POINT, send, ret, new OpticsCache(GRID));
+        return b;
+    }
+
+    @Test
+    void aJointIsMeasuredOnlyWhenALossWasMeasuredElseItsTypeDecides() {
+        // Design choice: a measured reading carries its own uncertainty; a joint without a reading
+        // carries its connector type's range (air gap here), whatever basis the row names.
+        PredictedBudget b = measuredAndTypicalJointLoop();
+        assertEquals(List.of(JointSource.MEASURED, JointSource.ASSUMED_AIR_GAP), b.jointSources());
+        List<BandUncertainty> bands = BandUncertainty.of(b, POINT.bands(), PathUncertainty.standard());
+        assertEquals(1, bands.size());
+        assertEquals(1550, bands.get(0).atCentre().wavelengthNm(), 1e-9);
+    }
+
+    @Test
+    void budgetIsJointsPlusFiberPlusProbeWindowsAndFixedLoss() {
+        PredictedBudget b = measuredAndTypicalJointLoop();
         int i = GRID.nearestIndex(1550);
         double alphaDbPerKm = SilicaAttenuation.of(SilicaFiberGrade.LOW_OH, 0.5).attenuationDbPerKm(1550);
         // Fresnel at normal incidence, R = ((n−1)/(n+1))² (Born & Wolf, Principles of Optics, §1.5);

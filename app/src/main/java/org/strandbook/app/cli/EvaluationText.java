@@ -8,6 +8,7 @@ import java.util.stream.Collectors;
 
 import org.strandbook.diagnosis.Finding;
 import org.strandbook.evaluation.BandTrend;
+import org.strandbook.evaluation.BandUncertainty;
 import org.strandbook.evaluation.BandVerdict;
 import org.strandbook.evaluation.PointEvaluation;
 import org.strandbook.evaluation.SiteEvaluation;
@@ -21,6 +22,8 @@ import org.strandbook.trend.LossReading;
 import org.strandbook.trend.LossTrend;
 import org.strandbook.trend.MarginForecast;
 import org.strandbook.trend.StepEvent;
+import org.strandbook.uncertainty.BudgetRow;
+import org.strandbook.uncertainty.PathUncertainty;
 
 /** Evaluations and trends as the command line prints them: aligned text with units, or JSON. */
 final class EvaluationText {
@@ -117,8 +120,14 @@ final class EvaluationText {
                     .append(",\"loop_co_added\":").append(p.loop().conditions().coAdded())
                     .append(",\"reference_co_added\":").append(p.reference().conditions().coAdded())
                     .append(",\"integration\":").append(JsonText.string(p.exposure().describeNormalisation())));
-            b.append(",\"bands\":[").append(e.verdicts().stream().map(EvaluationText::json)
-                    .collect(Collectors.joining(","))).append(']');
+            List<BandUncertainty> spreads = uncertainties(e);
+            b.append(",\"bands\":[");
+            for (int i = 0; i < e.verdicts().size(); i++) {
+                BandVerdict v = e.verdicts().get(i);
+                b.append(i == 0 ? "" : ",").append(json(v, spreads.stream()
+                        .filter(u -> u.band().equals(v.band())).findFirst()));
+            }
+            b.append(']');
             b.append(",\"findings\":[");
             e.diagnosis().ifPresent(d -> b.append(d.findings().stream().map(EvaluationText::json)
                     .collect(Collectors.joining(","))));
@@ -138,12 +147,38 @@ final class EvaluationText {
         return ms > 0 ? JsonText.number(ms) : "null";
     }
 
-    private static String json(BandVerdict v) {
+    /**
+     * The prediction's coverage interval per band; none when the point has no prediction or its
+     * inputs cannot be propagated (the point's problems already say why).
+     */
+    private static List<BandUncertainty> uncertainties(PointEvaluation e) {
+        if (e.predicted() == null || e.verdicts().isEmpty()) {
+            return List.of();
+        }
+        try {
+            return BandUncertainty.of(e.predicted(), e.verdicts().stream().map(BandVerdict::band).toList(),
+                    PathUncertainty.standard());
+        } catch (IllegalArgumentException ex) {
+            return List.of();
+        }
+    }
+
+    private static String json(BandVerdict v, Optional<BandUncertainty> spread) {
+        String interval = spread.map(u -> ",\"predicted_low_db\":" + JsonText.number(u.lowDb(v.predictedLossDb()))
+                + ",\"predicted_high_db\":" + JsonText.number(u.highDb(v.predictedLossDb()))
+                + ",\"coverage\":" + JsonText.number(u.atCentre().budget().interval().probability())
+                + ",\"predicted_standard_uncertainty_db\":"
+                + JsonText.number(u.atCentre().budget().combinedStandardUncertainty())
+                + ",\"uncertainty_at_nm\":" + JsonText.number(u.atCentre().wavelengthNm())
+                + ",\"uncertainty_budget\":" + u.atCentre().budget().rowsByContribution().stream()
+                        .map(EvaluationText::json).collect(Collectors.joining(",", "[", "]")))
+                .orElse(",\"predicted_low_db\":null,\"predicted_high_db\":null,\"coverage\":null"
+                        + ",\"uncertainty_budget\":[]");
         return "{\"band\":" + JsonText.string(v.band().name())
                 + ",\"from_nm\":" + JsonText.number(v.band().fromNm())
                 + ",\"to_nm\":" + JsonText.number(v.band().toNm())
                 + ",\"status\":" + JsonText.string(v.status().name())
-                + ",\"predicted_loss_db\":" + JsonText.number(v.predictedLossDb())
+                + ",\"predicted_loss_db\":" + JsonText.number(v.predictedLossDb()) + interval
                 + ",\"measured_loss_db\":" + JsonText.number(v.worstMeasuredLossDb())
                 + ",\"mean_deviation_db\":" + JsonText.number(v.meanDeviationDb())
                 + ",\"worst_deviation_db\":" + JsonText.number(v.worstDeviationDb())
@@ -151,6 +186,18 @@ final class EvaluationText {
                 + ",\"margin_db\":" + JsonText.number(v.marginDb())
                 + ",\"measured_fraction\":" + JsonText.number(v.measuredFraction())
                 + ",\"reason\":" + JsonText.string(v.reason()) + "}";
+    }
+
+    private static String json(BudgetRow r) {
+        return "{\"input\":" + JsonText.string(r.input())
+                + ",\"unit\":" + JsonText.string(r.unit())
+                + ",\"distribution\":" + JsonText.string(r.distribution())
+                + ",\"basis\":" + JsonText.string(r.basis().name())
+                + ",\"basis_text\":" + JsonText.string(r.basisText())
+                + ",\"standard_uncertainty\":" + JsonText.number(r.standardUncertainty())
+                + ",\"sensitivity\":" + JsonText.number(r.sensitivity())
+                + ",\"contribution_db\":" + JsonText.number(r.contribution())
+                + ",\"variance_share\":" + JsonText.number(r.share()) + "}";
     }
 
     private static String json(Finding f) {

@@ -78,6 +78,31 @@ class DemoCommandTest {
     }
 
     @Test
+    void evaluateJsonCarriesThePredictionsCoverageIntervalAroundThePrediction() {
+        // JCGM 101:2008, 7.7: the interval holds the estimate; its budget names every input with its
+        // basis (JCGM 100:2008, 5.1.3).
+        CliRun r = CliRun.of("evaluate", workbook.toString(), "--point", "FT-4101", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        String band = r.out().substring(r.out().indexOf("\"bands\":[{"));
+        double predicted = number(band, "predicted_loss_db");
+        double low = number(band, "predicted_low_db");
+        double high = number(band, "predicted_high_db");
+        assertTrue(low < predicted && predicted < high, low + " < " + predicted + " < " + high);
+        assertEquals(0.95, number(band, "coverage"), 1e-12);
+        assertTrue(band.contains("\"uncertainty_budget\":[{\"input\":"), band);
+        assertTrue(band.contains("connector pair loss") && band.contains("\"basis\":\"FROM_MEMORY\""), band);
+    }
+
+    private static double number(String json, String field) {
+        int at = json.indexOf("\"" + field + "\":") + field.length() + 3;
+        int end = at;
+        while (end < json.length() && "-+.0123456789eE".indexOf(json.charAt(end)) >= 0) {
+            end++;
+        }
+        return Double.parseDouble(json.substring(at, end));
+    }
+
+    @Test
     void trendRanksTheBrokenAndDarkeningPointsAmongTheFirst() {
         CliRun r = CliRun.of("trend", workbook.toString(), "--json");
         assertEquals(0, r.exitCode(), r.err());

@@ -1,0 +1,143 @@
+package org.strandbook.uncertainty;
+
+import java.util.ArrayList;
+import java.util.Iterator;
+import java.util.List;
+import java.util.Objects;
+import java.util.function.DoubleUnaryOperator;
+
+import org.strandbook.optics.attenuation.AttenuationModel;
+import org.strandbook.optics.attenuation.SilicaAttenuation;
+import org.strandbook.optics.bend.GlogeBend;
+import org.strandbook.optics.joint.ConnectorAllowance;
+import org.strandbook.optics.path.FiberSegment;
+import org.strandbook.optics.path.FiberSpec;
+import org.strandbook.optics.path.JointElement;
+import org.strandbook.optics.path.LossBudget;
+import org.strandbook.optics.path.PathElement;
+import org.strandbook.optics.path.ProbeElement;
+
+/**
+ * The uncertainty of a {@link LossBudget}'s total at one wavelength, from the same path the
+ * prediction used. Every input is a deviation from the value the prediction took, so the
+ * prediction itself is the model's offset and an input's sensitivity is the budget's own slope:
+ * <ul>
+ * <li>fiber length (m): the attenuation there, dB/m; attenuation and OH content (relative): the
+ *     segment's attenuation loss without and with only its OH bands, dB — all linear;</li>
+ * <li>connector pair, measured joint, probe fixed loss (dB): 1, linear;</li>
+ * <li>bend radius (relative): not linear (Gloge's loss rises steeply as the radius shrinks), so its
+ *     row carries the slope at the recorded radius and the Monte Carlo trial recomputes the loss.</li>
+ * </ul>
+ * Inputs are taken as independent. The standard uncertainty and the rows come from the law of
+ * propagation (JCGM 100:2008, 5.1.2); the coverage interval from Monte Carlo over the full model
+ * (JCGM 101:2008, 7), probabilistically symmetric (7.7.1) because a verdict looks at both tails.
+ */
+public final class PathUncertainty {
+
+    /** Relative step of the central difference for the bend slope: design choice. */
+    private static final double BEND_STEP = 0.01;
+
+    private final BudgetInputUncertainties inputs;
+    private final MonteCarloPropagation monteCarlo;
+    private final double coverageProbability;
+
+    public PathUncertainty(BudgetInputUncertainties inputs, MonteCarloPropagation monteCarlo,
+            double coverageProbability) {
+        this.inputs = Objects.requireNonNull(inputs, "inputs");
+        this.monteCarlo = Objects.requireNonNull(monteCarlo, "monteCarlo");
+        if (!(coverageProbability > 0 && coverageProbability < 1)) {
+            throw new IllegalArgumentException("coverage probability must lie in (0, 1), was " + coverageProbability);
+        }
+        this.coverageProbability = coverageProbability;
+    }
+
+    /** Shipped defaults, 95 % coverage, the standard Monte Carlo settings. */
+    public static PathUncertainty standard() {
+        return new PathUncertainty(BudgetInputUncertainties.SHIPPED, MonteCarloPropagation.standard(), 0.95);
+    }
+
+    public double coverageProbability() {
+        return coverageProbability;
+    }
+
+    /**
+     * @param budget the prediction's budget
+     * @param gridIndex where on its grid
+     * @param jointSources what each joint of the path rests on, in path order (one per joint)
+     */
+    public LossUncertainty at(LossBudget budget, int gridIndex, List<JointSource> jointSources) {
+        double wavelengthNm = budget.grid().wavelengthNm(gridIndex);
+        List<Term> terms = new ArrayList<>();
+        Iterator<JointSource> joints = jointSources.iterator();
+        List<PathElement> elements = budget.path().elements();
+        for (int e = 0; e < elements.size(); e++) {
+            PathElement element = elements.get(e);
+            if (element instanceof FiberSegment f) {
+                fiberTerms(f, wavelengthNm, terms);
+            } else if (element instanceof JointElement j) {
+                if (!joints.hasNext()) {
+                    throw new IllegalArgumentException("joint '" + j.label() + "': no source given for it");
+                }
+                double nominal = j.mechanics() instanceof ConnectorAllowance a ? a.lossDb()
+                        : budget.contributions().get(e).lossDbAt(gridIndex);
+                terms.add(Term.linear(inputs.joint(joints.next()).input(j.label(), nominal, nominal), 1));
+            } else if (element instanceof ProbeElement p) {
+                terms.add(Term.linear(inputs.probeFixedLoss().input(p.label(), p.fixedLossDb(), p.fixedLossDb()), 1));
+            }
+        }
+        if (joints.hasNext()) {
+            throw new IllegalArgumentException("more joint sources than joints on path '" + budget.path().name() + "'");
+        }
+        double predicted = budget.totalLossDbAt(gridIndex);
+        List<SensitivityTerm> rows = terms.stream().map(Term::row).toList();
+        UncertaintyBudget framework = LinearPropagation.propagate(predicted, rows, coverageProbability);
+        List<InputDistribution> distributions = rows.stream().map(r -> r.input().distribution()).toList();
+        DoubleUnaryOperator[] effects = terms.stream().map(Term::effectDb).toArray(DoubleUnaryOperator[]::new);
+        MonteCarloResult mc = monteCarlo.propagate(distributions, x -> {
+            double y = predicted;
+            for (int i = 0; i < x.length; i++) {
+                y += effects[i].applyAsDouble(x[i]);
+            }
+            return y;
+        }, coverageProbability, CoverageInterval.Method.PROBABILISTICALLY_SYMMETRIC);
+        return new LossUncertainty(wavelengthNm, predicted, framework.withInterval(mc.interval()),
+                framework.interval());
+    }
+
+    private void fiberTerms(FiberSegment f, double wavelengthNm, List<Term> out) {
+        AttenuationModel model = f.fiber().attenuation();
+        double attDbPerKm = model.attenuationDbPerKm(wavelengthNm);
+        double ohDbPerKm = model instanceof SilicaAttenuation s && s.ohPpm() > 0
+                ? attDbPerKm - s.withOhPpm(0).attenuationDbPerKm(wavelengthNm) : 0;
+        double lengthKm = f.lengthM() * 1e-3;
+        out.add(Term.linear(inputs.fiberLength().input(f.label(), f.lengthM(), f.lengthM()), attDbPerKm * 1e-3));
+        out.add(Term.linear(inputs.attenuation().input(f.label(), 1, 1), (attDbPerKm - ohDbPerKm) * lengthKm));
+        if (ohDbPerKm > 0) {
+            out.add(Term.linear(inputs.ohContent().input(f.label(), 1, 1), ohDbPerKm * lengthKm));
+        }
+        if (f.chargedBends() > 0) {
+            out.add(bendTerm(f, wavelengthNm));
+        }
+    }
+
+    private Term bendTerm(FiberSegment f, double wavelengthNm) {
+        FiberSpec fiber = f.fiber();
+        double radiusMm = f.bendRadiusMm().getAsDouble();
+        double n1 = fiber.coreMaterial().refractiveIndex(wavelengthNm);
+        int charged = f.chargedBends();
+        DoubleUnaryOperator lossAt = d -> charged
+                * GlogeBend.lossPerBend(fiber.coreUm(), fiber.na(), n1, radiusMm * (1 + d), wavelengthNm).lossDb();
+        double nominal = lossAt.applyAsDouble(0);
+        double slope = (lossAt.applyAsDouble(BEND_STEP) - lossAt.applyAsDouble(-BEND_STEP)) / (2 * BEND_STEP);
+        UncertainInput input = inputs.bendRadius().input(f.label(), 1, 0.9);
+        return new Term(new SensitivityTerm(input, slope), d -> lossAt.applyAsDouble(d) - nominal);
+    }
+
+    /** A budget row and how the output moves with the input's deviation in a Monte Carlo trial. */
+    private record Term(SensitivityTerm row, DoubleUnaryOperator effectDb) {
+
+        static Term linear(UncertainInput input, double sensitivity) {
+            return new Term(new SensitivityTerm(input, sensitivity), d -> sensitivity * d);
+        }
+    }
+}
