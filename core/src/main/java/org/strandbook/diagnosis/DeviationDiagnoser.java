@@ -21,7 +21,7 @@ import org.strandbook.throughput.ThroughputResult;
 
 /**
  * Explains a deviation spectrum (measured − predicted loss, dB) as a non-negative combination of
- * fault signatures ({@link Signature}) plus a signed reference-drift tilt, fitted by Lawson–Hanson
+ * fault signatures ({@link Signature}) plus a signed lamp-drift term, fitted by Lawson–Hanson
  * NNLS (Lawson &amp; Hanson, "Solving Least Squares Problems", 1974, ch. 23) over the measured
  * wavelengths, each weighted by 1/σ. The σ of a point is its detector-noise σ combined with a model
  * floor ({@link #MODEL_FLOOR_DB}), so that a very quiet detector does not let one region dominate.
@@ -29,6 +29,11 @@ import org.strandbook.throughput.ThroughputResult;
  * <p>The flat term is fitted signed: connectors are budgeted at a conservative allowance, so a
  * healthy path often loses a few tenths of a dB less than predicted, and a non-negative flat term
  * would push that shortfall into the other shapes. Only a positive flat excess is reported as a fault.
+ *
+ * <p>The lamp-drift term is the change of a thermal lamp's spectrum when its colour temperature
+ * changes between reference and loop scan, from Planck's law ({@link
+ * AttenuationShapes#planckBrighteningDbPerK}): close to linear in 1/λ over the NIR (Wien), not in λ.
+ * Its overall brightness change is carried by the flat term.
  *
  * <p>A wavelength-flat excess cannot say whether a connector or a bend is to blame (for large
  * cores Gloge's bend loss is nearly flat too); the workbook's records rank the candidates. Fringes
@@ -42,6 +47,17 @@ public final class DeviationDiagnoser {
     public static final double HYDROGEN_2420_RELATIVE = 5.0;
     /** |cos| above which two signatures are reported as indistinguishable over the measured range. */
     public static final double COLLINEAR_COSINE = 0.95;
+    /**
+     * Variance inflation above which a finding is said to rest on a term largely in the span of the
+     * others: 10, the usual cut (Kutner, Nachtsheim, Neter and Li, "Applied Linear Statistical
+     * Models", 5th ed. 2005, §10.5); the choice of that cut is ours (design choice).
+     */
+    public static final double INFLATION_LIMIT = 10;
+    /**
+     * K: colour temperature the lamp-drift shape is worked out at, a halogen filament's usual
+     * 2800–3200 K (common practice); the shape barely changes over that range.
+     */
+    public static final double LAMP_COLOUR_TEMPERATURE_K = 3000;
 
     private final double minReportDb;
 
@@ -119,7 +135,7 @@ public final class DeviationDiagnoser {
                 continue;
             }
             double share = totalEffect > 0 ? 100 * effect[j] / totalEffect : 0;
-            Finding f = finding(c, x[j], share, evidence);
+            Finding f = finding(c, x[j], share, evidence, grid);
             findings.add(f);
             peaks.put(f, peak);
         }
@@ -142,8 +158,7 @@ public final class DeviationDiagnoser {
                 fitted.add(new FittedSignature(columns.get(j).signature, curve));
             }
         }
-        List<String> collinear = collinearNotes(problem, columns,
-                findings.stream().anyMatch(f -> f.signature() == Signature.FLAT_EXCESS));
+        List<String> collinear = collinearNotes(problem, columns, findings);
         String summary = findings.isEmpty()
                 ? String.format(Locale.ROOT, "no fault signature reaches %.1f dB: the path behaves as predicted"
                         + " (residual %.2f dB RMS)", minReportDb, rms)
@@ -182,12 +197,16 @@ public final class DeviationDiagnoser {
         double[] h2 = new double[n];
         double[] dark = new double[n];
         double[] drift = new double[n];
+        double brightMid = AttenuationShapes.planckBrighteningDbPerK(mid, LAMP_COLOUR_TEMPERATURE_K);
+        double brightSpan = lampDriftDbPerK(first, last);
         for (int i = 0; i < n; i++) {
             double w = grid.wavelengthNm(i);
             oh[i] = ohScale * AttenuationShapes.ohAbsorptionDbPerKmPerPpm(w);
             h2[i] = h2Scale * AttenuationShapes.hydrogenBandShape(w, HYDROGEN_2420_RELATIVE);
             dark[i] = darkScale * AttenuationShapes.radiationDarkeningShape(w);
-            drift[i] = (w - mid) / (last - first);
+            // a hotter lamp brightens the short end most: the loss it hides rises toward long wavelengths
+            drift[i] = (brightMid - AttenuationShapes.planckBrighteningDbPerK(w, LAMP_COLOUR_TEMPERATURE_K))
+                    / brightSpan;
         }
         List<Column> out = new ArrayList<>();
         out.add(new Column(Signature.FLAT_EXCESS, rowsOf(flat, rows), flat, mid));
@@ -205,6 +224,12 @@ public final class DeviationDiagnoser {
             v[r] = onGrid[rows[r]];
         }
         return v;
+    }
+
+    /** dB of tilt across {@code firstNm}–{@code lastNm} per kelvin of lamp colour-temperature rise. */
+    static double lampDriftDbPerK(double firstNm, double lastNm) {
+        return AttenuationShapes.planckBrighteningDbPerK(firstNm, LAMP_COLOUR_TEMPERATURE_K)
+                - AttenuationShapes.planckBrighteningDbPerK(lastNm, LAMP_COLOUR_TEMPERATURE_K);
     }
 
     /** A band shape only enters the fit where the measured range shows a real part of it. */
@@ -231,7 +256,7 @@ public final class DeviationDiagnoser {
         return AttenuationShapes.SILICA_OH_BANDS.get(0).centerNm();
     }
 
-    private Finding finding(Column c, double amount, double share, PathEvidence evidence) {
+    private Finding finding(Column c, double amount, double share, PathEvidence evidence, WavelengthGrid grid) {
         return switch (c.signature) {
             case FLAT_EXCESS -> FlatExcessRanking.finding(amount, c.atNm, share, evidence);
             case OH_BANDS -> ohFinding(amount, c.atNm, share, evidence);
@@ -243,8 +268,11 @@ public final class DeviationDiagnoser {
                     amount, c.atNm, evidence.longestSegment().label()));
             case REFERENCE_DRIFT -> new Finding(Signature.REFERENCE_DRIFT, List.of(Cause.REFERENCE_DRIFT), amount,
                     c.atNm, share, "", String.format(Locale.ROOT,
-                    "loss tilts by %+.1f dB across the range: the lamp drifted since the reference scan;"
-                            + " re-take the reference through the patch cord, then the loop scan", amount));
+                    "loss tilts by %+.1f dB across the range, as a lamp %s by ≈%.0f K in colour temperature"
+                            + " (Planck) gives: the lamp drifted since the reference scan;"
+                            + " re-take the reference through the patch cord, then the loop scan", amount,
+                    amount > 0 ? "hotter" : "cooler",
+                    Math.abs(amount / lampDriftDbPerK(grid.firstNm(), grid.lastNm()))));
             case FRINGES -> throw new IllegalStateException("fringes are not a fitted column");
         };
     }
@@ -296,9 +324,22 @@ public final class DeviationDiagnoser {
     }
 
     private static List<String> collinearNotes(LeastSquaresProblem problem, List<Column> columns,
-                                               boolean flatFound) {
+                                               List<Finding> findings) {
         List<String> notes = new ArrayList<>();
-        for (ColumnPair pair : CollinearityReport.of(problem).pairsAbove(COLLINEAR_COSINE)) {
+        CollinearityReport report = CollinearityReport.of(problem);
+        for (Finding f : findings) {
+            for (int j = 0; j < columns.size(); j++) {
+                double vif = report.varianceInflation(j);
+                if (columns.get(j).signature == f.signature() && vif > INFLATION_LIMIT) {
+                    notes.add(String.format(Locale.ROOT, "the %s finding rests on a shape largely in the span of"
+                                    + " the other terms over the measured range (variance inflation %.0f, condition"
+                                    + " number %.0f): its amount is uncertain; confirm it with the records or a"
+                                    + " fresh reference scan", words(f.signature()), vif, report.conditionNumber()));
+                }
+            }
+        }
+        boolean flatFound = findings.stream().anyMatch(f -> f.signature() == Signature.FLAT_EXCESS);
+        for (ColumnPair pair : report.pairsAbove(COLLINEAR_COSINE)) {
             notes.add(String.format(Locale.ROOT, "%s and %s look alike over the measured range (cos %.2f):"
                             + " the spectrum alone cannot tell them apart",
                     words(columns.get(pair.first()).signature), words(columns.get(pair.second()).signature),
