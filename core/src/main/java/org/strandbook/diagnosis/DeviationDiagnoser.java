@@ -114,11 +114,12 @@ public final class DeviationDiagnoser {
         NnlsResult fit = NonNegativeLeastSquares.withDefaults().solve(problem);
         double[] x = fit.coefficients();
         double[] residual = problem.residual(x);
+        columns = creditLampLevel(columns, x, grid, rows, minReportDb);
 
         double[] effect = new double[columns.size()];
         double totalEffect = 0;
         for (int j = 0; j < columns.size(); j++) {
-            for (double v : columns.get(j).values) {
+            for (double v : columns.get(j).ranked) {
                 effect[j] += Math.abs(x[j] * v);
             }
             totalEffect += effect[j];
@@ -128,7 +129,7 @@ public final class DeviationDiagnoser {
         for (int j = 0; j < columns.size(); j++) {
             Column c = columns.get(j);
             double peak = 0;
-            for (double v : c.values) {
+            for (double v : c.ranked) {
                 peak = Math.max(peak, Math.abs(x[j] * v));
             }
             if (peak < minReportDb || (c.signature == Signature.FLAT_EXCESS && x[j] < 0)) {
@@ -143,11 +144,13 @@ public final class DeviationDiagnoser {
         findings.sort(Comparator.comparingDouble((Finding f) -> peaks.get(f)).reversed());
 
         double rms = rms(residual);
-        Optional<FringeReport> fringes = Optional.empty();
-        if (fit.reducedChiSquare() > 2) {
-            fringes = FringeSearch.search(grid, rows, residual, median(s));
-            fringes.ifPresent(f -> findings.add(fringeFinding(f, evidence)));
+        // searched whatever the fit's χ²: a 0.1 dB ripple hardly raises it
+        double[] unexplained = new double[residual.length];
+        for (int r = 0; r < residual.length; r++) {
+            unexplained[r] = -residual[r];
         }
+        Optional<FringeReport> fringes = FringeSearch.search(grid, rows, unexplained, s);
+        fringes.ifPresent(f -> findings.add(fringeFinding(f, evidence)));
         List<FittedSignature> fitted = new ArrayList<>();
         for (int j = 0; j < columns.size(); j++) {
             if (x[j] != 0) {
@@ -158,7 +161,14 @@ public final class DeviationDiagnoser {
                 fitted.add(new FittedSignature(columns.get(j).signature, curve));
             }
         }
-        List<String> collinear = collinearNotes(problem, columns, findings);
+        fringes.ifPresent(f -> {
+            double[] ripple = new double[grid.size()];
+            for (int i = 0; i < ripple.length; i++) {
+                ripple[i] = f.rippleDb(grid.wavelengthNm(i));
+            }
+            fitted.add(new FittedSignature(Signature.FRINGES, ripple));
+        });
+        List<String> collinear = collinearNotes(problem, columns, findings, a, b, s, x);
         String summary = findings.isEmpty()
                 ? String.format(Locale.ROOT, "no fault signature reaches %.1f dB: the path behaves as predicted"
                         + " (residual %.2f dB RMS)", minReportDb, rms)
@@ -177,8 +187,15 @@ public final class DeviationDiagnoser {
         return new Diagnosis(List.of(f), Double.NaN, List.of(), Optional.empty(), List.of(), text);
     }
 
-    /** A signature's shape over the measured rows ({@code values}) and over the whole grid. */
-    private record Column(Signature signature, double[] values, double[] onGrid, double atNm) {
+    /**
+     * A signature's shape over the measured rows ({@code values}) and over the whole grid, and the
+     * shape its effect is ranked by ({@code ranked}: for the lamp, its tilt without the level).
+     */
+    private record Column(Signature signature, double[] values, double[] onGrid, double atNm, double[] ranked) {
+
+        Column(Signature signature, double[] values, double[] onGrid, double atNm) {
+            this(signature, values, onGrid, atNm, values);
+        }
     }
 
     /** Signature columns, each 1 dB at its reference wavelength. */
@@ -215,6 +232,48 @@ public final class DeviationDiagnoser {
                 AttenuationShapes.HYDROGEN_BAND_1240_NM));
         addIfObservable(out, new Column(Signature.DARKENING, rowsOf(dark, rows), dark, first));
         out.add(new Column(Signature.REFERENCE_DRIFT, rowsOf(drift, rows), drift, last));
+        return out;
+    }
+
+    /**
+     * A colour-temperature change moves the whole lamp spectrum, not only its tilt: Planck's law ties
+     * a level to each fitted tilt. The fit uses the centred drift shape (so that flat and drift stay
+     * apart in the collinearity report); afterwards the lamp is credited with its own level, and only
+     * what is left is a flat excess. Without this a cooler lamp reads as a connector or bend fault.
+     * Only a tilt large enough to be reported is credited: a small tilt may be model misfit, and its
+     * level (1.2–1.6 times the tilt) would turn scatter into a flat finding.
+     */
+    private static List<Column> creditLampLevel(List<Column> columns, double[] x, WavelengthGrid grid, int[] rows,
+                                                double minReportDb) {
+        int flat = -1;
+        int drift = -1;
+        for (int j = 0; j < columns.size(); j++) {
+            flat = columns.get(j).signature == Signature.FLAT_EXCESS ? j : flat;
+            drift = columns.get(j).signature == Signature.REFERENCE_DRIFT ? j : drift;
+        }
+        if (flat < 0 || drift < 0) {
+            return columns;
+        }
+        double tiltPeak = 0;
+        for (double v : columns.get(drift).values) {
+            tiltPeak = Math.max(tiltPeak, Math.abs(x[drift] * v));
+        }
+        if (tiltPeak < minReportDb) {
+            return columns;
+        }
+        double mid = 0.5 * (grid.firstNm() + grid.lastNm());
+        // the uncentred shape is −p(λ)/S; the fitted centred one is −p(λ)/S + p(mid)/S
+        double levelPerTilt = AttenuationShapes.planckBrighteningDbPerK(mid, LAMP_COLOUR_TEMPERATURE_K)
+                / lampDriftDbPerK(grid.firstNm(), grid.lastNm());
+        x[flat] += x[drift] * levelPerTilt;
+        Column c = columns.get(drift);
+        double[] onGrid = c.onGrid.clone();
+        for (int i = 0; i < onGrid.length; i++) {
+            onGrid[i] -= levelPerTilt;
+        }
+        List<Column> out = new ArrayList<>(columns);
+        // ranked by its tilt alone: the level it carries is shared with the flat term
+        out.set(drift, new Column(c.signature, rowsOf(onGrid, rows), onGrid, c.atNm, c.values));
         return out;
     }
 
@@ -313,28 +372,56 @@ public final class DeviationDiagnoser {
     }
 
     private static Finding fringeFinding(FringeReport f, PathEvidence evidence) {
-        String joint = evidence.joints().stream().filter(PathEvidence.JointEvidence::airGap)
-                .map(PathEvidence.JointEvidence::label).findFirst().orElse("");
+        List<PathEvidence.JointEvidence> suspects = fringeSuspects(evidence);
+        String joint = suspects.isEmpty() ? "" : suspects.get(0).label();
+        String where = suspects.isEmpty()
+                ? "; no joint on record has an air gap: look for a cracked fiber end or a loose probe window"
+                : "; re-mate the air-gap joints starting with " + suspects.stream()
+                        .map(PathEvidence.JointEvidence::label).collect(Collectors.joining(", "));
         String text = String.format(Locale.ROOT,
-                "fringes of ±%.2f dB every %.0f cm⁻¹ left after the fit: an air gap or crack of ≈%.0f µm acting as"
-                        + " an etalon; re-mate the air-gap joints%s", f.amplitudeDb(), f.periodCm(), f.gapUm(),
-                joint.isEmpty() ? "" : " starting with " + joint);
+                "fringes of %.2f dB peak to peak every %.0f cm⁻¹ left after the fit: an air gap or crack of ≈%.0f µm"
+                        + " acting as an etalon (a ripple this size can upset a chemometric model)%s",
+                f.peakToPeakDb(), f.periodCm(), f.gapUm(), where);
         return new Finding(Signature.FRINGES, List.of(Cause.AIR_GAP), f.amplitudeDb(), Double.NaN,
                 0, joint, text);
     }
 
+    /**
+     * The joints that can hold an air gap, most likely first: graded dirty or damaged, then never
+     * inspected, then the rest (a gap opens where a connector was disturbed; design choice).
+     */
+    static List<PathEvidence.JointEvidence> fringeSuspects(PathEvidence evidence) {
+        return evidence.joints().stream().filter(PathEvidence.JointEvidence::airGap)
+                .sorted(Comparator.comparingInt(j -> j.grade().needsAction() ? 0
+                        : j.grade() == org.strandbook.site.InspectionGrade.NOT_INSPECTED ? 1 : 2))
+                .toList();
+    }
+
+    /**
+     * Pairs of look-alike shapes over the whole basis, and each finding whose term the other terms
+     * the fit actually used (non-zero coefficients) largely reproduce: a term held at zero by the
+     * non-negativity bound took no part in the estimate and cannot have made it uncertain.
+     */
     private static List<String> collinearNotes(LeastSquaresProblem problem, List<Column> columns,
-                                               List<Finding> findings) {
+                                               List<Finding> findings, double[][] a, double[] b, double[] sigma,
+                                               double[] x) {
         List<String> notes = new ArrayList<>();
         CollinearityReport report = CollinearityReport.of(problem);
+        int[] active = java.util.stream.IntStream.range(0, columns.size()).filter(j -> x[j] != 0).toArray();
+        double[][] activeColumns = new double[active.length][];
+        for (int c = 0; c < active.length; c++) {
+            activeColumns[c] = a[active[c]];
+        }
+        CollinearityReport used = active.length == 0 ? report
+                : CollinearityReport.of(LeastSquaresProblem.ofColumns(activeColumns, b).withRowSigmas(sigma));
         for (Finding f : findings) {
-            for (int j = 0; j < columns.size(); j++) {
-                double vif = report.varianceInflation(j);
-                if (columns.get(j).signature == f.signature() && vif > INFLATION_LIMIT) {
+            for (int c = 0; c < active.length; c++) {
+                double vif = used.varianceInflation(c);
+                if (columns.get(active[c]).signature == f.signature() && vif > INFLATION_LIMIT) {
                     notes.add(String.format(Locale.ROOT, "the %s finding rests on a shape largely in the span of"
-                                    + " the other terms over the measured range (variance inflation %.0f, condition"
-                                    + " number %.0f): its amount is uncertain; confirm it with the records or a"
-                                    + " fresh reference scan", words(f.signature()), vif, report.conditionNumber()));
+                                    + " the other fitted terms over the measured range (variance inflation %.0f,"
+                                    + " condition number %.0f): its amount is uncertain; confirm it with the records"
+                                    + " or a fresh reference scan", words(f.signature()), vif, used.conditionNumber()));
                 }
             }
         }
