@@ -132,7 +132,12 @@ public final class DeviationDiagnoser {
             for (double v : c.ranked) {
                 peak = Math.max(peak, Math.abs(x[j] * v));
             }
-            if (peak < minReportDb || (c.signature == Signature.FLAT_EXCESS && x[j] < 0)) {
+            // reported by its whole effect (a credited lamp drift with its level), ranked by its own shape
+            double whole = 0;
+            for (double v : c.values) {
+                whole = Math.max(whole, Math.abs(x[j] * v));
+            }
+            if (whole < minReportDb || (c.signature == Signature.FLAT_EXCESS && x[j] < 0)) {
                 continue;
             }
             double share = totalEffect > 0 ? 100 * effect[j] / totalEffect : 0;
@@ -240,8 +245,9 @@ public final class DeviationDiagnoser {
      * a level to each fitted tilt. The fit uses the centred drift shape (so that flat and drift stay
      * apart in the collinearity report); afterwards the lamp is credited with its own level, and only
      * what is left is a flat excess. Without this a cooler lamp reads as a connector or bend fault.
-     * Only a tilt large enough to be reported is credited: a small tilt may be model misfit, and its
-     * level (1.2–1.6 times the tilt) would turn scatter into a flat finding.
+     * A small tilt may be model misfit, and its level (1.2–1.6 times the tilt) would turn scatter
+     * into a flat finding, so a tilt under the reporting size is credited only where that brings the
+     * flat term nearer zero.
      */
     private static List<Column> creditLampLevel(List<Column> columns, double[] x, WavelengthGrid grid, int[] rows,
                                                 double minReportDb) {
@@ -258,14 +264,19 @@ public final class DeviationDiagnoser {
         for (double v : columns.get(drift).values) {
             tiltPeak = Math.max(tiltPeak, Math.abs(x[drift] * v));
         }
-        if (tiltPeak < minReportDb) {
-            return columns;
-        }
         double mid = 0.5 * (grid.firstNm() + grid.lastNm());
         // the uncentred shape is −p(λ)/S; the fitted centred one is −p(λ)/S + p(mid)/S
         double levelPerTilt = AttenuationShapes.planckBrighteningDbPerK(mid, LAMP_COLOUR_TEMPERATURE_K)
                 / lampDriftDbPerK(grid.firstNm(), grid.lastNm());
-        x[flat] += x[drift] * levelPerTilt;
+        double creditedFlat = x[flat] + x[drift] * levelPerTilt;
+        // credited when the tilt is reportable, or half that and the lamp then explains the level
+        // better than a flat excess does (the simpler reading; design choice)
+        boolean credit = tiltPeak >= minReportDb
+                || (tiltPeak >= 0.5 * minReportDb && Math.abs(creditedFlat) < Math.abs(x[flat]));
+        if (!credit) {
+            return columns;
+        }
+        x[flat] = creditedFlat;
         Column c = columns.get(drift);
         double[] onGrid = c.onGrid.clone();
         for (int i = 0; i < onGrid.length; i++) {

@@ -80,6 +80,8 @@ class IndependentRecoveryTest {
     private static final Map<Case, Integer> RIGHT = new EnumMap<>(Case.class);
     private static final Map<Case, List<String>> MISSES = new EnumMap<>(Case.class);
     private static final Map<Case, Integer> IN_SPAN_NOTES = new EnumMap<>(Case.class);
+    private static final Map<Case, Integer> EXTRA_FINDINGS = new EnumMap<>(Case.class);
+    private static final Map<Case, java.util.Set<Cause>> EXTRA_CAUSES = new EnumMap<>(Case.class);
 
     @BeforeAll
     static void runEverySeed() {
@@ -107,6 +109,14 @@ class IndependentRecoveryTest {
                 if (e.diagnosis().map(d -> d.collinearNotes().stream().anyMatch(n -> n.contains("span"))).orElse(false)) {
                     IN_SPAN_NOTES.merge(c, 1, Integer::sum);
                 }
+                if (e.diagnosis().map(d -> d.findings().stream()
+                        .anyMatch(f -> f.cause() != c.expected && f.cause() != s.second)).orElse(false)) {
+                    EXTRA_FINDINGS.merge(c, 1, Integer::sum);
+                    e.diagnosis().orElseThrow().findings().stream()
+                            .filter(f -> f.cause() != c.expected && f.cause() != s.second)
+                            .forEach(f -> EXTRA_CAUSES.computeIfAbsent(c, k -> java.util.EnumSet.noneOf(Cause.class))
+                                    .add(f.cause()));
+                }
                 String miss = judge(c, e, s);
                 if (miss == null) {
                     right++;
@@ -116,9 +126,13 @@ class IndependentRecoveryTest {
                 }
             }
             RIGHT.put(c, right);
-            System.out.printf("recovery %-24s %2d/%d right, %2d with a finding resting on a term in the others' span%s%n",
-                    c, right, SEEDS, IN_SPAN_NOTES.getOrDefault(c, 0),
+            System.out.printf("recovery %-24s %2d/%d right first cause, %2d with a further finding, %2d with a finding"
+                            + " resting on a term in the others' span%s%n",
+                    c, right, SEEDS, EXTRA_FINDINGS.getOrDefault(c, 0), IN_SPAN_NOTES.getOrDefault(c, 0),
                     c.needsFieldScans ? " (needs integration-time and clipping handling)" : "");
+            if (EXTRA_CAUSES.containsKey(c)) {
+                System.out.println("recovery   further findings: " + EXTRA_CAUSES.get(c));
+            }
             MISSES.getOrDefault(c, List.of()).stream().limit(3).forEach(m -> System.out.println("recovery   miss " + m));
         }
     }
@@ -230,7 +244,7 @@ class IndependentRecoveryTest {
                 truth = String.format("air gap %.1f µm, ripple ≈%.2f dB peak to peak", gapUm, peakToPeakDb);
             }
             case LAMP_DRIFT -> {
-                lampDeltaK = (rnd.nextBoolean() ? 1 : -1) * (150 + 150 * rnd.nextDouble());
+                lampDeltaK = (rnd.nextBoolean() ? 1 : -1) * (50 + 250 * rnd.nextDouble());
                 truth = String.format("lamp %+.0f K between reference and loop", lampDeltaK);
             }
             case LONG_INTEGRATION -> {
