@@ -8,6 +8,7 @@ import java.util.stream.Collectors;
 
 import org.strandbook.diagnosis.Finding;
 import org.strandbook.diagnosis.FringeReport;
+import org.strandbook.diagnosis.Signature;
 import org.strandbook.evaluation.BandTrend;
 import org.strandbook.evaluation.BandVerdict;
 import org.strandbook.evaluation.PointEvaluation;
@@ -72,8 +73,12 @@ final class EvaluationText {
         bands.print(out);
         e.diagnosis().ifPresent(d -> {
             for (Finding f : d.findings()) {
-                out.printf(Locale.ROOT, "  finding (%.0f %% of the explained deviation): %s%n", f.sharePercent(),
-                        f.text());
+                if (f.signature() == Signature.FRINGES) {
+                    out.println("  finding (ripple left after the fit): " + f.text());
+                } else {
+                    out.printf(Locale.ROOT, "  finding (%.0f %% of the explained deviation): %s%n", f.sharePercent(),
+                            f.text());
+                }
             }
             if (Double.isFinite(d.residualRmsDb())) {
                 out.printf(Locale.ROOT, "  residual after the fit: %.2f dB RMS%n", d.residualRmsDb());
