@@ -27,10 +27,9 @@ import org.strandbook.site.PathLeg;
  * What is not: the analyzer's own launch and detector faces and the reference patch cord, which
  * the one-cord reference scan divides out.
  *
- * <p>Bends: of the bends recorded on a segment only the tightest is charged, once. Gloge's formula
- * gives the share of modes a bend of that radius cannot guide; in a fully filled fiber the first
- * such bend strips them and later bends of the same or a larger radius find them gone, unless mode
- * coupling over a long run refills them. Charging every bend would multiply a worst case.
+ * <p>Bends: a segment goes to the optics engine with its tightest recorded radius and the number of
+ * bends recorded; the engine charges the tightest once ({@code GlogeBend.chargedBends}), the same
+ * rule {@code strandbook fiber} uses.
  */
 public final class PointBudgetBuilder {
 
@@ -82,7 +81,8 @@ public final class PointBudgetBuilder {
             notes.add(String.format(Locale.ROOT, "cable %s: %d bends recorded, the tightest (%.0f mm) charged once",
                     segment.label(), recorded, tightest.radiusMm()));
         }
-        return new FiberSegment(segment.label(), spec, segment.lengthM(), OptionalDouble.of(tightest.radiusMm()), 1);
+        return new FiberSegment(segment.label(), spec, segment.lengthM(), OptionalDouble.of(tightest.radiusMm()),
+                recorded);
     }
 
     /** The fiber of the nearest cable segment before (step −1) or after (+1) position {@code i}. */

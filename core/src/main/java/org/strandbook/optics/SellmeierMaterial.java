@@ -20,7 +20,9 @@ public final class SellmeierMaterial implements OpticalMaterial {
 
     /**
      * Synthetic sapphire, ordinary ray (what a c-cut window presents along its axis), 20 °C.
-     * Source: I. H. Malitson and M. J. Dodge, J. Opt. Soc. Am. 62, 1405 (1972); valid 0.2–5.0 µm.
+     * Source: the 20 °C fit printed in M. J. Dodge, "Refractive index", Handbook of Laser Science and
+     * Technology vol. IV (CRC, 1986) (announced as I. H. Malitson and M. J. Dodge, J. Opt. Soc. Am.
+     * 62, 1405 (1972), a meeting abstract); valid 0.2–5.0 µm.
      */
     public static final SellmeierMaterial SAPPHIRE_ORDINARY = new SellmeierMaterial("sapphire (ordinary ray)",
             new double[] {1.4313493, 0.65054713, 5.3414021},

@@ -61,8 +61,8 @@ class DeviationDiagnoserTest {
 
     @Test
     void ohExcessIsMeasuredInPpmKilometres() {
-        // Beer–Lambert in dB: the OH loss is (dB/km/ppm) × ppm × km, with band strengths after
-        // Humbach et al., J. Non-Cryst. Solids 203, 19 (1996) as carried by AttenuationShapes
+        // Beer–Lambert in dB: the OH loss is (dB/km/ppm) × ppm × km, with the band strengths
+        // AttenuationShapes carries (each names its source there)
         double ppmKm = 1.2;
         double[] dev = new double[GRID.size()];
         for (int i = 0; i < dev.length; i++) {

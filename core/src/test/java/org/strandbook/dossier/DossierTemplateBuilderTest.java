@@ -79,7 +79,7 @@ class DossierTemplateBuilderTest {
 
     @Test
     void noHeaderWordIsBrokenAcrossLines() {
-        // common practice: a header wraps between words, never inside one; bold letters need a little room
+        // design choice: a header wraps between words, never inside one; bold letters need a little room
         for (DossierColumn c : DossierColumn.values()) {
             for (String word : c.header().split("[ /,-]")) {
                 assertTrue(word.length() + 2 <= c.widthChars(), () -> c + ": '" + word + "' in " + c.widthChars());

@@ -14,7 +14,7 @@ import org.strandbook.site.WavelengthBand;
  * The acceptance rules. The criterion "measured installed loss within the calculated budget" is
  * the acceptance test of installed-loss measurement (from memory: IEC 61280-4-1 and TIA-526-14
  * describe the measurement; cabling standards set the budget); the tolerances and factors are
- * common practice.
+ * design choices.
  */
 class AcceptanceTest {
 

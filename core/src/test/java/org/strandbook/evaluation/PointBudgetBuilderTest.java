@@ -45,7 +45,10 @@ class PointBudgetBuilderTest {
         return new Joint(label, "C", "C", InspectionGrade.CLEAN, loss, LossBasis.MEASURED);
     }
 
-    /** Sapphire ordinary index, Malitson &amp; Dodge, J. Opt. Soc. Am. 62, 1405 (1972), λ in µm. */
+    /**
+     * Sapphire ordinary index, λ in µm: the 20 °C Sellmeier fit printed in M. J. Dodge, "Refractive
+     * index", Handbook of Laser Science and Technology vol. IV (CRC, 1986).
+     */
     private static double sapphireIndex(double um) {
         double l2 = um * um;
         double n2 = 1 + 1.4313493 * l2 / (l2 - 0.0726631 * 0.0726631)
@@ -64,8 +67,9 @@ class PointBudgetBuilderTest {
         PredictedBudget b = new PointBudgetBuilder(CATALOG).build(POINT, send, ret, new OpticsCache(GRID));
         int i = GRID.nearestIndex(1550);
         double alphaDbPerKm = SilicaAttenuation.of(SilicaFiberGrade.LOW_OH, 0.5).attenuationDbPerKm(1550);
-        // Fresnel at normal incidence, R = ((n−1)/(n+1))²; a window's two faces with incoherent
-        // multiple reflections transmit (1−R)/(1+R) (Born & Wolf, Principles of Optics, §1.5)
+        // Fresnel at normal incidence, R = ((n−1)/(n+1))² (Born & Wolf, Principles of Optics, §1.5);
+        // a window's two faces with incoherent multiple reflections transmit
+        // (1−R)²·Σ R^2k = (1−R)²/(1−R²) = (1−R)/(1+R) (geometric series, derived here)
         double n = sapphireIndex(1.55);
         double r = Math.pow((n - 1) / (n + 1), 2);
         double windowDb = -10 * Math.log10((1 - r) / (1 + r));

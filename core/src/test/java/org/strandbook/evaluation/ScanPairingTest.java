@@ -19,7 +19,7 @@ import org.strandbook.site.ScanRecord;
 /**
  * The pairing rule of the one-cord reference method: a loop is divided by the reference taken at
  * the same visit, each with its own dark (IEC 61280-4-1 family of methods, from memory: re-reference
- * whenever cords change). The 12 h visit window is common practice.
+ * whenever cords change). The 12 h visit window is a design choice.
  */
 class ScanPairingTest {
 
@@ -106,7 +106,7 @@ class ScanPairingTest {
 
     @Test
     void earlierOfTwoEquallyNearReferencesIsTaken() {
-        // common practice, and the rule printed with every result: an earlier reference wins a tie
+        // design choice, and the rule printed with every result: an earlier reference wins a tie
         ScanRecord dark = scan("P1", ScanKind.DARK, "2025-04-01T08:00:00Z", 50);
         ScanRecord before = scan("P1", ScanKind.REFERENCE, "2025-04-01T08:05:00Z", 50);
         ScanRecord loop = scan("P1", ScanKind.LOOP, "2025-04-01T08:10:00Z", 50);

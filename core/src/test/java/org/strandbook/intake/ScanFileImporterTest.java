@@ -76,7 +76,7 @@ class ScanFileImporterTest {
 
     @Test
     void filesAreStoredInTheOrderGivenWithBadAndRepeatedOnesReportedInPlace() throws IOException {
-        // common practice for batch imports: all or nothing per file, the batch goes on, the same file twice is refused
+        // design choice for batch imports: all or nothing per file, the batch goes on, the same file twice is refused
         Path broken = dir.resolve("broken.jdx");
         Files.writeString(broken, "##TITLE= cut short\n##JCAMP-DX= 4.24\n");
         List<Path> batch = new ArrayList<>(files);
@@ -99,7 +99,7 @@ class ScanFileImporterTest {
 
     @Test
     void aStopAfterTheSeventhFileLeavesExactlyTheFirstSeven() {
-        // common practice for a cancelled batch: files read ahead but not reached are not stored
+        // design choice for a cancelled batch: files read ahead but not reached are not stored
         try (Workbook wb = workbook()) {
             ScanFileImporter.Summary s = importInto(wb, files, (done, total, file) -> done < 7);
 
@@ -112,7 +112,7 @@ class ScanFileImporterTest {
 
     @Test
     void aStopAtTheLastFileIsNotAnEarlyStop() {
-        // common practice: a stop after the last file is no early stop
+        // design choice: a stop after the last file is no early stop
         try (Workbook wb = workbook()) {
             ScanFileImporter.Summary s = importInto(wb, files, (done, total, file) -> done < total);
 

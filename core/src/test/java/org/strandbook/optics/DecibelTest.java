@@ -25,7 +25,7 @@ class DecibelTest {
 
     @Test
     void threeDecibelsLeaveAboutHalfTheLight() {
-        // 3 dB ≈ 50 % (common practice)
+        // 3 dB ≈ 50 %: 10^(−0.3) = 0.501 (definition of the decibel)
         assertEquals(0.50, Decibel.transmittanceFromLossDb(3.0), 0.005);
     }
 

@@ -34,6 +34,21 @@ class FresnelTest {
     }
 
     @Test
+    void anIncoherentFacePairTransmitsTheSumOfItsMultipleReflections() {
+        // derived here: light crossing two parallel faces leaves after 0, 2, 4, … internal reflections,
+        // T = (1−R)²·(1 + R² + R⁴ + …); summed term by term, not by the closed form (1−R)/(1+R)
+        double n = SellmeierMaterial.SAPPHIRE_ORDINARY.refractiveIndex(1300);
+        double r = Fresnel.reflectance(n, 1.0);
+        double transmitted = 0;
+        double bounce = (1 - r) * (1 - r);
+        for (int k = 0; k < 60; k++) {
+            transmitted += bounce;
+            bounce *= r * r;
+        }
+        assertEquals(-10 * Math.log10(transmitted), Fresnel.gapLossDb(n, 1.0), 1e-12);
+    }
+
+    @Test
     void indexMatchingGelRemovesNearlyAllGapLoss() {
         // Fresnel: n1 = 1.450, n0 = 1.46 gives R ≈ 1.2e-5, far below an air gap's 0.29 dB
         double n = SellmeierMaterial.FUSED_SILICA.refractiveIndex(1000);

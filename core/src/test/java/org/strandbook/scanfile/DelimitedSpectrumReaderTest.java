@@ -76,8 +76,8 @@ class DelimitedSpectrumReaderTest {
 
     @ParameterizedTest
     @CsvSource(textBlock = """
-            # thresholds of this reader (class Javadoc), set around the silica fiber window of about
-            # 0.2-2.5 um [common practice]: first, last abscissa -> unit
+            # thresholds of this reader (class Javadoc) [design choice], set around the silica fiber
+            # window of about 0.2-2.5 um [common practice]: first, last abscissa -> unit
             0.9,    2.5,    UM
             190,    1100,   NM
             900,    2600,   NM

@@ -107,7 +107,7 @@ class JcampDxWriterTest {
 
     @Test
     void writeReplacesTheFileWholeAndLeavesNoTemporaryFile(@TempDir Path dir) throws Exception {
-        // write to a temporary file, then rename over the target [common practice]
+        // write to a temporary file, then rename over the target [design choice]
         Path target = dir.resolve("loop_A3.jdx");
         Files.writeString(target, "old content");
         SpectrumFile s = SpectrumFile.inMemory("loop A3", XUnit.NM, "COUNTS",

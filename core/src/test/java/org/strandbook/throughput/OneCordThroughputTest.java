@@ -128,7 +128,7 @@ class OneCordThroughputTest {
     }
 
     // The loop's dark-corrected noise is √(σ_scan² + σ_dark²) = √2·2 counts here; a net signal of
-    // 2.9 of those widths is masked at k = 3, one of 3.1 widths is kept.
+    // 2.9 of those widths is masked at k = 3 (design choice), one of 3.1 widths is kept.
     @Test
     void maskingThresholdIsKNoiseWidthsOfTheNetSignal() {
         double[] nm = axis(1000, 1, 1010);

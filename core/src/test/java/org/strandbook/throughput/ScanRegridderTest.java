@@ -46,7 +46,7 @@ class ScanRegridderTest {
 
     @Test
     void scansOnOneAxisShareOneAxis() {
-        // common practice: one analyzer writes every scan on the same axis, so its interpolation is worked out once
+        // design choice: one analyzer writes every scan on the same axis, so its interpolation is worked out once
         ScanRegridder regridder = new ScanRegridder(WavelengthGrid.uniformNm(1000, 2000, 11));
 
         WavelengthGrid first = regridder.axisNm(axis(1000, 0.5, 2000));
@@ -57,7 +57,7 @@ class ScanRegridderTest {
 
     @Test
     void aScanOnAKnownAxisGetsThatAxis() {
-        // common practice, as above: a stored spectrum on a seen axis reuses that axis's interpolation
+        // design choice, as above: a stored spectrum on a seen axis reuses that axis's interpolation
         ScanRegridder regridder = new ScanRegridder(WavelengthGrid.uniformNm(1000, 2000, 11));
         double[] nm = axis(1000, 0.5, 2000);
         WavelengthGrid known = regridder.axisNm(nm);

@@ -59,6 +59,7 @@ class MarginForecastTest {
         assertEquals(MarginForecast.Status.NOT_SHRINKING, o.status());
         assertTrue(o.expectedDate().isEmpty());
         assertTrue(o.latestDate().isEmpty());
+        // the default 30-year horizon is a design choice
         assertTrue(o.earliestDate().isEmpty(), "3 dB at 0.08 dB/year is 37.5 years, beyond 30");
     }
 

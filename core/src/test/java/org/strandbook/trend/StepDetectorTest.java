@@ -86,6 +86,7 @@ class StepDetectorTest {
         assertEquals(1, report.events().size());
     }
 
+    // the 4-noise-width step threshold is a design choice
     @Test
     void givenNoiseWidthDecides() {
         List<LossReading> readings = withOffset(quarterlyScans(12, 0.0, 5), 6, 12, 0.3);

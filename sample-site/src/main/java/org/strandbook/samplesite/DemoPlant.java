@@ -73,9 +73,9 @@ public final class DemoPlant {
             new ProbeType("PT-TX5", "Transmission probe, 5 mm gap, sapphire windows", ProbeKind.TRANSMISSION,
                     "SAPPHIRE", 4, 5.0, 3.0),
             new ProbeType("PT-TF2", "Transflectance probe, 2 mm path, sapphire window and mirror",
-                    ProbeKind.TRANSFLECTANCE, "SAPPHIRE", 2, 4.0, 4.5),
+                    ProbeKind.TRANSFLECTANCE, "SAPPHIRE", 4, 4.0, 4.5),
             new ProbeType("PT-DR", "Diffuse reflectance probe, sapphire window", ProbeKind.DIFFUSE_REFLECTANCE,
-                    "SAPPHIRE", 2, 0.0, 9.0));
+                    "SAPPHIRE", 4, 0.0, 9.0));
 
     private final List<DemoPoint> points = new ArrayList<>();
 

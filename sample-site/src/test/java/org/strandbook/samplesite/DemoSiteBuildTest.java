@@ -20,7 +20,7 @@ class DemoSiteBuildTest {
 
     @Test
     void aStoppedBuildLeavesNoWorkbookForTheNextOpenToFind() throws IOException {
-        // common practice: a file appears under its own name only when whole, so an interrupted
+        // design choice: a file appears under its own name only when whole, so an interrupted
         // build is redone rather than opened half-filled
         DemoSite.Progress stopOnceImportStarts = new DemoSite.Progress() {
             private boolean importing;

@@ -1,7 +1,7 @@
 package org.strandbook.templates;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.BufferedReader;
@@ -110,7 +110,7 @@ class TemplatesTest {
             assertEquals(expectedHeader.size(), row.length, () -> resource + ": " + String.join(",", row));
             String basis = row[row.length - 1];
             assertTrue(basis.equals("common practice") || basis.startsWith("from memory"), basis);
-            assertNotNull(row[0]);
+            assertFalse(row[0].isBlank(), () -> resource + ": a row without a type code");
         }
     }
 

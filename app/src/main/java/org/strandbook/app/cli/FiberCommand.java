@@ -44,8 +44,13 @@ import picocli.CommandLine.Spec;
             "Loss of one pass through a silica-core multimode step-index fiber:",
             "entry face + fiber attenuation + exit face + bends.",
             "Faces: Fresnel reflection of a fused-silica core (Malitson 1965) in air.",
-            "Attenuation: Strandbook's silica model (Rayleigh, IR edge, UV tail, OH bands), valid 210-3000 nm.",
-            "Bends: Gloge (1972) for a fully filled fiber, a worst case, once per bend.",
+            "Attenuation: Strandbook's silica model (Rayleigh, IR edge, UV tail, OH bands),",
+            "valid 210-3000 nm.",
+            "Bends: Gloge (1972) for a fully filled fiber, a worst case, charged ONCE",
+            "however many: the first bend strips the modes its radius cannot guide and",
+            "later bends at that radius find them gone; mode coupling that would refill",
+            "them is weak over plant lengths (Gloge, Bell Syst. Tech. J. 51, 1767, 1972).",
+            "The workbook charges a cable segment's bends the same way.",
             "Usable windows are searched on a 1 nm grid over 400-2500 nm.",
         },
         footer = {"", "Exit status: 0 ok, 2 wrong usage or out-of-range input."})
@@ -81,7 +86,8 @@ public final class FiberCommand implements Callable<Integer> {
     Double bendRadiusMm;
 
     @Option(names = "--bend-count", defaultValue = "1", paramLabel = "N",
-            description = "Number of bends of at least 90° at that radius (default: ${DEFAULT-VALUE}).")
+            description = "Number of bends at that radius (default: ${DEFAULT-VALUE}); the first strips the modes "
+                    + "the radius cannot guide, so their loss is charged once.")
     int bendCount;
 
     @ArgGroup(exclusive = true, multiplicity = "1")
@@ -149,7 +155,7 @@ public final class FiberCommand implements Callable<Integer> {
         boolean clamped = false;
         if (bendRadiusMm != null && bendCount > 0) {
             BendLoss b = GlogeBend.lossPerBend(coreUm, na, coreIndex, bendRadiusMm, wavelengthNm);
-            bendDb = bendCount * b.lossDb();
+            bendDb = GlogeBend.chargedBends(bendCount) * b.lossDb();
             clamped = b.clamped();
         }
         double total = faceDb + fiberDb + faceDb + bendDb;
@@ -248,9 +254,10 @@ public final class FiberCommand implements Callable<Integer> {
                 plain(coreUm), plain(claddingUm), plain(na), ((SilicaAttenuation) fiber.attenuation()).grade().label() + " grade " + plain(ohPpm) + " ppm OH",
                 plain(lengthM),
                 bendRadiusMm == null ? ", no bends entered"
-                        : String.format(Locale.ROOT, ", %d bend%s at %s mm", bendCount, bendCount == 1 ? "" : "s",
-                                plain(bendRadiusMm))));
-        out.println("One pass: entry face + fiber + exit face + bends; faces in air; bends worst case (fully filled).");
+                        : String.format(Locale.ROOT, ", %d bend%s at %s mm%s", bendCount, bendCount == 1 ? "" : "s",
+                                plain(bendRadiusMm), bendCount > 1 ? " (charged once)" : "")));
+        out.println("One pass: entry face + fiber + exit face + bends; faces in air; bends worst case (fully filled),"
+                + " the tightest charged once.");
         out.println();
         TextTable table = new TextTable(
                 new String[] {"wavelength", "wavenumber", "attenuation", "fiber", "Fresnel/face", "bends", "total",

@@ -67,6 +67,22 @@ class FiberCommandTest {
     }
 
     @Test
+    void wetFiberShowsNoUsableWindowPastTwoPointTwoMicronsAtOneMetre() {
+        // high-OH silica is unusable from 2.2 µm up to the 2.72 µm fundamental (common practice)
+        CliRun run = CliRun.of("fiber", "--core-um", "200", "--clad-um", "220", "--na", "0.22", "--oh-ppm", "800",
+                "--length-m", "1", "--wavelengths-nm", "2300,2400");
+        assertEquals(0, run.exitCode(), run.err());
+        String line = run.out().lines().filter(l -> l.startsWith("Usable windows")).findFirst().orElseThrow();
+        Matcher m = Pattern.compile("(\\d+)–(\\d+) nm").matcher(line.substring(line.indexOf("):")));
+        int windows = 0;
+        while (m.find()) {
+            windows++;
+            assertTrue(Integer.parseInt(m.group(2)) < 2200, line);
+        }
+        assertTrue(windows > 0, "the visible and short NIR stay usable at 1 m: " + line);
+    }
+
+    @Test
     void wavenumbersGiveTheSameResultAsTheirWavelengths() {
         // 10000 cm-1 = 1000 nm (ISO 80000-7)
         CliRun nm = CliRun.of("fiber", "--core-um", "200", "--clad-um", "220", "--na", "0.22", "--length-m", "30",

@@ -9,10 +9,11 @@ import org.strandbook.optics.Wavenumber;
  * The individual spectral shapes that make up silica fiber attenuation, as public pure functions so
  * that fault diagnosis can fit them to a measured excess-loss spectrum.
  *
- * <p>Band shapes: OH and H₂ bands are Gaussians in wavenumber (vibrational overtones and
- * combinations are nearly symmetric on an energy axis); radiation-induced colour-centre bands are
- * Gaussians in photon energy. Gaussian wings fall faster than real band wings, which keeps
- * neighbouring bands from leaking into each other's windows; widths are modelling choices.
+ * <p>Band shapes: OH bands are Gaussians in wavenumber with a fading Lorentzian wing
+ * ({@link OhBand}: the OH bands of wet silica reach far beyond their cores); H₂ bands are plain
+ * Gaussians in wavenumber (vibrational overtones and combinations are nearly symmetric on an energy
+ * axis); radiation-induced colour-centre bands are Gaussians in photon energy. Widths are modelling
+ * choices.
  */
 public final class AttenuationShapes {
 
@@ -23,19 +24,47 @@ public final class AttenuationShapes {
     public static final double HC_EV_NM = 1239.8419843320026;
 
     /**
-     * The OH bands of silica with peak dB/km per ppm OH (by weight) and widths. Peak sources:
-     * 945 nm ≈ 1 dB/km/ppm (Keck, Maurer and Schultz, Appl. Phys. Lett. 22, 307 (1973));
-     * 1383 nm 62.7 dB/km/ppm (Humbach et al., J. Non-Cryst. Solids 203, 19 (1996));
-     * 1240 nm ≈ 3 (from memory, 2.5–4 quoted); 2210 nm 150 (from memory, "order 10²");
-     * 2720 nm ≈ 10,000 (derived from ε = 77.5 L·mol⁻¹·cm⁻¹, Stevenson and Jack, Appl. Spectrosc. 25,
-     * 378). Widths (FWHM, cm⁻¹) are from memory of published spectra and serve the shape only.
+     * Peak of the 2.72 µm OH fundamental per ppm OH by weight (dB/km/ppm), derived from its decadic
+     * molar absorptivity ε = 77.5 L·mol⁻¹·cm⁻¹ (Stevenson and Jack, as quoted in "Near infrared
+     * absorption spectra of silica: OH overtones", Appl. Spectrosc. 25, 378 (1971)): 1 ppm of OH
+     * (17.007 g/mol) in silica of 2.20 g/cm³ is 1.2936×10⁻⁴ mol/L, an absorbance of ε·c = 1.0025×10⁻²
+     * per cm, that is 10·A = 10,025 dB/km.
+     */
+    public static final double OH_FUNDAMENTAL_PEAK_DB_PER_KM_PER_PPM = 10 * 77.5 * (2200e-6 / 17.007) * 1e5;
+
+    /** Share of each OH band's peak carried by its Lorentzian wing (design choice, see below). */
+    public static final double OH_WING_FRACTION = 0.10;
+    /** Wavenumber distance (cm⁻¹) over which an OH band's wing fades by 1/e (design choice). */
+    public static final double OH_WING_REACH_CM = 1000;
+
+    /**
+     * The OH bands of silica with their peak dB/km per ppm OH (by weight), each with the source of
+     * its strength:
+     * <ul>
+     * <li>945 nm, 1.0: from memory (the value usually attributed to Keck, Maurer and Schultz, Appl.
+     * Phys. Lett. 22, 307 (1973), whose abstract states only that OH accounts for the absorption
+     * between 700 and 1100 nm to within ±0.7 dB/km);</li>
+     * <li>1240 nm, 3.0: from memory (2.5–4 is what is usually quoted);</li>
+     * <li>1383 nm, 62.7: from memory of O. Humbach et al., "Analysis of OH absorption bands in
+     * synthetic silica", J. Non-Cryst. Solids 203, 19 (1996) (not re-read; older papers give
+     * 40–65);</li>
+     * <li>2210 nm, 150: from memory ("of order 10²");</li>
+     * <li>2720 nm: {@link #OH_FUNDAMENTAL_PEAK_DB_PER_KM_PER_PPM}, derived from a quoted ε.</li>
+     * </ul>
+     * Widths (FWHM, cm⁻¹) are from memory of published spectra and serve the shape only. Every band
+     * carries a Lorentzian wing of {@link #OH_WING_FRACTION} of its peak fading over
+     * {@link #OH_WING_REACH_CM}: a design choice, set so that wet fiber (several hundred ppm) is as
+     * opaque between the 2.21 µm and 2.72 µm bands as the trade knows it to be (more than 3 dB/m at
+     * 800 ppm from 2.2 to 2.5 µm), while the wings stay below 0.1 dB/km per ppm in the 1.55 µm
+     * window. The span is filled in wet silica by the OH combination bands at 3750–4510 cm⁻¹ that
+     * Efimov and Pogareva resolve (Chem. Geol. 229, 198 (2006)); the wing stands for them.
      */
     public static final List<OhBand> SILICA_OH_BANDS = List.of(
-            new OhBand(945, 1.0, 220),
-            new OhBand(1240, 3.0, 230),
-            new OhBand(1383, 62.7, 160),
-            new OhBand(2210, 150.0, 120),
-            new OhBand(2720, 10_000.0, 110));
+            ohBand(945, 1.0, 220),
+            ohBand(1240, 3.0, 230),
+            ohBand(1383, 62.7, 160),
+            ohBand(2210, 150.0, 120),
+            ohBand(2720, OH_FUNDAMENTAL_PEAK_DB_PER_KM_PER_PPM, 110));
 
     /** Centre of the first-overtone H₂ band (nm). */
     public static final double HYDROGEN_BAND_1240_NM = 1240;
@@ -63,6 +92,10 @@ public final class AttenuationShapes {
 
 
     private AttenuationShapes() {
+    }
+
+    private static OhBand ohBand(double centerNm, double peakDbPerKmPerPpm, double fwhmCm) {
+        return new OhBand(centerNm, peakDbPerKmPerPpm, fwhmCm, OH_WING_FRACTION, OH_WING_REACH_CM);
     }
 
     /** Photon energy in eV of a vacuum wavelength in nm. */
@@ -128,7 +161,10 @@ public final class AttenuationShapes {
     /**
      * Shape of the molecular-hydrogen loss: 1 at the 1240 nm peak, {@code relativePeak2420} at the
      * 2420 nm peak, Gaussians in wavenumber. Band positions from the H₂-in-fiber literature
-     * (Electron. Lett. 1983 and J. Lightwave Technol. 1985 abstracts; IEC TR 62690 summary); the
+     * (the 2.42 µm fundamental: "Increased attenuation in optical fibres caused by diffusion of
+     * molecular hydrogen at room temperature", Electron. Lett. 1983, authors K. J. Beales, D. M.
+     * Cooper and J. D. Rush, vol. 19, p. 917 from memory; the 1.24 µm overtone: "Loss increase for
+     * optical fibers exposed to hydrogen atmosphere", 1985, from its abstract); the
      * band ratio and widths are parameters, not claims.
      */
     public static double hydrogenBandShape(double wavelengthNm, double relativePeak2420) {

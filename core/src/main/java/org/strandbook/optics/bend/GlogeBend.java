@@ -21,12 +21,17 @@ import org.strandbook.optics.WavelengthGrid;
  * <p>When the bracket drives the ratio toward or below zero the formula has left its range; the
  * ratio is then clamped to {@link #MIN_GUIDED_FRACTION} (30 dB) and the result flagged.
  *
- * <p><b>Several bends.</b> The loss applies once per counted bend, each a turn of at least 90°.
- * Gloge's loss is that of the modes a bend cannot guide; they leave within the first part of the
- * bend, so a longer arc at the same radius adds little. A second bend loses as much again only if
- * the straight fiber and joints before it refill the stripped modes; without refilling it would lose
- * almost nothing. Strandbook takes the refilled case, count × per-bend loss: the worst case, as a
- * commissioning budget should not be optimistic.
+ * <p><b>Several bends: the tightest is charged once.</b> Gloge's ratio is the share of modes a bend
+ * of radius R cannot guide, for a fully filled fiber. Those modes leave within the first bend at
+ * that radius; a later bend at the same or a larger radius finds them already gone and, by the same
+ * formula, takes nothing more. They come back only through mode coupling, which in a step-index
+ * silica fiber with a smooth route is weak over the lengths of a plant loop (D. Gloge, "Optical
+ * power flow in multimode fibers", Bell Syst. Tech. J. 51, 1767 (1972), which relates the coupling
+ * to random bends of the fiber axis; page and the size of the coupling from memory). The trade uses exactly this when it strips high-order modes with a
+ * mandrel wrap: on a fully filled fiber the first turns remove them and further turns add little
+ * (FED-STD-1037C, "mandrel wrapping"). So a segment is charged the Gloge loss of its tightest bend
+ * once ({@link #chargedBends(int)}); charging every bend would multiply a worst case that is only
+ * reached once.
  */
 public final class GlogeBend {
 
@@ -34,6 +39,19 @@ public final class GlogeBend {
     public static final double MIN_GUIDED_FRACTION = 1e-3;
 
     private GlogeBend() {
+    }
+
+    /**
+     * How many bends of a run are charged the Gloge loss of its tightest radius: one when any bend
+     * is recorded, none otherwise (see the class comment for why).
+     *
+     * @param recordedBends bends recorded on one run of fiber, ≥ 0
+     */
+    public static int chargedBends(int recordedBends) {
+        if (recordedBends < 0) {
+            throw new IllegalArgumentException("bend count must not be negative, was " + recordedBends);
+        }
+        return recordedBends == 0 ? 0 : 1;
     }
 
     /**

@@ -6,7 +6,7 @@ import java.util.Objects;
  * One element's own share of a {@link LossBudget}: its label, kind and loss spectrum (dB).
  *
  * <p>Held as a linear combination of at most two cached spectra of the {@link OpticsCache}
- * (a fiber: attenuation × length + bend loss × bend count; anything else: its cached loss × 1), so a
+ * (a fiber: attenuation × length + bend loss × charged bends; anything else: its cached loss × 1), so a
  * budget of many elements allocates nothing per element; {@link #lossDb()} materialises the
  * spectrum on request with the same arithmetic the total used.
  */

@@ -3,15 +3,18 @@ package org.strandbook.optics.path;
 import java.util.Objects;
 import java.util.OptionalDouble;
 
+import org.strandbook.optics.bend.GlogeBend;
+
 /**
- * A length of fiber, optionally routed with bends. Loss = attenuation × length + bendCount × the
- * Gloge loss of one bend at {@code bendRadiusMm} (see {@code GlogeBend} for why bends add).
+ * A length of fiber, optionally routed with bends. Loss = attenuation × length + the Gloge loss of
+ * one bend at {@code bendRadiusMm}, charged once however many bends are recorded (see
+ * {@code GlogeBend} for why the first bend strips what later ones would).
  *
  * @param label name in the breakdown
  * @param fiber the fiber type
  * @param lengthM length (m), ≥ 0
  * @param bendRadiusMm radius of the tightest routed bends (mm), empty when not known or straight
- * @param bendCount number of bends of at least 90° at that radius, ≥ 0; needs a radius when &gt; 0
+ * @param bendCount number of bends recorded (the tightest at that radius), ≥ 0; needs a radius when &gt; 0
  */
 public record FiberSegment(String label, FiberSpec fiber, double lengthM, OptionalDouble bendRadiusMm, int bendCount)
         implements PathElement {
@@ -33,6 +36,11 @@ public record FiberSegment(String label, FiberSpec fiber, double lengthM, Option
         if (bendCount > 0 && bendRadiusMm.isEmpty()) {
             throw new IllegalArgumentException(label + ": " + bendCount + " bends need a bend radius");
         }
+    }
+
+    /** Bends whose loss is charged: {@link GlogeBend#chargedBends(int)} of the recorded count. */
+    public int chargedBends() {
+        return GlogeBend.chargedBends(bendCount);
     }
 
     /** A straight (or gently routed) segment: no bend loss. */

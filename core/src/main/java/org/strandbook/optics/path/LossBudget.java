@@ -63,9 +63,9 @@ public final class LossBudget {
                 } catch (IllegalArgumentException e) {
                     throw new IllegalArgumentException("fiber '" + f.label() + "': " + e.getMessage(), e);
                 }
-                boolean bends = bend != null && f.bendCount() > 0;
+                boolean bends = bend != null && f.chargedBends() > 0;
                 part = new Contribution(f.label(), ElementKind.FIBER, att, f.lengthM() * 1e-3,
-                        bends ? bend.lossDbPerBend() : null, bends ? f.bendCount() : 0);
+                        bends ? bend.lossDbPerBend() : null, bends ? f.chargedBends() : 0);
                 if (bend != null && (bend.clampedPoints() > 0 || !bend.radiusCheck().ok())) {
                     if (notes.isEmpty()) {
                         notes = new ArrayList<>();
@@ -85,7 +85,7 @@ public final class LossBudget {
         if (!bend.radiusCheck().ok()) {
             notes.add("fiber '" + f.label() + "': " + bend.radiusNote());
         }
-        if (bend.clampedPoints() > 0 && f.bendCount() > 0) {
+        if (bend.clampedPoints() > 0 && f.chargedBends() > 0) {
             notes.add("fiber '" + f.label() + "': " + bend.clampNote());
         }
     }

@@ -59,15 +59,15 @@ public final class OpticsCache {
 
     /**
      * The loss spectrum (dB) of one element on this grid, a fresh copy. A fiber segment's loss is
-     * attenuation × length + bend count × loss per bend.
+     * attenuation × length + the charged bends × loss per bend.
      */
     public double[] lossDb(PathElement element) {
         if (element instanceof FiberSegment f) {
             double[] att = attenuationShared(f.fiber().attenuation());
             BendTerms bend = bendTerms(f);
-            boolean bends = bend != null && f.bendCount() > 0;
+            boolean bends = bend != null && f.chargedBends() > 0;
             return new Contribution(f.label(), f.kind(), att, f.lengthM() * 1e-3,
-                    bends ? bend.lossDbPerBend() : null, bends ? f.bendCount() : 0).lossDb();
+                    bends ? bend.lossDbPerBend() : null, bends ? f.chargedBends() : 0).lossDb();
         }
         return fixedLossShared(element).clone();
     }

@@ -10,8 +10,8 @@ import org.strandbook.optics.WavelengthGrid;
 
 class AttenuationShapesTest {
 
-    // OH band positions near 945, 1240, 1383, 2210 and 2720 nm (Humbach et al., J. Non-Cryst. Solids
-    // 203, 19 (1996); Keck, Maurer and Schultz 1973): each is a local maximum of the per-ppm shape.
+    // OH band positions: about 2.7 and 1.38 µm (Humbach et al., J. Non-Cryst. Solids 203, 19 (1996),
+    // abstract), 945, 1240 and 2210 nm (from memory): each is a local maximum of the per-ppm shape.
     @ParameterizedTest
     @CsvSource(textBlock = """
             945
@@ -38,7 +38,11 @@ class AttenuationShapesTest {
 
     @Test
     void hydrogenShapePeaksNear1240And2420Nanometres() {
-        // molecular hydrogen bands near 1.24 µm and 2.42 µm (Electron. Lett. 1983; J. Lightwave Technol. 1985)
+        // molecular hydrogen: fundamental at 2.42 µm ("Increased attenuation in optical fibres caused by
+        // diffusion of molecular hydrogen at room temperature", Electron. Lett. 1983; authors K. J.
+        // Beales, D. M. Cooper and J. D. Rush, vol. 19, p. 917, from memory), first overtone at 1.24 µm
+        // ("Loss increase for optical fibers exposed to hydrogen atmosphere", 1985, from its abstract;
+        // journal, authors and pages not at hand)
         WavelengthGrid grid = WavelengthGrid.uniformNm(1100, 2700, 1601);
         double[] s = AttenuationShapes.hydrogenBandShape(grid, 1.0);
         assertEquals(1240, grid.wavelengthNm(argMax(s, grid, 1100, 1800)), 2);

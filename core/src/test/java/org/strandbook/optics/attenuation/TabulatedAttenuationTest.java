@@ -52,18 +52,4 @@ class TabulatedAttenuationTest {
         assertThrows(IllegalArgumentException.class,
                 () -> new TabulatedAttenuation("t", new double[] {400, 500}, new double[] {1, 0}));
     }
-
-    @Test
-    void tablePlusModelIsTheTableInsideAndMeetsItsEndsContinuously() {
-        // continuity at the joins: the model is scaled to the table's end points (documented design)
-        SilicaAttenuation model = SilicaAttenuation.of(SilicaFiberGrade.LOW_OH, 1);
-        TableWithModelAttenuation joined = new TableWithModelAttenuation(table, model);
-        assertEquals(table.attenuationDbPerKm(1000), joined.attenuationDbPerKm(1000), 0);
-        assertEquals(joined.attenuationDbPerKm(400), joined.attenuationDbPerKm(400 - 1e-9), 1e-6);
-        assertEquals(joined.attenuationDbPerKm(2000), joined.attenuationDbPerKm(2000 + 1e-9), 1e-4);
-        // beyond the table the model's shape is kept: ratio of two outside points equals the model's ratio
-        assertEquals(model.attenuationDbPerKm(2400) / model.attenuationDbPerKm(2200),
-                joined.attenuationDbPerKm(2400) / joined.attenuationDbPerKm(2200), 1e-12);
-        assertThrows(IllegalArgumentException.class, () -> joined.attenuationDbPerKm(3200));
-    }
 }

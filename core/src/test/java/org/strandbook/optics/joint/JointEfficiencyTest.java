@@ -47,7 +47,7 @@ class JointEfficiencyTest {
 
     @Test
     void endGapOfZeroLosesNothingAndLossGrowsWithTheGap() {
-        // limit and monotonicity of the phase-space derivation in JointEfficiency
+        // our own derivation (phase-space overlap, JointEfficiency): its limit and monotonicity
         assertEquals(1.0, JointEfficiency.endGap(0, 200, 0.22, 1.0), 0);
         double previous = 1.0;
         for (double gap = 5; gap <= 5000; gap *= 1.5) {
@@ -59,7 +59,7 @@ class JointEfficiencyTest {
 
     @Test
     void smallEndGapFollowsTheFirstOrderExpansion() {
-        // derived in JointEfficiency: η ≈ 1 − (4/3π)·s·NA/(a·n0) for s·tanθa ≪ a
+        // our own derivation (JointEfficiency): η ≈ 1 − (4/3π)·s·NA/(a·n0) for s·tanθa ≪ a
         double a = 100;
         double s = 2;
         double expected = 1 - 4 / (3 * Math.PI) * s * 0.22 / a;
@@ -68,11 +68,25 @@ class JointEfficiencyTest {
 
     @Test
     void largeEndGapApproachesTheInverseSquareLaw() {
-        // far field: the core subtends sin²(atan(a/s)) ≈ (a/s)² of direction space out of sin²θa = (NA/n0)²,
-        // so η → (a·n0/(s·NA))² (derived in JointEfficiency)
+        // our own derivation (JointEfficiency), far field: the core subtends sin²(atan(a/s)) ≈ (a/s)² of
+        // direction space out of sin²θa = (NA/n0)², so η → (a·n0/(s·NA))²
         double s = 50_000;
         double expected = Math.pow(100 * 1.0 / (s * 0.22), 2);
         assertEquals(expected, JointEfficiency.endGap(s, 200, 0.22, 1.0), 0.02 * expected);
+    }
+
+    @Test
+    void farGapAgreesWithTheTextbookExpandingConeFormula() {
+        // a published case: the expanding-cone end-gap formula η = [a/(a + s·tanθc)]² for a step-index
+        // fiber (from memory: G. Keiser, Optical Fiber Communications, ch. 5). The textbooks' near-gap
+        // forms disagree by factors of two; far from the face both are the cone's spreading, so they
+        // must agree there to within tan²θ against sin²θ (5 % at NA 0.22) and the textbook's a in
+        // a + s·tanθ (3.6 % at s = 250a)
+        double a = 100;
+        double s = 25_000;
+        double thetaA = Math.asin(0.22);
+        double keiser = Math.pow(a / (a + s * Math.tan(thetaA)), 2);
+        assertEquals(keiser, JointEfficiency.endGap(s, 2 * a, 0.22, 1.0), 0.10 * keiser);
     }
 
     @Test
@@ -83,7 +97,7 @@ class JointEfficiencyTest {
 
     @Test
     void tiltOfZeroLosesNothingAndTwiceTheAcceptanceAngleCouplesNothing() {
-        // limits of the cone-overlap derivation in JointEfficiency
+        // our own derivation (cone overlap, JointEfficiency): its limits
         assertEquals(1.0, JointEfficiency.tilt(0, 0.22, 1.0), 0);
         double thetaA = Math.toDegrees(Math.asin(0.22));
         assertTrue(JointEfficiency.tilt(2 * thetaA - 0.01, 0.22, 1.0) < 1e-4);
@@ -92,7 +106,7 @@ class JointEfficiencyTest {
 
     @Test
     void tiltLossGrowsWithTheAngle() {
-        // monotonicity of the cone-overlap derivation
+        // our own derivation (cone overlap, JointEfficiency): monotonic in the angle
         double previous = 1.0;
         for (double deg = 0.5; deg < 25; deg += 0.5) {
             double eta = JointEfficiency.tilt(deg, 0.22, 1.0);
@@ -103,7 +117,8 @@ class JointEfficiencyTest {
 
     @Test
     void smallNaTiltMatchesTheOffsetFormulaInAngle() {
-        // paraxial limit: two discs of radius θa in direction space, τ apart → offset formula with u = τ/2θa
+        // our own derivation, paraxial limit: two discs of radius θa in direction space, τ apart → the
+        // published offset formula (from memory: Keiser; Senior) with u = τ/2θa
         double na = 0.05;
         double thetaA = Math.asin(na);
         for (double deg : new double[] {0.3, 1.0, 2.0, 4.0}) {

@@ -90,7 +90,8 @@ class LossBudgetTest {
         assertEquals(Fresnel.faceLossDb(nSilica, 1.0), c.get(0).lossDbAt(i), 1e-12);
         // entered allowance, equal fibers: no mismatch
         assertEquals(ConnectorAllowance.DEFAULT.lossDb(), c.get(2).lossDbAt(i), 1e-12);
-        // probe: fixed 1 dB + sapphire window pair (1 − R)/(1 + R) + Beer–Lambert 10·A, A = 0.05/mm × 2 mm
+        // probe: fixed 1 dB + sapphire window pair (1 − R)/(1 + R) (series summed in FresnelTest) + Beer–Lambert
+        // 10·A, A = 0.05/mm × 2 mm
         double r = Fresnel.reflectance(nSapphire, 1.0);
         assertEquals(1.0 - 10 * Math.log10((1 - r) / (1 + r)) + 10 * 0.1, c.get(4).lossDbAt(i), 1e-9);
         // 200 → 100 µm core, gel-filled, aligned: (d2/d1)² = 1/4, about 6.02 dB, plus nearly no Fresnel
@@ -107,6 +108,17 @@ class LossBudgetTest {
         double eta = JointEfficiency.lateralOffset(5, 200) * JointEfficiency.endGap(20, 200, 0.22, 1.0)
                 * JointEfficiency.tilt(0.5, 0.22, 1.0);
         assertEquals(JointEfficiency.lossDb(eta) + Fresnel.gapLossDb(n, 1.0), budget.contributions().get(3).lossDbAt(i), 1e-9);
+    }
+
+    @Test
+    void repeatedBendsAtOneRadiusAreChargedOnce() {
+        // the first bend strips the modes the radius cannot guide; later ones find them gone
+        // (Gloge, Bell Syst. Tech. J. 51, 1767 (1972): weak mode coupling; FED-STD-1037C "mandrel wrapping")
+        double one = LossBudget.of(LightPath.of("one", FiberSegment.bent("cord", FIBER, 5, 40, 1)), GRID).totalLossDbAt(30);
+        double five = LossBudget.of(LightPath.of("five", FiberSegment.bent("cord", FIBER, 5, 40, 5)), GRID).totalLossDbAt(30);
+        double straight = LossBudget.of(LightPath.of("none", FiberSegment.straight("cord", FIBER, 5)), GRID).totalLossDbAt(30);
+        assertTrue(one - straight > 0.5, "a 40 mm bend costs something: " + (one - straight));
+        assertEquals(one, five, 1e-12);
     }
 
     @Test

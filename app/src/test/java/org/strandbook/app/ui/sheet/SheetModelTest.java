@@ -21,8 +21,8 @@ import org.strandbook.site.PathDirection;
 
 /**
  * The spreadsheet rules of every Strandbook table, on the cable-segment sheet. Behaviour that users
- * know from spreadsheet programs (one paste is one undo step, fill down copies the top cell) is
- * common practice; the arithmetic of the computed loss is IEC 60793-1-40's attenuation
+ * know from spreadsheet programs (one paste is one undo step, fill down copies the top cell) is a
+ * design choice; the arithmetic of the computed loss is IEC 60793-1-40's attenuation
  * coefficient in dB/km times length in km.
  */
 class SheetModelTest {

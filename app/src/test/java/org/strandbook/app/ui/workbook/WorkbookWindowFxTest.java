@@ -43,7 +43,7 @@ import org.testfx.util.WaitForAsyncUtils;
  * The real window on a copy of the sample site, headless on Monocle, driven by keys, clicks and
  * the system clipboard as a technician drives it; background jobs run synchronously. Spreadsheet
  * behaviour that users know from spreadsheet programs (a paste is all or nothing, fill down copies
- * the top cell, Ctrl+Z/Ctrl+Y) is common practice.
+ * the top cell, Ctrl+Z/Ctrl+Y) is a design choice.
  */
 @ExtendWith(SampleSite.Resolver.class)
 class WorkbookWindowFxTest {
