@@ -1,5 +1,6 @@
 package org.strandbook.app;
 
+import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.classes;
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
 import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices;
 
@@ -17,6 +18,8 @@ import org.junit.jupiter.api.Test;
  * command line talks to the console.
  */
 class ArchitectureTest {
+
+    private static final String BENCH = "org.strandbook.app.bench..";
 
     private static JavaClasses classes;
 
@@ -46,7 +49,8 @@ class ArchitectureTest {
 
     @Test
     void jdbcStaysInTheStore() {
-        ArchRule rule = noClasses().that().resideOutsideOfPackage("org.strandbook.store..")
+        // a benchmark's floor is the bare library doing the same work, so the bench package may call it
+        ArchRule rule = noClasses().that().resideOutsideOfPackages("org.strandbook.store..", BENCH)
                 .should().dependOnClassesThat().resideInAnyPackage("java.sql..", "org.sqlite..")
                 .because("explicit SQL lives in small repository classes of one package");
         rule.check(classes);
@@ -55,7 +59,7 @@ class ArchitectureTest {
     @Test
     void spreadsheetLibraryStaysInImportAndDossier() {
         ArchRule rule = noClasses().that()
-                .resideOutsideOfPackages("org.strandbook.schedule..", "org.strandbook.dossier..")
+                .resideOutsideOfPackages("org.strandbook.schedule..", "org.strandbook.dossier..", BENCH)
                 .should().dependOnClassesThat().resideInAnyPackage("org.apache.poi..", "org.openxmlformats..")
                 .because("POI is confined to the cable-schedule import and the dossier export");
         rule.check(classes);
@@ -78,6 +82,32 @@ class ArchitectureTest {
         ArchRule rule = noClasses().that().resideOutsideOfPackages("org.strandbook.app.cli..", "org.strandbook.app")
                 .should(GeneralCodingRules.ACCESS_STANDARD_STREAMS)
                 .because("results reach the user through the command line or the window, never stray prints");
+        rule.check(classes);
+    }
+
+    @Test
+    void benchmarksStayOutOfTheProduct() {
+        // the product never runs a benchmark; only the command line registers the bench command
+        ArchRule rule = noClasses().that().resideOutsideOfPackages(BENCH, "org.strandbook.app.cli..")
+                .should().dependOnClassesThat().resideInAnyPackage(BENCH)
+                .because("core holds only what the product runs, and the floors live with their benches");
+        rule.check(classes);
+    }
+
+    @Test
+    void benchmarksAndTheirFloorsLiveInOnePackage() {
+        ArchRule rule = classes().that().haveSimpleNameEndingWith("BenchCommand")
+                .or().haveSimpleNameStartingWith("Bare").or().haveSimpleNameEndingWith("Floor")
+                .should().resideInAPackage(BENCH)
+                .because("a benchmark and the floor it is measured against are read together, apart from the product");
+        rule.check(classes);
+    }
+
+    @Test
+    void benchmarksDoNotDependOnTheCommandLine() {
+        ArchRule rule = noClasses().that().resideInAPackage(BENCH)
+                .should().dependOnClassesThat().resideInAPackage("org.strandbook.app.cli..")
+                .because("the command line registers the bench command; the benches only use the product");
         rule.check(classes);
     }
 

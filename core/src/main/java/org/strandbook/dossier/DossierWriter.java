@@ -3,9 +3,12 @@ package org.strandbook.dossier;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.OutputStream;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Arrays;
 import java.util.Date;
 import java.util.EnumMap;
 import java.util.List;
@@ -14,9 +17,12 @@ import java.util.Optional;
 
 import org.apache.poi.ooxml.POIXMLProperties;
 import org.apache.poi.ss.util.CellRangeAddress;
+import org.apache.poi.util.DefaultTempFileCreationStrategy;
+import org.apache.poi.util.TempFile;
 import org.apache.poi.xssf.streaming.SXSSFSheet;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 import org.strandbook.files.FileReplacement;
+import org.strandbook.files.WorkInProgressFiles;
 import org.strandbook.templates.Templates;
 
 /**
@@ -35,6 +41,12 @@ public final class DossierWriter {
 
     /** Rows of a sheet held in memory while writing; the rest are already on disk. */
     public static final int ROWS_IN_MEMORY_PER_SHEET = DossierWorkbook.ROW_WINDOW;
+
+    /** Deflate level of the file's parts. */
+    public static final int DEFLATE_LEVEL = DossierWorkbook.DEFLATE_LEVEL;
+
+    /** "Database File Format", sqlite.org/fileformat.html, section 1.3: the 16-byte header string. */
+    private static final byte[] SQLITE_HEADER = "SQLite format 3\0".getBytes(StandardCharsets.US_ASCII);
 
     /** Opens a template; the caller closes the stream. */
     @FunctionalInterface
@@ -75,7 +87,8 @@ public final class DossierWriter {
         if (!replace && Files.exists(absolute)) {
             throw new FileAlreadyExistsException(target.toString(), null, "a file is already there");
         }
-        Path partial = Files.createTempFile(folder, "." + absolute.getFileName() + ".", ".part");
+        requireReplaceable(target);
+        Path partial = WorkInProgressFiles.partBeside(absolute);
         try {
             DossierSummary summary;
             try (OutputStream out = Files.newOutputStream(partial)) {
@@ -85,6 +98,31 @@ public final class DossierWriter {
             return summary;
         } finally {
             Files.deleteIfExists(partial);
+        }
+    }
+
+    /**
+     * Refuses to replace a workbook, whatever its name: a dossier may replace an earlier dossier or
+     * any other file the user names with {@code replace}, never an SQLite database, which is what a
+     * workbook is. The content decides, recognised by the 16-byte header string of "Database File
+     * Format" (sqlite.org/fileformat.html, section 1.3).
+     *
+     * @throws IOException naming the file when it is a database or not a file at all
+     */
+    public static void requireReplaceable(Path target) throws IOException {
+        if (!Files.exists(target)) {
+            return;
+        }
+        if (!Files.isRegularFile(target)) {
+            throw new IOException(target + " is not a file, so no dossier can replace it");
+        }
+        byte[] head;
+        try (InputStream in = Files.newInputStream(target)) {
+            head = in.readNBytes(SQLITE_HEADER.length);
+        }
+        if (Arrays.equals(head, SQLITE_HEADER)) {
+            throw new IOException(target + " is an SQLite database, perhaps a Strandbook workbook; a dossier never"
+                    + " replaces one, so it was left as it is");
         }
     }
 
@@ -103,8 +141,32 @@ public final class DossierWriter {
         }
     }
 
-    /** Writes the dossier to {@code out}, which the caller closes. */
+    /**
+     * Writes the dossier to {@code out}, which the caller closes. The streaming workbook keeps the
+     * rows beyond its window in temporary files; they go to a scratch folder of this run only, not
+     * to the spreadsheet library's folder shared by every user of the machine, and the folder goes
+     * when the dossier is written (TempFile.withStrategy, POI's API documentation of
+     * org.apache.poi.util.TempFile).
+     */
     public DossierSummary write(DossierContent content, OutputStream out, DossierProgress progress)
+            throws IOException {
+        Path scratch = WorkInProgressFiles.scratchFolder();
+        try {
+            return TempFile.withStrategy(new DefaultTempFileCreationStrategy(scratch.toFile()), () -> {
+                try {
+                    return fill(content, out, progress);
+                } catch (IOException e) {
+                    throw new UncheckedIOException(e);
+                }
+            });
+        } catch (UncheckedIOException e) {
+            throw e.getCause();
+        } finally {
+            WorkInProgressFiles.deleteTree(scratch);
+        }
+    }
+
+    private DossierSummary fill(DossierContent content, OutputStream out, DossierProgress progress)
             throws IOException {
         XSSFWorkbook xssf;
         try (InputStream in = template.open()) {

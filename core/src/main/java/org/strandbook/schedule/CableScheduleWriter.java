@@ -16,6 +16,7 @@ import org.apache.poi.ss.usermodel.Row;
 import org.apache.poi.ss.usermodel.Sheet;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 import org.strandbook.files.FileReplacement;
+import org.strandbook.files.WorkInProgressFiles;
 import org.strandbook.site.Analyzer;
 import org.strandbook.site.AttenuationPoint;
 import org.strandbook.site.Bend;
@@ -54,8 +55,7 @@ public final class CableScheduleWriter {
      * same folder, moved into place at the end, so a failed write never leaves a half-written file.
      */
     public static void write(CableSchedule schedule, Path target) throws IOException {
-        Path folder = target.toAbsolutePath().getParent();
-        Path partial = Files.createTempFile(folder, ".strandbook-schedule-", ".part");
+        Path partial = WorkInProgressFiles.partBeside(target);
         try {
             try (OutputStream out = Files.newOutputStream(partial)) {
                 write(schedule, out);

@@ -4,12 +4,16 @@ import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.function.Supplier;
+import java.util.regex.Pattern;
 
 import org.apache.poi.ss.usermodel.Cell;
 import org.apache.poi.ss.usermodel.CellType;
+import org.apache.poi.ss.usermodel.CellValue;
 import org.apache.poi.ss.usermodel.DateUtil;
 import org.apache.poi.ss.usermodel.FormulaError;
+import org.apache.poi.ss.usermodel.FormulaEvaluator;
 import org.apache.poi.ss.usermodel.Row;
+import org.apache.poi.xssf.usermodel.XSSFCell;
 
 /**
  * One data row of a schedule sheet with typed access to its cells. Every problem a cell has is
@@ -19,13 +23,18 @@ import org.apache.poi.ss.usermodel.Row;
  * <p>Cell rules: text is trimmed of spaces at both ends (no-break spaces too); a number in a text
  * column is read as written ({@code 101}, not {@code 101.0}) unless the spreadsheet turned it into a
  * date; a formula counts by its last calculated value; an error value (#N/A, #DIV/0!) is a problem.
+ *
+ * <p>A formula saved without its value (files written by scripts often are) is calculated with the
+ * spreadsheet library's evaluator; one it cannot calculate is a problem, never read as 0. A formula
+ * that takes its value from another file is a problem too, saved value or not: that file may have
+ * changed since, and it is not at hand to check.
  */
 final class SheetRow {
 
     /** Tags, IDs, labels and codes longer than this are a paste mistake, not an identifier. */
     static final int MAX_IDENTIFIER_CHARS = 64;
 
-    private sealed interface Content permits Blank, Text, Number, Flag, Failure {
+    private sealed interface Content permits Blank, Text, Number, Flag, Failure, Unreadable {
     }
 
     private record Blank() implements Content {
@@ -43,14 +52,24 @@ final class SheetRow {
     private record Failure(String code) implements Content {
     }
 
+    /** A cell whose value cannot be trusted, with the reason. */
+    private record Unreadable(String problem) implements Content {
+    }
+
+    /** An external reference as the spreadsheet library shows it: {@code [1]Sheet1!A1}. */
+    private static final Pattern OTHER_FILE = Pattern.compile("\\[\\d+]");
+    private static final int FORMULA_SHOWN_CHARS = 60;
+
     private final ScheduleSheet sheet;
     private final Row row;
+    private final FormulaEvaluator formulas;
     private final ProblemLog log;
     private boolean faulty;
 
-    SheetRow(ScheduleSheet sheet, Row row, ProblemLog log) {
+    SheetRow(ScheduleSheet sheet, Row row, FormulaEvaluator formulas, ProblemLog log) {
         this.sheet = sheet;
         this.row = row;
+        this.formulas = formulas;
         this.log = log;
     }
 
@@ -158,6 +177,10 @@ final class SheetRow {
         }
         if (content instanceof Failure e) {
             problem(column, "the cell holds the error value " + e.code());
+            return null;
+        }
+        if (content instanceof Unreadable u) {
+            problem(column, u.problem());
             return null;
         }
         return "";
@@ -317,6 +340,10 @@ final class SheetRow {
         }
         CellType type = cell.getCellType();
         if (type == CellType.FORMULA) {
+            Content unsaved = formula(cell);
+            if (unsaved != null) {
+                return unsaved;
+            }
             type = cell.getCachedFormulaResultType();
         }
         switch (type) {
@@ -333,6 +360,48 @@ final class SheetRow {
             default:
                 return new Blank();
         }
+    }
+
+    /** The content of a formula cell when its saved value cannot serve; null when it can. */
+    private Content formula(Cell cell) {
+        String formula = shown(cell.getCellFormula());
+        if (OTHER_FILE.matcher(formula).find()) {
+            return new Unreadable("a formula that takes its value from another file (=" + formula + "); type the"
+                    + " value itself, since that file may have changed since this one was saved");
+        }
+        if (!(cell instanceof XSSFCell x) || x.getCTCell().isSetV()) {
+            return null;
+        }
+        CellValue value;
+        try {
+            value = formulas.evaluate(cell);
+        } catch (RuntimeException e) {
+            // a function the library lacks, a reference it cannot follow
+            value = null;
+        }
+        if (value == null) {
+            return new Unreadable("a formula with no saved value (=" + formula + ") that Strandbook cannot calculate;"
+                    + " open and save the file in a spreadsheet program, or type the value");
+        }
+        switch (value.getCellType()) {
+            case NUMERIC:
+                return new Number(value.getNumberValue(), isDate(cell));
+            case STRING: {
+                String s = trim(value.getStringValue());
+                return s.isEmpty() ? new Blank() : new Text(s);
+            }
+            case BOOLEAN:
+                return new Flag(value.getBooleanValue());
+            case ERROR:
+                return new Failure(errorCode(value.getErrorValue()));
+            default:
+                return new Blank();
+        }
+    }
+
+    private static String shown(String formula) {
+        String oneLine = formula.replaceAll("\\p{Cntrl}", " ");
+        return oneLine.length() <= FORMULA_SHOWN_CHARS ? oneLine : oneLine.substring(0, FORMULA_SHOWN_CHARS) + "...";
     }
 
     private static boolean isDate(Cell cell) {

@@ -7,6 +7,7 @@ import java.util.Optional;
 
 import org.apache.poi.ss.usermodel.Row;
 import org.apache.poi.ss.usermodel.Sheet;
+import org.apache.poi.ss.usermodel.FormulaEvaluator;
 import org.apache.poi.ss.usermodel.Workbook;
 
 /**
@@ -39,11 +40,12 @@ final class SheetTable {
             return Optional.empty();
         }
         List<SheetRow> rows = new ArrayList<>();
+        FormulaEvaluator formulas = workbook.getCreationHelper().createFormulaEvaluator();
         for (Row row : sheet) {
             if (row.getRowNum() == 0) {
                 continue;
             }
-            SheetRow r = new SheetRow(layout, row, log);
+            SheetRow r = new SheetRow(layout, row, formulas, log);
             if (!r.isBlank()) {
                 rows.add(r);
             }

@@ -62,6 +62,8 @@ final class SchemaMigrator {
                 }
                 try (Statement st = session.connection().createStatement()) {
                     st.executeUpdate(script(step.script()));
+                } catch (SQLException e) {
+                    throw mismatch(session, current, step, e);
                 }
                 if (step.version() == AUDIT_TRAIL) {
                     for (AuditedTable table : AuditedTable.values()) {
@@ -79,6 +81,16 @@ final class SchemaMigrator {
         }
     }
 
+    /** Checks, reading only, that the open file is a workbook of exactly this schema. */
+    static void checkCurrent(Session session) {
+        checkIdentity(session);
+        int version = schemaVersion(session);
+        if (version != LATEST) {
+            throw new WorkbookException("workbook " + session.file() + " is of schema " + version + " and must be"
+                    + " upgraded to schema " + LATEST + " before it is read; open it once for a change to upgrade it");
+        }
+    }
+
     static int schemaVersion(Session session) {
         return session.read(() -> pragma(session, "user_version"));
     }
@@ -89,6 +101,18 @@ final class SchemaMigrator {
                     pragma(session, "user_version"));
             return null;
         });
+    }
+
+    /**
+     * A step that fails on a file whose recorded version says it is due means the tables are not
+     * what that version had (the version was reset, or tables were changed by another program).
+     */
+    private static WorkbookException mismatch(Session session, int recorded, Step step, SQLException e) {
+        String detail = e.getMessage() == null ? "" : e.getMessage().replaceAll("\\s+", " ").replaceFirst(
+                "^\\[SQLITE_[A-Z_]+\\]\\s*", "").strip();
+        return new WorkbookException("workbook " + session.file() + " records schema " + recorded + " but its tables do"
+                + " not match it (upgrading to schema " + step.version() + " failed: " + detail + "); nothing was"
+                + " changed: restore the workbook from a backup", e);
     }
 
     private static boolean isEmpty(Session session) throws SQLException {

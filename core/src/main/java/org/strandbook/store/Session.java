@@ -3,6 +3,7 @@ package org.strandbook.store;
 import java.nio.file.Path;
 import java.sql.Connection;
 import java.sql.PreparedStatement;
+import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
 import java.util.HashMap;
@@ -37,6 +38,7 @@ final class Session implements AutoCloseable {
     private final Map<String, PreparedStatement> statements = new HashMap<>();
     private int depth;
     private boolean writing;
+    private boolean checkedBeforeWriting;
     private long writeGeneration;
 
     Session(Connection connection, Path file, String user) {
@@ -147,6 +149,7 @@ final class Session implements AutoCloseable {
             if (depth == 0) {
                 writing = true;
                 writeGeneration++;
+                checkBeforeFirstWrite();
             }
             depth++;
             boolean done = false;
@@ -188,12 +191,63 @@ final class Session implements AutoCloseable {
             depth = 1;
             writing = true;
             writeGeneration++;
+            checkBeforeFirstWrite();
         } catch (SQLException e) {
             lock.unlock();
             throw SqlFailures.translate(e, file);
         } catch (RuntimeException e) {
             lock.unlock();
             throw e;
+        }
+    }
+
+    /**
+     * The first write of a session, with the write lock just taken, first checks the whole file
+     * ({@link #checkIntegrity()}), so nothing is added to a damaged workbook; on damage the
+     * transaction is rolled back and nothing is written.
+     */
+    private void checkBeforeFirstWrite() throws SQLException {
+        if (checkedBeforeWriting) {
+            return;
+        }
+        try {
+            quickCheck();
+        } catch (SQLException | RuntimeException e) {
+            depth = 0;
+            writing = false;
+            rollbackQuietly("ROLLBACK");
+            throw e;
+        }
+        checkedBeforeWriting = true;
+    }
+
+    /** SQLite's quick check of the whole file; see {@link Workbook#checkIntegrity()}. Once passed, writes skip it. */
+    void checkIntegrity() {
+        lock.lock();
+        try {
+            quickCheck();
+            checkedBeforeWriting = true;
+        } catch (SQLException e) {
+            throw SqlFailures.translate(e, file);
+        } finally {
+            lock.unlock();
+        }
+    }
+
+    private void quickCheck() throws SQLException {
+        String first;
+        try (Statement st = connection.createStatement();
+             ResultSet rs = st.executeQuery("PRAGMA quick_check(1)")) {
+            // sqlite.org/pragma.html#pragma_quick_check: a sound file gives the single row "ok"
+            first = rs.next() ? rs.getString(1) : "no result";
+        } catch (SQLException e) {
+            if (SqlFailures.isCorruption(e)) {
+                throw new DamagedWorkbookException(file, e.getMessage(), e);
+            }
+            throw e;
+        }
+        if (!"ok".equals(first)) {
+            throw new DamagedWorkbookException(file, first, null);
         }
     }
 

@@ -12,7 +12,7 @@ import org.strandbook.site.Spectrum;
  * Strandbook (e.g. {@code numpy.frombuffer(blob, '<f8').reshape(2, -1)}); Java serialization
  * would tie the data to one class version.
  */
-final class SpectrumCodec {
+public final class SpectrumCodec {
 
     static final int BYTES_PER_POINT = 2 * Double.BYTES;
 
@@ -22,7 +22,8 @@ final class SpectrumCodec {
     private SpectrumCodec() {
     }
 
-    static byte[] encode(Spectrum spectrum) {
+    /** The stored bytes of {@code spectrum}. */
+    public static byte[] encode(Spectrum spectrum) {
         double[] wavelengthsNm = spectrum.wavelengthsNm();
         double[] values = spectrum.values();
         int n = values.length;

@@ -23,13 +23,13 @@ final class SqlFailures {
             return new NotAWorkbookException("not a Strandbook workbook: " + file + " is not an SQLite database");
         }
         if (primary == SQLiteErrorCode.SQLITE_CORRUPT.code) {
-            return new WorkbookException("workbook " + file + " is damaged (" + detail + "); restore it from a backup", e);
+            return new DamagedWorkbookException(file, detail, e);
         }
         if (primary == SQLiteErrorCode.SQLITE_FULL.code) {
             return new WorkbookException("disk full while writing " + file + "; the change was not written", e);
         }
         if (primary == SQLiteErrorCode.SQLITE_READONLY.code) {
-            return new WorkbookException("workbook " + file + " is read-only; nothing was changed", e);
+            return readOnly(file, e);
         }
         if (primary == SQLiteErrorCode.SQLITE_CANTOPEN.code) {
             return new WorkbookException("cannot open workbook " + file + " (" + detail + ")", e);
@@ -38,6 +38,16 @@ final class SqlFailures {
             return new WorkbookException("disk error on workbook " + file + " (" + detail + ")", e);
         }
         return new WorkbookException("workbook " + file + ": " + detail, e);
+    }
+
+    /** A write into a workbook that cannot be written. */
+    static WorkbookException readOnly(Path file, SQLException e) {
+        return new WorkbookException("workbook " + file + " is read-only; nothing was changed", e);
+    }
+
+    /** True when SQLite found the file damaged. */
+    static boolean isCorruption(SQLException e) {
+        return primaryCode(e) == SQLiteErrorCode.SQLITE_CORRUPT.code;
     }
 
     /** True when SQLite refused a row for a UNIQUE or PRIMARY KEY constraint. */

@@ -8,6 +8,8 @@ import java.nio.file.Path;
 import java.sql.Connection;
 import java.sql.SQLException;
 import java.time.Duration;
+import java.util.List;
+import java.util.Locale;
 import java.util.UUID;
 import java.util.function.Supplier;
 
@@ -39,6 +41,10 @@ public final class Workbook implements AutoCloseable {
     private static final int CACHE_KIB = 32 * 1024;
     /** SQLite's own default: the write-ahead log is copied into the file when it passes 1000 pages. */
     static final int AUTO_CHECKPOINT_PAGES = 1000;
+
+    /** Names of spreadsheet and delimited-text files: a workbook never takes one (design choice). */
+    private static final List<String> SPREADSHEET_EXTENSIONS = List.of(".xlsx", ".xlsm", ".xltx", ".xltm", ".xls",
+            ".xlsb", ".ods", ".csv");
 
     private final Session session;
     private final AuditLog audit;
@@ -77,6 +83,7 @@ public final class Workbook implements AutoCloseable {
             throw new IllegalArgumentException("site missing");
         }
         Path target = file.toAbsolutePath().normalize();
+        refuseSpreadsheetName(file);
         if (Files.exists(target, LinkOption.NOFOLLOW_LINKS)) {
             throw refuseOverwrite(file);
         }
@@ -106,6 +113,8 @@ public final class Workbook implements AutoCloseable {
      * @throws NotAWorkbookException    when the file is not a Strandbook workbook (it is left unchanged)
      * @throws NewerWorkbookException   when a newer Strandbook wrote it (it is left unchanged)
      * @throws WorkbookBusyException    when another program holds it longer than the busy timeout
+     * @throws WorkbookException        when the file or its folder cannot be written ("read-only"); see
+     *                                  {@link #openForReading(Path, String)}
      */
     public static Workbook open(Path file, String user) {
         return open(file, user, DEFAULT_BUSY_TIMEOUT);
@@ -115,7 +124,83 @@ public final class Workbook implements AutoCloseable {
     public static Workbook open(Path file, String user, Duration busyTimeout) {
         String who = requireUser(user);
         WorkbookFile.checkHeader(file);
+        if (!isWritable(file)) {
+            throw SqlFailures.readOnly(file, null);
+        }
         return connect(file, who, busyTimeout, false);
+    }
+
+    /**
+     * Opens an existing workbook for commands that only read it. A workbook that can be written is
+     * opened as by {@link #open(Path, String)} (its write-ahead log goes when it closes). One that
+     * cannot (a handed-over workbook on a read-only share, a file another user owns) is opened
+     * read-only at SQLite's level ({@code SQLITE_OPEN_READONLY}, the flag behind a URI's
+     * {@code mode=ro}) with no journal setting, so nothing is written and no {@code -wal} or
+     * {@code -shm} file is left beside it: when no write-ahead log is there, no writer is at work
+     * (a WAL writer always keeps one), and SQLite could not read without making one, so the file
+     * is opened {@code immutable=1} (sqlite.org/uri.html; sqlite.org/wal.html, "Read-Only
+     * Databases"); when a log is there, SQLite reads it as it is. A write through such a workbook
+     * fails with "read-only".
+     *
+     * @throws WorkbookMissingException when there is no file
+     * @throws NotAWorkbookException    when the file is not a Strandbook workbook
+     * @throws NewerWorkbookException   when a newer Strandbook wrote it
+     */
+    public static Workbook openForReading(Path file, String user) {
+        String who = requireUser(user);
+        int schema = WorkbookFile.checkHeader(file);
+        if (schema < SchemaMigrator.LATEST || isWritable(file)) {
+            // an older schema is upgraded first, which is a write: refused as read-only if it cannot be
+            return open(file, who);
+        }
+        return connectReadOnly(file, who, !Files.exists(Path.of(file.toAbsolutePath() + "-wal")));
+    }
+
+    /** Whether the file and its folder (where SQLite keeps the write-ahead log) can be written. */
+    private static boolean isWritable(Path file) {
+        Path absolute = file.toAbsolutePath();
+        Path folder = absolute.getParent();
+        return Files.isWritable(absolute) && folder != null && Files.isWritable(folder);
+    }
+
+    /** Reads only; {@code immutable} also tells SQLite that nothing can change the file (no locks). */
+    static Workbook connectReadOnly(Path file, String user, boolean immutable) {
+        SQLiteConfig config = new SQLiteConfig();
+        config.setReadOnly(true);
+        config.resetOpenMode(SQLiteOpenMode.CREATE);
+        config.setCacheSize(-CACHE_KIB);
+        String url = "jdbc:sqlite:" + file.toAbsolutePath();
+        if (immutable) {
+            config.setOpenMode(SQLiteOpenMode.OPEN_URI);
+            url = "jdbc:sqlite:" + file.toAbsolutePath().toUri() + "?immutable=1";
+        }
+        Connection connection;
+        try {
+            connection = config.createConnection(url);
+        } catch (SQLException e) {
+            throw SqlFailures.translate(e, file);
+        }
+        Session session = new Session(connection, file, user);
+        try {
+            AuditLog audit = new AuditLog(session);
+            SchemaMigrator.checkCurrent(session);
+            return new Workbook(session, audit);
+        } catch (RuntimeException e) {
+            session.close();
+            throw e;
+        }
+    }
+
+    /**
+     * SQLite's structural check of the whole file ({@code PRAGMA quick_check}): b-tree pages,
+     * records and free list, without comparing indexes to their tables, which would cost a full
+     * integrity check (sqlite.org/pragma.html#pragma_quick_check). A workbook runs it by itself
+     * before its first write, unless it was called and passed before.
+     *
+     * @throws DamagedWorkbookException when the file is damaged
+     */
+    public void checkIntegrity() {
+        session.checkIntegrity();
     }
 
     /** The schema version this Strandbook writes. */
@@ -172,6 +257,22 @@ public final class Workbook implements AutoCloseable {
                 throw refuseOverwrite(asGiven);
             } catch (IOException e2) {
                 throw new WorkbookException("cannot create " + asGiven + " (" + e2.getMessage() + ")", e2);
+            }
+        }
+    }
+
+    /**
+     * A workbook named like a spreadsheet is easily taken for the dossier or a schedule, and written
+     * over by whatever writes those; the names are refused at the start.
+     */
+    private static void refuseSpreadsheetName(Path file) {
+        Path name = file.getFileName();
+        String lower = name == null ? "" : name.toString().toLowerCase(Locale.ROOT);
+        for (String extension : SPREADSHEET_EXTENSIONS) {
+            if (lower.endsWith(extension)) {
+                throw new WorkbookException("a workbook is not a spreadsheet: give " + file + " a name that does not"
+                        + " end in " + extension + " (for example " + name.toString().substring(0,
+                        name.toString().length() - extension.length()) + ".strandbook)");
             }
         }
     }

@@ -36,8 +36,9 @@ final class WorkbookFile {
      * @throws WorkbookMissingException when there is no file
      * @throws NotAWorkbookException    when it is not a Strandbook workbook
      * @throws NewerWorkbookException   when a newer Strandbook wrote it
+     * @return the schema version the header records
      */
-    static void checkHeader(Path file) {
+    static int checkHeader(Path file) {
         if (!Files.exists(file)) {
             throw new WorkbookMissingException("no workbook at " + file);
         }
@@ -59,6 +60,7 @@ final class WorkbookFile {
         }
         ByteBuffer b = ByteBuffer.wrap(header);
         checkIdentity(file, b.getInt(APPLICATION_ID_OFFSET), b.getInt(USER_VERSION_OFFSET));
+        return b.getInt(USER_VERSION_OFFSET);
     }
 
     /** The same check on the values SQLite reports once the file is open. */
@@ -66,6 +68,11 @@ final class WorkbookFile {
         if (applicationId != APPLICATION_ID) {
             throw new NotAWorkbookException("not a Strandbook workbook: " + file
                     + " is an SQLite database of another program");
+        }
+        if (schemaVersion < 0) {
+            throw new NotAWorkbookException("workbook " + file + " records an unknown schema version ("
+                    + schemaVersion + "); no Strandbook wrote that, so the file is left unchanged: restore it from a"
+                    + " backup");
         }
         if (schemaVersion > SchemaMigrator.LATEST) {
             throw new NewerWorkbookException("workbook " + file + " was written by a newer Strandbook (schema "

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.io.File;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.OutputStream;
@@ -20,6 +21,9 @@ import java.util.TimeZone;
 
 import org.apache.poi.ss.usermodel.Cell;
 import org.apache.poi.ss.usermodel.Row;
+import org.apache.poi.util.DefaultTempFileCreationStrategy;
+import org.apache.poi.util.TempFile;
+import org.apache.poi.util.TempFileCreationStrategy;
 import org.apache.poi.xssf.usermodel.XSSFCellStyle;
 import org.apache.poi.xssf.usermodel.XSSFSheet;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
@@ -85,6 +89,31 @@ class DossierWriterTest {
                 () -> DossierWriter.withShippedTemplate().write(content, out, false, stopAtSpectra));
         try (var files = Files.list(dir)) {
             assertEquals(List.of(), files.toList());
+        }
+    }
+
+    @Test
+    void theStreamedRowsNeverGoToTheLibrarysSharedTemporaryFolder() throws IOException {
+        // POI's default puts every user's streamed sheets in one "poifiles" folder (POI API
+        // documentation, org.apache.poi.util.DefaultTempFileCreationStrategy); a second user's
+        // export then fails on its permissions. Here the shared folder is made unusable outright.
+        TempFile.setTempFileCreationStrategy(new TempFileCreationStrategy() {
+            @Override
+            public File createTempFile(String prefix, String suffix) throws IOException {
+                throw new IOException("the shared temporary folder belongs to another user");
+            }
+
+            @Override
+            public File createTempDirectory(String prefix) throws IOException {
+                throw new IOException("the shared temporary folder belongs to another user");
+            }
+        });
+        try {
+            Path out = dir.resolve("dossier.xlsx");
+            DossierWriter.withShippedTemplate().write(content, out, false, DossierProgress.NONE);
+            assertTrue(Files.size(out) > 0);
+        } finally {
+            TempFile.setTempFileCreationStrategy(new DefaultTempFileCreationStrategy());
         }
     }
 

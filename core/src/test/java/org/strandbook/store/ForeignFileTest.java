@@ -92,6 +92,36 @@ class ForeignFileTest {
     }
 
     @Test
+    void aWorkbookOfAnUnknownSchemaVersionIsRefusedInOurWords() throws Exception {
+        // design choice: versions are counted from 0 up (PRAGMA user_version, sqlite.org/pragma.html), so
+        // a negative one was never written by Strandbook; the wording is ours, not SQLite's
+        Path file = dir.resolve("unknown.sqlite");
+        Workbook.create(file, DemoSite.site(), DemoSite.USER).close();
+        sql(file, "PRAGMA user_version = -3;");
+        byte[] before = Files.readAllBytes(file);
+        NotAWorkbookException e = assertThrows(NotAWorkbookException.class, () -> Workbook.open(file, DemoSite.USER));
+        assertEquals("workbook " + file + " records an unknown schema version (-3); no Strandbook wrote that, so the"
+                + " file is left unchanged: restore it from a backup", e.getMessage());
+        assertArrayEquals(before, Files.readAllBytes(file));
+    }
+
+    @Test
+    void aWorkbookWhoseTablesDoNotMatchItsSchemaVersionIsRefusedInOurWords() throws Exception {
+        // schema 2's tables under a version reset to 1: the upgrade to 2 cannot run (design choice: our
+        // words, with SQLite's reason inside, and never its raw error code)
+        Path file = dir.resolve("mismatched.sqlite");
+        Workbook.create(file, DemoSite.site(), DemoSite.USER).close();
+        sql(file, "PRAGMA user_version = 1;");
+        byte[] before = Files.readAllBytes(file);
+        WorkbookException e = assertThrows(WorkbookException.class, () -> Workbook.open(file, DemoSite.USER));
+        assertTrue(e.getMessage().startsWith("workbook " + file + " records schema 1 but its tables do not match it"
+                + " (upgrading to schema 2 failed: "), e.getMessage());
+        assertTrue(e.getMessage().endsWith("); nothing was changed: restore the workbook from a backup"), e.getMessage());
+        assertFalse(e.getMessage().contains("SQLITE_"), e.getMessage());
+        assertArrayEquals(before, Files.readAllBytes(file));
+    }
+
+    @Test
     void aWorkbookCutShortIsReportedDamaged() throws Exception {
         Path whole = dir.resolve("whole.sqlite");
         try (Workbook wb = Workbook.create(whole, DemoSite.site(), DemoSite.USER)) {

@@ -38,6 +38,8 @@ final class ScanImportChild {
         int busy = 0;
         try (Workbook wb = Workbook.open(file, "child-" + label);
              ScanImport batch = wb.scans().startImport(7, Duration.ofSeconds(1))) {
+            // the check before the first write belongs to opening, not to the writes the kills interrupt
+            wb.checkIntegrity();
             System.out.println("ready");
             System.out.flush();
             for (int i = 0; steps == 0 || i < steps; i++) {

@@ -34,7 +34,7 @@ final class AuditVerifyCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         AuditReport report;
-        try (Workbook wb = workbook.open()) {
+        try (Workbook wb = workbook.openForReading()) {
             report = wb.audit().verify();
         }
         PrintWriter out = spec.commandLine().getOut();

@@ -81,6 +81,9 @@ final class ExportCommand implements Callable<Integer> {
         if (!replace && Files.exists(output)) {
             throw new IllegalArgumentException("a file already exists at " + output + "; add --replace to replace it");
         }
+        if (replace) {
+            DossierWriter.requireReplaceable(output);
+        }
         if (template != null && !Files.isRegularFile(template)) {
             throw new IllegalArgumentException("no dossier template at " + template);
         }
@@ -91,7 +94,7 @@ final class ExportCommand implements Callable<Integer> {
         DossierProgress progress = System.console() == null ? DossierProgress.NONE : new ConsoleProgress(err);
         DossierContent content;
         DossierSummary summary;
-        try (Workbook wb = workbook.open()) {
+        try (Workbook wb = workbook.openForReading()) {
             content = WorkbookDossier.read(wb, scope, PointEvaluator.withDefaults(), Instant.now(),
                     new StrandbookVersion().getVersion()[0], progress);
             summary = writer.write(content, output, replace, progress);

@@ -40,12 +40,14 @@ final class ImportScheduleCommand implements Callable<Integer> {
         }
         PrintWriter out = spec.commandLine().getOut();
         if (!outcome.written()) {
+            // a rejected schedule is an error: its problems go where errors go, standard error
+            PrintWriter err = spec.commandLine().getErr();
             for (ScheduleProblem p : outcome.problems()) {
-                out.println(schedule.getFileName() + ": " + p);
+                err.println(schedule.getFileName() + ": " + p);
             }
-            out.printf(java.util.Locale.ROOT, "%d problem%s; nothing was written%n", outcome.problems().size(),
+            err.printf(java.util.Locale.ROOT, "%d problem%s; nothing was written%n", outcome.problems().size(),
                     outcome.problems().size() == 1 ? "" : "s");
-            out.flush();
+            err.flush();
             return StrandbookCommand.EXIT_REJECTED;
         }
         out.printf(java.util.Locale.ROOT, "imported %s: %d analyzers, %d points, %d legs, %d catalog entries%n",

@@ -19,7 +19,7 @@ final class PointSelection {
 
     /** Evaluates the chosen point, or every point, of the workbook. */
     SiteEvaluation evaluate(WorkbookFileOptions workbook) {
-        try (Workbook wb = workbook.open()) {
+        try (Workbook wb = workbook.openForReading()) {
             return SiteEvaluator.withDefaults().evaluate(wb, point == null ? List.of() : List.of(point),
                     SiteEvaluator.Progress.NONE);
         }

@@ -34,7 +34,7 @@ final class ScanCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         Spectrum spectrum;
-        try (Workbook wb = workbook.open()) {
+        try (Workbook wb = workbook.openForReading()) {
             spectrum = wb.scans().spectrum(id);
         }
         double[] wavelengthsNm = spectrum.wavelengthsNm();

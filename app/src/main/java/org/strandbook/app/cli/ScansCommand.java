@@ -33,7 +33,7 @@ final class ScansCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         List<ScanRecord> scans;
-        try (Workbook wb = workbook.open()) {
+        try (Workbook wb = workbook.openForReading()) {
             scans = point == null ? wb.scans().listAll() : wb.scans().list(point);
         }
         PrintWriter out = spec.commandLine().getOut();

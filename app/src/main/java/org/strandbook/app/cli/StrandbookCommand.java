@@ -2,6 +2,7 @@ package org.strandbook.app.cli;
 
 import java.io.PrintWriter;
 
+import org.strandbook.app.bench.BenchCommand;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 

@@ -37,4 +37,12 @@ public final class WorkbookFileOptions {
     public Workbook open() {
         return Workbook.open(file, user());
     }
+
+    /**
+     * Opens the workbook for a command that only reads it: a workbook on a read-only share, or one
+     * another user owns, can still be listed, evaluated and exported.
+     */
+    public Workbook openForReading() {
+        return Workbook.openForReading(file, user());
+    }
 }

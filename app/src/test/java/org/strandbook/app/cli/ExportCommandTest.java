@@ -91,6 +91,20 @@ class ExportCommandTest {
     }
 
     @Test
+    void anExportNeverReplacesAWorkbookWhateverItIsCalled() throws IOException {
+        // a workbook copied under a dossier's name: its content, not its name, keeps it; a workbook is
+        // an SQLite file, known by its header string (sqlite.org/fileformat.html, section 1.3)
+        Path workbookCopy = dir.resolve("plant.xlsx");
+        Files.copy(site, workbookCopy);
+        byte[] before = Files.readAllBytes(workbookCopy);
+        CliRun run = CliRun.of("export", site.toString(), "-o", workbookCopy.toString(), "--replace");
+        assertEquals(1, run.exitCode());
+        assertEquals("strandbook: " + workbookCopy + " is an SQLite database, perhaps a Strandbook workbook; a dossier"
+                + " never replaces one, so it was left as it is\n", run.err());
+        assertTrue(java.util.Arrays.equals(before, Files.readAllBytes(workbookCopy)), "the workbook is untouched");
+    }
+
+    @Test
     void anUnknownPointIsRejectedByNameAndNothingIsWritten() {
         Path out = dir.resolve("dossier.xlsx");
         CliRun run = CliRun.of("export", site.toString(), "-o", out.toString(), "--points", "FT-4101,XX-9");

@@ -3,6 +3,8 @@ package org.strandbook.app.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.io.InputStream;
+import java.io.OutputStream;
 import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
@@ -16,9 +18,15 @@ import java.time.Instant;
 import java.util.HexFormat;
 import java.util.List;
 import java.util.OptionalDouble;
+import java.util.zip.ZipEntry;
+import java.util.zip.ZipOutputStream;
 
+import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.strandbook.samplesite.DemoPlant;
+import org.strandbook.samplesite.DemoSite;
+import org.strandbook.schedule.CableScheduleWriter;
 import org.strandbook.site.Analyzer;
 import org.strandbook.site.DetectorType;
 import org.strandbook.site.MeasurementPoint;
@@ -81,6 +89,66 @@ class StoreCommandsTest {
         assertEquals(1, again.exit());
         assertEquals("strandbook: a file already exists at " + file + "; Strandbook never overwrites a file\n",
                 again.err());
+    }
+
+    @Test
+    void initRefusesAWorkbookNamedLikeASpreadsheet() {
+        // design choice: a workbook called plant.xlsx is one "export -o plant.xlsx --replace" away from
+        // being lost
+        Path file = dir.resolve("plant.XLSX");
+        Run r = run("init", file.toString(), "--site-name", "Fennwick Basin Works");
+        assertEquals(1, r.exit());
+        assertEquals("strandbook: a workbook is not a spreadsheet: give " + file + " a name that does not end in .xlsx"
+                + " (for example plant.strandbook)\n", r.err());
+        assertTrue(Files.notExists(file));
+    }
+
+    @Test
+    void aRejectedScheduleListsItsProblemsOnStandardErrorAndWritesNothing() throws Exception {
+        // README, Exit status: errors go to standard error, the output stays for results
+        Path file = dir.resolve("site.sqlite");
+        assertEquals(0, run("init", file.toString(), "--site-name", "Saltmarsh Ridge Works").exit());
+        Path schedule = dir.resolve("schedule.xlsx");
+        CableScheduleWriter.write(DemoSite.schedule(new DemoPlant()), schedule);
+        XSSFWorkbook edited;
+        try (InputStream in = Files.newInputStream(schedule)) {
+            edited = new XSSFWorkbook(in);
+        }
+        edited.getSheet("Segments").getRow(1).getCell(5).setCellValue("twelve");
+        try (OutputStream out = Files.newOutputStream(schedule)) {
+            edited.write(out);
+        }
+        edited.close();
+        Run r = run("import-schedule", file.toString(), schedule.toString());
+        assertEquals(1, r.exit());
+        assertEquals("", r.out());
+        assertEquals(List.of("schedule.xlsx: Segments!F2: length must be a number of metres, was 'twelve'",
+                "1 problem; nothing was written"), r.err().lines().toList());
+    }
+
+    @Test
+    void aDamagedPartOfAScheduleGivesOurLineAndNoLibraryLogOnStandardError() throws Exception {
+        // the launcher in a process of its own, as a user runs it: the spreadsheet library logs
+        // through log4j-api straight to the process's standard error, past the command line's writers
+        Path file = dir.resolve("site.sqlite");
+        assertEquals(0, run("init", file.toString(), "--site-name", "Saltmarsh Ridge Works").exit());
+        Path schedule = dir.resolve("broken.xlsx");
+        try (ZipOutputStream zip = new ZipOutputStream(Files.newOutputStream(schedule))) {
+            // 0xC3 0x28 is no UTF-8 sequence (RFC 3629, section 3): the XML parser fails at once
+            zip.putNextEntry(new ZipEntry("[Content_Types].xml"));
+            zip.write(new byte[] {(byte) 0xC3, 0x28, '<', 'T', '/', '>'});
+            zip.closeEntry();
+        }
+        Process p = new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                "-cp", System.getProperty("java.class.path"), "org.strandbook.app.Launcher",
+                "import-schedule", file.toString(), schedule.toString())
+                .redirectOutput(ProcessBuilder.Redirect.DISCARD).start();
+        String err = new String(p.getErrorStream().readAllBytes(), StandardCharsets.UTF_8);
+        assertEquals(1, p.waitFor());
+        List<String> lines = err.lines().toList();
+        assertEquals(2, lines.size(), err);
+        assertTrue(lines.get(0).startsWith("broken.xlsx: 'broken.xlsx' could not be read as an XLSX workbook"), err);
+        assertEquals("1 problem; nothing was written", lines.get(1));
     }
 
     @Test

@@ -1,4 +1,4 @@
-package org.strandbook.app.cli;
+package org.strandbook.app.bench;
 
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -13,11 +13,12 @@ import org.strandbook.dossier.DossierContent;
 import org.strandbook.dossier.DossierProgress;
 import org.strandbook.dossier.DossierSummary;
 import org.strandbook.dossier.DossierWriter;
-import org.strandbook.dossier.StreamingFloor;
 
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
 /**
@@ -71,7 +72,7 @@ public final class ExportBenchCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         if ((points != null && points < 1) || scans < 1 || wavelengths < 2 || trials < 1) {
-            throw new UsageProblem("--points, --scans and --trials must be at least 1, --wavelengths at least 2");
+            throw new ParameterException(spec.commandLine(), "--points, --scans and --trials must be at least 1, --wavelengths at least 2");
         }
         List<Integer> sizes = points == null ? DEFAULT_SIZES : List.of(points);
         PrintWriter out = spec.commandLine().getOut();
@@ -127,7 +128,7 @@ public final class ExportBenchCommand implements Callable<Integer> {
             }
             Files.deleteIfExists(dir);
         }
-        return StrandbookCommand.EXIT_OK;
+        return CommandLine.ExitCode.OK;
     }
 
     /** CPU time of the whole process, collector and compiler threads included. */

@@ -1,4 +1,4 @@
-package org.strandbook.app.cli;
+package org.strandbook.app.bench;
 
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -34,12 +34,13 @@ import org.strandbook.site.ScanKind;
 import org.strandbook.site.Site;
 import org.strandbook.site.Spectrum;
 import org.strandbook.site.WavelengthBand;
-import org.strandbook.store.BareBlobInsert;
 import org.strandbook.store.Workbook;
 
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
 /**
@@ -83,13 +84,13 @@ public final class ImportBenchCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         if (files < 1) {
-            throw new UsageProblem("--files must be at least 1, was " + files);
+            throw new ParameterException(spec.commandLine(), "--files must be at least 1, was " + files);
         }
         if (trials < 1) {
-            throw new UsageProblem("--trials must be at least 1, was " + trials);
+            throw new ParameterException(spec.commandLine(), "--trials must be at least 1, was " + trials);
         }
         if (warmUpPercent < 0 || warmUpPercent > 100) {
-            throw new UsageProblem("--warm-up must be a percentage from 0 to 100, was " + warmUpPercent);
+            throw new ParameterException(spec.commandLine(), "--warm-up must be a percentage from 0 to 100, was " + warmUpPercent);
         }
         PrintWriter out = spec.commandLine().getOut();
         Path dir;
@@ -137,7 +138,7 @@ public final class ImportBenchCommand implements Callable<Integer> {
                     + " transaction)%n", floor, floorSeconds, trials);
             out.printf(Locale.ROOT, "ratio: %.2f%n", ours / floor);
             out.flush();
-            return StrandbookCommand.EXIT_OK;
+            return CommandLine.ExitCode.OK;
         } finally {
             deleteTree(dir);
         }

@@ -1,4 +1,4 @@
-package org.strandbook.app.cli;
+package org.strandbook.app.bench;
 
 import java.lang.management.GarbageCollectorMXBean;
 import java.lang.management.ManagementFactory;

@@ -1,4 +1,4 @@
-package org.strandbook.store;
+package org.strandbook.app.bench;
 
 import java.nio.file.Path;
 import java.sql.Connection;
@@ -11,13 +11,14 @@ import java.util.List;
 
 import org.sqlite.SQLiteConfig;
 import org.strandbook.site.Spectrum;
+import org.strandbook.store.SpectrumCodec;
 
 /**
  * The floor of the import benchmark: the same spectra, encoded as the workbook stores them, inserted
  * with one bare prepared statement in one transaction into a one-table SQLite file with the
  * workbook's journal settings. No parsing, hashing, validation or audit: what SQLite itself costs.
  */
-public final class BareBlobInsert {
+final class BareBlobInsert {
 
     private BareBlobInsert() {
     }

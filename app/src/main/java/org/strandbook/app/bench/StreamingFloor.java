@@ -1,4 +1,4 @@
-package org.strandbook.dossier;
+package org.strandbook.app.bench;
 
 import java.io.IOException;
 import java.io.OutputStream;
@@ -10,6 +10,8 @@ import org.apache.commons.compress.archivers.zip.ZipArchiveOutputStream;
 import org.apache.poi.ss.usermodel.Row;
 import org.apache.poi.ss.usermodel.Sheet;
 import org.apache.poi.xssf.streaming.SXSSFWorkbook;
+import org.strandbook.dossier.DossierSummary;
+import org.strandbook.dossier.DossierWriter;
 
 /**
  * The floor the export benchmark measures the dossier writer against: the bare streaming workbook
@@ -18,7 +20,7 @@ import org.apache.poi.xssf.streaming.SXSSFWorkbook;
  * style, chart or layout. Texts have the dossier's mean length and numbers four decimals like its
  * losses, neither repeating, so the file compresses no better than the dossier.
  */
-public final class StreamingFloor {
+final class StreamingFloor {
 
     private static final long ROWS_PER_SHEET = 1_000_000;
     private static final int TEXTS = 997;
@@ -40,11 +42,11 @@ public final class StreamingFloor {
             }
             texts[i] = t.substring(0, meanChars);
         }
-        try (SXSSFWorkbook wb = new SXSSFWorkbook(DossierWorkbook.ROW_WINDOW) {
+        try (SXSSFWorkbook wb = new SXSSFWorkbook(DossierWriter.ROWS_IN_MEMORY_PER_SHEET) {
             @Override
             protected ZipArchiveOutputStream createArchiveOutputStream(OutputStream out) {
                 ZipArchiveOutputStream zip = super.createArchiveOutputStream(out);
-                zip.setLevel(DossierWorkbook.DEFLATE_LEVEL);
+                zip.setLevel(DossierWriter.DEFLATE_LEVEL);
                 return zip;
             }
         }; OutputStream os = Files.newOutputStream(file)) {

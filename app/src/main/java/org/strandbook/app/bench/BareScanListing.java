@@ -1,4 +1,4 @@
-package org.strandbook.store;
+package org.strandbook.app.bench;
 
 import java.nio.file.Path;
 import java.sql.Connection;
@@ -15,7 +15,7 @@ import org.sqlite.SQLiteConfig;
  * column read and nothing built from it. No point-tag lookup, no transaction, no objects: what
  * SQLite itself costs to hand over the rows.
  */
-public final class BareScanListing {
+final class BareScanListing {
 
     static final String SQL = "SELECT id, kind, taken_at, operator, integration_ms, co_added, ambient_temperature_c, "
             + "process_temperature_c, n_points, min_nm, max_nm, source_file, sha256 FROM scan "

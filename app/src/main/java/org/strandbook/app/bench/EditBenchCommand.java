@@ -1,4 +1,4 @@
-package org.strandbook.app.cli;
+package org.strandbook.app.bench;
 
 import java.io.PrintWriter;
 import java.util.ArrayList;
@@ -20,9 +20,11 @@ import org.strandbook.site.Catalog;
 import org.strandbook.site.PathElement;
 import org.strandbook.site.PathLeg;
 
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
 /**
@@ -55,7 +57,7 @@ public final class EditBenchCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         if (trialMs < 1) {
-            throw new UsageProblem("--trial-ms must be at least 1, was " + trialMs);
+            throw new ParameterException(spec.commandLine(), "--trial-ms must be at least 1, was " + trialMs);
         }
         PrintWriter out = spec.commandLine().getOut();
         DemoPlant plant = new DemoPlant();
@@ -105,7 +107,7 @@ public final class EditBenchCommand implements Callable<Integer> {
                 + "same light path)", bestFloor, 1e6 / bestFloor));
         out.println(String.format(Locale.ROOT, "ratio: %.2f", best / bestFloor));
         out.flush();
-        return StrandbookCommand.EXIT_OK;
+        return CommandLine.ExitCode.OK;
     }
 
     private static PathLeg withTrunk(PathLeg leg, double trunkM) {

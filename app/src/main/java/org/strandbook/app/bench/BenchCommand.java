@@ -1,4 +1,4 @@
-package org.strandbook.app.cli;
+package org.strandbook.app.bench;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Command;

@@ -1,4 +1,4 @@
-package org.strandbook.app.cli;
+package org.strandbook.app.bench;
 
 import java.io.PrintWriter;
 import java.util.ArrayList;
@@ -19,9 +19,11 @@ import org.strandbook.site.ScanRecord;
 import org.strandbook.site.Spectrum;
 import org.strandbook.site.WavelengthBand;
 
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
 /**
@@ -56,7 +58,7 @@ public final class EvaluateBenchCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         if (points < 1 || scans < 1) {
-            throw new UsageProblem("--points and --scans must be at least 1");
+            throw new ParameterException(spec.commandLine(), "--points and --scans must be at least 1");
         }
         PrintWriter out = spec.commandLine().getOut();
         DemoPlant plant = new DemoPlant();
@@ -89,7 +91,7 @@ public final class EvaluateBenchCommand implements Callable<Integer> {
                 + " and band means of every loop scan on pre-gridded spectra)%n", bestFloor, points / bestFloor);
         out.printf(Locale.ROOT, "ratio: %.3f%n", bestFloor / best);
         out.flush();
-        return StrandbookCommand.EXIT_OK;
+        return CommandLine.ExitCode.OK;
     }
 
     private double timeSite(List<PointInputs> site, PointEvaluator evaluator) {

@@ -1,4 +1,4 @@
-package org.strandbook.app.cli;
+package org.strandbook.app.bench;
 
 import java.io.PrintWriter;
 import java.util.ArrayList;
@@ -30,9 +30,11 @@ import org.strandbook.optics.path.ProbeElement;
 import org.strandbook.optics.path.ProbeWindow;
 import org.strandbook.optics.path.ReferenceMedium;
 
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
 /**
@@ -66,10 +68,10 @@ public final class OpticsBenchCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         if (paths < 1) {
-            throw new UsageProblem("--paths must be at least 1, was " + paths);
+            throw new ParameterException(spec.commandLine(), "--paths must be at least 1, was " + paths);
         }
         if (trialMs < 1) {
-            throw new UsageProblem("--trial-ms must be at least 1, was " + trialMs);
+            throw new ParameterException(spec.commandLine(), "--trial-ms must be at least 1, was " + trialMs);
         }
         PrintWriter out = spec.commandLine().getOut();
         WavelengthGrid grid = WavelengthGrid.uniformNm(400, 2500, GRID_POINTS);
@@ -135,7 +137,7 @@ public final class OpticsBenchCommand implements Callable<Integer> {
         out.println(String.format(Locale.ROOT, "cached spectra: %d", cache.entries()));
         out.println(String.format(Locale.ROOT, "ratio: %.2f", bestBudget / bestFloor));
         out.flush();
-        return StrandbookCommand.EXIT_OK;
+        return CommandLine.ExitCode.OK;
     }
 
 
