@@ -9,7 +9,10 @@ public enum Cause {
     RADIATION_DARKENING("radiation or solarization darkening"),
     AIR_GAP("air gap or crack acting as an etalon"),
     REFERENCE_DRIFT("lamp drift since the reference scan"),
-    BROKEN_FIBER("broken fiber or open connector");
+    BROKEN_FIBER("broken fiber or open connector"),
+    CORE_SIZE_STEP("a smaller core somewhere in the path"),
+    OH_OR_HYDROGEN("OH or hydrogen: the measured range cannot tell them apart"),
+    REFERENCE_OR_RECORDS("the loop loses less than predicted: the reference or the records are wrong");
 
     private final String words;
 

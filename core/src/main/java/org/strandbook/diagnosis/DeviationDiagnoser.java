@@ -28,7 +28,13 @@ import org.strandbook.throughput.ThroughputResult;
  *
  * <p>The flat term is fitted signed: connectors are budgeted at a conservative allowance, so a
  * healthy path often loses a few tenths of a dB less than predicted, and a non-negative flat term
- * would push that shortfall into the other shapes. Only a positive flat excess is reported as a fault.
+ * would push that shortfall into the other shapes. A positive flat excess is reported as a fault; a
+ * negative one of at least 1 dB as a problem of the reference or the records.
+ *
+ * <p>Each band amount is stated where it was measured ({@link StatedAmount}): an OH excess at its
+ * strongest measured band, and "at least" when a stronger band of the same shape was dark or masked.
+ * Where the measured range holds none of the bands that tell OH from molecular hydrogen, one finding
+ * says so ({@link OhOrHydrogen}).
  *
  * <p>The lamp-drift term is the change of a thermal lamp's spectrum when its colour temperature
  * changes between reference and loop scan, from Planck's law ({@link
@@ -124,6 +130,7 @@ public final class DeviationDiagnoser {
             }
             totalEffect += effect[j];
         }
+        MeasuredRange range = MeasuredRange.of(measured);
         List<Finding> findings = new ArrayList<>();
         Map<Finding, Double> peaks = new java.util.IdentityHashMap<>();
         for (int j = 0; j < columns.size(); j++) {
@@ -137,13 +144,33 @@ public final class DeviationDiagnoser {
             for (double v : c.values) {
                 whole = Math.max(whole, Math.abs(x[j] * v));
             }
-            if (whole < minReportDb || (c.signature == Signature.FLAT_EXCESS && x[j] < 0)) {
+            double share = totalEffect > 0 ? 100 * effect[j] / totalEffect : 0;
+            if (c.signature == Signature.FLAT_EXCESS && x[j] < 0) {
+                FlatExcessRanking.betterThanPredicted(x[j], c.atNm, share, minReportDb,
+                        !measured.negativeLossRanges().isEmpty()).ifPresent(f -> {
+                            findings.add(f);
+                            peaks.put(f, -f.amountDb());
+                        });
                 continue;
             }
-            double share = totalEffect > 0 ? 100 * effect[j] / totalEffect : 0;
-            Finding f = finding(c, x[j], share, evidence, grid);
+            if (whole < minReportDb) {
+                continue;
+            }
+            Finding f = finding(c, x[j], share, evidence, range, grid);
             findings.add(f);
             peaks.put(f, peak);
+        }
+        int oh = indexOf(columns, Signature.OH_BANDS);
+        int h2 = indexOf(columns, Signature.HYDROGEN);
+        if (oh >= 0 && h2 >= 0) {
+            double share = totalEffect > 0 ? 100 * (effect[oh] + effect[h2]) / totalEffect : 0;
+            OhOrHydrogen.whereUndecided(scaled(columns.get(oh).onGrid, x[oh]), scaled(columns.get(h2).onGrid, x[h2]),
+                    share, range, evidence, minReportDb).ifPresent(undecided -> {
+                    findings.removeIf(f -> f.signature() == Signature.OH_BANDS
+                            || f.signature() == Signature.HYDROGEN);
+                    findings.add(undecided.finding());
+                    peaks.put(undecided.finding(), undecided.peakDb());
+                });
         }
         // the largest effect at any measured wavelength first: what a technician would see first
         findings.sort(Comparator.comparingDouble((Finding f) -> peaks.get(f)).reversed());
@@ -326,16 +353,16 @@ public final class DeviationDiagnoser {
         return AttenuationShapes.SILICA_OH_BANDS.get(0).centerNm();
     }
 
-    private Finding finding(Column c, double amount, double share, PathEvidence evidence, WavelengthGrid grid) {
+    private Finding finding(Column c, double amount, double share, PathEvidence evidence, MeasuredRange range,
+                            WavelengthGrid grid) {
         return switch (c.signature) {
             case FLAT_EXCESS -> FlatExcessRanking.finding(amount, c.atNm, share, evidence);
-            case OH_BANDS -> ohFinding(amount, c.atNm, share, evidence);
-            case HYDROGEN -> hydrogenFinding(amount, c.atNm, share, evidence);
-            case DARKENING -> new Finding(Signature.DARKENING, List.of(Cause.RADIATION_DARKENING), amount, c.atNm,
-                    share, evidence.longestSegment().label(), String.format(Locale.ROOT,
-                    "≈%.1f dB excess at %.0f nm rising toward short wavelengths: radiation or solarization"
-                            + " darkening; check the dose history of %s and whether the lamp's UV reaches the fiber",
-                    amount, c.atNm, evidence.longestSegment().label()));
+            case OH_BANDS -> ohFinding(amount / AttenuationShapes.ohAbsorptionDbPerKmPerPpm(c.atNm),
+                    StatedAmount.of(range, c.onGrid, ohBandsStrongestFirst()), share, evidence, range);
+            case HYDROGEN -> hydrogenFinding(amount, StatedAmount.of(range, c.onGrid, List.of(c.atNm)), share,
+                    evidence, range);
+            case DARKENING -> darkeningFinding(amount, StatedAmount.of(range, c.onGrid, List.of(c.atNm)), share,
+                    evidence, range);
             case REFERENCE_DRIFT -> new Finding(Signature.REFERENCE_DRIFT, List.of(Cause.REFERENCE_DRIFT), amount,
                     c.atNm, share, "", String.format(Locale.ROOT,
                     "loss tilts by %+.1f dB across the range, as a lamp %s by ≈%.0f K in colour temperature"
@@ -347,39 +374,77 @@ public final class DeviationDiagnoser {
         };
     }
 
-    private static Finding ohFinding(double amount, double atNm, double share, PathEvidence evidence) {
-        double ppmKm = amount / AttenuationShapes.ohAbsorptionDbPerKmPerPpm(atNm);
+    /** The silica OH bands, strongest per ppm first: an OH excess is stated at its strongest measured band. */
+    static List<Double> ohBandsStrongestFirst() {
+        return AttenuationShapes.SILICA_OH_BANDS.stream()
+                .sorted(Comparator.comparingDouble(OhBand::peakDbPerKmPerPpm).reversed())
+                .map(OhBand::centerNm).toList();
+    }
+
+    private static Finding ohFinding(double ppmKm, StatedAmount at, double share, PathEvidence evidence,
+                                     MeasuredRange range) {
+        double amount = ppmKm * AttenuationShapes.ohAbsorptionDbPerKmPerPpm(at.atNm());
         double highOhPpm = SilicaFiberGrade.HIGH_OH.typicalOhPpm();
         // the segment whose length would need the most typical high-OH content to explain it
         PathEvidence.SegmentEvidence suspect = evidence.segments().stream()
                 .min(Comparator.comparingDouble(seg -> Math.abs(Math.log(ppmKm / (seg.lengthM() * 1e-3) / highOhPpm))))
                 .orElseThrow();
         double impliedPpm = ppmKm / (suspect.lengthM() * 1e-3);
-        List<Cause> causes = List.of(Cause.HIGH_OH_FIBER);
+        String bound = at.atLeast() ? "at least " : "≈";
         String growth = evidence.hydrogenService()
                 ? " The point is in hydrogen service: OH can also grow where hydrogen reacts with hot glass."
                 : "";
         String text = String.format(Locale.ROOT,
-                "≈%.1f dB OH-band excess at %.0f nm (%.2f ppm·km of OH): a high-OH fiber where a low-OH one belongs;"
-                        + " if it is one cable, %s (%.1f m) would hold ≈%.0f ppm OH: check its label and grade.%s",
-                amount, atNm, ppmKm, suspect.label(), suspect.lengthM(), impliedPpm, growth);
-        return new Finding(Signature.OH_BANDS, causes, amount, atNm, share, suspect.label(), text);
+                "%s%.1f dB OH-band excess at %.0f nm, the strongest OH band measured (%s%.2f ppm·km of OH):"
+                        + " a high-OH fiber where a low-OH one belongs; if it is one cable, %s (%.1f m) would hold"
+                        + " %s%.0f ppm OH: check its label and grade.%s%s",
+                bound, amount, at.atNm(), bound, ppmKm, suspect.label(), suspect.lengthM(), bound, impliedPpm,
+                growth, lowerBoundReason(at, range));
+        return new Finding(Signature.OH_BANDS, List.of(Cause.HIGH_OH_FIBER), amount, at.atNm(), share,
+                suspect.label(), text, at.atLeast());
     }
 
-    private static Finding hydrogenFinding(double amount, double atNm, double share, PathEvidence evidence) {
+    /** Why an amount is only a lower bound, as a closing sentence, or nothing when it is not. */
+    static String lowerBoundReason(StatedAmount at, MeasuredRange range) {
+        if (!at.atLeast()) {
+            return "";
+        }
+        String where = at.unmeasuredNm().stream()
+                .map(nm -> String.format(Locale.ROOT, "%.0f nm is %s", nm, range.whyNotMeasured(nm)))
+                .collect(Collectors.joining("; "));
+        return " Only a lower bound: this shape is stronger where nothing was measured, so the fit saw only its"
+                + " weaker part: " + where + ".";
+    }
+
+    private static Finding hydrogenFinding(double x, StatedAmount at, double share, PathEvidence evidence,
+                                           MeasuredRange range) {
+        double amount = x * at.shapeValue();
         String service = evidence.hydrogenService()
                 ? "the point is recorded in hydrogen service"
                 : "the point is not recorded in hydrogen service: look for a hydrogen source near the route";
         String hot = evidence.processTemperatureC().isPresent()
                 ? String.format(Locale.ROOT, " at %.0f °C", evidence.processTemperatureC().getAsDouble()) : "";
         String text = String.format(Locale.ROOT,
-                "≈%.1f dB hydrogen-band excess at %.0f nm: hydrogen darkening of the fiber near the probe%s;"
+                "%s%.1f dB hydrogen-band excess at %.0f nm: hydrogen darkening of the fiber near the probe%s;"
                         + " %s. Plan a hydrogen-resistant (carbon-coated) fiber for the probe tail; the loss recedes"
-                        + " only slowly if hydrogen is removed.", amount, atNm, hot, service);
+                        + " only slowly if hydrogen is removed.%s", at.atLeast() ? "at least " : "≈", amount,
+                at.atNm(), hot, service, lowerBoundReason(at, range));
         String tails = String.join(" and ", evidence.probeTails());
-        return new Finding(Signature.HYDROGEN, List.of(Cause.HYDROGEN_DARKENING), amount, atNm, share,
+        return new Finding(Signature.HYDROGEN, List.of(Cause.HYDROGEN_DARKENING), amount, at.atNm(), share,
                 evidence.probeTails().isEmpty() ? "" : evidence.probeTails().get(0), text + " Fiber nearest the probe: "
-                + tails + ".");
+                + tails + ".", at.atLeast());
+    }
+
+    private static Finding darkeningFinding(double x, StatedAmount at, double share, PathEvidence evidence,
+                                            MeasuredRange range) {
+        double amount = x * at.shapeValue();
+        String longest = evidence.longestSegment().label();
+        String text = String.format(Locale.ROOT,
+                "%s%.1f dB excess at %.0f nm rising toward short wavelengths: radiation or solarization"
+                        + " darkening; check the dose history of %s and whether the lamp's UV reaches the fiber.%s",
+                at.atLeast() ? "at least " : "≈", amount, at.atNm(), longest, lowerBoundReason(at, range));
+        return new Finding(Signature.DARKENING, List.of(Cause.RADIATION_DARKENING), amount, at.atNm(), share,
+                longest, text, at.atLeast());
     }
 
     private static Finding fringeFinding(FringeReport f, PathEvidence evidence) {
@@ -487,5 +552,22 @@ public final class DeviationDiagnoser {
         double[] c = v.clone();
         java.util.Arrays.sort(c);
         return c[c.length / 2];
+    }
+
+    private static int indexOf(List<Column> columns, Signature signature) {
+        for (int j = 0; j < columns.size(); j++) {
+            if (columns.get(j).signature == signature) {
+                return j;
+            }
+        }
+        return -1;
+    }
+
+    private static double[] scaled(double[] shape, double coefficient) {
+        double[] out = new double[shape.length];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = coefficient * shape[i];
+        }
+        return out;
     }
 }

@@ -1,7 +1,9 @@
 package org.strandbook.diagnosis;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.stream.Collectors;
 
 /**
@@ -10,13 +12,71 @@ import java.util.stream.Collectors;
  * the long-term minimum radius puts the bend first; every joint inspected and graded clean puts
  * the bend first (the connectors were seen to be good); otherwise the connector comes first,
  * because inspecting and cleaning is the quickest check (common practice).
+ *
+ * <p>When the excess matches the loss of a core-size step between a core of the path and a smaller
+ * one of the path or the catalog ({@link CoreSizeStep}), that step is named as the second candidate
+ * with its arithmetic: the records cannot show a wrong cord, so it never comes first.
+ *
+ * <p>A negative flat excess (the loop loses less than predicted) is no fault of the fiber: it points
+ * at the reference or the records and is reported as such, never folded into the other shapes.
  */
 final class FlatExcessRanking {
+
+    /**
+     * dB: a loop that loses at least this much less than predicted is reported as a reference or
+     * records problem. Larger than the reporting threshold because connector allowances are
+     * conservative and a healthy path often comes in a few tenths under budget (a design choice).
+     */
+    static final double BETTER_THAN_PREDICTED_DB = 1.0;
 
     private FlatExcessRanking() {
     }
 
     static Finding finding(double amountDb, double atNm, double share, PathEvidence evidence) {
+        Finding f = recordsFirst(amountDb, atNm, share, evidence);
+        return CoreSizeStep.matching(amountDb, evidence.pathCoresUm(), evidence.catalogCoresUm())
+                .map(step -> withCoreStep(f, step, evidence))
+                .orElse(f);
+    }
+
+    /**
+     * The loop loses {@code -amountDb} less than predicted at every wavelength. Fibers do not gain
+     * light, so the reference or the records are wrong (one-cord method: IEC 61280-4-1, from memory).
+     */
+    static Optional<Finding> betterThanPredicted(double amountDb, double atNm, double share, double minReportDb,
+                                                 boolean negativeLoss) {
+        if (-amountDb < Math.max(minReportDb, BETTER_THAN_PREDICTED_DB)) {
+            return Optional.empty();
+        }
+        String text = String.format(Locale.ROOT, "the loop loses ≈%.1f dB less than predicted at every wavelength:"
+                + " a fiber cannot gain light, so suspect the reference or the records. Check that the reference was"
+                + " taken through the launch cord alone (not a different cord, not through more than the cord), at"
+                + " the loop scan's integration time, and that every joint, cord and probe the records list is"
+                + " really in the path; re-take the reference before trusting this point's verdicts", -amountDb);
+        if (negativeLoss) {
+            text += "; the loss is even below zero in places, which only a bad reference explains";
+        }
+        return Optional.of(new Finding(Signature.FLAT_EXCESS, List.of(Cause.REFERENCE_OR_RECORDS), amountDb, atNm,
+                share, "", text));
+    }
+
+    private static Finding withCoreStep(Finding f, CoreSizeStep step, PathEvidence evidence) {
+        List<Cause> causes = new ArrayList<>(f.candidates());
+        causes.add(1, Cause.CORE_SIZE_STEP);
+        String cordsOfLargerCore = evidence.segments().stream()
+                .filter(s -> s.coreUm() == step.largerUm())
+                .map(PathEvidence.SegmentEvidence::label)
+                .collect(Collectors.joining(", "));
+        String text = f.text() + String.format(Locale.ROOT, ". Or a smaller core somewhere in the path? A %.0f µm"
+                        + " core after %.0f µm loses %s for uniformly filled fibers of equal NA: check that %s"
+                        + " and every patch cord used are the recorded %.0f µm type",
+                step.smallerUm(), step.largerUm(), step.arithmetic(),
+                cordsOfLargerCore.isEmpty() ? "the cords" : cordsOfLargerCore, step.largerUm());
+        return new Finding(f.signature(), causes, f.amountDb(), f.atNm(), f.sharePercent(), f.checkFirst(), text,
+                f.atLeast());
+    }
+
+    private static Finding recordsFirst(double amountDb, double atNm, double share, PathEvidence evidence) {
         List<PathEvidence.JointEvidence> dirty = evidence.jointsNeedingAction();
         List<PathEvidence.SegmentEvidence> bent = evidence.segmentsWithTightBends();
         List<PathEvidence.JointEvidence> unseen = evidence.jointsNotInspected();

@@ -18,15 +18,25 @@ import org.strandbook.site.PathLeg;
 
 /**
  * What the workbook records about a point that helps rank causes the spectrum alone cannot tell
- * apart: inspection grades, bends against the minimum radius, fiber grades, hydrogen service.
+ * apart: inspection grades, bends against the minimum radius, fiber grades and core sizes, the
+ * core sizes the catalog offers, hydrogen service.
+ *
+ * @param catalogCoresUm the distinct core diameters of the catalog's fiber types, µm, ascending
  */
 public record PathEvidence(List<JointEvidence> joints, List<SegmentEvidence> segments, List<String> probeTails,
-                           boolean hydrogenService, OptionalDouble processTemperatureC) {
+                           boolean hydrogenService, OptionalDouble processTemperatureC, List<Double> catalogCoresUm) {
 
     public PathEvidence {
         joints = List.copyOf(joints);
         segments = List.copyOf(segments);
         probeTails = List.copyOf(probeTails);
+        catalogCoresUm = catalogCoresUm.stream().distinct().sorted().toList();
+    }
+
+    /** Evidence without catalog core sizes: no core-size step can be named. */
+    public PathEvidence(List<JointEvidence> joints, List<SegmentEvidence> segments, List<String> probeTails,
+                        boolean hydrogenService, OptionalDouble processTemperatureC) {
+        this(joints, segments, probeTails, hydrogenService, processTemperatureC, List.of());
     }
 
     /** A joint as inspected. */
@@ -38,9 +48,16 @@ public record PathEvidence(List<JointEvidence> joints, List<SegmentEvidence> seg
      *
      * @param tightestBendMm the tightest recorded bend radius, mm, if any
      * @param longTermMinMm  the long-term minimum bend radius for its cladding (common practice), mm
+     * @param coreUm         core diameter of its fiber type, µm; NaN when not known
      */
     public record SegmentEvidence(String label, String fiberTypeCode, double lengthM, OhGrade ohGrade,
-                                  OptionalDouble tightestBendMm, double longTermMinMm) {
+                                  OptionalDouble tightestBendMm, double longTermMinMm, double coreUm) {
+
+        /** A segment whose core diameter is not known. */
+        public SegmentEvidence(String label, String fiberTypeCode, double lengthM, OhGrade ohGrade,
+                               OptionalDouble tightestBendMm, double longTermMinMm) {
+            this(label, fiberTypeCode, lengthM, ohGrade, tightestBendMm, longTermMinMm, Double.NaN);
+        }
 
         public boolean bendBelowMinimum() {
             return tightestBendMm.isPresent() && tightestBendMm.getAsDouble() < longTermMinMm;
@@ -60,13 +77,15 @@ public record PathEvidence(List<JointEvidence> joints, List<SegmentEvidence> seg
                 FiberType f = catalog.fiber(s.fiberTypeCode());
                 OptionalDouble tightest = s.bends().stream().mapToDouble(Bend::radiusMm).min();
                 segments.add(new SegmentEvidence(s.label(), f.code(), s.lengthM(), f.ohGrade(), tightest,
-                        MinimumBendRadius.longTermMm(f.claddingUm())));
+                        MinimumBendRadius.longTermMm(f.claddingUm()), f.coreUm()));
             }
         }
         List<String> tails = new ArrayList<>();
         tails.add(send.segments().get(send.segments().size() - 1).label());
         tails.add(ret.segments().get(0).label());
-        return new PathEvidence(joints, segments, tails, point.hydrogenService(), point.processTemperatureC());
+        List<Double> catalogCores = catalog.fiberTypes().values().stream().map(FiberType::coreUm).toList();
+        return new PathEvidence(joints, segments, tails, point.hydrogenService(), point.processTemperatureC(),
+                catalogCores);
     }
 
     public List<JointEvidence> jointsNeedingAction() {
@@ -79,6 +98,12 @@ public record PathEvidence(List<JointEvidence> joints, List<SegmentEvidence> seg
 
     public List<SegmentEvidence> segmentsWithTightBends() {
         return segments.stream().filter(SegmentEvidence::bendBelowMinimum).toList();
+    }
+
+    /** The distinct core diameters recorded along the path, µm, ascending. */
+    public List<Double> pathCoresUm() {
+        return segments.stream().mapToDouble(SegmentEvidence::coreUm).filter(Double::isFinite).sorted().distinct()
+                .boxed().toList();
     }
 
     public SegmentEvidence longestSegment() {

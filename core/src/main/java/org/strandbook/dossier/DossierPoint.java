@@ -6,6 +6,7 @@ import java.util.Optional;
 import org.strandbook.evaluation.PointEvaluation;
 import org.strandbook.evaluation.Status;
 import org.strandbook.site.Inspection;
+import org.strandbook.site.MaintenanceAction;
 import org.strandbook.site.MeasurementPoint;
 import org.strandbook.site.Note;
 import org.strandbook.site.PathLeg;
@@ -22,16 +23,25 @@ import org.strandbook.site.SignOff;
  * @param signOffs    sign-offs on the point in time order
  * @param evaluation  the evaluation, absent when the point could not be evaluated at all
  * @param problems    what could not be evaluated, in words
+ * @param actions     maintenance actions at the point in time order
  */
 public record DossierPoint(MeasurementPoint point, List<PathLeg> legs, List<Inspection> inspections, List<Note> notes,
-                           List<SignOff> signOffs, Optional<PointEvaluation> evaluation, List<String> problems) {
+                           List<SignOff> signOffs, Optional<PointEvaluation> evaluation, List<String> problems,
+                           List<MaintenanceAction> actions) {
 
     public DossierPoint {
+        actions = actions == null ? List.of() : List.copyOf(actions);
         legs = List.copyOf(legs);
         inspections = List.copyOf(inspections);
         notes = List.copyOf(notes);
         signOffs = List.copyOf(signOffs);
         problems = List.copyOf(problems);
+    }
+
+    /** A point with no maintenance recorded. */
+    public DossierPoint(MeasurementPoint point, List<PathLeg> legs, List<Inspection> inspections, List<Note> notes,
+                        List<SignOff> signOffs, Optional<PointEvaluation> evaluation, List<String> problems) {
+        this(point, legs, inspections, notes, signOffs, evaluation, problems, List.of());
     }
 
     public String tag() {

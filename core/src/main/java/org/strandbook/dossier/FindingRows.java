@@ -13,7 +13,9 @@ import org.strandbook.diagnosis.Diagnosis;
 import org.strandbook.diagnosis.Finding;
 import org.strandbook.evaluation.BandTrend;
 import org.strandbook.evaluation.PointEvaluation;
+import org.strandbook.handover.StepAttribution;
 import org.strandbook.site.Inspection;
+import org.strandbook.site.MaintenanceAction;
 import org.strandbook.site.Joint;
 import org.strandbook.site.Note;
 import org.strandbook.site.PathLeg;
@@ -44,6 +46,10 @@ final class FindingRows {
     private record Line(String source, String text, Optional<Finding> finding, String checkFirst) {
     }
 
+    /** What was done, in the fix columns: a note or a maintenance action. */
+    private record Fix(String text, java.time.Instant when, String by) {
+    }
+
     private FindingRows() {
     }
 
@@ -53,7 +59,7 @@ final class FindingRows {
             if (lines.isEmpty()) {
                 lines.add(new Line("", "No finding: the loop behaves as predicted.", Optional.empty(), ""));
             }
-            List<Note> notes = p.notes();
+            List<Fix> notes = fixes(p);
             for (int i = 0; i < Math.max(lines.size(), notes.size()); i++) {
                 Row r = t.newRowStyled();
                 t.text(r, DossierColumn.FINDING_TAG, p.tag());
@@ -69,7 +75,7 @@ final class FindingRows {
                     t.text(r, DossierColumn.FINDING_SOURCE, SOURCE_NOTE);
                 }
                 if (i < notes.size()) {
-                    note(t, r, notes.get(i));
+                    fix(t, r, notes.get(i));
                 }
             }
         }
@@ -81,6 +87,26 @@ final class FindingRows {
             t.number(r, DossierColumn.FINDING_NUMBER, i + 1);
             note(t, r, siteNotes.get(i));
         }
+    }
+
+    /** The point's notes and maintenance actions in time order: what was done about its findings. */
+    private static List<Fix> fixes(DossierPoint p) {
+        List<Fix> out = new ArrayList<>();
+        p.notes().forEach(n -> out.add(new Fix((n.elementLabel().isEmpty() ? "" : n.elementLabel() + ": ") + n.text(),
+                n.writtenAt(), n.author())));
+        for (MaintenanceAction a : p.actions()) {
+            out.add(new Fix(a.kind().words() + (a.elementLabel().isEmpty() ? "" : " " + a.elementLabel())
+                    + (a.what().isEmpty() ? "" : ": " + a.what()) + (a.why().isEmpty() ? "" : "; why: " + a.why()),
+                    a.performedAt(), a.performedBy()));
+        }
+        out.sort(java.util.Comparator.comparing(Fix::when));
+        return out;
+    }
+
+    private static void fix(TableSheet t, Row r, Fix f) {
+        t.text(r, DossierColumn.FINDING_FIX_RECORDED, f.text());
+        t.time(r, DossierColumn.FINDING_FIX_WHEN, f.when());
+        t.text(r, DossierColumn.FINDING_FIX_BY, f.by());
     }
 
     /** A note in the fix columns: what was done, when, by whom. */
@@ -119,7 +145,7 @@ final class FindingRows {
         e.ifPresent(ev -> ev.predicted().notes().forEach(n -> out.add(new Line(SOURCE_PREDICTION, n, Optional.empty(),
                 ""))));
         inspections(p, out);
-        e.ifPresent(ev -> ev.trends().forEach(trend -> trend(trend, out)));
+        e.ifPresent(ev -> ev.trends().forEach(trend -> trend(trend, p.actions(), out)));
         return out;
     }
 
@@ -146,13 +172,15 @@ final class FindingRows {
         }
     }
 
-    private static void trend(BandTrend trend, List<Line> out) {
+    private static void trend(BandTrend trend, List<MaintenanceAction> actions, List<Line> out) {
         String band = trend.band().name();
         for (StepEvent s : trend.steps()) {
             String what = s.kind() == StepEvent.Kind.STEP ? "step" : "single outlying reading";
             out.add(new Line(SOURCE_TREND, band + ": " + what + " of " + DossierText.signed(s.stepDb(), 2) + " dB between "
                     + DossierText.date(s.before()) + " and " + DossierText.date(s.after()) + " ("
-                    + DossierText.decimal(s.sizeInNoiseWidths(), 1) + " noise widths)", Optional.empty(), ""));
+                    + DossierText.decimal(s.sizeInNoiseWidths(), 1) + " noise widths)"
+                    + StepAttribution.cause(s, actions).map(a -> "; " + StepAttribution.describe(s, actions)).orElse(""),
+                    Optional.empty(), ""));
         }
         trend.outlook().filter(o -> o.status() == MarginForecast.Status.PROJECTED
                         || o.status() == MarginForecast.Status.ALREADY_EXHAUSTED)

@@ -38,7 +38,8 @@ final class PointRegisterRows {
             }
             t.text(r, DossierColumn.POINT_STATUS, p.status().label());
             t.text(r, DossierColumn.POINT_SIGN_OFFS, p.signOffs().stream()
-                    .map(s -> s.role().name() + " " + s.name() + " " + DossierText.date(s.signedAt()))
+                    .map(s -> s.role().name() + " " + s.name() + " " + DossierText.date(s.signedAt())
+                            + (s.remark().isEmpty() ? "" : " \u2014 " + s.remark()))
                     .collect(Collectors.joining("\n")));
         }
     }

@@ -12,19 +12,22 @@ import java.util.stream.Collectors;
 
 import org.strandbook.evaluation.PointEvaluation;
 import org.strandbook.evaluation.PointEvaluator;
-import org.strandbook.evaluation.PointInputs;
+import org.strandbook.evaluation.WorkbookInputs;
 import org.strandbook.site.Analyzer;
 import org.strandbook.site.Catalog;
 import org.strandbook.site.Inspection;
+import org.strandbook.site.MaintenanceAction;
 import org.strandbook.site.MeasurementPoint;
 import org.strandbook.site.Note;
 import org.strandbook.site.PathDirection;
 import org.strandbook.site.PathLeg;
 import org.strandbook.site.ScanRecord;
+import org.strandbook.handover.SignatureText;
 import org.strandbook.site.SignOff;
 import org.strandbook.site.Site;
 import org.strandbook.store.AuditFinding;
 import org.strandbook.store.AuditReport;
+import org.strandbook.store.SignatureState;
 import org.strandbook.store.Workbook;
 
 /**
@@ -56,7 +59,14 @@ public final class WorkbookDossier {
         Map<String, List<Inspection>> inspections = workbook.inspections().listAll().stream()
                 .collect(Collectors.groupingBy(Inspection::pointTag));
         List<Note> notes = workbook.notes().list();
-        List<SignOff> signOffs = workbook.signOffs().list();
+        Map<String, List<MaintenanceAction>> actions = workbook.maintenance().listAll().stream()
+                .collect(Collectors.groupingBy(MaintenanceAction::pointTag));
+        List<SignOff> signOffs = shownSignOffs(workbook);
+        String revision = workbook.signOffs().dossierRevision();
+        if (!revision.equals(site.revision())) {
+            // the signed revision changed since: this dossier is the next one, not yet signed
+            site = new Site(site.name(), site.plantArea(), revision, site.defaultToleranceDb());
+        }
 
         List<DossierPoint> points = new ArrayList<>();
         Set<String> analyzerTags = new LinkedHashSet<>();
@@ -69,7 +79,8 @@ public final class WorkbookDossier {
                     legs, catalog, scope, evaluator, problems);
             points.add(new DossierPoint(point, legs, inspections.getOrDefault(point.tag(), List.of()),
                     notes.stream().filter(n -> n.pointTag().equals(point.tag())).toList(),
-                    signOffs.stream().filter(s -> s.pointTag().equals(point.tag())).toList(), evaluation, problems));
+                    signOffs.stream().filter(s -> s.pointTag().equals(point.tag())).toList(), evaluation, problems,
+                    actions.getOrDefault(point.tag(), List.of())));
             if (!progress.advance("evaluating " + point.tag(), i + 1, chosen.size())) {
                 throw new DossierCancelledException("export cancelled while evaluating point " + point.tag());
             }
@@ -85,6 +96,29 @@ public final class WorkbookDossier {
                 notes.stream().filter(n -> n.pointTag().isEmpty()).toList(),
                 signOffs.stream().filter(s -> s.pointTag().isEmpty()).toList(), audit, issuedAt, software,
                 workbook.file().getFileName().toString());
+    }
+
+    /**
+     * The signatures as the dossier shows them: a point's superseded signature says so in its remark;
+     * the cover carries only the current signatures of the revision it shows.
+     */
+    private static List<SignOff> shownSignOffs(Workbook workbook) {
+        String revision = workbook.signOffs().dossierRevision();
+        List<SignOff> out = new ArrayList<>();
+        for (SignatureState state : workbook.signOffs().states()) {
+            SignOff s = state.signOff();
+            boolean current = state.standing() == SignatureState.Standing.CURRENT
+                    || state.standing() == SignatureState.Standing.NO_DIGEST;
+            if (s.onSite()) {
+                if (current && (s.revision().isEmpty() || s.revision().equalsIgnoreCase(revision))) {
+                    out.add(s);
+                }
+            } else {
+                out.add(current ? s : new SignOff(s.role(), s.name(), s.signedAt(), s.pointTag(),
+                        SignatureText.line(state), s.jobTitle(), s.revision(), s.contentSha256()));
+            }
+        }
+        return out;
     }
 
     private static List<MeasurementPoint> choose(List<MeasurementPoint> all, DossierScope scope) {
@@ -120,8 +154,7 @@ public final class WorkbookDossier {
             problems.add("no scan of " + point.tag() + " among " + scope.describeDates());
         }
         try {
-            return Optional.of(evaluator.evaluate(new PointInputs(site, point, analyzer, send.get(), ret.get(), catalog,
-                    inRange, id -> workbook.scans().spectrum(id))));
+            return Optional.of(evaluator.evaluate(WorkbookInputs.of(workbook, site, point, analyzer, catalog, inRange)));
         } catch (IllegalArgumentException e) {
             problems.add(e.getMessage());
             return Optional.empty();

@@ -15,7 +15,8 @@ import org.strandbook.trend.StepEvent;
  * @param band       the band
  * @param readings   mean measured loss in the band per paired loop scan, in time order (dB)
  * @param noLight    times of loop scans that returned no light in the band
- * @param trend      Theil–Sen trend of the readings, when there are at least two
+ * @param trend      Theil–Sen trend of the readings since the latest repair when there are at least two
+ *                   of them, else of all readings, when there are at least two
  * @param steps      step changes between consecutive scans larger than the noise
  * @param outlook    when the margin against the analyzer's allowed loss runs out
  */

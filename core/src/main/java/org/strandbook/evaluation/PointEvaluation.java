@@ -64,9 +64,12 @@ public record PointEvaluation(MeasurementPoint point, Status status, PredictedBu
             String size = Double.isInfinite(f.amountDb()) ? "no light"
                     : f.signature() == org.strandbook.diagnosis.Signature.FRINGES
                     ? String.format(java.util.Locale.ROOT, "ripple of %.2f dB peak to peak", 2 * f.amountDb())
+                    : f.cause() == org.strandbook.diagnosis.Cause.REFERENCE_OR_RECORDS
+                    ? String.format(java.util.Locale.ROOT, "≈%.1f dB under prediction", -f.amountDb())
                     : Double.isNaN(f.atNm()) || f.signature() == org.strandbook.diagnosis.Signature.FLAT_EXCESS
                     ? String.format(java.util.Locale.ROOT, "≈%.1f dB, wavelength-flat", f.amountDb())
-                    : String.format(java.util.Locale.ROOT, "≈%.1f dB at %.0f nm", f.amountDb(), f.atNm());
+                    : String.format(java.util.Locale.ROOT, "%s%.1f dB at %.0f nm", f.atLeast() ? "≥" : "≈",
+                    f.amountDb(), f.atNm());
             return f.cause().words() + ", " + size + (f.checkFirst().isEmpty() ? "" : "; check " + f.checkFirst());
         }).orElse("as predicted");
     }

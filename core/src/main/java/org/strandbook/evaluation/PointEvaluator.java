@@ -15,6 +15,8 @@ import org.strandbook.diagnosis.Diagnosis;
 import org.strandbook.diagnosis.PathEvidence;
 import org.strandbook.optics.WavelengthGrid;
 import org.strandbook.optics.path.OpticsCache;
+import org.strandbook.site.MaintenanceAction;
+import org.strandbook.site.MaintenanceKind;
 import org.strandbook.site.ScanRecord;
 import org.strandbook.site.Spectrum;
 import org.strandbook.site.WavelengthBand;
@@ -65,14 +67,7 @@ public final class PointEvaluator {
     public PointEvaluation evaluate(PointInputs in) {
         WavelengthGrid grid = EvaluationGrid.forAnalyzer(in.analyzer());
         OpticsCache cache = caches.computeIfAbsent(grid, OpticsCache::new);
-        PredictedBudget predicted;
-        try {
-            predicted = new PointBudgetBuilder(in.catalog()).build(in.point(), in.send(), in.ret(), cache);
-        } catch (IllegalArgumentException e) {
-            throw new IllegalArgumentException("point " + in.point().tag() + ": cannot predict its loss: "
-                    + e.getMessage(), e);
-        }
-        double[] predictedLoss = predicted.totalLossDb();
+        PredictedBudget predictedToday = predict(in, in.send(), in.ret(), cache);
         List<WavelengthBand> bands = in.point().bands();
         for (WavelengthBand band : bands) {
             if (band.fromNm() < grid.firstNm() || band.toNm() > grid.lastNm()) {
@@ -121,9 +116,14 @@ public final class PointEvaluator {
         if (latest == null) {
             problems.add(0, pairs.paired().isEmpty() && pairs.unpaired().isEmpty()
                     ? "no loop scan recorded yet" : "no loop scan could be paired with a reference and dark");
-            return new PointEvaluation(in.point(), Status.REVIEW, predicted, Optional.empty(), Optional.empty(),
+            return new PointEvaluation(in.point(), Status.REVIEW, predictedToday, Optional.empty(), Optional.empty(),
                     List.of(), Optional.empty(), List.of(), problems);
         }
+        // the latest scan is judged against the path it went through, graded as inspected by then
+        PathTimeline.Legs then = in.history().at(latestPair.loop().takenAt());
+        PredictedBudget predicted = then.send().equals(in.send()) && then.ret().equals(in.ret())
+                ? predictedToday : predict(in, then.send(), then.ret(), cache);
+        double[] predictedLoss = predicted.totalLossDb();
         double tolerance = in.point().effectiveToleranceDb(in.site());
         double allowed = in.analyzer().allowedLossDb();
         List<BandVerdict> verdicts = new ArrayList<>();
@@ -134,23 +134,46 @@ public final class PointEvaluator {
             status = status.worse(v.status());
         }
         Diagnosis diagnosis = diagnoser.diagnose(latest, predictedLoss,
-                PathEvidence.of(in.point(), in.send(), in.ret(), in.catalog()));
+                PathEvidence.of(in.point(), then.send(), then.ret(), in.catalog()));
         Instant asOf = latestPair.loop().takenAt();
         List<BandTrend> trends = new ArrayList<>();
         for (int b = 0; b < bands.size(); b++) {
-            trends.add(trend(bands.get(b), readings.get(b), dark.get(b), verdicts.get(b), asOf));
+            trends.add(trend(bands.get(b), readings.get(b), dark.get(b), verdicts.get(b), asOf,
+                    latestRepair(in.actions(), asOf)));
         }
         return new PointEvaluation(in.point(), status, predicted, Optional.of(latestPair), Optional.of(latest),
                 verdicts, Optional.of(diagnosis), trends, problems);
     }
 
+    private static PredictedBudget predict(PointInputs in, org.strandbook.site.PathLeg send,
+                                           org.strandbook.site.PathLeg ret, OpticsCache cache) {
+        try {
+            return new PointBudgetBuilder(in.catalog()).build(in.point(), send, ret, cache);
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException("point " + in.point().tag() + ": cannot predict its loss: "
+                    + e.getMessage(), e);
+        }
+    }
+
+    /**
+     * The latest repair up to {@code asOf}: any action but a re-taken reference, which changes the
+     * baseline of no loop (design choice).
+     */
+    private static Optional<Instant> latestRepair(List<MaintenanceAction> actions, Instant asOf) {
+        return actions.stream().filter(a -> a.kind() != MaintenanceKind.RETAKE_REFERENCE)
+                .map(MaintenanceAction::performedAt).filter(t -> !t.isAfter(asOf)).max(Instant::compareTo);
+    }
+
     private BandTrend trend(WavelengthBand band, List<LossReading> readings, List<Instant> noLight,
-                            BandVerdict latest, Instant asOf) {
+                            BandVerdict latest, Instant asOf, Optional<Instant> repaired) {
         Optional<LossTrend> trend = Optional.empty();
         List<org.strandbook.trend.StepEvent> events = List.of();
         Optional<MarginForecast.Outlook> outlook = Optional.empty();
+        // after a repair the loss follows a new course: fit and forecast it alone once it has two readings
+        List<LossReading> regime = repaired.map(r -> readings.stream().filter(x -> x.time().isAfter(r)).toList())
+                .filter(after -> after.size() >= 2).orElse(readings);
         if (readings.size() >= 2) {
-            LossTrend t = theilSen.fit(readings);
+            LossTrend t = theilSen.fit(regime);
             trend = Optional.of(t);
             if (readings.size() >= 3) {
                 StepReport report = steps.detect(readings);

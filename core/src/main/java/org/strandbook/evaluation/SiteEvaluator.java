@@ -11,8 +11,6 @@ import java.util.stream.Collectors;
 import org.strandbook.site.Analyzer;
 import org.strandbook.site.Catalog;
 import org.strandbook.site.MeasurementPoint;
-import org.strandbook.site.PathDirection;
-import org.strandbook.site.PathLeg;
 import org.strandbook.site.Site;
 import org.strandbook.store.Workbook;
 
@@ -87,11 +85,6 @@ public final class SiteEvaluator {
         if (analyzer == null) {
             throw new IllegalArgumentException("point " + point.tag() + ": unknown analyzer '" + point.analyzerTag() + "'");
         }
-        PathLeg send = workbook.paths().leg(point.tag(), PathDirection.SEND).orElseThrow(() ->
-                new IllegalArgumentException("point " + point.tag() + ": no send leg recorded"));
-        PathLeg ret = workbook.paths().leg(point.tag(), PathDirection.RETURN).orElseThrow(() ->
-                new IllegalArgumentException("point " + point.tag() + ": no return leg recorded"));
-        return new PointInputs(site, point, analyzer, send, ret, catalog, workbook.scans().list(point.tag()),
-                id -> workbook.scans().spectrum(id));
+        return WorkbookInputs.of(workbook, site, point, analyzer, catalog, workbook.scans().list(point.tag()));
     }
 }

@@ -24,7 +24,9 @@ enum AuditedTable {
             + " FROM scan s LEFT JOIN scan_spectrum d ON d.scan_id = s.id", "s.id", List.of("scan_spectrum")),
     INSPECTION("inspection"),
     SIGN_OFF("sign_off"),
-    NOTE("note");
+    NOTE("note"),
+    MAINTENANCE_ACTION("maintenance_action"),
+    RETIRED_PATH_ELEMENT("retired_path_element");
 
     /**
      * The last column of a scan's image, its spectrum: {@link AuditLog} builds the image of a new

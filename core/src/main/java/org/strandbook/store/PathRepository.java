@@ -187,6 +187,79 @@ public final class PathRepository {
         });
     }
 
+    /**
+     * The point's legs as they were at {@code at}: before a maintenance action replaced an element,
+     * the path it replaced; otherwise the path of today. Joint grades are as entered with the path;
+     * {@link org.strandbook.site.InspectionHistory} gives them as inspected at that moment.
+     */
+    public List<PathLeg> legsAt(String pointTag, java.time.Instant at) {
+        return session.read(() -> {
+            long pointId = RowKeys.requirePoint(session, pointTag);
+            java.util.OptionalLong action = PathHistory.firstChangeAfter(session, pointId, at);
+            if (action.isPresent()) {
+                return PathHistory.retiredLegs(session, action.getAsLong(), storedTag(pointId));
+            }
+            return legs(pointTag);
+        });
+    }
+
+    /**
+     * Puts {@code replacement} in the place of the element labelled {@code label} (same kind), each
+     * changed row audited. The caller has already copied the path into its history.
+     */
+    void replaceElement(long pointId, String pointTag, String label, PathElement replacement) throws SQLException {
+        String kind = replacement instanceof CableSegment ? "SEGMENT" : "JOINT";
+        long elementId;
+        try (PreparedStatement ps = session.connection().prepareStatement(
+                "SELECT id FROM path_element WHERE point_id = ? AND label = ? AND kind = ?")) {
+            ps.setLong(1, pointId);
+            ps.setString(2, label);
+            ps.setString(3, kind);
+            try (ResultSet rs = ps.executeQuery()) {
+                if (!rs.next()) {
+                    throw new UnknownEntryException("point " + pointTag + " has no " + (kind.equals("JOINT") ? "joint"
+                            : "cable") + " '" + label + "' on its path today");
+                }
+                elementId = rs.getLong(1);
+            }
+        }
+        String where = "point " + pointTag + ": replacement for " + label;
+        RowImage before = audit.capture(AuditedTable.PATH_ELEMENT, elementId).orElseThrow();
+        if (replacement instanceof CableSegment s) {
+            if (!s.label().equalsIgnoreCase(label)) {
+                checkCableFree(s.label());
+            }
+            long fiberId = RowKeys.fiberType(session, s.fiberTypeCode()).orElseThrow(() -> new UnknownEntryException(
+                    where + " uses unknown fiber type '" + s.fiberTypeCode() + "'"));
+            try (PreparedStatement ps = session.connection().prepareStatement(
+                    "UPDATE path_element SET label = ?, fiber_type_id = ?, length_m = ? WHERE id = ?")) {
+                ps.setString(1, s.label());
+                ps.setLong(2, fiberId);
+                ps.setDouble(3, s.lengthM());
+                ps.setLong(4, elementId);
+                ps.executeUpdate();
+            }
+            for (long bendId : RowKeys.children(session, "SELECT id FROM segment_bend WHERE element_id = ?", elementId)) {
+                audit.deleteRow(AuditedTable.SEGMENT_BEND, bendId);
+            }
+            insertBends(elementId, s.bends());
+        } else if (replacement instanceof Joint j) {
+            try (PreparedStatement ps = session.connection().prepareStatement("UPDATE path_element SET label = ?, "
+                    + "connector_type_a_id = ?, connector_type_b_id = ?, grade = ?, loss_db = ?, loss_basis = ? "
+                    + "WHERE id = ?")) {
+                ps.setString(1, j.label());
+                ps.setLong(2, connectorId(where, j, j.connectorTypeA()));
+                ps.setLong(3, connectorId(where, j, j.connectorTypeB()));
+                ps.setString(4, j.grade().name());
+                Columns.setOptional(ps, 5, j.lossDb());
+                ps.setString(6, j.lossBasis().name());
+                ps.setLong(7, elementId);
+                ps.executeUpdate();
+            }
+        }
+        audit.updated(AuditedTable.PATH_ELEMENT, elementId, before);
+    }
+
     /** The point's leg in one direction, if it has any element. */
     public Optional<PathLeg> leg(String pointTag, PathDirection direction) {
         return legs(pointTag).stream().filter(l -> l.direction() == direction).findFirst();

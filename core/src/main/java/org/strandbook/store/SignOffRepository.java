@@ -7,42 +7,95 @@ import java.sql.Types;
 import java.util.ArrayList;
 import java.util.List;
 
+import org.strandbook.site.RevisionLetter;
+import org.strandbook.site.Site;
 import org.strandbook.site.SignOff;
 import org.strandbook.site.SignOffRole;
 
-/** Signatures on the site record or on one point. Every addition is audited. */
+/**
+ * Signatures on the site record (the dossier revision) or on one point, each tied to what it signed:
+ * a point's signature keeps the SHA-256 of the point's evaluation inputs ({@link PointContent}), a
+ * site signature the audit trail's head (row and hash) when it was signed. A later change makes the
+ * signature superseded; a signature whose digest disagrees with the trail it names was tampered with.
+ * A site signature given while the revision's earlier signatures are superseded opens the next
+ * revision. Every addition is audited.
+ */
 public final class SignOffRepository {
+
+    private static final String SELECT = "SELECT s.id, s.role, s.name, s.signed_at, p.tag, s.remark, s.job_title, "
+            + "s.revision, s.content_sha256, s.audit_head_id FROM sign_off s LEFT JOIN point p ON p.id = s.point_id "
+            + "ORDER BY s.signed_at, s.id";
+    private static final String HEAD = "SELECT id, hash FROM audit_entry ORDER BY id DESC LIMIT 1";
+    private static final String HASH_OF = "SELECT hash FROM audit_entry WHERE id = ?";
+    /** Anything but a signature or a schema step, recorded after the signed head, changes what a site signature covers. */
+    private static final String CHANGED_SINCE = "SELECT id, table_name, row_key FROM audit_entry WHERE id > ? "
+            + "AND table_name NOT IN ('sign_off', '" + AuditLog.WORKBOOK_TABLE + "') ORDER BY id LIMIT 1";
+
+    private record Stored(long id, SignOff signOff, Long auditHeadId) {
+    }
 
     private final Session session;
     private final AuditLog audit;
+    private final SiteRepository site;
 
-    SignOffRepository(Session session, AuditLog audit) {
+    SignOffRepository(Session session, AuditLog audit, SiteRepository site) {
         this.session = session;
         this.audit = audit;
+        this.site = site;
     }
 
     /**
-     * Records a sign-off.
+     * Records a signature with what it signs (its own digest and revision fields are ignored).
      *
      * @return its id
-     * @throws UnknownEntryException when it names a point the workbook does not hold
+     * @throws UnknownEntryException    when it names a point the workbook does not hold
+     * @throws IllegalArgumentException for a time in the future, or a point with no loop scan to sign
      */
     public long add(SignOff signOff) {
         return session.write(() -> {
-            if (signOff.signedAt() == null) {
-                throw new IllegalArgumentException("sign-off by " + signOff.name() + ": time missing");
+            FieldRecordTime.require(signOff.signedAt(), "sign-off by " + signOff.name());
+            Long pointId = null;
+            String content;
+            Long headId = null;
+            if (signOff.onSite()) {
+                if (anySuperseded(currentRevision())) {
+                    Site s = site.get();
+                    site.update(new Site(s.name(), s.plantArea(), RevisionLetter.next(s.revision()),
+                            s.defaultToleranceDb()));
+                }
+                try (ResultSet rs = session.prepared(HEAD).executeQuery()) {
+                    rs.next();
+                    headId = rs.getLong(1);
+                    content = rs.getString(2);
+                }
+            } else {
+                pointId = RowKeys.requirePoint(session, signOff.pointTag());
+                if (!PointContent.hasLoopScan(session, pointId)) {
+                    throw new IllegalArgumentException("point " + signOff.pointTag() + " has no loop scan, so there is "
+                            + "no evaluation to sign; import and evaluate its scans first");
+                }
+                content = PointContent.sha256(session, pointId);
             }
             try (PreparedStatement ps = session.connection().prepareStatement("INSERT INTO sign_off (role, name, "
-                    + "signed_at, point_id, remark) VALUES (?, ?, ?, ?, ?) RETURNING id")) {
+                    + "signed_at, point_id, remark, job_title, revision, content_sha256, audit_head_id) "
+                    + "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?) RETURNING id")) {
                 ps.setString(1, signOff.role().name());
                 ps.setString(2, signOff.name());
                 ps.setString(3, StoredTime.format(signOff.signedAt()));
-                if (signOff.pointTag().isEmpty()) {
+                if (pointId == null) {
                     ps.setNull(4, Types.INTEGER);
                 } else {
-                    ps.setLong(4, RowKeys.requirePoint(session, signOff.pointTag()));
+                    ps.setLong(4, pointId);
                 }
                 ps.setString(5, signOff.remark());
+                ps.setString(6, signOff.jobTitle());
+                ps.setString(7, currentRevision());
+                ps.setString(8, content);
+                if (headId == null) {
+                    ps.setNull(9, Types.INTEGER);
+                } else {
+                    ps.setLong(9, headId);
+                }
                 long id = Columns.insertReturningId(ps);
                 audit.inserted(AuditedTable.SIGN_OFF, id);
                 return id;
@@ -52,17 +105,100 @@ public final class SignOffRepository {
 
     /** Every sign-off in time order; site-wide ones have an empty point tag. */
     public List<SignOff> list() {
+        return session.read(() -> stored().stream().map(Stored::signOff).toList());
+    }
+
+    /** Every sign-off in time order with whether what it signed is unchanged. */
+    public List<SignatureState> states() {
         return session.read(() -> {
-            List<SignOff> out = new ArrayList<>();
-            try (PreparedStatement ps = session.connection().prepareStatement("SELECT s.role, s.name, s.signed_at, "
-                    + "p.tag, s.remark FROM sign_off s LEFT JOIN point p ON p.id = s.point_id ORDER BY s.signed_at, s.id");
-                 ResultSet rs = ps.executeQuery()) {
-                while (rs.next()) {
-                    out.add(new SignOff(SignOffRole.valueOf(rs.getString(1)), rs.getString(2),
-                            StoredTime.parse(rs.getString(3)), rs.getString(4), rs.getString(5)));
-                }
+            List<SignatureState> out = new ArrayList<>();
+            for (Stored s : stored()) {
+                out.add(state(s));
             }
             return out;
         });
+    }
+
+    /**
+     * The revision letter the dossier carries: the site's, or the next one when the site's revision
+     * was signed and has changed since.
+     */
+    public String dossierRevision() {
+        return session.read(() -> {
+            String revision = currentRevision();
+            return anySuperseded(revision) ? RevisionLetter.next(revision) : revision;
+        });
+    }
+
+    private String currentRevision() {
+        return site.get().revision();
+    }
+
+    private boolean anySuperseded(String revision) throws SQLException {
+        for (Stored s : stored()) {
+            if (s.signOff().onSite() && s.signOff().revision().equalsIgnoreCase(revision)
+                    && state(s).standing() == SignatureState.Standing.SUPERSEDED) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private List<Stored> stored() throws SQLException {
+        List<Stored> out = new ArrayList<>();
+        try (PreparedStatement ps = session.connection().prepareStatement(SELECT);
+             ResultSet rs = ps.executeQuery()) {
+            while (rs.next()) {
+                long head = rs.getLong(10);
+                Long headId = rs.wasNull() ? null : head;
+                out.add(new Stored(rs.getLong(1), new SignOff(SignOffRole.valueOf(rs.getString(2)), rs.getString(3),
+                        StoredTime.parse(rs.getString(4)), rs.getString(5), rs.getString(6), rs.getString(7),
+                        rs.getString(8), rs.getString(9)), headId));
+            }
+        }
+        return out;
+    }
+
+    private SignatureState state(Stored s) throws SQLException {
+        SignOff signOff = s.signOff();
+        if (signOff.contentSha256().isEmpty()) {
+            return new SignatureState(s.id(), signOff, SignatureState.Standing.NO_DIGEST,
+                    "signed before Strandbook recorded what a signature covers");
+        }
+        if (signOff.onSite()) {
+            return siteState(s);
+        }
+        long pointId = RowKeys.requirePoint(session, signOff.pointTag());
+        if (PointContent.sha256(session, pointId).equals(signOff.contentSha256())) {
+            return new SignatureState(s.id(), signOff, SignatureState.Standing.CURRENT, "");
+        }
+        return new SignatureState(s.id(), signOff, SignatureState.Standing.SUPERSEDED, "point " + signOff.pointTag()
+                + " changed after it was signed (its path, scans, inspections, actions or catalog entries)");
+    }
+
+    private SignatureState siteState(Stored s) throws SQLException {
+        SignOff signOff = s.signOff();
+        if (s.auditHeadId() == null) {
+            return new SignatureState(s.id(), signOff, SignatureState.Standing.TAMPERED,
+                    "it names no audit row, though it records a digest");
+        }
+        PreparedStatement ps = session.prepared(HASH_OF);
+        ps.setLong(1, s.auditHeadId());
+        try (ResultSet rs = ps.executeQuery()) {
+            if (!rs.next() || !rs.getString(1).equals(signOff.contentSha256())) {
+                return new SignatureState(s.id(), signOff, SignatureState.Standing.TAMPERED, "the audit trail's row "
+                        + s.auditHeadId() + " no longer has the hash the signature recorded");
+            }
+        }
+        PreparedStatement changed = session.prepared(CHANGED_SINCE);
+        changed.setLong(1, s.auditHeadId());
+        try (ResultSet rs = changed.executeQuery()) {
+            if (rs.next()) {
+                return new SignatureState(s.id(), signOff, SignatureState.Standing.SUPERSEDED, "the workbook changed "
+                        + "after it was signed (first: " + rs.getString(2) + " row " + rs.getString(3)
+                        + ", audit row " + rs.getLong(1) + ")");
+            }
+        }
+        return new SignatureState(s.id(), signOff, SignatureState.Standing.CURRENT, "");
     }
 }

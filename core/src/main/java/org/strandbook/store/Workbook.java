@@ -56,6 +56,7 @@ public final class Workbook implements AutoCloseable {
     private final InspectionRepository inspections;
     private final SignOffRepository signOffs;
     private final NoteRepository notes;
+    private final MaintenanceRepository maintenance;
 
     private Workbook(Session session, AuditLog audit) {
         this.session = session;
@@ -66,8 +67,9 @@ public final class Workbook implements AutoCloseable {
         this.paths = new PathRepository(session, audit);
         this.scans = new ScanRepository(session, audit);
         this.inspections = new InspectionRepository(session, audit);
-        this.signOffs = new SignOffRepository(session, audit);
+        this.signOffs = new SignOffRepository(session, audit, site);
         this.notes = new NoteRepository(session, audit);
+        this.maintenance = new MaintenanceRepository(session, audit, paths);
     }
 
     /**
@@ -377,6 +379,10 @@ public final class Workbook implements AutoCloseable {
 
     public NoteRepository notes() {
         return notes;
+    }
+
+    public MaintenanceRepository maintenance() {
+        return maintenance;
     }
 
     public AuditLog audit() {

@@ -131,13 +131,20 @@ final class DossierFixture {
 
     /** Dark, reference and loop scans at every visit; the loop carries the predicted loss plus {@code excessDb}. */
     private static void scans(Workbook wb, String tag, double excessDb) {
+        double[] each = new double[VISITS];
+        java.util.Arrays.fill(each, excessDb);
+        scans(wb, tag, each);
+    }
+
+    /** As above with its own excess at each visit (91 days apart, as many as given), e.g. a repair between two. */
+    static void scans(Workbook wb, String tag, double[] excessDbPerVisit) {
         WavelengthGrid grid = EvaluationGrid.forAnalyzer(analyzer());
         List<PathLeg> legs = legs(tag);
         double[] predicted = new PointBudgetBuilder(catalog()).build(point(tag, 1, ""), legs.get(0), legs.get(1),
                 new OpticsCache(grid)).totalLossDb();
         double[] wl = grid.wavelengthsNm();
         Random noise = new Random(tag.hashCode());
-        for (int v = 0; v < VISITS; v++) {
+        for (int v = 0; v < excessDbPerVisit.length; v++) {
             Instant t = FIRST_VISIT.plus(Duration.ofDays(91L * v));
             double[] dark = new double[wl.length];
             double[] ref = new double[wl.length];
@@ -147,7 +154,7 @@ final class DossierFixture {
                 double lamp = 30_000 * Math.exp(-x * x) + 3_000;
                 dark[i] = 800 + 4 * noise.nextGaussian();
                 ref[i] = 800 + lamp + 4 * noise.nextGaussian();
-                loop[i] = 800 + lamp * Math.pow(10, -(predicted[i] + excessDb) / 10) + 4 * noise.nextGaussian();
+                loop[i] = 800 + lamp * Math.pow(10, -(predicted[i] + excessDbPerVisit[v]) / 10) + 4 * noise.nextGaussian();
             }
             ScanConditions c = new ScanConditions("I. Marsh", 50, 1, OptionalDouble.empty(), OptionalDouble.empty());
             wb.scans().insert(tag, ScanKind.DARK, t, c, new Spectrum(wl, dark), tag + "-dark-" + v + ".csv",

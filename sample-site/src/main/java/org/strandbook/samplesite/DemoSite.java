@@ -100,6 +100,8 @@ public final class DemoSite {
         try {
             try (Workbook workbook = Workbook.create(draft, plant.site(), USER)) {
                 fill(workbook, schedule, groups, scans.size(), progress);
+                progress.step("recording inspections, notes, sign-offs and maintenance");
+                DemoRecords.add(workbook, plant);
             }
             Files.move(draft, workbookFile);
         } finally {

@@ -6,6 +6,7 @@ import java.util.concurrent.Callable;
 
 import org.strandbook.store.AuditFinding;
 import org.strandbook.store.AuditReport;
+import org.strandbook.store.SignatureState;
 import org.strandbook.store.Workbook;
 
 import picocli.CommandLine.Command;
@@ -20,7 +21,9 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "verify", mixinStandardHelpOptions = true,
         description = "Check the audit trail: its hash chain, and that every data row is as the trail last "
-            + "recorded it. Note the head hash it prints in a signed record: it pins the trail's end.")
+            + "recorded it; then every signature: one whose record disagrees with the trail it names is reported "
+            + "as tampered (exit 1), one whose point or revision changed since as superseded. Note the head hash "
+            + "it prints in a signed record: it pins the trail's end.")
 final class AuditVerifyCommand implements Callable<Integer> {
 
     private static final int FINDINGS_SHOWN = 20;
@@ -34,11 +37,21 @@ final class AuditVerifyCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         AuditReport report;
+        List<SignatureState> signatures;
         try (Workbook wb = workbook.openForReading()) {
             report = wb.audit().verify();
+            signatures = wb.signOffs().states();
         }
         PrintWriter out = spec.commandLine().getOut();
-        if (report.intact()) {
+        List<SignatureState> tampered = signatures.stream()
+                .filter(s -> s.standing() == SignatureState.Standing.TAMPERED).toList();
+        for (SignatureState s : signatures) {
+            if (s.standing() == SignatureState.Standing.SUPERSEDED || s.standing() == SignatureState.Standing.TAMPERED) {
+                out.println("signature " + s.describe() + ": " + s.standing().name().toLowerCase(java.util.Locale.ROOT)
+                        + ", " + s.why());
+            }
+        }
+        if (report.intact() && tampered.isEmpty()) {
             out.println("audit trail OK: " + report.rows() + " rows, head " + report.headHash());
             out.flush();
             return StrandbookCommand.EXIT_OK;
@@ -50,7 +63,7 @@ final class AuditVerifyCommand implements Callable<Integer> {
             out.println("... and " + (changes.size() - FINDINGS_SHOWN) + " more rows changed without Strandbook");
         }
         out.flush();
-        int problems = (report.chainBreak().isPresent() ? 1 : 0) + changes.size();
+        int problems = (report.chainBreak().isPresent() ? 1 : 0) + changes.size() + tampered.size();
         spec.commandLine().getErr().println("strandbook: audit trail of " + workbook.file() + " is broken ("
                 + problems + " finding(s), " + report.rows() + " rows read)");
         return StrandbookCommand.EXIT_REJECTED;

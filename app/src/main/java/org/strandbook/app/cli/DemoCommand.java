@@ -50,8 +50,8 @@ final class DemoCommand implements Callable<Integer> {
         PrintWriter o = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         o.println("Strandbook demo: Saltmarsh Ridge Works, an invented plant. Fiber work in a real plant: never look"
-                + " into a live fiber end; IEC 60079-28 governs optical power in explosive atmospheres; follow your"
-                + " site's rules.");
+                + " into a live fiber end; IEC 60079-28 governs optical power in explosive atmospheres; local codes, your"
+                + " site's permit to work and licensed practice take precedence (README, section Safety).");
         Path folder = out != null ? out : freshDefaultFolder();
         DemoSite.Built built;
         try {

@@ -14,6 +14,8 @@ import org.strandbook.evaluation.BandVerdict;
 import org.strandbook.evaluation.PointEvaluation;
 import org.strandbook.evaluation.SiteEvaluation;
 import org.strandbook.evaluation.Urgency;
+import org.strandbook.handover.StepAttribution;
+import org.strandbook.site.MaintenanceAction;
 import org.strandbook.site.SignedDecimal;
 import org.strandbook.throughput.MaskedRange;
 import org.strandbook.trend.LossReading;
@@ -153,6 +155,7 @@ final class EvaluationText {
                 + ",\"candidates\":" + strings(f.candidates().stream().map(Enum::name).toList())
                 + ",\"signature\":" + JsonText.string(f.signature().name())
                 + ",\"amount_db\":" + JsonText.number(f.amountDb())
+                + ",\"amount_at_least\":" + f.atLeast()
                 + ",\"at_nm\":" + JsonText.number(f.atNm())
                 + ",\"share_percent\":" + JsonText.number(f.sharePercent())
                 + ",\"check_first\":" + JsonText.string(f.checkFirst())
@@ -176,7 +179,7 @@ final class EvaluationText {
     }
 
     /** The site's points ranked by urgency, one line per point and band. */
-    static void trendTable(SiteEvaluation site, PrintWriter out) {
+    static void trendTable(SiteEvaluation site, List<MaintenanceAction> actions, PrintWriter out) {
         TextTable t = new TextTable(
                 new String[] {"Rank", "Point", "Status", "Band", "Scans", "Slope", "95 % interval", "Steps", "Margin",
                     "Margin runs out"},
@@ -203,9 +206,11 @@ final class EvaluationText {
         for (PointEvaluation e : site.points()) {
             for (BandTrend tr : e.trends()) {
                 for (StepEvent s : tr.steps()) {
-                    out.printf(Locale.ROOT, "event: %s %s: %s of %+.2f dB between %s and %s%n", e.point().tag(),
+                    List<MaintenanceAction> here = actionsAt(actions, e.point().tag());
+                    out.printf(Locale.ROOT, "event: %s %s: %s of %+.2f dB between %s and %s%s%n", e.point().tag(),
                             tr.band().name(), s.kind().name().toLowerCase(Locale.ROOT), s.stepDb(), s.before(),
-                            s.after());
+                            s.after(), StepAttribution.cause(s, here).map(a -> "; "
+                                    + StepAttribution.describe(s, here)).orElse(""));
                 }
                 if (!tr.noLight().isEmpty()) {
                     out.printf(Locale.ROOT, "event: %s %s: no light returned since %s%n", e.point().tag(),
@@ -228,7 +233,12 @@ final class EvaluationText {
         }).orElse("—");
     }
 
-    static String trendJson(SiteEvaluation site) {
+    /** The actions recorded at one point. */
+    private static List<MaintenanceAction> actionsAt(List<MaintenanceAction> actions, String tag) {
+        return actions.stream().filter(a -> a.pointTag().equalsIgnoreCase(tag)).toList();
+    }
+
+    static String trendJson(SiteEvaluation site, List<MaintenanceAction> actions) {
         StringBuilder b = new StringBuilder("{\"site\":").append(JsonText.string(site.site().name()))
                 .append(",\"ranking\":").append(strings(site.points().stream().map(e -> e.point().tag()).toList()))
                 .append(",\"points\":[");
@@ -262,7 +272,11 @@ final class EvaluationText {
                     b.append(s == 0 ? "" : ",").append("{\"kind\":").append(JsonText.string(st.kind().name()))
                             .append(",\"before\":").append(JsonText.string(st.before().toString()))
                             .append(",\"after\":").append(JsonText.string(st.after().toString()))
-                            .append(",\"step_db\":").append(JsonText.number(st.stepDb())).append('}');
+                            .append(",\"step_db\":").append(JsonText.number(st.stepDb()));
+                    List<MaintenanceAction> here = actionsAt(actions, e.point().tag());
+                    StepAttribution.cause(st, here).ifPresent(a -> b.append(",\"cause\":")
+                            .append(JsonText.string(StepAttribution.describe(st, here))));
+                    b.append('}');
                 }
                 b.append(']');
                 tr.outlook().ifPresent(o -> b.append(",\"forecast\":{\"status\":").append(JsonText.string(o.status().name()))

@@ -81,6 +81,10 @@ final class ImportScansCommand implements Callable<Integer> {
                         }
                         return true;
                     };
+            if (wb.points().get(point).map(p -> p.hazardousArea()).orElse(false)) {
+                // before the scans are read: the person at the point may still be taking them
+                FieldCautions.hazardousPoint(err, point);
+            }
             summary = new ScanFileImporter().importFiles(wb,
                     new ScanFileImporter.Request(point, scanKind, files, time, workbook.user()), progress);
         }

@@ -14,6 +14,9 @@ import picocli.CommandLine.Command;
         mixinStandardHelpOptions = true,
         versionProvider = StrandbookVersion.class,
         description = "Commissioning and maintenance workbook for the fiber-optic light paths of process spectrometers.",
+        footer = {"", "Safety: fiber work exposes eyes to light sources and hands to glass shards, and optical power "
+            + "in explosive atmospheres needs care; see the README's Safety section. Local codes and licensed "
+            + "practice take precedence."},
         subcommands = {
             CommandLine.HelpCommand.class,
             DemoCommand.class,
@@ -26,6 +29,11 @@ import picocli.CommandLine.Command;
             ScanCommand.class,
             EvaluateCommand.class,
             TrendCommand.class,
+            HistoryCommand.class,
+            InspectCommand.class,
+            MaintainCommand.class,
+            NoteCommand.class,
+            SignCommand.class,
             AuditCommand.class,
             ExportCommand.class,
             BenchCommand.class,

@@ -1,9 +1,12 @@
 package org.strandbook.app.cli;
 
 import java.io.PrintWriter;
+import java.util.List;
 import java.util.concurrent.Callable;
 
 import org.strandbook.evaluation.SiteEvaluation;
+import org.strandbook.site.MaintenanceAction;
+import org.strandbook.store.Workbook;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -29,11 +32,15 @@ final class TrendCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         SiteEvaluation site = selection.evaluate(workbook);
+        List<MaintenanceAction> actions;
+        try (Workbook wb = workbook.open()) {
+            actions = wb.maintenance().listAll();
+        }
         PrintWriter out = spec.commandLine().getOut();
         if (selection.json) {
-            out.print(EvaluationText.trendJson(site));
+            out.print(EvaluationText.trendJson(site, actions));
         } else {
-            EvaluationText.trendTable(site, out);
+            EvaluationText.trendTable(site, actions, out);
         }
         out.flush();
         return StrandbookCommand.EXIT_OK;

@@ -121,4 +121,15 @@ class DemoCommandTest {
         assertEquals(1, r.exitCode());
         assertTrue(r.err().contains("no point tagged 'NOPE-1'"), r.err());
     }
+
+    @Test
+    void evaluateJsonSaysWhenAnAmountIsOnlyALowerBound() {
+        // the demo's high-OH cord holds over 1 ppm·km of OH: ≥ 60 dB at 1383 nm (62.7 dB/km/ppm, Humbach et
+        // al., J. Non-Cryst. Solids 203, 19 (1996)), beyond any lamp, so the band is dark and the amount a bound
+        CliRun r = CliRun.of("evaluate", workbook.toString(), "--point", "FT-4106", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        assertTrue(r.out().contains("\"cause\":\"HIGH_OH_FIBER\""), r.out());
+        assertTrue(r.out().contains("\"amount_at_least\":true"), r.out());
+        assertTrue(r.out().contains("1383 nm is dark"), r.out());
+    }
 }

@@ -48,7 +48,12 @@ public final class TrendPlotModel extends PlotModel<TrendPlotModel.TrendLine> {
         }
     }
 
+    /** A recorded event drawn across the plot at its date: a maintenance action or an inspection. */
+    public record Mark(Instant at, String what) {
+    }
+
     private List<BandTrend> trends = List.of();
+    private List<Mark> marks = List.of();
     private double allowedLossDb = Double.NaN;
 
     public TrendPlotModel(PlotAxes axes) {
@@ -65,6 +70,15 @@ public final class TrendPlotModel extends PlotModel<TrendPlotModel.TrendLine> {
         allowedLossDb = allowedDb;
         boolean any = trends.stream().anyMatch(t -> !t.readings().isEmpty());
         placeholder.set(any ? "" : "No loop scan with light in a band yet: nothing to trend");
+        recompute();
+    }
+
+    /** Shows the point's recorded actions and inspections as thin black lines across the plot at their dates. */
+    public void marks(List<Mark> recorded) {
+        if (recorded.equals(marks)) {
+            return;
+        }
+        marks = List.copyOf(recorded);
         recompute();
     }
 
@@ -129,12 +143,41 @@ public final class TrendPlotModel extends PlotModel<TrendPlotModel.TrendLine> {
                     "", CurveStyle.dashed(CurveStyle.VERMILLION, 2.5),
                     List.of(new TimePoint(epochDay(first), a), new TimePoint(epochDay(end), a))));
         }
+        if (first != null && !marks.isEmpty()) {
+            addMarks(out, first, end);
+        }
         if (trended) {
             out.add(new TrendLine("Theil\u2013Sen trend", "", CurveStyle.line(CurveStyle.GREY, 2), List.of()));
             out.add(new TrendLine("forecast", "", CurveStyle.dashed(CurveStyle.GREY, 2), List.of()));
         }
         lines.set(List.copyOf(out));
         ranges(out);
+    }
+
+    /** One vertical line per mark inside the time shown, spanning the plotted values; one legend entry for all. */
+    private void addMarks(List<TrendLine> out, Instant first, Instant end) {
+        double low = Double.POSITIVE_INFINITY;
+        double high = Double.NEGATIVE_INFINITY;
+        for (TrendLine line : out) {
+            for (TimePoint p : line.points()) {
+                low = Math.min(low, p.y());
+                high = Math.max(high, p.y());
+            }
+        }
+        int shown = 0;
+        for (Mark m : marks) {
+            if (m.at().isBefore(first) || m.at().isAfter(end) || !(low <= high)) {
+                continue;
+            }
+            double d = epochDay(m.at());
+            out.add(new TrendLine("", m.what(), CurveStyle.line(CurveStyle.BLACK, 1),
+                    List.of(new TimePoint(d, low), new TimePoint(d, high))));
+            shown++;
+        }
+        if (shown > 0) {
+            out.add(new TrendLine("maintenance and inspections (" + shown + ")", "", CurveStyle.line(CurveStyle.BLACK, 1),
+                    List.of()));
+        }
     }
 
     private void ranges(List<TrendLine> shown) {

@@ -12,6 +12,9 @@ interface PointEvents {
     /** Saving failed; the workbook file holds something else than the sheets show. */
     void saveFailed(Exception e);
 
+    /** A recorded maintenance action replaced an element of the point's path in the workbook. */
+    void pathReplaced(String pointTag);
+
     /** Anything else worth a line in the status bar. */
     void failed(Exception e);
 }

@@ -27,6 +27,7 @@ import org.strandbook.app.ui.plot.PlotAxes;
 import org.strandbook.app.ui.plot.PointCurves;
 import org.strandbook.app.ui.plot.SpectrumPlotModel;
 import org.strandbook.app.ui.plot.TrendPlotModel;
+import org.strandbook.handover.PointEvent;
 import org.strandbook.app.ui.sheet.CellFormats;
 import org.strandbook.app.ui.sheet.RowFigures;
 import org.strandbook.app.ui.sheet.SheetModel;
@@ -77,6 +78,7 @@ public final class PointViewModel {
     private final SpectrumPlotModel budgetPlot;
     private final SpectrumPlotModel measuredPlot;
     private final TrendPlotModel trendPlot;
+    private final PointHistoryViewModel history;
 
     private final ReadOnlyStringWrapper context = new ReadOnlyStringWrapper(this, "context", "No point selected");
     private final ReadOnlyStringWrapper summary = new ReadOnlyStringWrapper(this, "summary", "");
@@ -92,6 +94,13 @@ public final class PointViewModel {
         this.budgetPlot = new SpectrumPlotModel(axes);
         this.measuredPlot = new SpectrumPlotModel(axes);
         this.trendPlot = new TrendPlotModel(axes);
+        this.history = new PointHistoryViewModel(service, tasks, () -> point == null ? List.of() : shownLegs(),
+                events::pathReplaced);
+        history.events().addListener((javafx.collections.ListChangeListener<PointEvent>) c -> trendPlot.marks(
+                history.events().stream().filter(e -> e.kind() == PointEvent.Kind.ACTION
+                                || e.kind() == PointEvent.Kind.INSPECTION)
+                        .map(e -> new TrendPlotModel.Mark(e.at(), e.kind().word() + (e.subject().isEmpty() ? "" : " "
+                                + e.subject()) + ": " + e.text())).toList()));
         this.segments = SegmentSheet.create(() -> site.fibers().stream().map(FiberType::code).toList(),
                 label -> point == null ? Optional.empty() : site.cableOwnerOtherThan(label, point.tag()),
                 this::segmentFigures);
@@ -117,6 +126,11 @@ public final class PointViewModel {
 
     public SheetModel<LegJoint> joints() {
         return joints;
+    }
+
+    /** The point's history and the records made from the window. */
+    public PointHistoryViewModel history() {
+        return history;
     }
 
     public SheetModel<ScanRecord> scans() {
@@ -198,6 +212,7 @@ public final class PointViewModel {
             finding.set("Reading the latest scans of " + p.tag() + "\u2026");
             findingVerdict.set(null);
             fetchMeasurements(p.tag());
+            history.show(p.tag());
         }
         showPrediction();
     }
@@ -218,6 +233,7 @@ public final class PointViewModel {
         budgetPlot.clear("", "No point selected");
         measuredPlot.clear("", "No point selected");
         trendPlot.clear("", "No point selected");
+        history.clear();
     }
 
     /** The point's own record changed (tolerance, probe, analyzer): the prediction follows. */

@@ -17,7 +17,15 @@ import org.strandbook.app.ui.task.JobProgress;
 import org.strandbook.evaluation.PointEvaluation;
 import org.strandbook.evaluation.PointEvaluator;
 import org.strandbook.evaluation.PointInputs;
+import org.strandbook.evaluation.WorkbookInputs;
+import org.strandbook.handover.PointEvent;
+import org.strandbook.handover.PointHistory;
+import org.strandbook.handover.PointSigning;
 import org.strandbook.intake.ScanFileImporter;
+import org.strandbook.site.Inspection;
+import org.strandbook.site.MaintenanceAction;
+import org.strandbook.site.Note;
+import org.strandbook.site.SignOff;
 import org.strandbook.intake.ScheduleImporter;
 import org.strandbook.samplesite.DemoSite;
 import org.strandbook.samplesite.ScanGenerator;
@@ -26,7 +34,6 @@ import org.strandbook.site.Catalog;
 import org.strandbook.site.ConnectorType;
 import org.strandbook.site.FiberType;
 import org.strandbook.site.MeasurementPoint;
-import org.strandbook.site.PathDirection;
 import org.strandbook.site.PathLeg;
 import org.strandbook.site.ProbeType;
 import org.strandbook.site.ScanRecord;
@@ -201,17 +208,32 @@ public final class SqliteWorkbookService implements WorkbookService {
                 .orElseThrow(() -> new IllegalArgumentException("no point tagged '" + tag + "' in this workbook"));
         Analyzer analyzer = wb.site().analyzer(point.analyzerTag()).orElseThrow(() ->
                 new IllegalArgumentException("point " + tag + ": unknown analyzer '" + point.analyzerTag() + "'"));
-        List<PathLeg> legs = wb.paths().legs(tag);
-        PathLeg send = leg(legs, PathDirection.SEND, tag);
-        PathLeg ret = leg(legs, PathDirection.RETURN, tag);
-        return new PointInputs(site, point, analyzer, send, ret, catalog, wb.scans().list(tag),
-                id -> wb.scans().spectrum(id));
+        return WorkbookInputs.of(wb, site, point, analyzer, catalog, wb.scans().list(tag));
     }
 
-    private static PathLeg leg(List<PathLeg> legs, PathDirection direction, String tag) {
-        return legs.stream().filter(l -> l.direction() == direction).findFirst().orElseThrow(() ->
-                new IllegalArgumentException("point " + tag + ": no " + direction.name().toLowerCase(Locale.ROOT)
-                        + " leg recorded"));
+    @Override
+    public synchronized List<PointEvent> history(String pointTag) {
+        return PointHistory.read(require(), pointTag);
+    }
+
+    @Override
+    public synchronized void addInspection(Inspection inspection) {
+        require().inspections().add(inspection);
+    }
+
+    @Override
+    public synchronized void addMaintenance(MaintenanceAction action) {
+        require().maintenance().add(action);
+    }
+
+    @Override
+    public synchronized void addNote(Note note) {
+        require().notes().add(note);
+    }
+
+    @Override
+    public synchronized void signOff(SignOff signOff) {
+        PointSigning.sign(require(), signOff);
     }
 
     @Override

@@ -9,6 +9,11 @@ import org.strandbook.app.ui.task.JobProgress;
 import org.strandbook.evaluation.PointEvaluation;
 import org.strandbook.intake.ScanFileImporter;
 import org.strandbook.intake.ScheduleImporter;
+import org.strandbook.handover.PointEvent;
+import org.strandbook.site.Inspection;
+import org.strandbook.site.MaintenanceAction;
+import org.strandbook.site.Note;
+import org.strandbook.site.SignOff;
 import org.strandbook.site.ConnectorType;
 import org.strandbook.site.FiberType;
 import org.strandbook.site.MeasurementPoint;
@@ -75,6 +80,21 @@ public interface WorkbookService extends AutoCloseable {
     ScheduleImporter.Outcome importSchedule(Path file);
 
     void exportDossier(DossierExport export, Path target, JobProgress progress) throws Exception;
+
+    /** The point's records in time order: scans, inspections, actions, notes, sign-offs. */
+    List<PointEvent> history(String pointTag);
+
+    /** Records an end-face inspection. */
+    void addInspection(Inspection inspection);
+
+    /** Records a maintenance action (a replacement changes the path from its date on). */
+    void addMaintenance(MaintenanceAction action);
+
+    /** Records a note. */
+    void addNote(Note note);
+
+    /** Signs a point (only once it has been evaluated) or the site record. */
+    void signOff(SignOff signOff);
 
     /** Closes the workbook file. */
     @Override

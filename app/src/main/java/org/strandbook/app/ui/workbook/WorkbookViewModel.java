@@ -118,6 +118,12 @@ public final class WorkbookViewModel {
             }
 
             @Override
+            public void pathReplaced(String pointTag) {
+                tasks.submit("Reading the workbook again", service::reload, WorkbookViewModel.this::onLoaded,
+                        WorkbookViewModel.this::fail);
+            }
+
+            @Override
             public void failed(Exception e) {
                 fail(e);
             }

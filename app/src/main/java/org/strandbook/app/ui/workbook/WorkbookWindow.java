@@ -450,6 +450,7 @@ public final class WorkbookWindow {
                 tab("Cable segments", "tab-segments", segmentsView, pointContext(point)),
                 tab("Joints", "tab-joints", jointsView, pointContext(point)),
                 readOnlyTab("Scans", "tab-scans", scansView, pointContext(point), scanActions()),
+                historyTab(point),
                 catalogTab);
 
         Label summary = verdictLabel("budget-summary", point.summaryProperty(), point.summaryVerdictProperty());
@@ -514,6 +515,17 @@ public final class WorkbookWindow {
         VBox.setVgrow(view.node(), Priority.ALWAYS);
         Tab t = new Tab(title, box);
         t.setId(id);
+        return t;
+    }
+
+    /** The point's history with its record buttons; the dialogs open over this window. */
+    private Tab historyTab(PointViewModel point) {
+        HistoryPanel panel = new HistoryPanel(point.history(), () -> stage);
+        VBox box = new VBox(4, pointContext(point), panel.node());
+        box.setPadding(new Insets(4));
+        VBox.setVgrow(panel.node(), Priority.ALWAYS);
+        Tab t = new Tab("History", box);
+        t.setId("tab-history");
         return t;
     }
 

@@ -48,6 +48,23 @@ class TrendPlotModelTest {
     }
 
     @Test
+    void aRecordedCleaningIsAVerticalLineAtItsDateAndOneLegendEntry() {
+        TrendPlotModel model = new TrendPlotModel(new PlotAxes(new MemoryPreferences()));
+        Instant cleaned = T0.plusSeconds(10_000_000);
+        model.show("test", List.of(growing()), 12.75);
+        model.marks(List.of(new TrendPlotModel.Mark(cleaned, "action J2: clean joint"),
+                new TrendPlotModel.Mark(T0.minusSeconds(86_400 * 400L), "before the plotted time")));
+
+        List<TrendPlotModel.TrendLine> marks = model.linesProperty().get().stream()
+                .filter(l -> l.detail().startsWith("action")).toList();
+        // design choice: one line per event inside the plotted time, spanning the plotted values
+        assertEquals(1, marks.size());
+        assertEquals(TrendPlotModel.epochDay(cleaned), marks.get(0).points().get(0).epochDay(), 1e-9);
+        assertEquals(marks.get(0).points().get(0).epochDay(), marks.get(0).points().get(1).epochDay());
+        assertTrue(model.linesProperty().get().stream().anyMatch(l -> l.label().equals("maintenance and inspections (1)")));
+    }
+
+    @Test
     void aFlatHistoryShowsNoSignedZeroSlope() {
         // invented readings falling by 0.0004 dB a quarter: the slope rounds to zero, and a legend
         // reading "-0.00 dB/yr" would suggest a change (ISO 80000-1 writes zero unsigned)

@@ -6,7 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Optional;
 import java.util.concurrent.ExecutionException;
 
 import javafx.scene.chart.XYChart;
@@ -17,7 +16,6 @@ import javafx.scene.input.Clipboard;
 import javafx.scene.input.ClipboardContent;
 import javafx.scene.input.KeyCode;
 import javafx.stage.Stage;
-import javafx.stage.Window;
 
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.AfterEach;
@@ -26,14 +24,11 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
 import org.junit.jupiter.api.io.TempDir;
-import org.strandbook.app.ui.MemoryPreferences;
 import org.strandbook.app.ui.path.LegSegment;
 import org.strandbook.app.ui.path.SegmentSheet;
-import org.strandbook.app.ui.plot.PlotAxes;
 import org.strandbook.app.ui.sheet.CellAddress;
 import org.strandbook.app.ui.sheet.CellRange;
 import org.strandbook.app.ui.sheet.SheetModel;
-import org.strandbook.app.ui.task.DirectTaskExecutor;
 import org.testfx.api.FxRobot;
 import org.testfx.api.FxToolkit;
 import org.testfx.robot.Motion;
@@ -50,6 +45,7 @@ class WorkbookWindowFxTest {
 
     private static final int SEGMENTS_TAB = 1;
     private static SampleSite sample;
+    private static HeadlessWindow shown;
     private static WorkbookViewModel vm;
     private static WorkbookWindow window;
     private static Stage stage;
@@ -63,19 +59,10 @@ class WorkbookWindowFxTest {
     @BeforeAll
     static void window(SampleSite built) throws Exception {
         sample = built;
-        stage = FxToolkit.registerPrimaryStage();
-        FxToolkit.setupStage(s -> {
-            MemoryPreferences preferences = new MemoryPreferences();
-            vm = new WorkbookViewModel(new SqliteWorkbookService("technician C"), new DirectTaskExecutor(),
-                    new PlotAxes(preferences), new RecentFiles(preferences), built.folder().resolveSibling("unused"),
-                    Optional.empty());
-            vm.setEvaluateOnOpen(false);
-            window = new WorkbookWindow(s, vm);
-            // a small stage renders faster in software; the window's own minimum size still applies
-            s.setWidth(900);
-            s.setHeight(560);
-            s.show();
-        });
+        shown = HeadlessWindow.show(built, "technician C");
+        stage = shown.stage();
+        vm = shown.vm();
+        window = shown.window();
     }
 
     /** Each test works on its own copy of the sample workbook, with FT-4102's segments in front. */
@@ -93,14 +80,7 @@ class WorkbookWindowFxTest {
     /** Closes what a test left open (the record dialog) and the workbook, so the temporary folder can go. */
     @AfterEach
     void closeDialogsAndWorkbook() {
-        robot.interact(() -> {
-            for (Window w : List.copyOf(Window.getWindows())) {
-                if (w != stage && w instanceof Stage s) {
-                    s.close();
-                }
-            }
-            vm.close();
-        });
+        shown.closeDialogsAndWorkbook(robot);
     }
 
     @AfterAll

@@ -1,0 +1,88 @@
+package org.strandbook.app.ui.workbook;
+
+import java.time.ZoneOffset;
+import java.time.format.DateTimeFormatter;
+import java.util.Locale;
+import java.util.function.BiFunction;
+import java.util.function.Function;
+
+import javafx.beans.property.ReadOnlyStringWrapper;
+import javafx.geometry.Insets;
+import javafx.scene.Node;
+import javafx.scene.control.Button;
+import javafx.scene.control.Label;
+import javafx.scene.control.TableColumn;
+import javafx.scene.control.TableView;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.VBox;
+import javafx.stage.Window;
+
+import org.strandbook.handover.PointEvent;
+
+/**
+ * The selected point's history in time order (scans, inspections, maintenance actions, notes and
+ * sign-offs) with a button for each kind of record the field and the commissioning lead make.
+ */
+final class HistoryPanel {
+
+    private static final DateTimeFormatter MINUTE = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm", Locale.ROOT)
+            .withZone(ZoneOffset.UTC);
+
+    private final VBox root = new VBox(4);
+    private final TableView<PointEvent> table = new TableView<>();
+
+    HistoryPanel(PointHistoryViewModel vm, java.util.function.Supplier<Window> owner) {
+        table.setId("history-table");
+        table.setItems(vm.events());
+        table.setPlaceholder(new Label("No records for this point yet"));
+        table.getColumns().add(column("history-at", "Time (UTC)", 130, e -> MINUTE.format(e.at())));
+        table.getColumns().add(column("history-kind", "Record", 90, e -> e.kind().word()));
+        table.getColumns().add(column("history-subject", "On", 90, PointEvent::subject));
+        table.getColumns().add(column("history-who", "By", 110, PointEvent::who));
+        TableColumn<PointEvent, String> what = column("history-text", "What", 520, PointEvent::text);
+        table.getColumns().add(what);
+        table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY);
+
+        HBox buttons = new HBox(6,
+                button("history-inspect", "Record inspection\u2026", vm, owner, RecordDialogs::inspection),
+                button("history-maintain", "Record maintenance\u2026", vm, owner, RecordDialogs::maintenance),
+                button("history-note", "Add note\u2026", vm, owner, RecordDialogs::note),
+                button("history-sign", "Sign point\u2026", vm, owner, RecordDialogs::signOff));
+        Label message = new Label();
+        message.setId("history-message");
+        message.setWrapText(true);
+        message.textProperty().bind(vm.messageProperty());
+        root.setPadding(new Insets(4));
+        root.getChildren().addAll(buttons, message, table);
+        VBox.setVgrow(table, Priority.ALWAYS);
+    }
+
+    Node node() {
+        return root;
+    }
+
+    private static Button button(String id, String text, PointHistoryViewModel vm,
+                                 java.util.function.Supplier<Window> owner,
+                                 BiFunction<Window, PointHistoryViewModel, RecordDialog<?>> dialog) {
+        Button b = new Button(text);
+        b.setId(id);
+        b.setOnAction(e -> {
+            if (vm.pointTag().isEmpty()) {
+                return;
+            }
+            dialog.apply(owner.get(), vm).dialog().show();
+        });
+        return b;
+    }
+
+    private static TableColumn<PointEvent, String> column(String id, String title, double width,
+                                                          Function<PointEvent, String> value) {
+        TableColumn<PointEvent, String> c = new TableColumn<>(title);
+        c.setId(id);
+        c.setPrefWidth(width);
+        c.setSortable(false);
+        c.setCellValueFactory(f -> new ReadOnlyStringWrapper(value.apply(f.getValue())).getReadOnlyProperty());
+        return c;
+    }
+}

@@ -1,0 +1,174 @@
+package org.strandbook.store;
+
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Types;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalLong;
+
+import org.strandbook.site.Bend;
+import org.strandbook.site.CableSegment;
+import org.strandbook.site.InspectionGrade;
+import org.strandbook.site.Joint;
+import org.strandbook.site.LossBasis;
+import org.strandbook.site.PathDirection;
+import org.strandbook.site.PathElement;
+import org.strandbook.site.PathLeg;
+
+/**
+ * A point's light path through time. {@code path_element} holds the path as it is now; before a
+ * maintenance action replaces an element, the whole path as it was is copied under the action
+ * ({@code retired_path_element}). The path at a moment is then the copy kept by the first
+ * path-changing action after it, or the path of today when none came after.
+ */
+final class PathHistory {
+
+    private static final String FIRST_CHANGE_AFTER = "SELECT a.id FROM maintenance_action a WHERE a.point_id = ? "
+            + "AND a.performed_at > ? AND EXISTS (SELECT 1 FROM retired_path_element r WHERE r.action_id = a.id) "
+            + "ORDER BY a.performed_at, a.id LIMIT 1";
+    private static final String LATEST_CHANGE = "SELECT max(a.performed_at) FROM maintenance_action a "
+            + "WHERE a.point_id = ? AND EXISTS (SELECT 1 FROM retired_path_element r WHERE r.action_id = a.id)";
+    private static final String RETIRED = "SELECT direction, kind, label, fiber_code, length_m, bends, connector_a, "
+            + "connector_b, grade, loss_db, loss_basis FROM retired_path_element WHERE action_id = ? "
+            + "ORDER BY direction = 'RETURN', position";
+    private static final String RETIRE = "INSERT INTO retired_path_element (action_id, direction, position, kind, "
+            + "label, fiber_code, length_m, bends, connector_a, connector_b, grade, loss_db, loss_basis) "
+            + "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?) RETURNING id";
+    private static final String ELEMENT_NOW = "SELECT 1 FROM path_element WHERE point_id = ? AND label = ? AND kind = ?";
+    private static final String ELEMENT_BEFORE = "SELECT 1 FROM retired_path_element r JOIN maintenance_action a "
+            + "ON a.id = r.action_id WHERE a.point_id = ? AND r.label = ? COLLATE NOCASE AND r.kind = ?";
+
+    private PathHistory() {
+    }
+
+    /** The action whose copy holds the path as it was at {@code at}, if the path changed since. */
+    static OptionalLong firstChangeAfter(Session session, long pointId, Instant at) throws SQLException {
+        PreparedStatement ps = session.prepared(FIRST_CHANGE_AFTER);
+        ps.setLong(1, pointId);
+        ps.setString(2, StoredTime.format(at));
+        try (ResultSet rs = ps.executeQuery()) {
+            return rs.next() ? OptionalLong.of(rs.getLong(1)) : OptionalLong.empty();
+        }
+    }
+
+    /** When the point's path last changed by an action, if it ever did. */
+    static Optional<Instant> latestChange(Session session, long pointId) throws SQLException {
+        PreparedStatement ps = session.prepared(LATEST_CHANGE);
+        ps.setLong(1, pointId);
+        try (ResultSet rs = ps.executeQuery()) {
+            String at = rs.next() ? rs.getString(1) : null;
+            return at == null ? Optional.empty() : Optional.of(StoredTime.parse(at));
+        }
+    }
+
+    /** The legs copied under an action: the path as it was just before it. */
+    static List<PathLeg> retiredLegs(Session session, long actionId, String pointTag) throws SQLException {
+        Map<PathDirection, List<PathElement>> byDirection = new EnumMap<>(PathDirection.class);
+        PreparedStatement ps = session.prepared(RETIRED);
+        ps.setLong(1, actionId);
+        try (ResultSet rs = ps.executeQuery()) {
+            while (rs.next()) {
+                byDirection.computeIfAbsent(PathDirection.valueOf(rs.getString(1)), d -> new ArrayList<>())
+                        .add(retiredElement(rs));
+            }
+        }
+        List<PathLeg> out = new ArrayList<>();
+        byDirection.forEach((direction, elements) -> out.add(new PathLeg(pointTag, direction, elements)));
+        return out;
+    }
+
+    private static PathElement retiredElement(ResultSet rs) throws SQLException {
+        if ("SEGMENT".equals(rs.getString(2))) {
+            return new CableSegment(rs.getString(3), rs.getString(4), rs.getDouble(5), parseBends(rs.getString(6)));
+        }
+        return new Joint(rs.getString(3), rs.getString(7), rs.getString(8), InspectionGrade.valueOf(rs.getString(9)),
+                Columns.optionalDouble(rs, "loss_db"), LossBasis.valueOf(rs.getString(11)));
+    }
+
+    /** Copies the legs under an action, each row audited. */
+    static void retire(Session session, AuditLog audit, long actionId, List<PathLeg> legs) throws SQLException {
+        for (PathLeg leg : legs) {
+            int position = 1;
+            for (PathElement e : leg.elements()) {
+                PreparedStatement ps = session.prepared(RETIRE);
+                ps.setLong(1, actionId);
+                ps.setString(2, leg.direction().name());
+                ps.setInt(3, position++);
+                ps.setString(5, e.label());
+                if (e instanceof CableSegment s) {
+                    ps.setString(4, "SEGMENT");
+                    ps.setString(6, s.fiberTypeCode());
+                    ps.setDouble(7, s.lengthM());
+                    ps.setString(8, formatBends(s.bends()));
+                    for (int i = 9; i <= 11; i++) {
+                        ps.setNull(i, Types.VARCHAR);
+                    }
+                    ps.setNull(12, Types.REAL);
+                    ps.setNull(13, Types.VARCHAR);
+                } else if (e instanceof Joint j) {
+                    ps.setString(4, "JOINT");
+                    ps.setNull(6, Types.VARCHAR);
+                    ps.setNull(7, Types.REAL);
+                    ps.setNull(8, Types.VARCHAR);
+                    ps.setString(9, j.connectorTypeA());
+                    ps.setString(10, j.connectorTypeB());
+                    ps.setString(11, j.grade().name());
+                    Columns.setOptional(ps, 12, j.lossDb());
+                    ps.setString(13, j.lossBasis().name());
+                }
+                audit.inserted(AuditedTable.RETIRED_PATH_ELEMENT, Columns.insertReturningId(ps));
+            }
+        }
+    }
+
+    /**
+     * Refuses a label that names no element of that kind on the point's path, now or in its history.
+     *
+     * @param kind "JOINT" or "SEGMENT"
+     */
+    static void requireElement(Session session, long pointId, String pointTag, String label, String kind)
+            throws SQLException {
+        for (String sql : new String[] {ELEMENT_NOW, ELEMENT_BEFORE}) {
+            PreparedStatement ps = session.prepared(sql);
+            ps.setLong(1, pointId);
+            ps.setString(2, label.strip());
+            ps.setString(3, kind);
+            try (ResultSet rs = ps.executeQuery()) {
+                if (rs.next()) {
+                    return;
+                }
+            }
+        }
+        throw new UnknownEntryException("point " + pointTag + " has no " + (kind.equals("JOINT") ? "joint" : "cable")
+                + " '" + label.strip() + "' on its path");
+    }
+
+    static String formatBends(List<Bend> bends) {
+        StringBuilder sb = new StringBuilder();
+        for (Bend b : bends) {
+            if (sb.length() > 0) {
+                sb.append(';');
+            }
+            sb.append(Double.toString(b.radiusMm())).append(':').append(b.count());
+        }
+        return sb.toString();
+    }
+
+    static List<Bend> parseBends(String text) {
+        List<Bend> out = new ArrayList<>();
+        if (text == null || text.isBlank()) {
+            return out;
+        }
+        for (String pair : text.split(";")) {
+            String[] parts = pair.split(":");
+            out.add(new Bend(Double.parseDouble(parts[0].strip()), Integer.parseInt(parts[1].strip())));
+        }
+        return out;
+    }
+}
