@@ -26,7 +26,7 @@ import org.apache.poi.xssf.usermodel.XSSFDrawing;
 /**
  * The dossier's two native chart kinds, both XY charts drawn with lines so that the horizontal axis
  * is a true scale (wavelength in nm, or time): a point's predicted, measured and deviation spectra,
- * and a point's band-mean loss history with its Theil–Sen lines. Series refer to cell ranges; their
+ * and a point's loss history (driving range of each band) with its Theil–Sen lines. Series refer to cell ranges; their
  * caches are filled when the file is written. Lines get explicit colours and widths: some programs
  * draw markers only otherwise.
  */

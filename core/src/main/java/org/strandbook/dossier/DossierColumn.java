@@ -97,7 +97,7 @@ public enum DossierColumn {
     TREND_READINGS(DossierSheet.TREND, "readings", "Readings (count)", 10, Format.WHOLE),
     TREND_FIRST(DossierSheet.TREND, "first_scan", "First scan (UTC)", 16, Format.TIME),
     TREND_LAST(DossierSheet.TREND, "last_scan", "Last scan (UTC)", 16, Format.TIME),
-    TREND_LATEST_DB(DossierSheet.TREND, "latest_db", "Latest band loss (dB)", 9, Format.DECIMAL_2),
+    TREND_LATEST_DB(DossierSheet.TREND, "latest_db", "Latest loss, driving range (dB)", 9, Format.DECIMAL_2),
     TREND_SLOPE(DossierSheet.TREND, "slope", "Slope (dB/year)", 9, Format.DECIMAL_3),
     TREND_SLOPE_LOW(DossierSheet.TREND, "slope_low", "Slope, lower limit (dB/year)", 10, Format.DECIMAL_3),
     TREND_SLOPE_HIGH(DossierSheet.TREND, "slope_high", "Slope, upper limit (dB/year)", 10, Format.DECIMAL_3),

@@ -28,7 +28,7 @@ public enum DossierSheet {
             "One chart per point: predicted, measured and deviation against wavelength."),
     TREND("Trend", Layout.TABLE, "Loss trend per point and band: slope, confidence interval, forecast, chart."),
     SPECTRA("Spectra", Layout.TABLE, "Appendix: predicted and measured loss at every wavelength of every point."),
-    HISTORY("Trend history", Layout.TABLE, "Appendix: every band-mean loss reading behind the trends."),
+    HISTORY("Trend history", Layout.TABLE, "Appendix: every loss reading behind the trends (highest in each band's driving range)."),
     AUDIT("Audit log", Layout.TABLE, "Appendix: the workbook's hash-chained audit trail, row by row.");
 
     /** How a sheet is filled. */

@@ -203,7 +203,7 @@ public final class DossierTemplateBuilder {
             case AUDIT -> "Audit log: " + Placeholder.AUDIT_ROWS.token() + " rows, head "
                     + Placeholder.AUDIT_HEAD.token() + ", " + Placeholder.AUDIT_CHECK.token();
             case SPECTRA -> "Spectra: predicted and measured loop loss of the latest paired scan, every wavelength";
-            case HISTORY -> "Trend history: band-mean loss of every paired loop scan";
+            case HISTORY -> "Trend history: highest loss in each band's driving range, every paired loop scan";
             case BUDGET -> "Loss budget: predicted one-pass loop loss at the centre of each band of interest";
             default -> sheet.title() + " · " + Placeholder.SITE.token() + " · revision " + Placeholder.REVISION.token();
         };

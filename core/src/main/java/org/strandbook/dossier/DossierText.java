@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Locale;
 
 import org.strandbook.evaluation.Status;
+import org.strandbook.evaluation.SubBands;
 import org.strandbook.site.SignedDecimal;
 
 /**
@@ -135,8 +136,21 @@ final class DossierText {
                     + " reference cord, so the loss reported is that of the installed loop. The probe was measured"
                     + " as found; its process contents add to the loss.",
             "Pairing of scans: " + Placeholder.PAIRING_RULE.token() + ".",
+            "Detector counts grow with the integration time and, where a scan file records co-added scans,"
+                    + " with their number; so do dark counts. Loop and reference are therefore compared as"
+                    + " (scan − dark) / (integration time × co-added scans), each with a dark of its own"
+                    + " integration time. Where the integration time of the loop, the reference or a dark is not"
+                    + " recorded, the two cannot be shown to be on one scale: the bands are marked "
+                    + Status.REVIEW.label() + " with that reason and are not judged, and the scan is left out of"
+                    + " the trend.",
             "Wavelengths where the loop or the reference signal lies within a few noise widths of its dark"
                     + " level could not be measured; the Spectra sheet leaves them empty and gives the reason.",
+            "A saturated detector or clipped converter shows a flat top (readings held at full scale, runs of"
+                    + " equal highest counts, or a top flattened below full scale with its flanks still climbing);"
+                    + " a clipped reference would make the loop look better than it is. Such wavelengths are"
+                    + " left out with their reason (e.g. reference saturated: shorten the integration time and"
+                    + " re-take it) and never enter the fit; a band mostly clipped, or a measurement clipped over"
+                    + " most of its range, is not judged.",
             "Predicted loss comes from the recorded path: fiber attenuation (Rayleigh scattering, infrared and"
                     + " OH absorption in silica, or the maker's datasheet), Gloge bend loss for recorded bends (the"
                     + " tightest bend of a segment, charged once), joint allowances (the entered loss, else the"
@@ -158,9 +172,15 @@ final class DossierText {
                     + " loss minus the highest measured loss in the band.");
 
     static final List<String> TREND_METHOD = List.of(
-            "The trend of a band is the Theil–Sen slope of its band-mean loss readings against time, with Sen's"
-                    + " confidence interval; steps and single outliers between consecutive scans are flagged"
-                    + " when larger than the scan-to-scan noise.",
+            "Each band is cut into sub-bands of at most " + decimal(SubBands.MAX_WIDTH_NM, 0) + " nm. In every"
+                    + " sub-band the highest measured loss of each scan is trended against time by the Theil–Sen"
+                    + " slope with Sen's confidence interval, and its margin (allowed loss minus that loss at the"
+                    + " latest scan) is extended along its own slope. The sub-band whose margin reaches zero"
+                    + " first (or, when none is shrinking, the one with the least margin) is the band's driving"
+                    + " range: its slope, date and history are the ones shown. A band's mean would hide loss that"
+                    + " grows at one place in the band and date the run-out years too late.",
+            "Steps and single outliers between consecutive scans of the driving range are flagged when larger"
+                    + " than the scan-to-scan noise.",
             "The forecast extends the present margin along the slope and its confidence limits to the date the"
                     + " margin would reach zero. It is an extrapolation for planning maintenance, not a guarantee.");
 

@@ -9,7 +9,7 @@ import org.strandbook.evaluation.BandTrend;
 import org.strandbook.trend.StepEvent;
 
 /**
- * The Trend history appendix: every band-mean loss reading of every point and band in time order,
+ * The Trend history appendix: every loss reading (highest in the band's driving sub-band) of every point and band in time order,
  * the Theil–Sen line at its time and any step or outlier the scan marks; then the loop scans that
  * returned no light in the band. Tells where each band's readings went, for the trend chart.
  */

@@ -7,7 +7,7 @@ import org.strandbook.trend.LossReading;
 
 /**
  * The loss history of one band as the Trend history sheet holds it and the trend chart plots it:
- * scan times (spreadsheet serial dates, UTC), band-mean losses and the Theil–Sen line at each time
+ * scan times (spreadsheet serial dates, UTC), the highest losses of the driving sub-band and the Theil–Sen line at each time
  * (NaN without a trend), losses to {@link SpectrumColumns#LOSS_STEP_DB}.
  */
 record TrendColumns(double[] excelTime, double[] lossDb, double[] trendDb) {

@@ -14,8 +14,8 @@ import org.strandbook.trend.MarginForecast;
 
 /**
  * The Trend sheet, one block per point: a caption, one row per band (readings, slope with its
- * confidence limits, steps, margin now and when it runs out), and a chart of the band-mean loss
- * history with the Theil–Sen lines, plotting the point's rows of the Trend history sheet. Each
+ * confidence limits, steps, margin now and when it runs out, all of the highest loss in the band's
+ * driving sub-band), and a chart of that loss history with the Theil–Sen lines, plotting the point's rows of the Trend history sheet. Each
  * point with a chart ends its printed page.
  */
 final class TrendRows {
@@ -65,7 +65,7 @@ final class TrendRows {
                     .min().orElse(0);
             double highest = trends.stream().flatMap(b -> b.readings().stream()).mapToDouble(LossReading::lossDb)
                     .max().orElse(1);
-            DossierCharts.trend(drawing, t.nextRowIndex(), t.columnCount(), p.tag() + ": band-mean loss history",
+            DossierCharts.trend(drawing, t.nextRowIndex(), t.columnCount(), p.tag() + ": highest loss in each band's driving range",
                     series, lowest, highest);
             t.skipRows(ChartPlacement.TREND_ROWS + 1);
             t.sheet().setRowBreak(t.nextRowIndex() - 1);
@@ -77,7 +77,7 @@ final class TrendRows {
     private static void band(TableSheet t, DossierPoint p, BandTrend trend) {
         Row r = t.newRowStyled();
         t.text(r, DossierColumn.TREND_TAG, p.tag());
-        t.text(r, DossierColumn.TREND_BAND, trend.band().name());
+        t.text(r, DossierColumn.TREND_BAND, trend.band().name() + "\ndriving range " + trend.drivingRange());
         List<LossReading> readings = trend.readings();
         t.number(r, DossierColumn.TREND_READINGS, readings.size());
         if (!readings.isEmpty()) {

@@ -1,13 +1,14 @@
 package org.strandbook.evaluation;
 
 import java.time.Instant;
-import java.time.ZoneOffset;
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import java.util.Set;
 import java.util.concurrent.ConcurrentHashMap;
 
 import org.strandbook.diagnosis.DeviationDiagnoser;
@@ -27,11 +28,8 @@ import org.strandbook.throughput.RawSpectrum;
 import org.strandbook.throughput.ScanRegridder;
 import org.strandbook.throughput.ThroughputResult;
 import org.strandbook.throughput.ThroughputScans;
-import org.strandbook.trend.LossReading;
-import org.strandbook.trend.LossTrend;
 import org.strandbook.trend.MarginForecast;
 import org.strandbook.trend.StepDetector;
-import org.strandbook.trend.StepReport;
 import org.strandbook.trend.TheilSenTrend;
 
 /**
@@ -40,6 +38,12 @@ import org.strandbook.trend.TheilSenTrend;
  * Thread-safe: the optics cache is shared per grid, everything else is per call.
  */
 public final class PointEvaluator {
+
+    /**
+     * Design choice: a measurement whose scans are clipped over at least this share of their
+     * common range is refused; the rest is too little, and too near the clipped parts, to judge.
+     */
+    public static final double REFUSED_SATURATED_FRACTION = 0.8;
 
     private final ScanPairing pairing;
     private final OneCordThroughput throughput;
@@ -82,36 +86,35 @@ public final class PointEvaluator {
         pairs.unpaired().forEach(u -> problems.add(u.reason()));
 
         ScanRegridder regridder = new ScanRegridder(grid);
-        Map<Long, RawSpectrum> fetched = new HashMap<>();
-        List<List<LossReading>> readings = new ArrayList<>();
-        List<List<Instant>> dark = new ArrayList<>();
-        for (int b = 0; b < bands.size(); b++) {
-            readings.add(new ArrayList<>());
-            dark.add(new ArrayList<>());
-        }
+        Map<ScaledScan, RawSpectrum> fetched = new HashMap<>();
+        List<BandHistory> histories = bands.stream().map(BandHistory::new).toList();
         ThroughputResult latest = null;
         ScanPair latestPair = null;
+        Instant lastJudged = null;
+        int unjudged = 0;
         for (ScanPair pair : pairs.paired()) {
+            ScanExposure exposure = pair.exposure();
             ThroughputResult result = throughput.measure(new ThroughputScans(
-                    raw(pair.loop(), in.spectra(), fetched, regridder),
-                    raw(pair.loopDark(), in.spectra(), fetched, regridder),
-                    raw(pair.reference(), in.spectra(), fetched, regridder),
-                    raw(pair.referenceDark(), in.spectra(), fetched, regridder)),
+                    raw(pair.loop(), exposure, in.spectra(), fetched, regridder),
+                    raw(pair.loopDark(), exposure, in.spectra(), fetched, regridder),
+                    raw(pair.reference(), exposure, in.spectra(), fetched, regridder),
+                    raw(pair.referenceDark(), exposure, in.spectra(), fetched, regridder)),
                     regridder);
-            double[] loss = result.lossDb();
-            for (int b = 0; b < bands.size(); b++) {
-                double mean = bandMean(grid, loss, bands.get(b));
-                if (Double.isNaN(mean)) {
-                    dark.get(b).add(pair.loop().takenAt());
-                } else {
-                    readings.get(b).add(new LossReading(pair.loop().takenAt(), mean));
+            if (exposure.judgeable() && !clippedNearlyEverywhere(result)) {
+                double[] loss = result.lossDb();
+                for (BandHistory history : histories) {
+                    history.add(pair.loop().takenAt(), grid, loss);
                 }
+                lastJudged = pair.loop().takenAt();
+            } else {
+                unjudged++;
             }
             latest = result;
             latestPair = pair;
             // spectra of earlier visits are not needed again
-            fetched.keySet().retainAll(List.of(pair.loopDark().id(), pair.referenceDark().id(),
+            Set<Long> keep = new HashSet<>(List.of(pair.loopDark().id(), pair.referenceDark().id(),
                     pair.reference().id()));
+            fetched.keySet().removeIf(k -> !keep.contains(k.id()));
         }
         if (latest == null) {
             problems.add(0, pairs.paired().isEmpty() && pairs.unpaired().isEmpty()
@@ -126,23 +129,46 @@ public final class PointEvaluator {
         double[] predictedLoss = predicted.totalLossDb();
         double tolerance = in.point().effectiveToleranceDb(in.site());
         double allowed = in.analyzer().allowedLossDb();
+        ScanExposure exposure = latestPair.exposure();
+        Optional<String> refusal = exposure.problem();
+        if (refusal.isEmpty() && clippedNearlyEverywhere(latest)) {
+            refusal = Optional.of(String.format(java.util.Locale.ROOT, "not judged: %.0f %% of the range is clipped: %s",
+                    100 * latest.saturatedFraction(), String.join("; ", latest.saturationReasons())));
+        }
         List<BandVerdict> verdicts = new ArrayList<>();
         Status status = Status.PASS;
         for (WavelengthBand band : bands) {
             BandVerdict v = Acceptance.judge(grid, latest.lossDb(), predictedLoss, band, tolerance, allowed);
+            if (refusal.isPresent()) {
+                v = notJudged(v, refusal.get());
+            } else if (v.measuredFraction() < Acceptance.MIN_MEASURED_FRACTION
+                    && 2 * saturatedShare(latest, grid, band) > 1 - v.measuredFraction()) {
+                // most of what could not be measured was clipped: that, not the light, is the finding
+                v = notJudged(v, String.format(java.util.Locale.ROOT, "not judged: %.0f %% of the band is clipped: %s",
+                        100 * saturatedShare(latest, grid, band), String.join("; ", latest.saturationReasons())));
+            }
             verdicts.add(v);
             status = status.worse(v.status());
         }
-        Diagnosis diagnosis = diagnoser.diagnose(latest, predictedLoss,
-                PathEvidence.of(in.point(), then.send(), then.ret(), in.catalog()));
-        Instant asOf = latestPair.loop().takenAt();
+        Optional<Diagnosis> diagnosis = Optional.empty();
+        if (refusal.isEmpty()) {
+            diagnosis = Optional.of(diagnoser.diagnose(latest, predictedLoss,
+                    PathEvidence.of(in.point(), then.send(), then.ret(), in.catalog())));
+        } else {
+            problems.add(0, refusal.get());
+        }
+        int earlierUnjudged = unjudged - (refusal.isPresent() ? 1 : 0);
+        if (earlierUnjudged > 0) {
+            problems.add(earlierUnjudged + " earlier loop scan(s) left out of the trend: clipped nearly everywhere,"
+                    + " or their integration times do not show that loop and reference are on one scale");
+        }
         List<BandTrend> trends = new ArrayList<>();
-        for (int b = 0; b < bands.size(); b++) {
-            trends.add(trend(bands.get(b), readings.get(b), dark.get(b), verdicts.get(b), asOf,
-                    latestRepair(in.actions(), asOf)));
+        for (BandHistory history : histories) {
+            Instant asOf = lastJudged == null ? latestPair.loop().takenAt() : lastJudged;
+            trends.add(history.trend(allowed, asOf, latestRepair(in.actions(), asOf), theilSen, steps, forecast));
         }
         return new PointEvaluation(in.point(), status, predicted, Optional.of(latestPair), Optional.of(latest),
-                verdicts, Optional.of(diagnosis), trends, problems);
+                verdicts, diagnosis, trends, problems);
     }
 
     private static PredictedBudget predict(PointInputs in, org.strandbook.site.PathLeg send,
@@ -164,50 +190,59 @@ public final class PointEvaluator {
                 .map(MaintenanceAction::performedAt).filter(t -> !t.isAfter(asOf)).max(Instant::compareTo);
     }
 
-    private BandTrend trend(WavelengthBand band, List<LossReading> readings, List<Instant> noLight,
-                            BandVerdict latest, Instant asOf, Optional<Instant> repaired) {
-        Optional<LossTrend> trend = Optional.empty();
-        List<org.strandbook.trend.StepEvent> events = List.of();
-        Optional<MarginForecast.Outlook> outlook = Optional.empty();
-        // after a repair the loss follows a new course: fit and forecast it alone once it has two readings
-        List<LossReading> regime = repaired.map(r -> readings.stream().filter(x -> x.time().isAfter(r)).toList())
-                .filter(after -> after.size() >= 2).orElse(readings);
-        if (readings.size() >= 2) {
-            LossTrend t = theilSen.fit(regime);
-            trend = Optional.of(t);
-            if (readings.size() >= 3) {
-                StepReport report = steps.detect(readings);
-                events = report.events();
+    /** Share of the band's grid points masked because a detector was saturated or clipped. */
+    private static double saturatedShare(ThroughputResult result, WavelengthGrid grid, WavelengthBand band) {
+        int inBand = 0;
+        int saturated = 0;
+        for (int i = 0; i < grid.size(); i++) {
+            double nm = grid.wavelengthNm(i);
+            if (!band.contains(nm)) {
+                continue;
             }
-            if (Double.isFinite(latest.marginDb())) {
-                outlook = Optional.of(forecast.forecast(latest.marginDb(), asOf, t, ZoneOffset.UTC));
+            inBand++;
+            for (org.strandbook.throughput.MaskedRange r : result.maskedRanges()) {
+                if (r.reason().isSaturation() && nm >= r.fromNm() && nm <= r.toNm()) {
+                    saturated++;
+                    break;
+                }
             }
         }
-        return new BandTrend(band, readings, noLight, trend, events, outlook);
+        return inBand == 0 ? 0 : (double) saturated / inBand;
     }
 
-    private static RawSpectrum raw(ScanRecord scan, SpectrumSource source, Map<Long, RawSpectrum> fetched,
-                                   ScanRegridder regridder) {
-        return fetched.computeIfAbsent(scan.id(), id -> {
-            Spectrum s = source.spectrum(id);
+    private static boolean clippedNearlyEverywhere(ThroughputResult result) {
+        return result.saturatedFraction() >= REFUSED_SATURATED_FRACTION;
+    }
+
+    /**
+     * A band the evaluation refuses to judge: REVIEW, the reason first and the figures as measured
+     * after it (they are shown, not trusted).
+     */
+    private static BandVerdict notJudged(BandVerdict v, String why) {
+        return new BandVerdict(v.band(), Status.REVIEW, v.meanDeviationDb(), v.worstDeviationDb(), v.worstAtNm(),
+                v.predictedLossDb(), v.worstMeasuredLossDb(), v.marginDb(), v.measuredFraction(),
+                v.measuredFraction() == 0 ? why : why + "; as measured: " + v.reason());
+    }
+
+    /** A stored scan with the divisor its counts were put on the pair's common scale by. */
+    private record ScaledScan(long id, double divisor) {
+    }
+
+    private static RawSpectrum raw(ScanRecord scan, ScanExposure exposure, SpectrumSource source,
+                                   Map<ScaledScan, RawSpectrum> fetched, ScanRegridder regridder) {
+        double divisor = exposure.divisor(scan.conditions());
+        return fetched.computeIfAbsent(new ScaledScan(scan.id(), divisor), key -> {
+            Spectrum s = source.spectrum(key.id());
             double[] counts = s.values();
+            if (divisor != 1) {
+                for (int i = 0; i < counts.length; i++) {
+                    counts[i] /= divisor;
+                }
+            }
             // a dark's noise is estimated once, however many scans it serves
             OptionalDouble noise = scan.kind() == ScanKind.DARK
                     ? OptionalDouble.of(DarkNoise.sigmaCounts(counts)) : OptionalDouble.empty();
             return new RawSpectrum(regridder.axisOf(s), counts, noise);
         });
-    }
-
-    /** Mean measured loss over the band's measured grid points; NaN when none was measured. */
-    static double bandMean(WavelengthGrid grid, double[] lossDb, WavelengthBand band) {
-        double sum = 0;
-        int n = 0;
-        for (int i = 0; i < grid.size(); i++) {
-            if (band.contains(grid.wavelengthNm(i)) && !Double.isNaN(lossDb[i])) {
-                sum += lossDb[i];
-                n++;
-            }
-        }
-        return n == 0 ? Double.NaN : sum / n;
     }
 }

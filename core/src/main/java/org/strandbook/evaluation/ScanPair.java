@@ -13,4 +13,9 @@ import org.strandbook.site.ScanRecord;
  */
 public record ScanPair(ScanRecord loop, ScanRecord reference, ScanRecord loopDark, ScanRecord referenceDark,
                        String rule) {
+
+    /** How the four scans' counts are put on one scale, or why they cannot be. */
+    public ScanExposure exposure() {
+        return ScanExposure.of(this);
+    }
 }

@@ -18,8 +18,11 @@ import org.strandbook.site.ScanRecord;
  *   <li>only scans of the same measurement point are paired;</li>
  *   <li>the reference is the reference scan nearest in time to the loop, within the window
  *       (default 12 h, one visit), an earlier one winning a tie;</li>
- *   <li>each of loop and reference gets the dark scan nearest in time to it within the window,
- *       preferring a dark of the same integration time when integration times are recorded;</li>
+ *   <li>each of loop and reference gets the dark scan nearest in time to it within the window whose
+ *       integration time and co-added count equal its own; a dark recorded with a different
+ *       integration time never corrects it (dark counts grow with integration time), and a dark
+ *       whose time or whose scan's time is not recorded is taken only when no matching one exists,
+ *       and the evaluation then refuses to judge (see {@link ScanExposure});</li>
  *   <li>a loop scan with no reference or no dark in the window is not evaluated: it is reported
  *       as unpaired, never guessed.</li>
  * </ul>
@@ -38,7 +41,8 @@ public final class ScanPairing {
         }
         this.window = window;
         this.rule = String.format(Locale.ROOT, "same point; nearest reference and nearest dark within %d h of each"
-                + " scan; darks of equal integration time preferred", window.toHours());
+                + " scan; a dark only of the integration time and co-added count of the scan it corrects",
+                window.toHours());
     }
 
     public static ScanPairing withDefaults() {
@@ -76,8 +80,11 @@ public final class ScanPairing {
             Optional<ScanRecord> refDark = nearest(darks, ref.get(), true);
             if (loopDark.isEmpty() || refDark.isEmpty()) {
                 ScanRecord lacking = loopDark.isEmpty() ? loop : ref.get();
-                unpaired.add(new UnpairedScan(loop, "no dark scan of " + loop.pointTag() + " within "
-                        + window.toHours() + " h of the " + lacking.kind().word() + " scan taken " + lacking.takenAt()));
+                boolean anyInWindow = nearestAtAnyIntegration(darks, lacking).isPresent();
+                unpaired.add(new UnpairedScan(loop, "no dark scan of " + loop.pointTag()
+                        + (anyInWindow ? " with the " + ScanExposure.describe(lacking.conditions()) + " of" : "")
+                        + " within " + window.toHours() + " h of the " + lacking.kind().word() + " scan taken "
+                        + lacking.takenAt() + (anyInWindow ? " (darks of other integration times cannot correct it)" : "")));
                 continue;
             }
             paired.add(new ScanPair(loop, ref.get(), loopDark.get(), refDark.get(), rule));
@@ -85,11 +92,17 @@ public final class ScanPairing {
         return new Pairings(paired, unpaired);
     }
 
+    private Optional<ScanRecord> nearestAtAnyIntegration(List<ScanRecord> candidates, ScanRecord to) {
+        return nearest(candidates, to, false);
+    }
+
     private Optional<ScanRecord> nearest(List<ScanRecord> candidates, ScanRecord to, boolean matchIntegration) {
         Comparator<ScanRecord> order = Comparator.comparing((ScanRecord c) -> distance(c, to))
                 .thenComparing(ScanRecord::takenAt);
         if (matchIntegration) {
-            order = Comparator.comparing((ScanRecord c) -> !sameIntegration(c, to)).thenComparing(order);
+            // a dark shown to match first, then one that cannot be shown either way
+            order = Comparator.comparing((ScanRecord c) -> ScanExposure.match(c.conditions(), to.conditions()))
+                    .thenComparing(order);
         }
         // candidates are in time order, so those within the window are one run of them
         ScanRecord best = null;
@@ -98,7 +111,9 @@ public final class ScanPairing {
             if (distance(c, to).compareTo(window) > 0) {
                 break;
             }
-            if (c.pointTag().equals(to.pointTag()) && (best == null || order.compare(best, c) > 0)) {
+            boolean admissible = !matchIntegration
+                    || ScanExposure.match(c.conditions(), to.conditions()) != ScanExposure.Match.DIFFERENT;
+            if (admissible && c.pointTag().equals(to.pointTag()) && (best == null || order.compare(best, c) > 0)) {
                 best = c;
             }
         }
@@ -119,12 +134,6 @@ public final class ScanPairing {
             }
         }
         return lo;
-    }
-
-    private static boolean sameIntegration(ScanRecord a, ScanRecord b) {
-        double ia = a.conditions().integrationMs();
-        double ib = b.conditions().integrationMs();
-        return ia == 0 || ib == 0 || Math.abs(ia - ib) <= 1e-9 * Math.max(ia, ib);
     }
 
     private static Duration distance(ScanRecord a, ScanRecord b) {

@@ -7,6 +7,8 @@ import java.time.OffsetDateTime;
 import java.time.DateTimeException;
 import java.time.ZoneOffset;
 import java.time.format.DateTimeFormatter;
+import java.time.format.DateTimeFormatterBuilder;
+import java.time.temporal.ChronoField;
 import java.time.format.DateTimeParseException;
 import java.util.ArrayList;
 import java.util.List;
@@ -22,41 +24,80 @@ import java.util.OptionalInt;
  * punctuation, with or without JCAMP-DX's leading {@code $} for private labels:
  *
  * <ul>
- *   <li>time taken: {@code LONGDATE} (JCAMP-DX 5.01 form {@code YYYY/MM/DD HH:MM:SS [±hhmm]}),
- *       {@code taken_at} or {@code date_time} (ISO-8601); a time without an offset is UTC;</li>
+ *   <li>time taken: {@code LONGDATE} (JCAMP-DX 5.01 form {@code YYYY/MM/DD HH:MM:SS[.SSSS] [±hhmm]},
+ *       from memory of Lampen et al., Appl. Spectrosc. 53, 1999), {@code taken_at} or
+ *       {@code date_time} (ISO-8601); a time without an offset is UTC. Only read when asked for
+ *       ({@link #takenAt()}): a time given on the command makes the file's own irrelevant, right or
+ *       wrong;</li>
  *   <li>operator: {@code OWNER} or {@code operator};</li>
  *   <li>integration time: {@code integration_ms} or {@code INTEGRATION TIME MS};</li>
  *   <li>co-added scans: {@code co_added} or {@code CO-ADDED}.</li>
  * </ul>
  */
-record ScanFileFacts(Optional<Instant> takenAt, Optional<String> operator, OptionalDouble integrationMs,
-                     OptionalInt coAdded) {
+record ScanFileFacts(Optional<Map.Entry<String, String>> takenAtText, Optional<String> operator,
+                     OptionalDouble integrationMs, OptionalInt coAdded) {
 
-    private static final DateTimeFormatter JCAMP_LONGDATE = DateTimeFormatter.ofPattern("uuuu/MM/dd HH:mm:ss",
-            Locale.ROOT);
+    private static final DateTimeFormatter JCAMP_LONGDATE = new DateTimeFormatterBuilder()
+            .appendPattern("uuuu/MM/dd HH:mm:ss")
+            .optionalStart().appendFraction(ChronoField.NANO_OF_SECOND, 1, 9, true).optionalEnd()
+            .toFormatter(Locale.ROOT);
+
+    /** A value in the file that cannot be read, with the file's own key for it (to find its line). */
+    static final class FactProblem extends IllegalArgumentException {
+        private final String key;
+
+        FactProblem(String key, String message) {
+            super(message);
+            this.key = key;
+        }
+
+        /** The metadata key as written in the file. */
+        String key() {
+            return key;
+        }
+    }
+
+    /**
+     * When the file says it was taken.
+     *
+     * @throws FactProblem when the file's time cannot be read
+     */
+    Optional<Instant> takenAt() {
+        return takenAtText.map(e -> {
+            try {
+                return parseTime(e.getValue());
+            } catch (IllegalArgumentException bad) {
+                throw new FactProblem(e.getKey(), e.getKey() + ": " + bad.getMessage());
+            }
+        });
+    }
 
     static ScanFileFacts of(Map<String, String> labelled) {
         // keys are normalised once per file, not once per key looked for: this runs for every imported file
-        List<Map.Entry<String, String>> metadata = new ArrayList<>(labelled.size());
+        List<Map.Entry<String, Map.Entry<String, String>>> metadata = new ArrayList<>(labelled.size());
         for (Map.Entry<String, String> e : labelled.entrySet()) {
-            metadata.add(Map.entry(normalize(e.getKey()), e.getValue()));
+            metadata.add(Map.entry(normalize(e.getKey()), e));
         }
-        Optional<String> time = find(metadata, "LONGDATE", "TAKENAT", "DATETIME");
-        Optional<Instant> takenAt = time.map(ScanFileFacts::parseTime);
-        Optional<String> operator = find(metadata, "OPERATOR", "OWNER").filter(s -> !s.isBlank());
+        Optional<Map.Entry<String, String>> time = find(metadata, "LONGDATE", "TAKENAT", "DATETIME");
+        Optional<String> operator = find(metadata, "OPERATOR", "OWNER").map(Map.Entry::getValue)
+                .filter(s -> !s.isBlank());
         OptionalDouble integration = find(metadata, "INTEGRATIONMS", "INTEGRATIONTIMEMS")
                 .map(ScanFileFacts::number).map(OptionalDouble::of).orElse(OptionalDouble.empty());
         OptionalInt coAdded = find(metadata, "COADDED", "COADDEDSCANS")
-                .map(s -> OptionalInt.of((int) Math.round(number(s)))).orElse(OptionalInt.empty());
-        return new ScanFileFacts(takenAt, operator, integration, coAdded);
+                .map(e -> OptionalInt.of((int) Math.round(number(e)))).orElse(OptionalInt.empty());
+        return new ScanFileFacts(time, operator, integration, coAdded);
     }
 
-    /** The first value, in file order, under the first of {@code keys} present; entries hold normalised keys. */
-    private static Optional<String> find(List<Map.Entry<String, String>> metadata, String... keys) {
+    /**
+     * The first entry, in file order, under the first of {@code keys} present, as the file wrote its
+     * key, with the value stripped; {@code metadata} pairs each normalised key with its entry.
+     */
+    private static Optional<Map.Entry<String, String>> find(List<Map.Entry<String, Map.Entry<String, String>>> metadata,
+                                                             String... keys) {
         for (String wanted : keys) {
-            for (Map.Entry<String, String> e : metadata) {
+            for (Map.Entry<String, Map.Entry<String, String>> e : metadata) {
                 if (e.getKey().equals(wanted)) {
-                    return Optional.of(e.getValue().strip());
+                    return Optional.of(Map.entry(e.getValue().getKey(), e.getValue().getValue().strip()));
                 }
             }
         }
@@ -76,15 +117,16 @@ record ScanFileFacts(Optional<Instant> takenAt, Optional<String> operator, Optio
         return sb.toString();
     }
 
-    private static double number(String text) {
+    private static double number(Map.Entry<String, String> entry) {
+        String text = entry.getValue();
         try {
             double v = Double.parseDouble(text.strip().replace(',', '.'));
             if (!Double.isFinite(v) || v < 0) {
-                throw new IllegalArgumentException("'" + text + "' is not a number of zero or more");
+                throw new FactProblem(entry.getKey(), entry.getKey() + ": '" + text + "' is not a number of zero or more");
             }
             return v;
         } catch (NumberFormatException e) {
-            throw new IllegalArgumentException("'" + text + "' is not a number");
+            throw new FactProblem(entry.getKey(), entry.getKey() + ": '" + text + "' is not a number");
         }
     }
 

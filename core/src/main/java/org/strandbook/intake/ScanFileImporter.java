@@ -19,6 +19,8 @@ import java.util.concurrent.FutureTask;
 import org.strandbook.scanfile.SpectrumFile;
 import org.strandbook.scanfile.SpectrumFileException;
 import org.strandbook.scanfile.SpectrumFiles;
+import org.strandbook.scanfile.PrintableName;
+import org.strandbook.scanfile.YUnit;
 import org.strandbook.site.ScanConditions;
 import org.strandbook.site.ScanKind;
 import org.strandbook.site.Spectrum;
@@ -55,16 +57,33 @@ public final class ScanFileImporter {
      * @param files    the files, in the order given
      * @param takenAt  a time for every file, overriding what the files say
      * @param operator the operator when a file names none
+     * @param block    the block to take from multi-block JCAMP-DX files (1-based), or
+     *                 {@link SpectrumFiles#WHOLE_FILE} for each file's one optical spectrum
      */
     public record Request(String pointTag, ScanKind kind, List<Path> files, Optional<Instant> takenAt,
-                          String operator) {
+                          String operator, int block) {
         public Request {
             files = List.copyOf(files);
+            if (block < 0) {
+                throw new IllegalArgumentException("block number must be 1 or more, was " + block);
+            }
+        }
+
+        /** Each file's one spectrum. */
+        public Request(String pointTag, ScanKind kind, List<Path> files, Optional<Instant> takenAt, String operator) {
+            this(pointTag, kind, files, takenAt, operator, SpectrumFiles.WHOLE_FILE);
         }
     }
 
-    /** A stored file. */
-    public record Accepted(Path file, long scanId, Instant takenAt, String timeSource) {
+    /**
+     * A stored file.
+     *
+     * @param tolerated what the file's reading accepted although it departs from its format, for the summary
+     */
+    public record Accepted(Path file, long scanId, Instant takenAt, String timeSource, List<String> tolerated) {
+        public Accepted {
+            tolerated = List.copyOf(tolerated);
+        }
     }
 
     /** A refused file and why. */
@@ -120,10 +139,11 @@ public final class ScanFileImporter {
                     NewScan scan = encoded.scan();
                     ScanImport.Outcome outcome = batch.add(encoded);
                     if (outcome.result() == ScanImport.Result.ALREADY_STORED) {
-                        rejected.add(new Rejected(file, file.getFileName() + ":0: the same file is already stored as"
+                        rejected.add(new Rejected(file, displayName(file) + ":0: the same file is already stored as"
                                 + " scan " + outcome.scanId() + " (same SHA-256)"));
                     } else {
-                        accepted.add(new Accepted(file, outcome.scanId(), scan.takenAt(), parsed.prepared().timeSource()));
+                        accepted.add(new Accepted(file, outcome.scanId(), scan.takenAt(), parsed.prepared().timeSource(),
+                                parsed.prepared().tolerated()));
                     }
                 }
                 if (!progress.fileDone(i + 1, files.size(), file)) {
@@ -139,7 +159,7 @@ public final class ScanFileImporter {
     }
 
     /** A scan ready to store: its spectrum is encoded and digested on the reading thread. */
-    private record Prepared(EncodedScan scan, String timeSource) {
+    private record Prepared(EncodedScan scan, String timeSource, List<String> tolerated) {
     }
 
     /** A file read and parsed, or why it cannot be stored. */
@@ -152,7 +172,7 @@ public final class ScanFileImporter {
         } catch (SpectrumFileException e) {
             return new Parsed(null, e.getMessage());
         } catch (IllegalArgumentException e) {
-            return new Parsed(null, file.getFileName() + ":0: " + e.getMessage());
+            return new Parsed(null, displayName(file) + ":0: " + e.getMessage());
         }
     }
 
@@ -172,26 +192,65 @@ public final class ScanFileImporter {
     }
 
     private static Prepared prepare(Path file, Request request) throws SpectrumFileException {
-        SpectrumFile read = SpectrumFiles.read(file);
-        ScanFileFacts facts = ScanFileFacts.of(read.metadata());
+        SpectrumFile read = SpectrumFiles.read(file, request.block());
+        requireSignal(read, request.kind());
+        ScanFileFacts facts;
+        Optional<Instant> fileTime;
+        try {
+            facts = ScanFileFacts.of(read.metadata());
+            // the file's own time is not even read when the command gives one: a damaged date must not
+            // refuse a file whose time the technician has supplied
+            fileTime = request.takenAt().isPresent() ? Optional.empty() : facts.takenAt();
+        } catch (ScanFileFacts.FactProblem e) {
+            throw new SpectrumFileException(read.sourceName(), read.metadataLines().getOrDefault(e.key(), 0),
+                    e.getMessage());
+        }
         Instant takenAt;
         String timeSource;
+        int timeLine = 0;
         if (request.takenAt().isPresent()) {
             takenAt = request.takenAt().get();
             timeSource = "given on the command";
-        } else if (facts.takenAt().isPresent()) {
-            takenAt = facts.takenAt().get();
+        } else if (fileTime.isPresent()) {
+            takenAt = fileTime.get();
             timeSource = "from the file";
+            timeLine = read.metadataLines().getOrDefault(facts.takenAtText().orElseThrow().getKey(), 0);
         } else {
             takenAt = modified(file);
             timeSource = "file modification time (the file names none)";
+        }
+        Optional<String> badTime = TakenAtRange.problem(takenAt, Instant.now());
+        if (badTime.isPresent()) {
+            throw new SpectrumFileException(read.sourceName(), timeLine, badTime.get() + " (" + timeSource + ")");
         }
         ScanConditions conditions = new ScanConditions(facts.operator().orElse(request.operator()),
                 facts.integrationMs().orElse(0), facts.coAdded().orElse(1), OptionalDouble.empty(),
                 OptionalDouble.empty());
         Spectrum spectrum = read.spectrum();
         return new Prepared(EncodedScan.of(new NewScan(request.pointTag(), request.kind(), takenAt, conditions,
-                spectrum, file.getFileName().toString(), read.sha256Hex())), timeSource);
+                spectrum, file.getFileName().toString(), read.sha256Hex(), read.yLabel())), timeSource,
+                read.tolerated());
+    }
+
+    /**
+     * Refuses values that are a ratio to a reference (transmittance, absorbance, reflectance): every
+     * kind of scan Strandbook stores is the detector's own signal, from which it computes the loss.
+     */
+    private static void requireSignal(SpectrumFile read, ScanKind kind) throws SpectrumFileException {
+        YUnit unit = YUnit.of(read.yLabel());
+        if (unit != YUnit.SIGNAL) {
+            throw new SpectrumFileException(read.sourceName(), read.metadataLines().getOrDefault(
+                    SpectrumFile.Y_LABEL_LINE_KEY, 0), "the values are " + unit.phrase() + " ('" + read.yLabel()
+                    + "'), not a detector signal: a " + kind.word() + " scan must be the analyzer's raw signal "
+                    + "(counts); Strandbook computes the loss from loop, reference and dark scans itself. Export "
+                    + "the raw scan from the analyzer");
+        }
+    }
+
+    /** The file's name as a summary shows it: control characters (ESC, line breaks) escaped. */
+    static String displayName(Path file) {
+        Path name = file.getFileName();
+        return PrintableName.of(name == null ? file.toString() : name.toString());
     }
 
     private static Instant modified(Path file) {

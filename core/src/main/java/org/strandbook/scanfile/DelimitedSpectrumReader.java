@@ -76,13 +76,18 @@ final class DelimitedSpectrumReader {
                 continue;
             }
             if (t.charAt(0) == '#') {
-                addComment(metadata, t);
+                addComment(metadata, t, i + 1);
             } else {
                 content.add(i);
+                // a header row and MAX_POINTS data rows at most: refused before the rows are parsed
+                if (content.size() > JcampDxReader.MAX_POINTS + 1) {
+                    throw fail(i + 1, "more than " + JcampDxReader.MAX_POINTS + " data rows: Strandbook reads at "
+                            + "most " + JcampDxReader.MAX_POINTS + " points from one spectrum, as from JCAMP-DX");
+                }
             }
         }
         if (content.isEmpty()) {
-            throw fail(0, "no data rows: the file holds only comments");
+            throw fail(lines.length, "no data rows: the file holds only comments");
         }
         int headerIndex = isHeader(lines[content.get(0)]) ? content.get(0) : -1;
         int firstData = headerIndex >= 0 ? 1 : 0;
@@ -144,7 +149,12 @@ final class DelimitedSpectrumReader {
                 .map(Map.Entry::getValue)
                 .findFirst()
                 .orElse(baseName(fileName));
-        return new SpectrumFile(fileName, sha256Hex, title, unit, yLabel, axis.wavelengthsNm(), axis.values(), metadata);
+        Map<String, Integer> metadataLines = new java.util.HashMap<>(metadataLineNumbers);
+        if (headerIndex >= 0) {
+            metadataLines.put(SpectrumFile.Y_LABEL_LINE_KEY, headerIndex + 1);
+        }
+        return new SpectrumFile(fileName, sha256Hex, title, unit, yLabel, axis.wavelengthsNm(), axis.values(), metadata,
+                metadataLines, java.util.List.of());
     }
 
     /** The abscissa unit named in a column header, if any. */
@@ -331,7 +341,10 @@ final class DelimitedSpectrumReader {
         return v;
     }
 
-    private static void addComment(Map<String, String> metadata, String line) {
+    /** The line of each metadata key, filled by {@link #addComment}. */
+    private final Map<String, Integer> metadataLineNumbers = new java.util.HashMap<>();
+
+    private void addComment(Map<String, String> metadata, String line, int lineNo) {
         int start = 0;
         while (start < line.length() && line.charAt(start) == '#') {
             start++;
@@ -344,7 +357,9 @@ final class DelimitedSpectrumReader {
         int equals = body.indexOf('=');
         int sep = colon < 0 ? equals : (equals < 0 ? colon : Math.min(colon, equals));
         if (sep > 0) {
-            metadata.merge(body.substring(0, sep).strip(), body.substring(sep + 1).strip(), (a, b) -> a + "\n" + b);
+            String key = body.substring(0, sep).strip();
+            metadata.merge(key, body.substring(sep + 1).strip(), (a, b) -> a + "\n" + b);
+            metadataLineNumbers.putIfAbsent(key, lineNo);
         } else {
             metadata.merge("comment", body, (a, b) -> a + "\n" + b);
         }

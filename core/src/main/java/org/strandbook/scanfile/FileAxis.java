@@ -17,6 +17,15 @@ final class FileAxis {
     record Ascending(double[] wavelengthsNm, double[] values) {
     }
 
+    /**
+     * The widest wavelength range a light spectrum from a fiber-coupled analyzer can span, 100 nm
+     * (vacuum UV) to 100 µm (far infrared): silica, sapphire and chalcogenide fibers all transmit
+     * well inside it. An axis outside it is a wrong unit (µm written over values in nm) or no light
+     * at all [design choice].
+     */
+    static final double MIN_LIGHT_NM = 100;
+    static final double MAX_LIGHT_NM = 100_000;
+
     private FileAxis() {
     }
 
@@ -47,6 +56,9 @@ final class FileAxis {
             double nm = unit.toNm(x[i]);
             if (!Double.isFinite(nm)) {
                 throw outOfRange(fileName, unit, x[i], lines[i]);
+            }
+            if (nm < MIN_LIGHT_NM || nm > MAX_LIGHT_NM) {
+                throw implausible(fileName, unit, x[i], lines[i]);
             }
             x[i] = nm;
         }
@@ -86,6 +98,15 @@ final class FileAxis {
     private static SpectrumFileException outOfRange(String fileName, XUnit unit, double x, int line) {
         return new SpectrumFileException(fileName, line, "abscissa " + NumberField.plain(x) + " "
                 + unit.symbol() + " is outside any wavelength range Strandbook can hold");
+    }
+
+    private static SpectrumFileException implausible(String fileName, XUnit unit, double x, int line) {
+        double low = Math.min(unit.fromNm(MIN_LIGHT_NM), unit.fromNm(MAX_LIGHT_NM));
+        double high = Math.max(unit.fromNm(MIN_LIGHT_NM), unit.fromNm(MAX_LIGHT_NM));
+        return new SpectrumFileException(fileName, line, "abscissa " + NumberField.plain(x) + " in the declared unit "
+                + unit.symbol() + " lies outside " + NumberField.plain(low) + "–" + NumberField.plain(high) + " "
+                + unit.symbol() + ", where light spectra lie in that unit (" + (int) MIN_LIGHT_NM + " nm to "
+                + (int) (MAX_LIGHT_NM / 1000) + " µm): the unit named in the file does not fit its values");
     }
 
     private static void reverse(double[] a) {

@@ -48,6 +48,9 @@ final class JcampDxReader {
             "XUNITS", "YUNITS", "XFACTOR", "YFACTOR", "FIRSTX", "LASTX", "DELTAX", "NPOINTS", "FIRSTY",
             "MAXX", "MINX", "MAXY", "MINY", "XYDATA", "XYPOINTS");
 
+    /** Records that hold a table: never accepted twice, even when equal. */
+    private static final Set<String> TABLES = Set.of("XYDATA", "XYPOINTS", "PEAKTABLE", "PEAKASSIGNMENTS");
+
     /** Records that describe the table's encoding, already represented in the result: not metadata. */
     private static final Set<String> NOT_METADATA = Set.of("TITLE", "XUNITS", "YUNITS", "XFACTOR", "YFACTOR",
             "FIRSTX", "LASTX", "DELTAX", "NPOINTS", "FIRSTY", "MAXX", "MINX", "MAXY", "MINY", "XYDATA", "XYPOINTS",
@@ -77,7 +80,16 @@ final class JcampDxReader {
     private final String fileName;
     private final String sha256Hex;
     private String[] lines;
+    /** The lines of the block being read: indexes {@code from} (its ##TITLE=) to {@code to}, exclusive. */
+    private int from;
+    private int to;
     private final Map<String, Record> single = new HashMap<>();
+    private final List<String> tolerated = new ArrayList<>();
+    /** Data lines labelled one point off the declared axis: the offset in points and the lines. */
+    private int lineOffsetPoints;
+    private int firstOffLine;
+    private int lastOffLine;
+    private int dataLinesSeen;
 
     JcampDxReader(String fileName, String sha256Hex) {
         this.fileName = fileName;
@@ -85,24 +97,28 @@ final class JcampDxReader {
     }
 
     SpectrumFile read(String text) throws SpectrumFileException {
-        lines = SpectrumText.lines(text);
-        List<Record> records = parseRecords();
-        Map<String, String> metadata = new LinkedHashMap<>();
-        for (Record r : records) {
-            if (SINGLE_RECORDS.contains(r.key)) {
-                Record earlier = single.putIfAbsent(r.key, r);
-                if (earlier != null) {
-                    throw fail(r.line, "##" + r.label + "= appears twice in the block (lines " + earlier.line
-                            + " and " + r.line + ")");
-                }
+        return read(text, SpectrumFiles.WHOLE_FILE);
+    }
+
+    /** Reads the file's one spectrum, or block {@code block} (1-based) of a multi-block file. */
+    SpectrumFile read(String text, int block) throws SpectrumFileException {
+        String[] all = SpectrumText.lines(text);
+        List<JcampBlocks.Block> blocks = JcampBlocks.innermost(all);
+        if (blocks.isEmpty()) {
+            if (block > 1) {
+                throw fail(0, "block " + block + " was asked for, but the file holds one block");
             }
-            if (!NOT_METADATA.contains(r.key)) {
-                metadata.merge(r.label, r.text(), (a, b) -> a + "\n" + b);
-            }
+            return readBlock(all, 0, all.length);
         }
-        rejectWhatIsNotASingleSpectrum(records);
-        Record title = records.get(0);
-        XUnit unit = xUnit();
+        return new MultiBlockChoice(fileName, sha256Hex, all, blocks).read(block);
+    }
+
+    /** Reads the block on lines {@code from} to {@code to} (0-based indexes, {@code to} exclusive). */
+    SpectrumFile readBlock(String[] fileLines, int fromIndex, int toIndex) throws SpectrumFileException {
+        Header header = header(fileLines, fromIndex, toIndex);
+        XUnit unit = header.unit();
+        List<Record> records = header.records();
+        Map<String, String> metadata = header.metadata();
         String yLabel = single.containsKey("YUNITS") ? single.get("YUNITS").text() : "";
         double xFactor = factor("XFACTOR");
         double yFactor = factor("YFACTOR");
@@ -110,9 +126,68 @@ final class JcampDxReader {
                 ? readXyData(single.get("XYDATA"), xFactor, yFactor)
                 : readXyPoints(single.get("XYPOINTS"), xFactor, yFactor);
         FileAxis.Ascending axis = FileAxis.toAscendingNm(fileName, unit, table.x, table.y, table.lines);
+        Record title = records.get(0);
         String titleText = title.text().isEmpty() ? baseName(fileName) : title.text();
+        if (lineOffsetPoints != 0) {
+            tolerated.add(0, "data lines " + firstOffLine + "–" + lastOffLine + " label X one point "
+                    + (lineOffsetPoints > 0 ? "after" : "before") + " their first ordinate's place on the axis "
+                    + "##FIRSTX=, ##LASTX= and ##NPOINTS= give; that axis was used (the point count agrees)");
+        }
         return new SpectrumFile(fileName, sha256Hex, titleText, unit, yLabel, axis.wavelengthsNm(), axis.values(),
-                metadata);
+                metadata, header.metadataLines(), tolerated);
+    }
+
+    /** A block's records, checked to be one optical spectrum, before its table is read. */
+    record Header(List<Record> records, Map<String, String> metadata, Map<String, Integer> metadataLines,
+                  XUnit unit) {
+    }
+
+    /**
+     * Parses and checks the block's records: everything but the table. Throws when the block is
+     * not one optical spectrum Strandbook reads (the test a multi-block file's blocks must pass).
+     */
+    Header header(String[] fileLines, int fromIndex, int toIndex) throws SpectrumFileException {
+        lines = fileLines;
+        from = fromIndex;
+        to = toIndex;
+        List<Record> records = parseRecords();
+        Map<String, String> metadata = new LinkedHashMap<>();
+        Map<String, Integer> metadataLines = new HashMap<>();
+        for (Record r : records) {
+            if (SINGLE_RECORDS.contains(r.key)) {
+                Record earlier = single.putIfAbsent(r.key, r);
+                if (earlier != null) {
+                    if (!TABLES.contains(r.key) && earlier.text().equals(r.text())) {
+                        tolerated.add("##" + r.label + "= on line " + r.line + " repeats line " + earlier.line
+                                + " with the same value");
+                        continue;
+                    }
+                    throw fail(r.line, "##" + r.label + "= appears twice in the block with different values (lines "
+                            + earlier.line + " and " + r.line + ")");
+                }
+            }
+            if (!NOT_METADATA.contains(r.key)) {
+                metadata.merge(r.label, r.text(), (a, b) -> a + "\n" + b);
+                metadataLines.putIfAbsent(r.label, r.line);
+            }
+        }
+        if (single.containsKey("YUNITS")) {
+            metadataLines.put(SpectrumFile.Y_LABEL_LINE_KEY, single.get("YUNITS").line);
+        }
+        rejectWhatIsNotASingleSpectrum(records);
+        checkDataType();
+        return new Header(records, metadata, metadataLines, xUnit(records));
+    }
+
+    private void checkDataType() throws SpectrumFileException {
+        Record dataType = single.get("DATATYPE");
+        if (dataType == null) {
+            return;
+        }
+        String refusal = LightDataType.refusal(dataType.text());
+        if (refusal != null) {
+            throw fail(dataType.line, "##" + dataType.label + "= " + NumberField.quote(dataType.text()) + ": " + refusal);
+        }
     }
 
     /** The canonical form of a label: upper case without blanks, dashes, slashes or underscores. */
@@ -131,7 +206,8 @@ final class JcampDxReader {
         List<Record> records = new ArrayList<>();
         Record current = null;
         int endLine = 0;
-        for (int i = 0; i < lines.length; i++) {
+        int lastContentLine = from + 1;
+        for (int i = from; i < to; i++) {
             int lineNo = i + 1;
             String content = stripComment(lines[i]).strip();
             if (endLine > 0) {
@@ -180,11 +256,12 @@ final class JcampDxReader {
             }
         }
         if (records.isEmpty()) {
-            throw fail(0, "no ##TITLE= record: not a JCAMP-DX spectrum");
+            throw fail(Math.max(1, lastNonBlankLine()), "no ##TITLE= record: not a JCAMP-DX spectrum");
         }
         if (endLine == 0) {
-            throw fail(lines.length, "the file ends without ##END= (cut short?)");
+            throw fail(to, "the file ends without ##END= (cut short?)");
         }
+        this.endLine = endLine;
         return records;
     }
 
@@ -193,7 +270,27 @@ final class JcampDxReader {
                 || r.key.equals("PEAKASSIGNMENTS");
     }
 
-    private static String stripComment(String line) {
+    private int endLine;
+
+    private int lastNonBlankLine() {
+        for (int i = to - 1; i >= from; i--) {
+            if (!lines[i].isBlank()) {
+                return i + 1;
+            }
+        }
+        return 0;
+    }
+
+    /** The line without its comment: from {@code $$} on, or the whole line when it starts with {@code ##=}. */
+    static String stripComment(String line) {
+        // "##=" is a comment line for JCAMP-DX readers (an empty label), wherever it stands
+        int start = 0;
+        while (start < line.length() && (line.charAt(start) == ' ' || line.charAt(start) == '\t')) {
+            start++;
+        }
+        if (line.startsWith("##=", start)) {
+            return "";
+        }
         int comment = line.indexOf("$$");
         return comment < 0 ? line : line.substring(0, comment);
     }
@@ -243,7 +340,8 @@ final class JcampDxReader {
                             + "##XYDATA= or ##XYPOINTS=");
                 }
             }
-            throw fail(0, "no spectrum table: the block has neither ##XYDATA= nor ##XYPOINTS=");
+            throw fail(endLine, "no spectrum table: the block (##TITLE= on line " + records.get(0).line
+                    + ") has neither ##XYDATA= nor ##XYPOINTS=");
         }
         if (xyData != null && !compact(xyData.text()).startsWith("(X++(Y..Y)")) {
             throw fail(xyData.line, "##XYDATA= " + xyData.text()
@@ -266,10 +364,12 @@ final class JcampDxReader {
         return sb.toString();
     }
 
-    private XUnit xUnit() throws SpectrumFileException {
+    private XUnit xUnit(List<Record> records) throws SpectrumFileException {
         Record r = single.get("XUNITS");
         if (r == null) {
-            throw fail(0, "no ##XUNITS= record: the abscissa unit is unknown");
+            Record table = single.containsKey("XYDATA") ? single.get("XYDATA") : single.get("XYPOINTS");
+            throw fail(table == null ? records.get(0).line : table.line, "no ##XUNITS= record before the table "
+                    + "(block from line " + records.get(0).line + "): the abscissa unit is unknown");
         }
         String k = compact(r.text().replace('µ', 'U').replace('μ', 'U'));
         return switch (k) {
@@ -451,13 +551,39 @@ final class JcampDxReader {
         return x;
     }
 
+    /**
+     * Checks the line's abscissa against the declared axis. A file whose first line agrees with
+     * FIRSTX and whose every later line sits exactly one point off that axis is accepted: McDonald &amp; Wilks (1988) make the
+     * line's X the abscissa of its first ordinate, but some public collections (a national standards
+     * lab's gas-phase infrared files among them) label every line after the first with the point
+     * before it, and readers that build the axis from FIRSTX, LASTX and NPOINTS alone take them. The ordinate count must still equal NPOINTS, so no point is lost
+     * unseen; a line that breaks the file's pattern is refused as before.
+     */
     private void checkAbscissa(int lineNo, AsdfDecoder decoder, double xFactor, double firstX, double dx,
                                int firstIndex, int n, boolean firstLine, Record firstXRecord)
             throws SpectrumFileException {
         double xLine = decoder.abscissa() * xFactor;
         double expected = firstX + firstIndex * dx;
         double tolerance = 0.5 * Math.abs(dx) + decoder.abscissaQuantum() * Math.abs(xFactor);
-        if (Math.abs(xLine - expected) <= tolerance) {
+        dataLinesSeen++;
+        if (lineOffsetPoints == 0) {
+            if (Math.abs(xLine - expected) <= tolerance) {
+                return;
+            }
+            // the first line must agree with FIRSTX (else FIRSTX itself may be a point off), and the
+            // pattern must start on the second: a shift further down means lost or extra points
+            if (n > 2 && dataLinesSeen == 2) {
+                int k = Math.abs(xLine - (expected + dx)) <= tolerance ? 1
+                        : Math.abs(xLine - (expected - dx)) <= tolerance ? -1 : 0;
+                if (k != 0) {
+                    lineOffsetPoints = k;
+                    firstOffLine = lineNo;
+                    lastOffLine = lineNo;
+                    return;
+                }
+            }
+        } else if (Math.abs(xLine - (expected + lineOffsetPoints * dx)) <= tolerance) {
+            lastOffLine = lineNo;
             return;
         }
         if (firstLine) {

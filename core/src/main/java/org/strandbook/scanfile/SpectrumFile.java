@@ -2,6 +2,7 @@ package org.strandbook.scanfile;
 
 import java.util.Collections;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Objects;
@@ -30,9 +31,19 @@ import org.strandbook.site.Spectrum;
  *                   least {@link #MIN_POINTS} points
  * @param metadata   the file's other labelled records or header fields (operator, date, integration
  *                   time...), in file order; keys as written in the file
+ * @param metadataLines the 1-based line of each metadata key, for messages about its value, and of
+ *                   the ordinate unit under {@link #Y_LABEL_LINE_KEY}; keys missing here have no
+ *                   line (a spectrum built in memory)
+ * @param tolerated  what the reader accepted although it departs from the format's letter (a DOS
+ *                   end-of-file byte, data lines labelled one point off...), in words for the import
+ *                   summary; empty for a file that follows the format
  */
 public record SpectrumFile(String sourceName, String sha256Hex, String title, XUnit xUnit, String yLabel,
-                           Spectrum spectrum, Map<String, String> metadata) {
+                           Spectrum spectrum, Map<String, String> metadata, Map<String, Integer> metadataLines,
+                           List<String> tolerated) {
+
+    /** The key in {@link #metadataLines()} that holds the line of the ordinate unit or label. */
+    public static final String Y_LABEL_LINE_KEY = "(ordinate unit)";
 
     /** The fewest points that make a spectrum: two define an axis and a slope. */
     public static final int MIN_POINTS = 2;
@@ -51,6 +62,14 @@ public record SpectrumFile(String sourceName, String sha256Hex, String title, XU
         Map<String, String> copy = new LinkedHashMap<>();
         metadata.forEach((k, v) -> copy.put(Objects.requireNonNull(k, "metadata key"), Objects.requireNonNull(v, "metadata value")));
         metadata = Collections.unmodifiableMap(copy);
+        metadataLines = Map.copyOf(Objects.requireNonNull(metadataLines, "metadataLines"));
+        tolerated = List.copyOf(Objects.requireNonNull(tolerated, "tolerated"));
+    }
+
+    /** A spectrum whose file follows its format to the letter, with no metadata lines known. */
+    public SpectrumFile(String sourceName, String sha256Hex, String title, XUnit xUnit, String yLabel,
+                        Spectrum spectrum, Map<String, String> metadata) {
+        this(sourceName, sha256Hex, title, xUnit, yLabel, spectrum, metadata, Map.of(), List.of());
     }
 
     /**
@@ -63,6 +82,24 @@ public record SpectrumFile(String sourceName, String sha256Hex, String title, XU
     public SpectrumFile(String sourceName, String sha256Hex, String title, XUnit xUnit, String yLabel,
                         double[] wavelengthsNm, double[] values, Map<String, String> metadata) {
         this(sourceName, sha256Hex, title, xUnit, yLabel, new Spectrum(wavelengthsNm, values), metadata);
+    }
+
+    /** As read from a file: with the line of each metadata key and what was tolerated. */
+    SpectrumFile(String sourceName, String sha256Hex, String title, XUnit xUnit, String yLabel,
+                 double[] wavelengthsNm, double[] values, Map<String, String> metadata,
+                 Map<String, Integer> metadataLines, List<String> tolerated) {
+        this(sourceName, sha256Hex, title, xUnit, yLabel, new Spectrum(wavelengthsNm, values), metadata,
+                metadataLines, tolerated);
+    }
+
+    /** The same spectrum with more remarks on what was tolerated. */
+    SpectrumFile withTolerated(List<String> more) {
+        if (more.isEmpty()) {
+            return this;
+        }
+        List<String> all = new java.util.ArrayList<>(more);
+        all.addAll(tolerated);
+        return new SpectrumFile(sourceName, sha256Hex, title, xUnit, yLabel, spectrum, metadata, metadataLines, all);
     }
 
     /**
@@ -108,7 +145,8 @@ public record SpectrumFile(String sourceName, String sha256Hex, String title, XU
 
     /** The same spectrum attributed to a file: its name and the SHA-256 of its bytes. */
     public SpectrumFile withSource(String newSourceName, String newSha256Hex) {
-        return new SpectrumFile(newSourceName, newSha256Hex, title, xUnit, yLabel, spectrum, metadata);
+        return new SpectrumFile(newSourceName, newSha256Hex, title, xUnit, yLabel, spectrum, metadata, metadataLines,
+                tolerated);
     }
 
     @Override

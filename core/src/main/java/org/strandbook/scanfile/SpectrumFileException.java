@@ -55,7 +55,7 @@ public final class SpectrumFileException extends Exception {
     }
 
     private static String displayName(String fileName) {
-        return fileName == null || fileName.isBlank() ? "(unnamed)" : oneLine(fileName);
+        return fileName == null || fileName.isBlank() ? "(unnamed)" : PrintableName.of(fileName);
     }
 
     // The message must stay one line: it goes to a terminal or a log line, and it may quote file text.

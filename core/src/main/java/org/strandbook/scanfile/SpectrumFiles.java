@@ -28,6 +28,9 @@ public final class SpectrumFiles {
     /** The largest file accepted: 64 MiB. */
     public static final long MAX_FILE_BYTES = 64L * 1024 * 1024;
 
+    /** The block number that asks for the file's one spectrum rather than a numbered block. */
+    public static final int WHOLE_FILE = 0;
+
     private static final int TITLE_SEARCH_LINES = 50;
 
     private SpectrumFiles() {
@@ -41,11 +44,30 @@ public final class SpectrumFiles {
      *                               (by its file name) and line
      */
     public static SpectrumFile read(Path file) throws SpectrumFileException {
+        return read(file, WHOLE_FILE);
+    }
+
+    /**
+     * Reads the spectrum in {@code file}, taking block {@code block} (1-based, in file order) of a
+     * multi-block JCAMP-DX file, or the file's one optical spectrum when {@code block} is
+     * {@link #WHOLE_FILE}.
+     *
+     * @throws SpectrumFileException as {@link #read(Path)}; also when the file is not a regular file
+     *                               (a FIFO, a device, a folder), which is refused before it is opened
+     */
+    public static SpectrumFile read(Path file, int block) throws SpectrumFileException {
         Path name = file.getFileName();
         String fileName = name == null ? file.toString() : name.toString();
         byte[] content;
         try {
-            long size = Files.size(file);
+            // a FIFO would block the read until a writer comes, a device may never end: look before opening
+            java.nio.file.attribute.BasicFileAttributes attributes = Files.readAttributes(file,
+                    java.nio.file.attribute.BasicFileAttributes.class);
+            if (!attributes.isRegularFile()) {
+                throw new SpectrumFileException(fileName, 0, attributes.isDirectory() ? "is a folder, not a file"
+                        : "is not a regular file (a pipe, a device or a socket): Strandbook reads spectrum files only");
+            }
+            long size = attributes.size();
             if (size > MAX_FILE_BYTES) {
                 throw tooLarge(fileName, size);
             }
@@ -56,7 +78,7 @@ public final class SpectrumFiles {
         } catch (IOException e) {
             throw new SpectrumFileException(fileName, 0, "cannot read the file: " + describe(e), e);
         }
-        return read(fileName, content);
+        return read(fileName, content, block);
     }
 
     /**
@@ -67,15 +89,29 @@ public final class SpectrumFiles {
      * @throws SpectrumFileException if the bytes are not a spectrum Strandbook accepts
      */
     public static SpectrumFile read(String fileName, byte[] content) throws SpectrumFileException {
+        return read(fileName, content, WHOLE_FILE);
+    }
+
+    /** As {@link #read(String, byte[])}, taking one block of a multi-block file; see {@link #read(Path, int)}. */
+    public static SpectrumFile read(String fileName, byte[] content, int block) throws SpectrumFileException {
         if (content.length > MAX_FILE_BYTES) {
             throw tooLarge(fileName, content.length);
         }
-        String sha256 = sha256Hex(content);
-        String text = SpectrumText.decode(fileName, content);
-        if (looksLikeJcampDx(text)) {
-            return new JcampDxReader(fileName, sha256).read(text);
+        if (block < 0) {
+            throw new IllegalArgumentException("block number must be 1 or more, was " + block);
         }
-        return new DelimitedSpectrumReader(fileName, sha256).read(text);
+        String sha256 = sha256Hex(content);
+        SpectrumText.Decoded decoded = SpectrumText.decode(fileName, content);
+        String text = decoded.text();
+        requireFewEnoughLines(fileName, text);
+        if (looksLikeJcampDx(text)) {
+            return new JcampDxReader(fileName, sha256).read(text, block).withTolerated(decoded.tolerated());
+        }
+        if (block > 1) {
+            throw new SpectrumFileException(fileName, 0, "block " + block + " was asked for, but delimited text "
+                    + "holds one spectrum");
+        }
+        return new DelimitedSpectrumReader(fileName, sha256).read(text).withTolerated(decoded.tolerated());
     }
 
     /** SHA-256 of the bytes as 64 lower-case hex digits (FIPS 180-4). */
@@ -120,6 +156,25 @@ public final class SpectrumFiles {
             }
         }
         return false;
+    }
+
+    /**
+     * The most lines a spectrum file may have: one point a line at {@link JcampDxReader#MAX_POINTS},
+     * plus room for a long header. Counted before the text is split, so that a file of millions
+     * of short lines is refused before it fills memory.
+     */
+    static final int MAX_LINES = JcampDxReader.MAX_POINTS + 100_000;
+
+    private static void requireFewEnoughLines(String fileName, String text) throws SpectrumFileException {
+        int breaks = 0;
+        int at = text.indexOf('\n');
+        while (at >= 0) {
+            if (++breaks > MAX_LINES) {
+                throw new SpectrumFileException(fileName, MAX_LINES + 1, "more than " + MAX_LINES + " lines: a "
+                        + "spectrum file holds at most " + JcampDxReader.MAX_POINTS + " points (one a line) and its header");
+            }
+            at = text.indexOf('\n', at + 1);
+        }
     }
 
     private static SpectrumFileException tooLarge(String fileName, long size) {

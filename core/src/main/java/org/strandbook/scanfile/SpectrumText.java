@@ -15,19 +15,41 @@ import java.util.Locale;
  * Turns a spectrum file's bytes into text, or says why they are not text.
  *
  * <p>Accepted: UTF-8 with or without a byte-order mark, UTF-16 (LE or BE) with a byte-order mark.
- * Everything else is refused with the line where it goes wrong: a NUL byte (binary data, or UTF-16
- * saved without a byte-order mark), bytes that are not UTF-8 (e.g. a Windows-1252 "µ"), and control
- * characters other than tab, carriage return and line feed. Guessing an 8-bit code page would import
- * a wrong "µm" header as readily as a right one, so the technician is asked to save as UTF-8 instead.
+ * Tolerated, and said in {@link Decoded#tolerated()}: a DOS end-of-file byte (0x1A) at the very end
+ * (after the last line), and comment or metadata lines (first non-blank characters {@code #} or
+ * {@code $$}: JCAMP-DX labelled records and comments, a delimited file's {@code #} lines) that are
+ * not UTF-8, which are read as ISO-8859-1, the 8-bit code older analyzer software writes. Everything
+ * else is refused with the line where it goes wrong: a NUL byte (binary data, or UTF-16 saved
+ * without a byte-order mark), data or header lines that are not UTF-8 (a wrong "µm" column header
+ * must not be guessed at), and control characters other than tab, carriage return and line feed.
  */
 final class SpectrumText {
+
+    /** DOS and CP/M mark the end of a text file with this byte (SUB, Ctrl-Z). */
+    private static final int DOS_END_OF_FILE = 0x1A;
+
+    /** The text and what was tolerated on the way. */
+    record Decoded(String text, List<String> tolerated) {
+        Decoded {
+            tolerated = List.copyOf(tolerated);
+        }
+    }
 
     private SpectrumText() {
     }
 
-    static String decode(String fileName, byte[] bytes) throws SpectrumFileException {
+    static Decoded decode(String fileName, byte[] bytes) throws SpectrumFileException {
         if (bytes.length == 0) {
             throw new SpectrumFileException(fileName, 0, "the file is empty");
+        }
+        List<String> tolerated = new ArrayList<>(1);
+        int length = lengthBeforeDosEndOfFile(bytes);
+        if (length < bytes.length) {
+            tolerated.add("a DOS end-of-file byte (0x1A) after the last line was ignored");
+            bytes = java.util.Arrays.copyOf(bytes, length);
+            if (length == 0) {
+                throw new SpectrumFileException(fileName, 0, "the file is empty");
+            }
         }
         Charset charset = StandardCharsets.UTF_8;
         int offset = 0;
@@ -47,14 +69,100 @@ final class SpectrumText {
         } else {
             if (charset == StandardCharsets.UTF_8) {
                 requireNoNulByte(fileName, bytes);
+                text = utf8WithLatin1Metadata(fileName, bytes, offset, tolerated);
+            } else {
+                text = strictDecode(fileName, bytes, offset, charset);
             }
-            text = strictDecode(fileName, bytes, offset, charset);
             requireNoControlCharacters(fileName, text);
         }
         if (text.isBlank()) {
             throw new SpectrumFileException(fileName, 0, "the file holds only blank space");
         }
-        return text;
+        return new Decoded(text, tolerated);
+    }
+
+    /** The length without a trailing run of 0x1A bytes and the line breaks and blanks around them. */
+    private static int lengthBeforeDosEndOfFile(byte[] bytes) {
+        int end = bytes.length;
+        int cut = end;
+        while (end > 0) {
+            int b = bytes[end - 1];
+            if (b == DOS_END_OF_FILE) {
+                cut = end - 1;
+            } else if (b != '\n' && b != '\r' && b != ' ' && b != '\t') {
+                break;
+            }
+            end--;
+        }
+        return cut;
+    }
+
+    /**
+     * Strict UTF-8, except that a comment or metadata line that is not UTF-8 is read as ISO-8859-1;
+     * the lines so read are named in {@code tolerated}.
+     */
+    private static String utf8WithLatin1Metadata(String fileName, byte[] bytes, int offset, List<String> tolerated)
+            throws SpectrumFileException {
+        try {
+            return strictDecode(fileName, bytes, offset, StandardCharsets.UTF_8);
+        } catch (SpectrumFileException notUtf8) {
+            StringBuilder text = new StringBuilder(bytes.length);
+            List<Integer> latin1Lines = new ArrayList<>();
+            int line = 1;
+            int start = offset;
+            while (start < bytes.length) {
+                int end = start;
+                while (end < bytes.length && bytes[end] != '\n' && bytes[end] != '\r') {
+                    end++;
+                }
+                int next = end;
+                if (next < bytes.length) {
+                    next += bytes[next] == '\r' && next + 1 < bytes.length && bytes[next + 1] == '\n' ? 2 : 1;
+                }
+                byte[] lineBytes = java.util.Arrays.copyOfRange(bytes, start, end);
+                try {
+                    text.append(strictDecode(fileName, lineBytes, 0, StandardCharsets.UTF_8));
+                } catch (SpectrumFileException e) {
+                    if (!isCommentOrRecord(lineBytes)) {
+                        throw new SpectrumFileException(fileName, line, e.problem()
+                                .replaceFirst("at byte offset \\d+", "at byte offset " + (start + firstBadByte(lineBytes))));
+                    }
+                    text.append(new String(lineBytes, StandardCharsets.ISO_8859_1));
+                    latin1Lines.add(line);
+                }
+                text.append(new String(bytes, end, next - end, StandardCharsets.ISO_8859_1));
+                start = next;
+                line++;
+            }
+            tolerated.add("line" + (latin1Lines.size() == 1 ? " " : "s ") + shortList(latin1Lines)
+                    + " not UTF-8: read as ISO-8859-1 (comment or metadata only; data must be UTF-8)");
+            return text.toString();
+        }
+    }
+
+    private static boolean isCommentOrRecord(byte[] line) {
+        int i = 0;
+        while (i < line.length && (line[i] == ' ' || line[i] == '\t')) {
+            i++;
+        }
+        return i < line.length && (line[i] == '#' || (line[i] == '$' && i + 1 < line.length && line[i + 1] == '$'));
+    }
+
+    private static int firstBadByte(byte[] line) {
+        for (int i = 0; i < line.length; i++) {
+            if (line[i] < 0) {
+                return i;
+            }
+        }
+        return 0;
+    }
+
+    private static String shortList(List<Integer> lines) {
+        if (lines.size() <= 5) {
+            return lines.toString().replace("[", "").replace("]", "");
+        }
+        return lines.subList(0, 5).toString().replace("[", "").replace("]", "") + " and " + (lines.size() - 5)
+                + " more";
     }
 
     /** The text split at CR LF, CR or LF; index {@code i} is line {@code i + 1}. */
@@ -141,8 +249,8 @@ final class SpectrumText {
             int bad = in.position();
             int line = 1 + countLineBreaks(out.duplicate().flip());
             String what = charset == StandardCharsets.UTF_8
-                    ? String.format(Locale.ROOT, "byte 0x%02X at byte offset %d is not UTF-8 text (other 8-bit "
-                            + "encodings are not read: save the spectrum as UTF-8)", bytes[bad] & 0xFF, bad)
+                    ? String.format(Locale.ROOT, "byte 0x%02X at byte offset %d is not UTF-8 text (only comment "
+                            + "and ##record lines may be in another 8-bit code: save the spectrum as UTF-8)", bytes[bad] & 0xFF, bad)
                     : "the " + charset.name() + " text breaks off at byte offset " + bad + " (cut short or not UTF-16)";
             throw new SpectrumFileException(fileName, line, what);
         }

@@ -16,7 +16,18 @@ import java.time.Instant;
  * @param maxNm      longest wavelength, nm
  * @param sourceFile name of the imported file
  * @param sha256     SHA-256 of the imported file's bytes, hex
+ * @param yUnit      the unit of the values as the file named it; empty if it named none
  */
 public record ScanRecord(long id, String pointTag, ScanKind kind, Instant takenAt, ScanConditions conditions,
-                         int nPoints, double minNm, double maxNm, String sourceFile, String sha256) {
+                         int nPoints, double minNm, double maxNm, String sourceFile, String sha256, String yUnit) {
+
+    public ScanRecord {
+        yUnit = yUnit == null ? "" : yUnit;
+    }
+
+    /** A scan whose file named no unit for its values. */
+    public ScanRecord(long id, String pointTag, ScanKind kind, Instant takenAt, ScanConditions conditions,
+                      int nPoints, double minNm, double maxNm, String sourceFile, String sha256) {
+        this(id, pointTag, kind, takenAt, conditions, nPoints, minNm, maxNm, sourceFile, sha256, "");
+    }
 }

@@ -16,9 +16,20 @@ import org.strandbook.site.Spectrum;
  * @param spectrum   wavelengths (nm) and values
  * @param sourceFile name of the imported file, as shown to users
  * @param sha256     SHA-256 of the imported file's bytes, 64 hex digits; a file is stored once
+ * @param yUnit      the unit of the values as the file names it (counts, volts...); empty if it names
+ *                   none; one line of at most {@value #MAX_Y_UNIT_LENGTH} characters
  */
 public record NewScan(String pointTag, ScanKind kind, Instant takenAt, ScanConditions conditions, Spectrum spectrum,
-                      String sourceFile, String sha256) {
+                      String sourceFile, String sha256, String yUnit) {
+
+    /** The longest unit text stored; longer labels are cut, as the column allows no more. */
+    public static final int MAX_Y_UNIT_LENGTH = 200;
+
+    /** A scan whose file names no unit for its values. */
+    public NewScan(String pointTag, ScanKind kind, Instant takenAt, ScanConditions conditions, Spectrum spectrum,
+                   String sourceFile, String sha256) {
+        this(pointTag, kind, takenAt, conditions, spectrum, sourceFile, sha256, "");
+    }
 
     public NewScan {
         if (pointTag == null || pointTag.isBlank()) {
@@ -42,5 +53,18 @@ public record NewScan(String pointTag, ScanKind kind, Instant takenAt, ScanCondi
         }
         sourceFile = sourceFile.strip();
         sha256 = Sha256.normalized(sha256, "scan file " + sourceFile);
+        yUnit = yUnit == null ? "" : oneLine(yUnit);
+        if (yUnit.length() > MAX_Y_UNIT_LENGTH) {
+            yUnit = yUnit.substring(0, MAX_Y_UNIT_LENGTH);
+        }
+    }
+
+    private static String oneLine(String text) {
+        for (int i = 0; i < text.length(); i++) {
+            if (Character.isISOControl(text.charAt(i))) {
+                return text.replaceAll("\\p{Cntrl}", " ").strip();
+            }
+        }
+        return text.strip();
     }
 }

@@ -32,16 +32,16 @@ public final class ScanRepository {
 
     static final String LIST_BY_POINT_SQL = "SELECT s.id, p.tag, s.kind, s.taken_at, s.operator, s.integration_ms, "
             + "s.co_added, s.ambient_temperature_c, s.process_temperature_c, s.n_points, s.min_nm, s.max_nm, "
-            + "s.source_file, s.sha256 FROM scan s JOIN point p ON p.id = s.point_id "
+            + "s.source_file, s.sha256, s.y_unit FROM scan s JOIN point p ON p.id = s.point_id "
             + "WHERE s.point_id = ? ORDER BY s.taken_at, s.id";
     private static final String SELECT_SCAN = "SELECT s.id, p.tag, s.kind, s.taken_at, s.operator, s.integration_ms, "
             + "s.co_added, s.ambient_temperature_c, s.process_temperature_c, s.n_points, s.min_nm, s.max_nm, "
-            + "s.source_file, s.sha256 FROM scan s JOIN point p ON p.id = s.point_id";
+            + "s.source_file, s.sha256, s.y_unit FROM scan s JOIN point p ON p.id = s.point_id";
     // the point's key is looked up inside the insert: no statement of its own per scan, and no key
     // kept between calls that a removed point could leave stale; an unknown tag gives a NULL key
     private static final String INSERT_SCAN = "INSERT INTO scan (point_id, kind, taken_at, operator, integration_ms, "
-            + "co_added, ambient_temperature_c, process_temperature_c, n_points, min_nm, max_nm, source_file, sha256) "
-            + "VALUES ((SELECT id FROM point WHERE tag = ?), ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?) RETURNING id";
+            + "co_added, ambient_temperature_c, process_temperature_c, n_points, min_nm, max_nm, source_file, sha256, "
+            + "y_unit) VALUES ((SELECT id FROM point WHERE tag = ?), ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?) RETURNING id";
     private static final String INSERT_SPECTRUM = "INSERT INTO scan_spectrum (scan_id, data) VALUES (?, ?)";
 
     private final Session session;
@@ -122,6 +122,7 @@ public final class ScanRepository {
         ps.setDouble(11, spectrum.maxNm());
         ps.setString(12, scan.sourceFile());
         ps.setString(13, scan.sha256());
+        ps.setString(14, scan.yUnit());
         long id;
         try {
             id = Columns.insertReturningId(ps);
@@ -248,7 +249,7 @@ public final class ScanRepository {
                 out.add(new ScanRecord(rs.getLong("id"), rs.getString("tag"), ScanKind.valueOf(rs.getString("kind")),
                         StoredTime.parse(rs.getString("taken_at")), conditions, rs.getInt("n_points"),
                         rs.getDouble("min_nm"), rs.getDouble("max_nm"), rs.getString("source_file"),
-                        rs.getString("sha256")));
+                        rs.getString("sha256"), rs.getString("y_unit")));
             }
         }
         return out;

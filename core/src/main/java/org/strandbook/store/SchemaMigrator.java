@@ -28,12 +28,21 @@ final class SchemaMigrator {
     /** The version that created the audit trail; from it on, every step is itself audited. */
     static final int AUDIT_TRAIL = 2;
 
-    private record Step(int version, String script) {
+    /**
+     * @param rebaselined tables whose rows the step changes in form (a column added): the audit trail
+     *                    records a fresh image of each of their rows, so that verification compares
+     *                    like with like
+     */
+    private record Step(int version, String script, List<AuditedTable> rebaselined) {
+        Step(int version, String script) {
+            this(version, script, List.of());
+        }
     }
 
     private static final List<Step> STEPS = List.of(
             new Step(1, "V1__create_workbook.sql"),
             new Step(2, "V2__audit_trail.sql"),
+            new Step(3, "V3__scan_y_unit.sql", List.of(AuditedTable.SCAN)),
             new Step(5, "V5__maintenance_and_sign_off.sql"));
 
     private SchemaMigrator() {
@@ -76,6 +85,11 @@ final class SchemaMigrator {
                 }
                 if (step.version() >= AUDIT_TRAIL) {
                     audit.schemaChanged(current, step.version());
+                }
+                if (step.version() > AUDIT_TRAIL) {
+                    for (AuditedTable table : step.rebaselined()) {
+                        audit.baseline(table);
+                    }
                 }
                 try (Statement st = session.connection().createStatement()) {
                     st.execute("PRAGMA user_version = " + step.version());

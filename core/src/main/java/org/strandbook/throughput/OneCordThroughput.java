@@ -5,6 +5,7 @@ import java.text.DecimalFormatSymbols;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.OptionalDouble;
 
 import org.strandbook.optics.WavelengthGrid;
 
@@ -54,14 +55,27 @@ public final class OneCordThroughput {
     private static final DecimalFormatSymbols ROOT_SYMBOLS = DecimalFormatSymbols.getInstance(Locale.ROOT);
 
     private final double noiseWidths;
+    private final OptionalDouble fullScaleCounts;
 
-    private OneCordThroughput(double noiseWidths) {
+    private OneCordThroughput(double noiseWidths, OptionalDouble fullScaleCounts) {
         this.noiseWidths = noiseWidths;
+        this.fullScaleCounts = fullScaleCounts;
     }
 
-    /** k = {@link #DEFAULT_NOISE_WIDTHS}. */
+    /** k = {@link #DEFAULT_NOISE_WIDTHS}, no declared full scale. */
     public static OneCordThroughput withDefaults() {
-        return new OneCordThroughput(DEFAULT_NOISE_WIDTHS);
+        return new OneCordThroughput(DEFAULT_NOISE_WIDTHS, OptionalDouble.empty());
+    }
+
+    /**
+     * The same method with the detector's declared full scale, in the unit of the scans it is
+     * given: readings at or above it are clipped (see {@link DetectorClipping}).
+     */
+    public OneCordThroughput withFullScaleCounts(double fullScale) {
+        if (!(fullScale > 0) || !Double.isFinite(fullScale)) {
+            throw new IllegalArgumentException("full scale " + fullScale + " counts must be a positive number");
+        }
+        return new OneCordThroughput(noiseWidths, OptionalDouble.of(fullScale));
     }
 
     /** The same method masking signals within k noise widths of dark (k ≥ 0). */
@@ -69,7 +83,7 @@ public final class OneCordThroughput {
         if (!(k >= 0) || !Double.isFinite(k)) {
             throw new IllegalArgumentException("number of noise widths " + k + " must be a finite number ≥ 0");
         }
-        return new OneCordThroughput(k);
+        return new OneCordThroughput(k, fullScaleCounts);
     }
 
     /** Loss spectrum of the path on {@code grid}. */
@@ -97,6 +111,11 @@ public final class OneCordThroughput {
         double[] refDark = scans.referenceDark() == scans.loopDark() ? loopDark : regridder.onGrid(scans.referenceDark());
 
         int n = grid.size();
+        boolean[] refClipped = clippedOnGrid(scans.reference(), refSigma, grid);
+        boolean[] loopClipped = clippedOnGrid(scans.loop(), loopSigma, grid);
+        boolean[] loopDarkClipped = clippedOnGrid(scans.loopDark(), loopDarkSigma, grid);
+        boolean[] refDarkClipped = scans.referenceDark() == scans.loopDark() ? loopDarkClipped
+                : clippedOnGrid(scans.referenceDark(), refDarkSigma, grid);
         MaskReason[] reasons = new MaskReason[n];
         double[] lossDb = new double[n];
         double[] sigmaDb = new double[n];
@@ -113,6 +132,12 @@ public final class OneCordThroughput {
                 reasons[i] = MaskReason.OUTSIDE_REFERENCE_SCAN;
             } else if (!scans.loopDark().covers(nm) || !scans.referenceDark().covers(nm)) {
                 reasons[i] = MaskReason.OUTSIDE_DARK_SCAN;
+            } else if (refClipped[i]) {
+                reasons[i] = MaskReason.REFERENCE_SATURATED;
+            } else if (loopClipped[i]) {
+                reasons[i] = MaskReason.LOOP_SATURATED;
+            } else if (loopDarkClipped[i] || refDarkClipped[i]) {
+                reasons[i] = MaskReason.DARK_SATURATED;
             } else if (!(netRef > noiseWidths * refNoise)) {
                 reasons[i] = MaskReason.REFERENCE_AT_DARK;
             } else {
@@ -167,6 +192,21 @@ public final class OneCordThroughput {
         }
         return new ThroughputResult(grid, lossDb, sigmaDb, usable, masked, noLight, noReference, negative, warnings,
                 loopNoise, refNoise, noiseWidths);
+    }
+
+    /** Grid points that fall within a clipped run of {@code scan} (its widened ends included). */
+    private boolean[] clippedOnGrid(RawSpectrum scan, double sigmaCounts, WavelengthGrid grid) {
+        boolean[] out = new boolean[grid.size()];
+        List<DetectorClipping.Run> runs = DetectorClipping.find(scan.countsView(), sigmaCounts, fullScaleCounts);
+        for (DetectorClipping.Run r : runs) {
+            double from = scan.axis().wavelengthNm(r.from());
+            double to = scan.axis().wavelengthNm(r.to());
+            for (int i = 0; i < out.length; i++) {
+                double nm = grid.wavelengthNm(i);
+                out[i] |= nm >= from && nm <= to;
+            }
+        }
+        return out;
     }
 
     private static double noise(RawSpectrum dark, String what) {

@@ -60,6 +60,11 @@ public record RawSpectrum(WavelengthGrid axis, double[] counts, OptionalDouble n
         return counts.clone();
     }
 
+    /** The counts without a copy, for this package's read-only passes over every scan. */
+    double[] countsView() {
+        return counts;
+    }
+
     /** True when {@code wavelengthNm} lies within the scan's axis. */
     public boolean covers(double wavelengthNm) {
         return axis.covers(wavelengthNm);

@@ -84,6 +84,43 @@ public record ThroughputResult(WavelengthGrid grid, double[] lossDb, double[] si
         return c;
     }
 
+    /**
+     * Share of the grid points that all four scans reach where a detector was saturated or
+     * clipped (0–1); 0 when the scans reach none.
+     */
+    public double saturatedFraction() {
+        int saturated = 0;
+        int outside = 0;
+        for (MaskedRange r : maskedRanges) {
+            int points = pointsWithin(r);
+            if (r.reason().isSaturation()) {
+                saturated += points;
+            } else if (r.reason() == MaskReason.OUTSIDE_LOOP_SCAN || r.reason() == MaskReason.OUTSIDE_REFERENCE_SCAN
+                    || r.reason() == MaskReason.OUTSIDE_DARK_SCAN) {
+                outside += points;
+            }
+        }
+        int reached = grid.size() - outside;
+        return reached == 0 ? 0 : (double) saturated / reached;
+    }
+
+    /** The reasons of the saturated ranges in words, each once, e.g. "reference saturated: ...". */
+    public List<String> saturationReasons() {
+        return maskedRanges.stream().filter(r -> r.reason().isSaturation()).map(r -> r.reason().describe(""))
+                .distinct().toList();
+    }
+
+    private int pointsWithin(MaskedRange r) {
+        int n = 0;
+        for (int i = 0; i < grid.size(); i++) {
+            double nm = grid.wavelengthNm(i);
+            if (nm >= r.fromNm() && nm <= r.toNm()) {
+                n++;
+            }
+        }
+        return n;
+    }
+
     /** Transmittance T = 10^(−L/10) per grid point; {@code NaN} where masked. */
     public double[] transmittance() {
         return Decibel.transmittanceFromLossDb(lossDb);

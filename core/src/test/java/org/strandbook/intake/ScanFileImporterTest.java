@@ -12,7 +12,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
-import java.util.OptionalDouble;
 
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -20,14 +19,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.strandbook.scanfile.JcampDxWriter;
 import org.strandbook.scanfile.SpectrumFile;
 import org.strandbook.scanfile.XUnit;
-import org.strandbook.site.Analyzer;
-import org.strandbook.site.DetectorType;
-import org.strandbook.site.MeasurementPoint;
-import org.strandbook.site.ProbeKind;
-import org.strandbook.site.ProbeType;
 import org.strandbook.site.ScanKind;
-import org.strandbook.site.Site;
-import org.strandbook.site.WavelengthBand;
 import org.strandbook.store.Workbook;
 
 /**
@@ -61,12 +53,7 @@ class ScanFileImporterTest {
     }
 
     private Workbook workbook() {
-        Workbook wb = Workbook.create(dir.resolve("site.strandbook"), new Site("Batch Works"), "tester");
-        wb.site().addAnalyzer(new Analyzer("AZ", "", 1000, 2500, 1, 20, DetectorType.EXTENDED_INGAAS));
-        wb.catalog().addProbeType(new ProbeType("PT", "", ProbeKind.TRANSMISSION, "SAPPHIRE", 2, 1, 1));
-        wb.points().add(new MeasurementPoint("P-1", "", "", "AZ", 1, "PT", List.of(new WavelengthBand("b", 1500, 1600)),
-                OptionalDouble.empty(), false, false, OptionalDouble.empty()));
-        return wb;
+        return OnePointWorkbook.create(dir.resolve("site.strandbook"), "Batch Works");
     }
 
     private static ScanFileImporter.Summary importInto(Workbook wb, List<Path> batch, ScanFileImporter.Progress progress) {

@@ -49,6 +49,54 @@ class IndependentJcampReaderTest {
         assertSamePoints(ours, reference(text.replace("##YUNITS= COUNTS", "##YUNITS= ARBITRARY UNITS")));
     }
 
+    @Test
+    void aFileWhoseLinesAreLabelledOnePointEarlyIsReadOnItsDeclaredAxis() throws Exception {
+        // The layout of the NIST Quantitative Infrared Database files, e.g. acetone.jdx as kept in the
+        // public repository nzhagen/jcamp (data/infrared_spectra/acetone.jdx): ##FIRSTX=574.928,
+        // ##LASTX=3975.077, ##NPOINTS=14106, six ordinates a line, lines labelled 574.93, 576.13, 577.58,
+        // 579.03, 580.47 ... — from the second line on, the abscissa of the point before the line's first
+        // ordinate. The layout is rebuilt here with invented ordinates. The reference library refuses
+        // such files ("x check failed"); readers that build the axis from FIRSTX, LASTX and NPOINTS
+        // take them, and so do we: point i at FIRSTX + i (LASTX - FIRSTX)/(NPOINTS - 1), McDonald &
+        // Wilks 1988, with every ordinate in file order.
+        double firstX = 574.928;
+        double lastX = 3975.077;
+        int n = 14106;
+        double dx = (lastX - firstX) / (n - 1);
+        Random random = new Random(21);
+        StringBuilder text = new StringBuilder("##TITLE=layout of a gas-phase reference spectrum\n##JCAMP-DX=4.24\n"
+                + "##DATA TYPE=INFRARED SPECTRUM\n##XUNITS=cm-1\n##YUNITS=ARBITRARY UNITS\n##XFACTOR=1.0\n"
+                + "##YFACTOR=1\n##DELTAX=0.2410\n##FIRSTX=574.928\n##LASTX=3975.077\n##NPOINTS=14106\n"
+                + "##XYDATA=(X++(Y..Y))\n");
+        String[] labels = new String[5];
+        double[] ordinates = new double[n];
+        for (int start = 0, line = 0; start < n; start += 6, line++) {
+            double label = firstX + (start == 0 ? 0 : start - 1) * dx;
+            String printed = String.format(java.util.Locale.ROOT, "%.2f", label);
+            if (line < labels.length) {
+                labels[line] = printed;
+            }
+            text.append(printed);
+            for (int i = start; i < Math.min(n, start + 6); i++) {
+                ordinates[i] = 100000 + random.nextInt(900000);
+                text.append(' ').append((long) ordinates[i]);
+            }
+            text.append('\n');
+        }
+        text.append("##END=\n");
+        assertEquals(java.util.List.of("574.93", "576.13", "577.58", "579.03", "580.47"), java.util.List.of(labels),
+                "the rebuilt labels are the file's");
+        SpectrumFile ours = SpectrumFiles.read("layout.jdx", text.toString().getBytes(StandardCharsets.UTF_8));
+        assertEquals(1, ours.tolerated().size(), ours.tolerated().toString());
+        double[] x = ours.xInFileUnit();
+        double[] y = ours.values();
+        for (int i = 0; i < n; i++) {
+            int j = n - 1 - i; // a descending wavenumber axis is held as ascending wavelength
+            assertEquals(firstX + i * dx, x[j], 1e-9 * lastX, "abscissa of point " + i);
+            assertEquals(ordinates[i], y[j], "ordinate of point " + i);
+        }
+    }
+
     private static Spectrum1D reference(String text) throws Exception {
         return (Spectrum1D) JCAMPReader.getInstance().createSpectrum(text);
     }

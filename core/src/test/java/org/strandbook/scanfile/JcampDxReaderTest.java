@@ -18,7 +18,7 @@ class JcampDxReaderTest {
     private static final double RELATIVE_TOLERANCE = 1e-12;
 
     /** The published ASDF example as a whole single-spectrum file (McDonald & Wilks 1988). */
-    private static final String PUBLISHED_EXAMPLE = """
+    static final String PUBLISHED_EXAMPLE = """
             ##TITLE= published ASDF example
             ##JCAMP-DX= 4.24
             ##DATA TYPE= INFRARED SPECTRUM
@@ -134,12 +134,13 @@ class JcampDxReaderTest {
     @ParameterizedTest
     @CsvSource(textBlock = """
             # McDonald & Wilks 1988: ##XUNITS= names the abscissa; 1 um = 1000 nm, 1/CM per nu = 1e7/lambda[nm]
-            NANOMETERS,  1000, 1000
-            MICROMETERS, 1000, 1000000
-            1/CM,        1000, 10000
+            NANOMETERS,  1,     1000,  1000
+            MICROMETERS, 0.001, 1,     1000
+            1/CM,        1,     1000,  10000
             """)
-    void abscissaUnitsConvertToNanometres(String unit, double firstX, double firstNm) throws Exception {
-        String text = PUBLISHED_EXAMPLE.replace("NANOMETERS", unit);
+    void abscissaUnitsConvertToNanometres(String unit, double xFactor, double firstX, double firstNm) throws Exception {
+        String text = PUBLISHED_EXAMPLE.replace("NANOMETERS", unit).replace("##XFACTOR= 1\n", "##XFACTOR= " + xFactor + "\n")
+                .replace("##FIRSTX= 1000", "##FIRSTX= " + 1000 * xFactor).replace("##LASTX= 1009", "##LASTX= " + 1009 * xFactor);
         SpectrumFile s = read(text);
         double[] nm = s.wavelengthsNm();
         double got = unit.equals("1/CM") ? nm[nm.length - 1] : nm[0];
@@ -170,12 +171,50 @@ class JcampDxReaderTest {
         assertArrayEquals(new double[] {20, 22, 24}, s.values());
     }
 
+    /** A peak table block (Lampen et al. 1994, ##PEAK TABLE=): not a spectrum. */
+    private static final String PEAK_BLOCK = """
+            ##TITLE= peaks
+            ##JCAMP-DX= 5.01
+            ##DATA TYPE= INFRARED PEAK TABLE
+            ##XUNITS= NANOMETERS
+            ##YUNITS= ARBITRARY UNITS
+            ##PEAK TABLE= (XY..XY)
+            1002, 3; 1003, 3
+            ##END=
+            """;
+
+    private static String link(String... blocks) {
+        return "##TITLE= link\n##JCAMP-DX= 5.01\n##DATA TYPE= LINK\n##BLOCKS= " + blocks.length + "\n"
+                + String.join("", blocks) + "##END=\n";
+    }
+
     @Test
-    void multiBlockFilesAreRefused() {
-        // McDonald & Wilks 1988: a LINK block holds further blocks; Strandbook imports single spectra only
-        String text = "##TITLE= link\n##JCAMP-DX= 5.01\n##DATA TYPE= LINK\n##BLOCKS= 2\n" + PUBLISHED_EXAMPLE + "##END=\n";
+    void aLinkFileWithOneOpticalSpectrumAmongOtherBlocksGivesThatSpectrum() throws Exception {
+        // McDonald & Wilks 1988 / Lampen et al. 1994: a LINK block holds further blocks, each from ##TITLE= to ##END=
+        String text = link(PEAK_BLOCK, PUBLISHED_EXAMPLE);
+        SpectrumFile s = read(text);
+        assertArrayEquals(new double[] {1, 2, 3, 3, 2, 1, 0, -1, -2, -3}, s.values());
+        assertEquals(1, s.tolerated().size(), s.tolerated().toString());
+        assertTrue(s.tolerated().get(0).contains("block 2 of 2"), s.tolerated().toString());
+    }
+
+    @Test
+    void aLinkFileWithTwoOpticalSpectraIsRefusedListingThemUntilOneIsChosen() throws Exception {
+        // McDonald & Wilks 1988: blocks are numbered in file order; which one is the scan is the user's call
+        String second = PUBLISHED_EXAMPLE.replace("published ASDF example", "second scan").replace("1009c", "1009b")
+                .replace("1000AJT%jX", "1000BJT%jX").replace("##FIRSTY= 1", "##FIRSTY= 2");
+        String text = link(PUBLISHED_EXAMPLE, PEAK_BLOCK, second);
         SpectrumFileException e = assertThrows(SpectrumFileException.class, () -> read(text));
-        assertTrue(e.getMessage().matches("ex\\.jdx:\\d+: .*(multi-block|nested block).*"), e.getMessage());
+        assertEquals(5, e.lineNumber(), e.getMessage());
+        assertTrue(e.problem().contains("block 1 'published ASDF example' on line 5")
+                && e.problem().contains("block 3 'second scan' on line 28") && e.problem().contains("--block N"),
+                e.getMessage());
+        SpectrumFile third = SpectrumFiles.read("ex.jdx", text.getBytes(StandardCharsets.UTF_8), 3);
+        assertEquals(2, third.values()[0]);
+        assertEquals("second scan", third.title());
+        SpectrumFileException peak = assertThrows(SpectrumFileException.class,
+                () -> SpectrumFiles.read("ex.jdx", text.getBytes(StandardCharsets.UTF_8), 2));
+        assertTrue(peak.problem().contains("PEAK TABLE"), peak.getMessage());
     }
 
     @Test

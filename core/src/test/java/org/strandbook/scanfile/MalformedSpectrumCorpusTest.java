@@ -94,10 +94,17 @@ public class MalformedSpectrumCorpusTest {
         // RFC 3629: 0xB5 (Latin-1 micro sign) and 0xB0 (degree sign) are not UTF-8 sequences
         cases.add(Named.of("micro sign in Latin-1",
                 "Wavelength (µm);Counts\n1,5;2\n1,6;3\n".getBytes(StandardCharsets.ISO_8859_1)));
-        cases.add(Named.of("degree sign in Windows-1252", ("# temperature: 23 °C\n" + csv)
+        // comment and ##record lines in an 8-bit code are read as ISO-8859-1; header and data lines are not
+        cases.add(Named.of("degree sign in Windows-1252 column header", ("Wavelength (nm);Counts at 23 °C\n900;1\n901;2\n")
                 .getBytes(Charset.forName("windows-1252"))));
-        cases.add(Named.of("Latin-1 title in JCAMP-DX", jcamp.replace("corpus base", "Spektrum für Schleife 3")
+        cases.add(Named.of("Latin-1 byte inside the JCAMP-DX table", jcamp.replace("##END=", "° \n##END=")
                 .getBytes(StandardCharsets.ISO_8859_1)));
+        byte[] midEof = csv.replaceFirst("\n", "\n\u001A\n").getBytes(StandardCharsets.UTF_8);
+        cases.add(Named.of("DOS end-of-file byte before the last line", midEof));
+        cases.add(Named.of("DOS end-of-file byte only", new byte[] {0x1A}));
+        cases.add(Named.of("DOS end-of-file byte before ##END=", (jcamp.replace("##END=", "\u001A\n##END="))
+                .getBytes(StandardCharsets.UTF_8)));
+
         byte[] utf16 = ("\uFEFF" + csv).getBytes(StandardCharsets.UTF_16LE);
         cases.add(Named.of("UTF-16 with BOM cut mid-character", java.util.Arrays.copyOf(utf16, utf16.length - 1)));
         byte[] overlong = {(byte) 0xEF, (byte) 0xBB, (byte) 0xBF, '1', ';', (byte) 0xC0, (byte) 0xAF, '\n'};
@@ -149,6 +156,10 @@ public class MalformedSpectrumCorpusTest {
         add(cases, "Inf value", header + "1000;1\n1001;Inf\n");
         add(cases, "-Infinity value", header + "1000;1\n1001;-Infinity\n");
         add(cases, "nan abscissa", "nan;1\n1001;2\n1002;3\n");
+        // a unit named in the header must fit the values: µm over 1000-2500 is nm mislabelled
+        add(cases, "µm header over nm values", "Wavelength (µm);Counts\n1000;1\n1500;2\n2500;3\n");
+        add(cases, "nm header over µm values", "Wavelength (nm);Counts\n1.0;1\n1.5;2\n2.5;3\n");
+        add(cases, "cm-1 header over nm values", "Wavenumber (cm-1);Counts\n10;1\n20;2\n");
         add(cases, "1e400 value", header + "1000;1\n1001;1e400\n");
         add(cases, "-1e400 value", header + "1000;1\n1001;-1e400\n");
         add(cases, "1e400 abscissa", header + "1000;1\n1e400;2\n");
@@ -220,14 +231,28 @@ public class MalformedSpectrumCorpusTest {
         mutate(cases, "version 6", t, "##JCAMP-DX= 4.24", "##JCAMP-DX= 6.00");
         mutate(cases, "missing END", t, "##END=\n", "");
         mutate(cases, "text after END", t, "##END=\n", "##END=\nleftover text\n");
-        mutate(cases, "second block after END", t, "##END=\n", "##END=\n##TITLE= second\n##END=\n");
+        // two optical spectra one after another: which one is the scan is not guessed (--block N chooses)
+        mutate(cases, "second spectrum after END", t, "##END=\n", "##END=\n" + t);
+        mutate(cases, "second block without its END", t, "##END=\n", "##END=\n##TITLE= second\n");
+        mutate(cases, "LINK block without its own END", t, "##TITLE= corpus base\n",
+                "##TITLE= link\n##DATA TYPE= LINK\n##TITLE= corpus base\n");
+        mutate(cases, "LINK of a spectrum and an empty block", t, "##TITLE= corpus base\n",
+                "##TITLE= link\n##DATA TYPE= LINK\n##TITLE= empty\n##END=\n##TITLE= corpus base\n");
+        // Raman shift and neutron energy transfer are relative axes: as absolute wavenumbers they would be wrong light
+        mutate(cases, "DATA TYPE Raman", t, "##DATA TYPE= INFRARED SPECTRUM", "##DATA TYPE= RAMAN SPECTRUM");
+        mutate(cases, "DATA TYPE neutron", t, "##DATA TYPE= INFRARED SPECTRUM",
+                "##DATA TYPE= INELASTIC NEUTRON SCATTERING");
+        mutate(cases, "DATA TYPE NMR", t, "##DATA TYPE= INFRARED SPECTRUM", "##DATA TYPE= NMR SPECTRUM");
+        mutate(cases, "DATA TYPE unknown", t, "##DATA TYPE= INFRARED SPECTRUM", "##DATA TYPE= SOMETHING");
+        mutate(cases, "XUNITS micrometres over nanometre values", t, "##XUNITS= NANOMETERS", "##XUNITS= MICROMETERS");
         mutate(cases, "nested TITLE", t, "##XUNITS=", "##TITLE= inner\n##XUNITS=");
         mutate(cases, "first record not TITLE", t, "##TITLE= corpus base\n##JCAMP-DX= 4.24\n",
                 "##JCAMP-DX= 4.24\n##TITLE= corpus base\n");
         mutate(cases, "text before TITLE", t, "##TITLE=", "exported by analyzer\n##TITLE=");
-        mutate(cases, "duplicate XFACTOR", t, "##XFACTOR= 1\n", "##XFACTOR= 1\n##X_FACTOR= 1\n");
+        mutate(cases, "duplicate XFACTOR, other value", t, "##XFACTOR= 1\n", "##XFACTOR= 1\n##X_FACTOR= 2\n");
+        mutate(cases, "XYDATA twice", t, "##END=", "##XYDATA= (X++(Y..Y))\n##END=");
         mutate(cases, "record without equals", t, "##XFACTOR= 1", "##XFACTOR 1");
-        mutate(cases, "empty label", t, "##XFACTOR= 1", "##= 1");
+        mutate(cases, "blank label", t, "##XFACTOR= 1", "## = 1");
         mutate(cases, "XYDATA and XYPOINTS", t, "##XYDATA=", "##XYPOINTS= (XY..XY)\n##XYDATA=");
         mutate(cases, "no table at all", t, t.substring(t.indexOf("##XYDATA="), t.indexOf("##END=")), "");
     }

@@ -74,8 +74,9 @@ class SpectrumFilesTest {
         // RFC 3629, section 3: a lone byte 0xB5 is not a UTF-8 sequence
         byte[] bytes = "# note\nWavelength (µm);Counts\n1.5;2\n1.6;3\n".getBytes(StandardCharsets.ISO_8859_1);
         SpectrumFileException e = assertThrows(SpectrumFileException.class, () -> SpectrumFiles.read("l1.csv", bytes));
-        assertEquals("l1.csv:2: byte 0xB5 at byte offset 19 is not UTF-8 text (other 8-bit encodings are not read: "
-                + "save the spectrum as UTF-8)", e.getMessage());
+        // a header line names the unit: it is not guessed at in another code, unlike a # comment
+        assertEquals("l1.csv:2: byte 0xB5 at byte offset 19 is not UTF-8 text (only comment and ##record lines may "
+                + "be in another 8-bit code: save the spectrum as UTF-8)", e.getMessage());
     }
 
     @Test

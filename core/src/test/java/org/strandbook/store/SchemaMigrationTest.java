@@ -33,8 +33,8 @@ import org.strandbook.site.Site;
 /** A workbook written by schema 1 (committed fixture) opens in this Strandbook with nothing lost. */
 class SchemaMigrationTest {
 
-    /** Steps from schema 1 on that the trail records: 1 to 2 (which starts it) and 2 to 5. */
-    private static final long SCHEMA_STEPS_AUDITED = 2;
+    /** Steps from schema 1 on that the trail records: 1 to 2 (which starts it), 2 to 3 and 3 to 5. */
+    private static final long SCHEMA_STEPS_AUDITED = 3;
 
     @TempDir
     Path dir;
@@ -69,11 +69,15 @@ class SchemaMigrationTest {
         try (Workbook wb = Workbook.open(file, "t.vane")) {
             List<AuditEntry> trail = wb.audit().entries(0, 1000);
             // site, analyzer, fiber type + 2 datasheet points, connector, probe, point + 2 bands,
-            // 3 path elements + 1 bend, 1 scan (with its spectrum), inspection, sign-off, note
-            assertEquals(18, trail.stream().filter(e -> e.action().equals("BASELINE")).count());
-            AuditEntry schema = trail.stream().filter(e -> e.action().equals("SCHEMA")).findFirst().orElseThrow();
-            assertEquals("t.vane", schema.user());
-            assertEquals("{\"schema\":2}", schema.newValues());
+            // 3 path elements + 1 bend, 1 scan (with its spectrum), inspection, sign-off, note; then
+            // schema 3 adds the scan's unit column and records the scan once more with it
+            assertEquals(18 + 1, trail.stream().filter(e -> e.action().equals("BASELINE")).count());
+            List<AuditEntry> schemaRows = trail.stream().filter(e -> e.action().equals("SCHEMA")).toList();
+            assertEquals(List.of("{\"schema\":2}", "{\"schema\":3}", "{\"schema\":" + Workbook.latestSchemaVersion() + "}"),
+                    schemaRows.stream().map(AuditEntry::newValues).toList());
+            assertEquals("t.vane", schemaRows.get(0).user());
+            assertTrue(trail.stream().anyMatch(e -> e.action().equals("BASELINE") && e.newValues().contains("\"y_unit\":\"\"")),
+                    "the scan's image after schema 3 carries its unit");
             AuditEntry last = trail.get(trail.size() - 1);
             assertEquals("{\"schema\":" + Workbook.latestSchemaVersion() + "}", last.newValues());
             assertTrue(wb.audit().verify().intact(), () -> wb.audit().verify().toString());
@@ -111,7 +115,7 @@ class SchemaMigrationTest {
         try (Workbook wb = Workbook.open(file, "t.vane")) {
             List<AuditEntry> trail = wb.audit().entries(0, 1000);
             assertEquals(SCHEMA_STEPS_AUDITED, trail.stream().filter(e -> e.action().equals("SCHEMA")).count());
-            assertEquals(18, trail.stream().filter(e -> e.action().equals("BASELINE")).count());
+            assertEquals(18 + 1, trail.stream().filter(e -> e.action().equals("BASELINE")).count());
             assertTrue(wb.audit().verify().intact());
         }
     }

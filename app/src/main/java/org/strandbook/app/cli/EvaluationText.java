@@ -13,6 +13,7 @@ import org.strandbook.evaluation.BandTrend;
 import org.strandbook.evaluation.BandVerdict;
 import org.strandbook.evaluation.PointEvaluation;
 import org.strandbook.evaluation.SiteEvaluation;
+import org.strandbook.evaluation.SubBands;
 import org.strandbook.evaluation.Urgency;
 import org.strandbook.handover.StepAttribution;
 import org.strandbook.site.MaintenanceAction;
@@ -62,6 +63,7 @@ final class EvaluationText {
         out.println(e.point().tag() + " — " + e.point().service() + ": " + e.status().label());
         e.latest().ifPresent(p -> out.printf(Locale.ROOT, "  loop scan %d taken %s; reference %d, darks %d and %d%n",
                 p.loop().id(), p.loop().takenAt(), p.reference().id(), p.loopDark().id(), p.referenceDark().id()));
+        e.latest().ifPresent(p -> out.println("  integration: " + p.exposure().describeNormalisation()));
         TextTable bands = new TextTable(
                 new String[] {"Band", "From", "To", "Status", "Predicted", "Measured max", "Mean dev.", "Worst dev.",
                     "Margin", "Reason"},
@@ -114,7 +116,13 @@ final class EvaluationText {
                     .append(",\"reference_scan_id\":").append(p.reference().id())
                     .append(",\"loop_dark_scan_id\":").append(p.loopDark().id())
                     .append(",\"reference_dark_scan_id\":").append(p.referenceDark().id())
-                    .append(",\"taken_at\":").append(JsonText.string(p.loop().takenAt().toString())));
+                    .append(",\"taken_at\":").append(JsonText.string(p.loop().takenAt().toString()))
+                    .append(",\"loop_integration_ms\":").append(integrationMs(p.loop().conditions().integrationMs()))
+                    .append(",\"reference_integration_ms\":")
+                    .append(integrationMs(p.reference().conditions().integrationMs()))
+                    .append(",\"loop_co_added\":").append(p.loop().conditions().coAdded())
+                    .append(",\"reference_co_added\":").append(p.reference().conditions().coAdded())
+                    .append(",\"integration\":").append(JsonText.string(p.exposure().describeNormalisation())));
             b.append(",\"bands\":[").append(e.verdicts().stream().map(EvaluationText::json)
                     .collect(Collectors.joining(","))).append(']');
             b.append(",\"findings\":[");
@@ -133,6 +141,11 @@ final class EvaluationText {
         }
         b.append("],\"problems\":").append(strings(site.problems())).append("}\n");
         return b.toString();
+    }
+
+    /** A recorded integration time, or null when the scan file did not give one. */
+    private static String integrationMs(double ms) {
+        return ms > 0 ? JsonText.number(ms) : "null";
     }
 
     private static String json(BandVerdict v) {
@@ -181,10 +194,10 @@ final class EvaluationText {
     /** The site's points ranked by urgency, one line per point and band. */
     static void trendTable(SiteEvaluation site, List<MaintenanceAction> actions, PrintWriter out) {
         TextTable t = new TextTable(
-                new String[] {"Rank", "Point", "Status", "Band", "Scans", "Slope", "95 % interval", "Steps", "Margin",
-                    "Margin runs out"},
-                new String[] {"", "", "", "", "", "(dB/year)", "(dB/year)", "", "(dB)", "(date)"})
-                .leftAligned(1, 2, 3, 9);
+                new String[] {"Rank", "Point", "Status", "Band", "Scans", "Driving range", "Slope", "95 % interval",
+                    "Steps", "Margin", "Margin runs out"},
+                new String[] {"", "", "", "", "", "(nm)", "(dB/year)", "(dB/year)", "", "(dB)", "(date)"})
+                .leftAligned(1, 2, 3, 10);
         int rank = 1;
         for (PointEvaluation e : site.points()) {
             for (int b = 0; b < e.trends().size(); b++) {
@@ -195,6 +208,7 @@ final class EvaluationText {
                         b == 0 ? e.status().label() : "", tr.band().name(),
                         Integer.toString(tr.readings().size()) + (tr.noLight().isEmpty() ? ""
                                 : " (+" + tr.noLight().size() + " dark)"),
+                        String.format(Locale.ROOT, "%.0f–%.0f", tr.drivingFromNm(), tr.drivingToNm()),
                         lt.map(x -> SignedDecimal.of(x.slopeDbPerYear(), 3)).orElse("—"),
                         lt.map(x -> SignedDecimal.of(x.lowerSlopeDbPerYear(), 3) + " … "
                                 + SignedDecimal.of(x.upperSlopeDbPerYear(), 3)).orElse("—"),
@@ -203,6 +217,8 @@ final class EvaluationText {
             rank++;
         }
         t.print(out);
+        out.println(String.format(Locale.ROOT, "Slope and date follow the highest loss in the driving range: the part of the band (sub-bands of at"
+                + " most %.0f nm) whose margin runs out first.", SubBands.MAX_WIDTH_NM));
         for (PointEvaluation e : site.points()) {
             for (BandTrend tr : e.trends()) {
                 for (StepEvent s : tr.steps()) {
@@ -254,6 +270,8 @@ final class EvaluationText {
             for (int i = 0; i < e.trends().size(); i++) {
                 BandTrend tr = e.trends().get(i);
                 b.append(i == 0 ? "" : ",").append("{\"band\":").append(JsonText.string(tr.band().name()))
+                        .append(",\"driving_from_nm\":").append(JsonText.number(tr.drivingFromNm()))
+                        .append(",\"driving_to_nm\":").append(JsonText.number(tr.drivingToNm()))
                         .append(",\"readings\":[");
                 for (int r = 0; r < tr.readings().size(); r++) {
                     LossReading lr = tr.readings().get(r);

@@ -9,6 +9,9 @@ import java.util.Optional;
 import java.util.concurrent.Callable;
 
 import org.strandbook.intake.ScanFileImporter;
+import org.strandbook.intake.TakenAtRange;
+import org.strandbook.scanfile.PrintableName;
+import org.strandbook.scanfile.SpectrumFiles;
 import org.strandbook.site.ScanKind;
 import org.strandbook.store.Workbook;
 
@@ -44,6 +47,11 @@ final class ImportScansCommand implements Callable<Integer> {
             description = "Time taken for every file, ISO-8601 (e.g. 2026-03-01T09:30:00Z); overrides the files.")
     String takenAt;
 
+    @Option(names = "--block", paramLabel = "N",
+            description = "For multi-block JCAMP-DX files holding several optical spectra: import block N "
+                + "(1, 2, ... in file order, as the refusal lists them).")
+    Integer block;
+
     @Parameters(index = "1..*", arity = "1..*", paramLabel = "FILES", description = "The spectrum files.")
     List<Path> files;
 
@@ -65,6 +73,13 @@ final class ImportScansCommand implements Callable<Integer> {
             } catch (DateTimeParseException e) {
                 throw new UsageProblem("--taken-at '" + takenAt + "' is not an ISO-8601 instant such as 2026-03-01T09:30:00Z");
             }
+            Optional<String> problem = TakenAtRange.problem(time.get(), Instant.now());
+            if (problem.isPresent()) {
+                throw new UsageProblem("--taken-at: " + problem.get().replace("; give the time with --taken-at", ""));
+            }
+        }
+        if (block != null && block < 1) {
+            throw new UsageProblem("--block " + block + ": blocks are numbered from 1");
         }
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
@@ -86,15 +101,22 @@ final class ImportScansCommand implements Callable<Integer> {
                 FieldCautions.hazardousPoint(err, point);
             }
             summary = new ScanFileImporter().importFiles(wb,
-                    new ScanFileImporter.Request(point, scanKind, files, time, workbook.user()), progress);
+                    new ScanFileImporter.Request(point, scanKind, files, time, workbook.user(),
+                            block == null ? SpectrumFiles.WHOLE_FILE : block), progress);
         }
         for (ScanFileImporter.Accepted a : summary.accepted()) {
-            out.printf(java.util.Locale.ROOT, "stored   %s as scan %d, taken %s (%s)%n", a.file(), a.scanId(),
-                    a.takenAt(), a.timeSource());
+            out.printf(java.util.Locale.ROOT, "stored   %s as scan %d, taken %s (%s)%n",
+                    PrintableName.of(a.file().toString()), a.scanId(), a.takenAt(), a.timeSource());
+            for (String note : a.tolerated()) {
+                out.println("         tolerated: " + note);
+            }
         }
+        // refusals are errors: standard error, as every command's problems are, so that a script
+        // reading the summary from standard output sees only what was stored
         for (ScanFileImporter.Rejected r : summary.rejected()) {
-            out.println("rejected " + r.reason());
+            err.println("rejected " + r.reason());
         }
+        err.flush();
         out.printf(java.util.Locale.ROOT, "%d accepted, %d rejected (point %s, %s scans)%n", summary.accepted().size(),
                 summary.rejected().size(), point, scanKind.word());
         out.flush();

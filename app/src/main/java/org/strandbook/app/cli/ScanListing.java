@@ -5,14 +5,15 @@ import java.util.List;
 import java.util.Locale;
 import java.util.OptionalDouble;
 
+import org.strandbook.scanfile.PrintableName;
 import org.strandbook.site.ScanRecord;
 
 /** Scan listings as an aligned text table (units in the headers) or as JSON (RFC 8259). */
 final class ScanListing {
 
     private static final String[] HEADERS = {"id", "point", "kind", "taken at (UTC)", "points", "min (nm)", "max (nm)",
-        "source file", "SHA-256 (start)"};
-    private static final boolean[] RIGHT = {true, false, false, false, true, true, true, false, false};
+        "values in", "source file", "SHA-256 (start)"};
+    private static final boolean[] RIGHT = {true, false, false, false, true, true, true, false, false, false};
     private static final int SHA_SHOWN = 16;
 
     private ScanListing() {
@@ -23,7 +24,8 @@ final class ScanListing {
         rows.add(HEADERS);
         for (ScanRecord s : scans) {
             rows.add(new String[] {Long.toString(s.id()), s.pointTag(), s.kind().word(), s.takenAt().toString(),
-                Integer.toString(s.nPoints()), nm(s.minNm()), nm(s.maxNm()), s.sourceFile(),
+                Integer.toString(s.nPoints()), nm(s.minNm()), nm(s.maxNm()),
+                s.yUnit().isEmpty() ? "(not named)" : PrintableName.of(s.yUnit()), PrintableName.of(s.sourceFile()),
                 s.sha256().substring(0, SHA_SHOWN)});
         }
         int[] width = new int[HEADERS.length];
@@ -66,6 +68,8 @@ final class ScanListing {
             sb.append(",\"n_points\":").append(s.nPoints());
             sb.append(",\"min_nm\":").append(s.minNm());
             sb.append(",\"max_nm\":").append(s.maxNm());
+            sb.append(",\"y_unit\":");
+            string(sb, s.yUnit());
             sb.append(",\"source_file\":");
             string(sb, s.sourceFile());
             sb.append(",\"sha256\":\"").append(s.sha256()).append("\"}");

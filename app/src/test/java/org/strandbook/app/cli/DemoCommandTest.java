@@ -95,7 +95,8 @@ class DemoCommandTest {
         }
         CliRun r = CliRun.of("import-scans", workbook.toString(), "--point", "FT-4101", "--kind", "loop", file.toString());
         assertEquals(1, r.exitCode());
-        assertTrue(r.out().contains("already stored as scan"), r.out());
+        // refusals go to standard error (Strandbook command-line rule)
+        assertTrue(r.err().contains("already stored as scan"), r.err());
     }
 
     @Test
@@ -104,7 +105,7 @@ class DemoCommandTest {
         Files.writeString(bad, "Wavelength (nm);Counts\n1000;12\n1002;abc\n");
         CliRun r = CliRun.of("import-scans", workbook.toString(), "--point", "FT-4101", "--kind", "dark", bad.toString());
         assertEquals(1, r.exitCode());
-        assertTrue(r.out().contains("bad.csv:3:"), r.out());
+        assertTrue(r.err().contains("bad.csv:3:"), r.err());
         assertFalse(r.err().contains("Exception"), r.err());
     }
 

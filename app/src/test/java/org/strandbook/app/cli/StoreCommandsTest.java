@@ -180,7 +180,7 @@ class StoreCommandsTest {
         assertEquals("{\"id\":2,\"point\":\"AT-101\",\"kind\":\"loop\",\"taken_at\":\"2024-03-05T14:09:30.250Z\","
                 + "\"operator\":\"k.ashdown\",\"integration_ms\":12.5,\"co_added\":32,\"ambient_temperature_c\":24.0,"
                 + "\"process_temperature_c\":null,\"n_points\":4,\"min_nm\":1100.0,\"max_nm\":2199.875,"
-                + "\"source_file\":\"loop.csv\",\"sha256\":\"" + sha("loop") + "\"}", loop);
+                + "\"y_unit\":\"\",\"source_file\":\"loop.csv\",\"sha256\":\"" + sha("loop") + "\"}", loop);
         assertTrue(lines.get(1).contains("\"source_file\":\"ref \\\"bench\\\".csv\""), lines.get(1));
     }
 
@@ -192,12 +192,45 @@ class StoreCommandsTest {
         List<String> lines = r.out().lines().toList();
         assertEquals(3, lines.size());
         assertTrue(lines.get(0).matches("id\\s+point\\s+kind\\s+taken at \\(UTC\\)\\s+points\\s+min \\(nm\\)\\s+"
-                + "max \\(nm\\)\\s+source file\\s+SHA-256 \\(start\\)"), lines.get(0));
+                + "max \\(nm\\)\\s+values in\\s+source file\\s+SHA-256 \\(start\\)"), lines.get(0));
         int kindColumn = lines.get(0).indexOf("kind");
         assertEquals("reference", lines.get(1).substring(kindColumn, kindColumn + 9));
         assertEquals("loop", lines.get(2).substring(kindColumn, kindColumn + 4));
         int maxEnd = lines.get(0).indexOf("max (nm)") + "max (nm)".length();
         assertEquals("2199.9", lines.get(2).substring(maxEnd - 6, maxEnd));
+    }
+
+    @Test
+    void importScansPrintsStoredFilesOnOutputAndRefusalsOnErrorWithNamesEscaped() throws Exception {
+        // Strandbook command-line rule: problems go to standard error; ECMA-48 ESC and a newline in a
+        // file name must not reach the terminal raw
+        Path file = siteWithScans();
+        String jcamp = "##TITLE= t\n##JCAMP-DX= 5.01\n##DATA TYPE= INFRARED SPECTRUM\n##XUNITS= NANOMETERS\n"
+                + "##YUNITS= COUNTS\n##LONGDATE= 2026/03/01 09:30:00\n##FIRSTX= 1000\n##LASTX= 1009\n##NPOINTS= 10\n"
+                + "##XYDATA= (X++(Y..Y))\n1000AJT%jX\n1009c\n##END=\n\u001A";
+        Path good = dir.resolve("good\u001B[2J.jdx");
+        java.nio.file.Files.writeString(good, jcamp);
+        Path bad = dir.resolve("bad\nstored as scan 9.jdx");
+        java.nio.file.Files.writeString(bad, jcamp.replace("COUNTS", "ABSORBANCE"));
+        Run r = run("import-scans", file.toString(), "--point", "AT-101", "--kind", "loop", good.toString(), bad.toString());
+        assertEquals(1, r.exit(), r.err());
+        assertTrue(r.out().contains("good\\e[2J.jdx as scan 3") && r.out().contains("tolerated: a DOS end-of-file byte"),
+                r.out());
+        assertTrue(r.out().lines().noneMatch(l -> l.startsWith("rejected")) && !r.out().contains("\u001B"), r.out());
+        assertTrue(r.err().contains("rejected bad\\nstored as scan 9.jdx:5: the values are an absorbance"), r.err());
+        Run listing = run("scans", file.toString(), "--point", "AT-101");
+        assertTrue(listing.out().lines().anyMatch(l -> l.contains("COUNTS") && l.contains("good\\e[2J.jdx")),
+                listing.out());
+    }
+
+    @Test
+    void importScansRefusesATimeBefore1980AsWrongUsage() throws Exception {
+        // design choice (TakenAtRange): a 1970 time is an unset clock
+        Path file = siteWithScans();
+        Run r = run("import-scans", file.toString(), "--point", "AT-101", "--kind", "loop", "--taken-at",
+                "1970-01-01T00:00:00Z", dir.resolve("x.jdx").toString());
+        assertEquals(2, r.exit(), r.err());
+        assertTrue(r.err().contains("before 1980"), r.err());
     }
 
     @Test

@@ -17,7 +17,8 @@ import org.strandbook.trend.MarginForecast;
 import org.strandbook.trend.YearScale;
 
 /**
- * What the loss-over-time plot shows: per band of interest, the band-mean loss of each loop scan,
+ * What the loss-over-time plot shows: per band of interest, the highest loss of each loop scan in the
+ * band's driving sub-band (the part whose margin runs out first),
  * the Theil–Sen trend line through them, its continuation to where the margin runs out (the
  * forecast), and the analyzer's allowed loss. Time runs across in days since 1970-01-01 (UTC); the
  * y axis follows the user's loss/transmittance choice and the band ranges follow the nm/cm⁻¹ one.
@@ -121,7 +122,7 @@ public final class TrendPlotModel extends PlotModel<TrendPlotModel.TrendLine> {
             end = end == null || until.isAfter(end) ? until : end;
 
             // one legend entry per band (its markers); the trend and forecast lines explain themselves once, below
-            String band = bandText(t.band(), x);
+            String band = bandText(t.band(), x) + drivingText(t, x);
             String summary = t.trend().map(tr -> ": " + SignedDecimal.of(tr.slopeDbPerYear(), 2) + " dB/yr, "
                     + forecastText(t)).orElse(": too few scans for a trend");
             out.add(new TrendLine(band + summary + (t.noLight().isEmpty() ? "" : " (" + t.noLight().size() + " scans without light)"),
@@ -236,6 +237,18 @@ public final class TrendPlotModel extends PlotModel<TrendPlotModel.TrendLine> {
         }
         return String.format(Locale.ROOT, "%s %.0f\u2013%.0f cm\u207B\u00B9", band.name(), x.fromNm(band.toNm()),
                 x.fromNm(band.fromNm()));
+    }
+
+    /** The driving sub-band, when it is narrower than the band: the slope and date are its. */
+    static String drivingText(BandTrend t, SpectralAxis x) {
+        if (t.drivingFromNm() == t.band().fromNm() && t.drivingToNm() == t.band().toNm()) {
+            return "";
+        }
+        String range = x == SpectralAxis.WAVELENGTH_NM
+                ? String.format(Locale.ROOT, "%.0f\u2013%.0f nm", t.drivingFromNm(), t.drivingToNm())
+                : String.format(Locale.ROOT, "%.0f\u2013%.0f cm\u207B\u00B9", x.fromNm(t.drivingToNm()),
+                        x.fromNm(t.drivingFromNm()));
+        return " (worst loss in " + range + ")";
     }
 
     private static String trendText(LossTrend trend) {

@@ -9,6 +9,13 @@ interface PointEvents {
     /** The point was evaluated from the workbook. */
     void evaluated(PointStatus status);
 
+    /**
+     * The latest scans' integration times and how their counts were put on one scale (or why
+     * they could not be), for the status bar.
+     */
+    default void scanSettingsRead(String pointTag, String words) {
+    }
+
     /** Saving failed; the workbook file holds something else than the sheets show. */
     void saveFailed(Exception e);
 

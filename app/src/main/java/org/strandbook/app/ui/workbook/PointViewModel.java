@@ -379,6 +379,8 @@ public final class PointViewModel {
         double allowed = site.analyzer(point.analyzerTag()).map(a -> a.allowedLossDb()).orElse(Double.NaN);
         trendPlot.show(trendTitle(), evaluation.trends(), allowed);
         events.evaluated(new PointStatus(m.pointTag(), Optional.of(evaluation.status()), evaluation.shortFinding()));
+        evaluation.latest().ifPresent(pair -> events.scanSettingsRead(m.pointTag(),
+                pair.exposure().describeNormalisation()));
     }
 
     private void showMeasuredPlot(PointPrediction prediction) {

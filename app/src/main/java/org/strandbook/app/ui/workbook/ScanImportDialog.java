@@ -137,6 +137,17 @@ public final class ScanImportDialog {
         refused.visibleProperty().bind(Bindings.createBooleanBinding(() -> !vm.refusedProperty().get().isEmpty(),
                 vm.refusedProperty()));
         refused.managedProperty().bind(refused.visibleProperty());
+        // accepted departures from the format (a LINK block chosen, lines labelled one point off...):
+        // stored, but the technician should know what was read
+        ListView<String> tolerated = new ListView<>();
+        tolerated.setId("scan-import-tolerated");
+        tolerated.setPrefHeight(60);
+        tolerated.itemsProperty().bind(Bindings.createObjectBinding(
+                () -> javafx.collections.FXCollections.observableArrayList(vm.toleratedProperty().get()),
+                vm.toleratedProperty()));
+        tolerated.visibleProperty().bind(Bindings.createBooleanBinding(() -> !vm.toleratedProperty().get().isEmpty(),
+                vm.toleratedProperty()));
+        tolerated.managedProperty().bind(tolerated.visibleProperty());
 
         Button start = new Button("Import");
         start.setId("scan-import-start");
@@ -161,7 +172,7 @@ public final class ScanImportDialog {
         HBox buttons = new HBox(8, add, gap, start, cancel, close);
         buttons.setAlignment(Pos.CENTER_LEFT);
 
-        VBox root = new VBox(8, title, heading, list, form, buttons, progress, message, refused);
+        VBox root = new VBox(8, title, heading, list, form, buttons, progress, message, refused, tolerated);
         root.setPadding(new Insets(12));
         root.setPrefWidth(620);
         Scene scene = new Scene(root);

@@ -26,6 +26,7 @@ import javafx.collections.ObservableList;
 
 import org.strandbook.app.ui.task.TaskExecutor;
 import org.strandbook.intake.ScanFileImporter;
+import org.strandbook.scanfile.PrintableName;
 import org.strandbook.site.ScanKind;
 
 /**
@@ -49,6 +50,7 @@ public final class ScanImportViewModel {
     private final ReadOnlyDoubleWrapper progress = new ReadOnlyDoubleWrapper(this, "progress", 0);
     private final ReadOnlyStringWrapper message = new ReadOnlyStringWrapper(this, "message", "");
     private final ReadOnlyObjectWrapper<List<String>> refused = new ReadOnlyObjectWrapper<>(this, "refused", List.of());
+    private final ReadOnlyObjectWrapper<List<String>> tolerated = new ReadOnlyObjectWrapper<>(this, "tolerated", List.of());
     private final BooleanBinding canImport;
 
     ScanImportViewModel(WorkbookService service, TaskExecutor tasks, String pointTag, String operatorName,
@@ -104,6 +106,11 @@ public final class ScanImportViewModel {
         return refused.getReadOnlyProperty();
     }
 
+    /** What stored files departed from their format in an accepted way, one line each: {@code file: what}. */
+    public ReadOnlyObjectProperty<List<String>> toleratedProperty() {
+        return tolerated.getReadOnlyProperty();
+    }
+
     public BooleanBinding canImportProperty() {
         return canImport;
     }
@@ -123,6 +130,7 @@ public final class ScanImportViewModel {
         running.set(true);
         finished.set(false);
         refused.set(List.of());
+        tolerated.set(List.of());
         String title = String.format(Locale.ROOT, "Recording %d %s scan file%s for %s", chosen.size(), kind.get().word(),
                 chosen.size() == 1 ? "" : "s", pointTag);
         // the executor runs one job at a time: show its progress only while it is this import
@@ -147,6 +155,8 @@ public final class ScanImportViewModel {
         int handled = summary.accepted().size() + summary.rejected().size();
         progress.set((double) handled / Math.max(1, files.size()));
         refused.set(summary.rejected().stream().map(ScanFileImporter.Rejected::reason).toList());
+        tolerated.set(summary.accepted().stream().flatMap(a -> a.tolerated().stream()
+                .map(note -> PrintableName.of(String.valueOf(a.file().getFileName())) + ": " + note)).toList());
         message.set(String.format(Locale.ROOT, "%s %d of %d file%s for %s%s%s",
                 summary.stoppedEarly() ? "Stopped: stored" : "Stored", summary.accepted().size(), files.size(),
                 files.size() == 1 ? "" : "s", pointTag,

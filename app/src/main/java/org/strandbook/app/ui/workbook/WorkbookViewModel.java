@@ -113,6 +113,11 @@ public final class WorkbookViewModel {
             }
 
             @Override
+            public void scanSettingsRead(String pointTag, String words) {
+                notice.set(pointTag + " latest scans: " + words);
+            }
+
+            @Override
             public void saveFailed(Exception e) {
                 failAndReload(e);
             }

@@ -81,8 +81,8 @@ public final class SampleSite implements AutoCloseable {
             Path loop = files.filter(f -> f.getFileName().toString().endsWith("_loop.csv")).sorted().findFirst()
                     .orElseThrow(() -> new IllegalStateException("no delimited loop scan of " + pointTag));
             List<String> lines = Files.readAllLines(loop, StandardCharsets.UTF_8);
-            lines.replaceAll(l -> l.startsWith("# taken_at:") ? String.format("# taken_at: 2027-01-%02dT09:00:00Z", day) : l);
-            Path out = dir.resolve(pointTag + "_2027-01-" + day + "_loop.csv");
+            lines.replaceAll(l -> l.startsWith("# taken_at:") ? String.format("# taken_at: 2026-11-%02dT09:00:00Z", day) : l);
+            Path out = dir.resolve(pointTag + "_2026-11-" + day + "_loop.csv");
             Files.write(out, lines, StandardCharsets.UTF_8);
             return out;
         } catch (IOException e) {

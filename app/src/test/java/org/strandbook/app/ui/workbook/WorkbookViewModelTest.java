@@ -228,6 +228,26 @@ class WorkbookViewModelTest {
     }
 
     @Test
+    void recordingListsWhatAStoredFileHadTolerated() throws Exception {
+        // MS-DOS text files may end with SUB (0x1A) (common practice): stored, and the dialog says it was ignored
+        vm.selectPoint("SW-4202");
+        Path good = sample.newLoopScan("SW-4202", dir, 11);
+        byte[] bytes = Files.readAllBytes(good);
+        byte[] withEndOfFile = java.util.Arrays.copyOf(bytes, bytes.length + 1);
+        withEndOfFile[bytes.length] = 0x1A;
+        Files.write(good, withEndOfFile);
+        ScanImportViewModel importer = vm.recordMeasurement().orElseThrow();
+
+        importer.addFiles(List.of(good));
+        importer.start();
+
+        assertEquals(List.of(), importer.refusedProperty().get());
+        assertEquals(1, importer.toleratedProperty().get().size(), importer.toleratedProperty().get().toString());
+        assertTrue(importer.toleratedProperty().get().get(0).startsWith(good.getFileName() + ": a DOS end-of-file byte"),
+                importer.toleratedProperty().get().toString());
+    }
+
+    @Test
     void cancelStopsTheImportBeforeTheNextFileAndKeepsWhatWasStored() {
         vm.selectPoint("SW-4202");
         ScanImportViewModel importer = vm.recordMeasurement().orElseThrow();
