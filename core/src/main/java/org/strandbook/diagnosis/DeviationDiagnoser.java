@@ -21,7 +21,7 @@ import org.strandbook.throughput.ThroughputResult;
 
 /**
  * Explains a deviation spectrum (measured − predicted loss, dB) as a non-negative combination of
- * fault signatures ({@link Signature}) plus a signed reference-drift tilt, fitted by Lawson–Hanson
+ * fault signatures ({@link Signature}) plus a signed lamp-drift term, fitted by Lawson–Hanson
  * NNLS (Lawson &amp; Hanson, "Solving Least Squares Problems", 1974, ch. 23) over the measured
  * wavelengths, each weighted by 1/σ. The σ of a point is its detector-noise σ combined with a model
  * floor ({@link #MODEL_FLOOR_DB}), so that a very quiet detector does not let one region dominate.
@@ -36,6 +36,11 @@ import org.strandbook.throughput.ThroughputResult;
  * Where the measured range holds none of the bands that tell OH from molecular hydrogen, one finding
  * says so ({@link OhOrHydrogen}).
  *
+ * <p>The lamp-drift term is the change of a thermal lamp's spectrum when its colour temperature
+ * changes between reference and loop scan, from Planck's law ({@link
+ * AttenuationShapes#planckBrighteningDbPerK}): close to linear in 1/λ over the NIR (Wien), not in λ.
+ * Its overall brightness change is carried by the flat term.
+ *
  * <p>A wavelength-flat excess cannot say whether a connector or a bend is to blame (for large
  * cores Gloge's bend loss is nearly flat too); the workbook's records rank the candidates. Fringes
  * left in the residual are searched for separately over fringe periods.
@@ -48,6 +53,17 @@ public final class DeviationDiagnoser {
     public static final double HYDROGEN_2420_RELATIVE = 5.0;
     /** |cos| above which two signatures are reported as indistinguishable over the measured range. */
     public static final double COLLINEAR_COSINE = 0.95;
+    /**
+     * Variance inflation above which a finding is said to rest on a term largely in the span of the
+     * others: 10, the usual cut (Kutner, Nachtsheim, Neter and Li, "Applied Linear Statistical
+     * Models", 5th ed. 2005, §10.5); the choice of that cut is ours (design choice).
+     */
+    public static final double INFLATION_LIMIT = 10;
+    /**
+     * K: colour temperature the lamp-drift shape is worked out at, a halogen filament's usual
+     * 2800–3200 K (common practice); the shape barely changes over that range.
+     */
+    public static final double LAMP_COLOUR_TEMPERATURE_K = 3000;
 
     private final double minReportDb;
 
@@ -104,11 +120,12 @@ public final class DeviationDiagnoser {
         NnlsResult fit = NonNegativeLeastSquares.withDefaults().solve(problem);
         double[] x = fit.coefficients();
         double[] residual = problem.residual(x);
+        columns = creditLampLevel(columns, x, grid, rows, minReportDb);
 
         double[] effect = new double[columns.size()];
         double totalEffect = 0;
         for (int j = 0; j < columns.size(); j++) {
-            for (double v : columns.get(j).values) {
+            for (double v : columns.get(j).ranked) {
                 effect[j] += Math.abs(x[j] * v);
             }
             totalEffect += effect[j];
@@ -119,8 +136,13 @@ public final class DeviationDiagnoser {
         for (int j = 0; j < columns.size(); j++) {
             Column c = columns.get(j);
             double peak = 0;
-            for (double v : c.values) {
+            for (double v : c.ranked) {
                 peak = Math.max(peak, Math.abs(x[j] * v));
+            }
+            // reported by its whole effect (a credited lamp drift with its level), ranked by its own shape
+            double whole = 0;
+            for (double v : c.values) {
+                whole = Math.max(whole, Math.abs(x[j] * v));
             }
             double share = totalEffect > 0 ? 100 * effect[j] / totalEffect : 0;
             if (c.signature == Signature.FLAT_EXCESS && x[j] < 0) {
@@ -131,10 +153,10 @@ public final class DeviationDiagnoser {
                         });
                 continue;
             }
-            if (peak < minReportDb) {
+            if (whole < minReportDb) {
                 continue;
             }
-            Finding f = finding(c, x[j], share, evidence, range);
+            Finding f = finding(c, x[j], share, evidence, range, grid);
             findings.add(f);
             peaks.put(f, peak);
         }
@@ -154,11 +176,13 @@ public final class DeviationDiagnoser {
         findings.sort(Comparator.comparingDouble((Finding f) -> peaks.get(f)).reversed());
 
         double rms = rms(residual);
-        Optional<FringeReport> fringes = Optional.empty();
-        if (fit.reducedChiSquare() > 2) {
-            fringes = FringeSearch.search(grid, rows, residual, median(s));
-            fringes.ifPresent(f -> findings.add(fringeFinding(f, evidence)));
+        // searched whatever the fit's χ²: a 0.1 dB ripple hardly raises it
+        double[] unexplained = new double[residual.length];
+        for (int r = 0; r < residual.length; r++) {
+            unexplained[r] = -residual[r];
         }
+        Optional<FringeReport> fringes = FringeSearch.search(grid, rows, unexplained, s);
+        fringes.ifPresent(f -> findings.add(fringeFinding(f, evidence)));
         List<FittedSignature> fitted = new ArrayList<>();
         for (int j = 0; j < columns.size(); j++) {
             if (x[j] != 0) {
@@ -169,8 +193,14 @@ public final class DeviationDiagnoser {
                 fitted.add(new FittedSignature(columns.get(j).signature, curve));
             }
         }
-        List<String> collinear = collinearNotes(problem, columns,
-                findings.stream().anyMatch(f -> f.signature() == Signature.FLAT_EXCESS));
+        fringes.ifPresent(f -> {
+            double[] ripple = new double[grid.size()];
+            for (int i = 0; i < ripple.length; i++) {
+                ripple[i] = f.rippleDb(grid.wavelengthNm(i));
+            }
+            fitted.add(new FittedSignature(Signature.FRINGES, ripple));
+        });
+        List<String> collinear = collinearNotes(problem, columns, findings, a, b, s, x);
         String summary = findings.isEmpty()
                 ? String.format(Locale.ROOT, "no fault signature reaches %.1f dB: the path behaves as predicted"
                         + " (residual %.2f dB RMS)", minReportDb, rms)
@@ -189,8 +219,15 @@ public final class DeviationDiagnoser {
         return new Diagnosis(List.of(f), Double.NaN, List.of(), Optional.empty(), List.of(), text);
     }
 
-    /** A signature's shape over the measured rows ({@code values}) and over the whole grid. */
-    private record Column(Signature signature, double[] values, double[] onGrid, double atNm) {
+    /**
+     * A signature's shape over the measured rows ({@code values}) and over the whole grid, and the
+     * shape its effect is ranked by ({@code ranked}: for the lamp, its tilt without the level).
+     */
+    private record Column(Signature signature, double[] values, double[] onGrid, double atNm, double[] ranked) {
+
+        Column(Signature signature, double[] values, double[] onGrid, double atNm) {
+            this(signature, values, onGrid, atNm, values);
+        }
     }
 
     /** Signature columns, each 1 dB at its reference wavelength. */
@@ -209,12 +246,16 @@ public final class DeviationDiagnoser {
         double[] h2 = new double[n];
         double[] dark = new double[n];
         double[] drift = new double[n];
+        double brightMid = AttenuationShapes.planckBrighteningDbPerK(mid, LAMP_COLOUR_TEMPERATURE_K);
+        double brightSpan = lampDriftDbPerK(first, last);
         for (int i = 0; i < n; i++) {
             double w = grid.wavelengthNm(i);
             oh[i] = ohScale * AttenuationShapes.ohAbsorptionDbPerKmPerPpm(w);
             h2[i] = h2Scale * AttenuationShapes.hydrogenBandShape(w, HYDROGEN_2420_RELATIVE);
             dark[i] = darkScale * AttenuationShapes.radiationDarkeningShape(w);
-            drift[i] = (w - mid) / (last - first);
+            // a hotter lamp brightens the short end most: the loss it hides rises toward long wavelengths
+            drift[i] = (brightMid - AttenuationShapes.planckBrighteningDbPerK(w, LAMP_COLOUR_TEMPERATURE_K))
+                    / brightSpan;
         }
         List<Column> out = new ArrayList<>();
         out.add(new Column(Signature.FLAT_EXCESS, rowsOf(flat, rows), flat, mid));
@@ -226,12 +267,66 @@ public final class DeviationDiagnoser {
         return out;
     }
 
+    /**
+     * A colour-temperature change moves the whole lamp spectrum, not only its tilt: Planck's law ties
+     * a level to each fitted tilt. The fit uses the centred drift shape (so that flat and drift stay
+     * apart in the collinearity report); afterwards the lamp is credited with its own level, and only
+     * what is left is a flat excess. Without this a cooler lamp reads as a connector or bend fault.
+     * A small tilt may be model misfit, and its level (1.2–1.6 times the tilt) would turn scatter
+     * into a flat finding, so a tilt under the reporting size is credited only where that brings the
+     * flat term nearer zero.
+     */
+    private static List<Column> creditLampLevel(List<Column> columns, double[] x, WavelengthGrid grid, int[] rows,
+                                                double minReportDb) {
+        int flat = -1;
+        int drift = -1;
+        for (int j = 0; j < columns.size(); j++) {
+            flat = columns.get(j).signature == Signature.FLAT_EXCESS ? j : flat;
+            drift = columns.get(j).signature == Signature.REFERENCE_DRIFT ? j : drift;
+        }
+        if (flat < 0 || drift < 0) {
+            return columns;
+        }
+        double tiltPeak = 0;
+        for (double v : columns.get(drift).values) {
+            tiltPeak = Math.max(tiltPeak, Math.abs(x[drift] * v));
+        }
+        double mid = 0.5 * (grid.firstNm() + grid.lastNm());
+        // the uncentred shape is −p(λ)/S; the fitted centred one is −p(λ)/S + p(mid)/S
+        double levelPerTilt = AttenuationShapes.planckBrighteningDbPerK(mid, LAMP_COLOUR_TEMPERATURE_K)
+                / lampDriftDbPerK(grid.firstNm(), grid.lastNm());
+        double creditedFlat = x[flat] + x[drift] * levelPerTilt;
+        // credited when the tilt is reportable, or half that and the lamp then explains the level
+        // better than a flat excess does (the simpler reading; design choice)
+        boolean credit = tiltPeak >= minReportDb
+                || (tiltPeak >= 0.5 * minReportDb && Math.abs(creditedFlat) < Math.abs(x[flat]));
+        if (!credit) {
+            return columns;
+        }
+        x[flat] = creditedFlat;
+        Column c = columns.get(drift);
+        double[] onGrid = c.onGrid.clone();
+        for (int i = 0; i < onGrid.length; i++) {
+            onGrid[i] -= levelPerTilt;
+        }
+        List<Column> out = new ArrayList<>(columns);
+        // ranked by its tilt alone: the level it carries is shared with the flat term
+        out.set(drift, new Column(c.signature, rowsOf(onGrid, rows), onGrid, c.atNm, c.values));
+        return out;
+    }
+
     private static double[] rowsOf(double[] onGrid, int[] rows) {
         double[] v = new double[rows.length];
         for (int r = 0; r < rows.length; r++) {
             v[r] = onGrid[rows[r]];
         }
         return v;
+    }
+
+    /** dB of tilt across {@code firstNm}–{@code lastNm} per kelvin of lamp colour-temperature rise. */
+    static double lampDriftDbPerK(double firstNm, double lastNm) {
+        return AttenuationShapes.planckBrighteningDbPerK(firstNm, LAMP_COLOUR_TEMPERATURE_K)
+                - AttenuationShapes.planckBrighteningDbPerK(lastNm, LAMP_COLOUR_TEMPERATURE_K);
     }
 
     /** A band shape only enters the fit where the measured range shows a real part of it. */
@@ -258,7 +353,8 @@ public final class DeviationDiagnoser {
         return AttenuationShapes.SILICA_OH_BANDS.get(0).centerNm();
     }
 
-    private Finding finding(Column c, double amount, double share, PathEvidence evidence, MeasuredRange range) {
+    private Finding finding(Column c, double amount, double share, PathEvidence evidence, MeasuredRange range,
+                            WavelengthGrid grid) {
         return switch (c.signature) {
             case FLAT_EXCESS -> FlatExcessRanking.finding(amount, c.atNm, share, evidence);
             case OH_BANDS -> ohFinding(amount / AttenuationShapes.ohAbsorptionDbPerKmPerPpm(c.atNm),
@@ -269,8 +365,11 @@ public final class DeviationDiagnoser {
                     evidence, range);
             case REFERENCE_DRIFT -> new Finding(Signature.REFERENCE_DRIFT, List.of(Cause.REFERENCE_DRIFT), amount,
                     c.atNm, share, "", String.format(Locale.ROOT,
-                    "loss tilts by %+.1f dB across the range: the lamp drifted since the reference scan;"
-                            + " re-take the reference through the patch cord, then the loop scan", amount));
+                    "loss tilts by %+.1f dB across the range, as a lamp %s by ≈%.0f K in colour temperature"
+                            + " (Planck) gives: the lamp drifted since the reference scan;"
+                            + " re-take the reference through the patch cord, then the loop scan", amount,
+                    amount > 0 ? "hotter" : "cooler",
+                    Math.abs(amount / lampDriftDbPerK(grid.firstNm(), grid.lastNm()))));
             case FRINGES -> throw new IllegalStateException("fringes are not a fitted column");
         };
     }
@@ -349,20 +448,61 @@ public final class DeviationDiagnoser {
     }
 
     private static Finding fringeFinding(FringeReport f, PathEvidence evidence) {
-        String joint = evidence.joints().stream().filter(PathEvidence.JointEvidence::airGap)
-                .map(PathEvidence.JointEvidence::label).findFirst().orElse("");
+        List<PathEvidence.JointEvidence> suspects = fringeSuspects(evidence);
+        String joint = suspects.isEmpty() ? "" : suspects.get(0).label();
+        String where = suspects.isEmpty()
+                ? "; no joint on record has an air gap: look for a cracked fiber end or a loose probe window"
+                : "; re-mate the air-gap joints starting with " + suspects.stream()
+                        .map(PathEvidence.JointEvidence::label).collect(Collectors.joining(", "));
         String text = String.format(Locale.ROOT,
-                "fringes of ±%.2f dB every %.0f cm⁻¹ left after the fit: an air gap or crack of ≈%.0f µm acting as"
-                        + " an etalon; re-mate the air-gap joints%s", f.amplitudeDb(), f.periodCm(), f.gapUm(),
-                joint.isEmpty() ? "" : " starting with " + joint);
+                "fringes of %.2f dB peak to peak every %.0f cm⁻¹ left after the fit: an air gap or crack of ≈%.0f µm"
+                        + " acting as an etalon (a ripple this size can upset a chemometric model)%s",
+                f.peakToPeakDb(), f.periodCm(), f.gapUm(), where);
         return new Finding(Signature.FRINGES, List.of(Cause.AIR_GAP), f.amplitudeDb(), Double.NaN,
                 0, joint, text);
     }
 
+    /**
+     * The joints that can hold an air gap, most likely first: graded dirty or damaged, then never
+     * inspected, then the rest (a gap opens where a connector was disturbed; design choice).
+     */
+    static List<PathEvidence.JointEvidence> fringeSuspects(PathEvidence evidence) {
+        return evidence.joints().stream().filter(PathEvidence.JointEvidence::airGap)
+                .sorted(Comparator.comparingInt(j -> j.grade().needsAction() ? 0
+                        : j.grade() == org.strandbook.site.InspectionGrade.NOT_INSPECTED ? 1 : 2))
+                .toList();
+    }
+
+    /**
+     * Pairs of look-alike shapes over the whole basis, and each finding whose term the other terms
+     * the fit actually used (non-zero coefficients) largely reproduce: a term held at zero by the
+     * non-negativity bound took no part in the estimate and cannot have made it uncertain.
+     */
     private static List<String> collinearNotes(LeastSquaresProblem problem, List<Column> columns,
-                                               boolean flatFound) {
+                                               List<Finding> findings, double[][] a, double[] b, double[] sigma,
+                                               double[] x) {
         List<String> notes = new ArrayList<>();
-        for (ColumnPair pair : CollinearityReport.of(problem).pairsAbove(COLLINEAR_COSINE)) {
+        CollinearityReport report = CollinearityReport.of(problem);
+        int[] active = java.util.stream.IntStream.range(0, columns.size()).filter(j -> x[j] != 0).toArray();
+        double[][] activeColumns = new double[active.length][];
+        for (int c = 0; c < active.length; c++) {
+            activeColumns[c] = a[active[c]];
+        }
+        CollinearityReport used = active.length == 0 ? report
+                : CollinearityReport.of(LeastSquaresProblem.ofColumns(activeColumns, b).withRowSigmas(sigma));
+        for (Finding f : findings) {
+            for (int c = 0; c < active.length; c++) {
+                double vif = used.varianceInflation(c);
+                if (columns.get(active[c]).signature == f.signature() && vif > INFLATION_LIMIT) {
+                    notes.add(String.format(Locale.ROOT, "the %s finding rests on a shape largely in the span of"
+                                    + " the other fitted terms over the measured range (variance inflation %.0f,"
+                                    + " condition number %.0f): its amount is uncertain; confirm it with the records"
+                                    + " or a fresh reference scan", words(f.signature()), vif, used.conditionNumber()));
+                }
+            }
+        }
+        boolean flatFound = findings.stream().anyMatch(f -> f.signature() == Signature.FLAT_EXCESS);
+        for (ColumnPair pair : report.pairsAbove(COLLINEAR_COSINE)) {
             notes.add(String.format(Locale.ROOT, "%s and %s look alike over the measured range (cos %.2f):"
                             + " the spectrum alone cannot tell them apart",
                     words(columns.get(pair.first()).signature), words(columns.get(pair.second()).signature),

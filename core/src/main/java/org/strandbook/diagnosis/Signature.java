@@ -13,7 +13,10 @@ public enum Signature {
     HYDROGEN,
     /** Loss rising toward short wavelengths: radiation-induced or solarization darkening. */
     DARKENING,
-    /** A signed tilt across the range: the lamp changed between reference and loop scan. */
+    /**
+     * The lamp's colour temperature changed between reference and loop scan: Planck's law makes it
+     * nearly linear in 1/λ over the NIR, signed; the amount is its tilt across the range.
+     */
     REFERENCE_DRIFT,
     /** Periodic fringes left in the residual: not a fitted column but a search over periods. */
     FRINGES

@@ -62,6 +62,8 @@ public record PointEvaluation(MeasurementPoint point, Status status, PredictedBu
         }
         return diagnosis.get().first().map(f -> {
             String size = Double.isInfinite(f.amountDb()) ? "no light"
+                    : f.signature() == org.strandbook.diagnosis.Signature.FRINGES
+                    ? String.format(java.util.Locale.ROOT, "ripple of %.2f dB peak to peak", 2 * f.amountDb())
                     : f.cause() == org.strandbook.diagnosis.Cause.REFERENCE_OR_RECORDS
                     ? String.format(java.util.Locale.ROOT, "≈%.1f dB under prediction", -f.amountDb())
                     : Double.isNaN(f.atNm()) || f.signature() == org.strandbook.diagnosis.Signature.FLAT_EXCESS

@@ -153,4 +153,96 @@ class DeviationDiagnoserTest {
                 evidence(InspectionGrade.CLEAN, Double.NaN));
         assertTrue(d.findings().isEmpty(), () -> d.findings().toString());
     }
+
+    /** Planck's law up to a constant, B ∝ λ⁻⁵/(e^(c₂/λT) − 1), c₂ = 14387.769 µm·K (Planck, Ann. Phys. 4, 553 (1901)). */
+    private static double planck(double wavelengthNm, double temperatureK) {
+        double um = wavelengthNm * 1e-3;
+        return Math.pow(um, -5) / Math.expm1(14387.769 / (um * temperatureK));
+    }
+
+    @Test
+    void aLampThatCooledIsLampDriftNotAFlatExcess() {
+        // the loop scan sees the lamp at 2850 K, the reference saw it at 3000 K: the apparent extra
+        // loss is 10·log10(B(λ, 3000 K)/B(λ, 2850 K)) by Planck's law, 1.1–1.9 dB, more at short λ
+        double[] dev = new double[GRID.size()];
+        for (int i = 0; i < dev.length; i++) {
+            double w = GRID.wavelengthNm(i);
+            dev[i] = 10 * Math.log10(planck(w, 3000) / planck(w, 2850));
+        }
+        Diagnosis d = DeviationDiagnoser.withDefaults().diagnose(measured(dev, 9), predicted(),
+                evidence(InspectionGrade.CLEAN, Double.NaN));
+
+        Finding f = d.first().orElseThrow();
+        assertEquals(Cause.REFERENCE_DRIFT, f.cause(), f.text());
+        assertTrue(d.findings().stream().noneMatch(x -> x.signature() == Signature.FLAT_EXCESS),
+                () -> d.findings().toString());
+        // the amount is the tilt across the range: dev(2200 nm) − dev(1000 nm) of the same law
+        assertEquals(dev[dev.length - 1] - dev[0], f.amountDb(), 0.05 * Math.abs(dev[dev.length - 1] - dev[0]));
+        assertTrue(f.text().contains("cooler"), f.text());
+    }
+
+    /** The deviation plus Gaussian scatter of {@code sigmaDb}, as a typical scan's noise shows in dB. */
+    private static double[] withScatter(double[] deviationDb, double sigmaDb, long seed) {
+        Random rnd = new Random(seed);
+        double[] out = deviationDb.clone();
+        for (int i = 0; i < out.length; i++) {
+            out[i] += sigmaDb * rnd.nextGaussian();
+        }
+        return out;
+    }
+
+    @Test
+    void aTenthOfADecibelRippleIsFoundWithItsGapAndTheDirtyAirGapJointFirst() {
+        // Fabry–Pérot: fringe period Δν̃ = 1/(2·n·d) (Born & Wolf, Principles of Optics, §7.6); a 45 µm
+        // air gap rings every 111 cm⁻¹. 0.1 dB peak to peak under 0.02 dB of scatter (the median noise
+        // of the independent test model's scans; design choice)
+        double gapUm = 45;
+        double periodCm = 1.0 / (2 * gapUm * 1e-4);
+        double[] dev = new double[GRID.size()];
+        for (int i = 0; i < dev.length; i++) {
+            dev[i] = 0.05 * Math.cos(2 * Math.PI * (1.0e7 / GRID.wavelengthNm(i)) / periodCm);
+        }
+        Diagnosis d = DeviationDiagnoser.withDefaults().diagnose(measured(withScatter(dev, 0.02, 10), 10), predicted(),
+                evidence(InspectionGrade.DIRTY, Double.NaN));
+
+        FringeReport f = d.fringes().orElseThrow();
+        assertEquals(gapUm, f.gapUm(), 0.03 * gapUm);
+        assertEquals(0.1, f.peakToPeakDb(), 0.02);
+        Finding finding = d.findings().stream().filter(x -> x.cause() == Cause.AIR_GAP).findFirst().orElseThrow();
+        assertEquals("J2", finding.checkFirst(), finding.text());
+        // the plot draws the fitted ripple: its peak to peak over the grid is the reported one
+        double[] ripple = d.fitted().stream().filter(x -> x.signature() == Signature.FRINGES).findFirst()
+                .orElseThrow().lossDb();
+        double max = Arrays.stream(ripple).max().orElseThrow();
+        double min = Arrays.stream(ripple).min().orElseThrow();
+        assertEquals(f.peakToPeakDb(), max - min, 0.01);
+    }
+
+    @Test
+    void scatterAloneRaisesNoFringes() {
+        // the same 0.02 dB scatter with no etalon: the search must stay silent (design choice: 10 seeds)
+        for (long seed = 20; seed < 30; seed++) {
+            Diagnosis d = DeviationDiagnoser.withDefaults().diagnose(
+                    measured(withScatter(new double[GRID.size()], 0.02, seed), seed), predicted(),
+                    evidence(InspectionGrade.CLEAN, Double.NaN));
+            assertTrue(d.fringes().isEmpty(), "seed " + seed + ": " + d.fringes());
+        }
+    }
+
+    @Test
+    void aDarkeningFindingSaysItRestsOnATermInTheSpanOfFlatAndDrift() {
+        // over 1000–2200 nm the darkening tail is close to a level plus a 1/λ tilt: variance inflation
+        // above 10 (Kutner et al., Applied Linear Statistical Models, 5th ed. 2005, §10.5)
+        double[] dev = new double[GRID.size()];
+        for (int i = 0; i < dev.length; i++) {
+            dev[i] = 1.5 * AttenuationShapes.radiationDarkeningShape(GRID.wavelengthNm(i))
+                    / AttenuationShapes.radiationDarkeningShape(1000);
+        }
+        Diagnosis d = DeviationDiagnoser.withDefaults().diagnose(measured(dev, 11), predicted(),
+                evidence(InspectionGrade.CLEAN, Double.NaN));
+
+        assertEquals(Cause.RADIATION_DARKENING, d.first().orElseThrow().cause());
+        assertTrue(d.collinearNotes().stream().anyMatch(n -> n.startsWith("the darkening finding rests on a shape"
+                + " largely in the span")), () -> d.collinearNotes().toString());
+    }
 }

@@ -65,4 +65,41 @@ class CollinearityReportTest {
         assertTrue(Double.isNaN(report.cosine(0, 1)));
         assertTrue(report.pairsAbove(0.0).isEmpty());
     }
+
+    // With two regressors, VIF = 1/(1 − r²) for both (Kutner, Nachtsheim, Neter and Li, "Applied
+    // Linear Statistical Models", 5th ed. 2005, §10.5); here r = cos 45° = √2/2, so VIF = 2.
+    @Test
+    void twoColumnsInflateEachOtherByOneOverOneMinusRSquared() {
+        double[][] columns = {{1, 0, 0}, {1, 1, 0}};
+
+        CollinearityReport report = CollinearityReport.of(LeastSquaresProblem.ofColumns(columns, new double[3]));
+
+        assertEquals(2.0, report.varianceInflation(0), 1e-12);
+        assertEquals(2.0, report.varianceInflation(1), 1e-12);
+        // singular values of the unit columns are √(1 ± cos): condition √((1 + c)/(1 − c)) = 1 + √2
+        assertEquals(1 + Math.sqrt(2), report.conditionNumber(), 1e-12);
+    }
+
+    // A column almost the sum of two others: no pair reaches the 0.95 cosine, but R² of the third on
+    // the first two is 2/2.01, so VIF = 1/(1 − R²) = 201 (same source as above).
+    @Test
+    void aColumnInTheSpanOfSeveralOthersIsInflatedThoughNoPairIsCollinear() {
+        double[][] columns = {{1, 0, 0}, {0, 1, 0}, {1, 1, 0.1}};
+
+        CollinearityReport report = CollinearityReport.of(LeastSquaresProblem.ofColumns(columns, new double[3]));
+
+        assertTrue(report.nearlyCollinearPairs().isEmpty());
+        assertEquals(201, report.varianceInflation(2), 1e-9);
+    }
+
+    @Test
+    void orthogonalColumnsAreNotInflated() {
+        // VIF of a column orthogonal to the rest is 1 (R² = 0), whatever the columns' lengths
+        double[][] columns = {{3, 0}, {0, 0.5}};
+
+        CollinearityReport report = CollinearityReport.of(LeastSquaresProblem.ofColumns(columns, new double[2]));
+
+        assertEquals(1.0, report.varianceInflation(0), 1e-12);
+        assertEquals(1.0, report.conditionNumber(), 1e-12);
+    }
 }

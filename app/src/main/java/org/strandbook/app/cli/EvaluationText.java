@@ -7,6 +7,8 @@ import java.util.Optional;
 import java.util.stream.Collectors;
 
 import org.strandbook.diagnosis.Finding;
+import org.strandbook.diagnosis.FringeReport;
+import org.strandbook.diagnosis.Signature;
 import org.strandbook.evaluation.BandTrend;
 import org.strandbook.evaluation.BandUncertainty;
 import org.strandbook.evaluation.BandVerdict;
@@ -78,8 +80,12 @@ final class EvaluationText {
         bands.print(out);
         e.diagnosis().ifPresent(d -> {
             for (Finding f : d.findings()) {
-                out.printf(Locale.ROOT, "  finding (%.0f %% of the explained deviation): %s%n", f.sharePercent(),
-                        f.text());
+                if (f.signature() == Signature.FRINGES) {
+                    out.println("  finding (ripple left after the fit): " + f.text());
+                } else {
+                    out.printf(Locale.ROOT, "  finding (%.0f %% of the explained deviation): %s%n", f.sharePercent(),
+                            f.text());
+                }
             }
             if (Double.isFinite(d.residualRmsDb())) {
                 out.printf(Locale.ROOT, "  residual after the fit: %.2f dB RMS%n", d.residualRmsDb());
@@ -133,6 +139,10 @@ final class EvaluationText {
                     .collect(Collectors.joining(","))));
             b.append("],\"residual_rms_db\":").append(JsonText.number(
                     e.diagnosis().map(d -> d.residualRmsDb()).orElse(Double.NaN)));
+            b.append(",\"fringes\":").append(e.diagnosis().flatMap(d -> d.fringes()).map(EvaluationText::json)
+                    .orElse("null"));
+            b.append(",\"diagnosis_notes\":").append(strings(e.diagnosis().map(d -> d.collinearNotes())
+                    .orElse(List.of())));
             b.append(",\"masked\":[");
             b.append(e.measured().map(m -> m.maskedRanges().stream().map(EvaluationText::json)
                     .collect(Collectors.joining(","))).orElse(""));
@@ -210,6 +220,13 @@ final class EvaluationText {
                 + ",\"share_percent\":" + JsonText.number(f.sharePercent())
                 + ",\"check_first\":" + JsonText.string(f.checkFirst())
                 + ",\"text\":" + JsonText.string(f.text()) + "}";
+    }
+
+    private static String json(FringeReport f) {
+        return "{\"period_cm\":" + JsonText.number(f.periodCm())
+                + ",\"gap_um\":" + JsonText.number(f.gapUm())
+                + ",\"peak_to_peak_db\":" + JsonText.number(f.peakToPeakDb())
+                + ",\"significance\":" + JsonText.number(f.significance()) + "}";
     }
 
     private static String json(MaskedRange r) {

@@ -201,6 +201,23 @@ public final class AttenuationShapes {
         return s;
     }
 
+    /** Second radiation constant c₂ = hc/k in µm·K (CODATA 2018: 1.438776877… × 10⁻² m·K). */
+    public static final double SECOND_RADIATION_CONSTANT_UM_K = 14387.76877;
+    /** dB per natural-log unit, 10/ln 10. */
+    private static final double DB_PER_NEPER_POWER = 10.0 / Math.log(10.0);
+
+    /**
+     * How much brighter a thermal lamp looks at one wavelength per kelvin its colour temperature
+     * rises, dB/K: 10·log₁₀(e)·∂ln B/∂T of Planck's law B ∝ λ⁻⁵/(e^x − 1), x = c₂/(λT), which is
+     * (10/ln 10)·(x/T)·eˣ/(eˣ − 1). In Wien's limit (x ≫ 1, the NIR for a halogen filament) this is
+     * c₂/(λT²): linear in 1/λ, largest at short wavelengths.
+     */
+    public static double planckBrighteningDbPerK(double wavelengthNm, double temperatureK) {
+        double x = SECOND_RADIATION_CONSTANT_UM_K / (wavelengthNm * 1e-3 * temperatureK);
+        // eˣ/(eˣ − 1) = 1/(1 − e⁻ˣ), written so that it never overflows
+        return DB_PER_NEPER_POWER * (x / temperatureK) / -Math.expm1(-x);
+    }
+
     private static double rawRadiationShape(double energyEv) {
         double sum = Math.exp((energyEv - NBOHC_BAND_EV) / RADIATION_TAIL_WIDTH_EV);
         for (double[] band : RADIATION_BANDS) {

@@ -95,11 +95,16 @@ public final class PointCurves {
         int colour = 1;
         for (FittedSignature f : fitted) {
             double[] loss = f.lossDb();
-            if (loss.length != nm.length || largest(loss) < SHOWN_SIGNATURE_DB) {
+            // a fringe ripple is drawn whatever its size: 0.1 dB peak to peak already upsets a chemometric model
+            boolean ripple = f.signature() == Signature.FRINGES;
+            if (loss.length != nm.length || (!ripple && largest(loss) < SHOWN_SIGNATURE_DB)) {
                 continue;
             }
-            curves.add(new Curve("fitted: " + SIGNATURE_WORDS.getOrDefault(f.signature(),
-                    f.signature().name().toLowerCase(Locale.ROOT)), CurveStyle.dashed(CurveStyle.series(colour++), 1.5), nm, loss));
+            String words = SIGNATURE_WORDS.getOrDefault(f.signature(), f.signature().name().toLowerCase(Locale.ROOT));
+            if (ripple) {
+                words += String.format(Locale.ROOT, ", %.2f dB peak to peak", 2 * largest(loss));
+            }
+            curves.add(new Curve("fitted: " + words, CurveStyle.dashed(CurveStyle.series(colour++), 1.5), nm, loss));
         }
         return curves;
     }
