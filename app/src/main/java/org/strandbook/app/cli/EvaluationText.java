@@ -152,6 +152,14 @@ final class EvaluationText {
         return b.toString();
     }
 
+    /** Sen's interval of a slope; two readings (as just after a repair) are too few to bound it. */
+    private static String slopeInterval(LossTrend trend) {
+        if (!trend.slopeIsBounded()) {
+            return "too few scans";
+        }
+        return SignedDecimal.of(trend.lowerSlopeDbPerYear(), 3) + " … " + SignedDecimal.of(trend.upperSlopeDbPerYear(), 3);
+    }
+
     /** A recorded integration time, or null when the scan file did not give one. */
     private static String integrationMs(double ms) {
         return ms > 0 ? JsonText.number(ms) : "null";
@@ -257,8 +265,7 @@ final class EvaluationText {
                                 : " (+" + tr.noLight().size() + " dark)"),
                         String.format(Locale.ROOT, "%.0f–%.0f", tr.drivingFromNm(), tr.drivingToNm()),
                         lt.map(x -> SignedDecimal.of(x.slopeDbPerYear(), 3)).orElse("—"),
-                        lt.map(x -> SignedDecimal.of(x.lowerSlopeDbPerYear(), 3) + " … "
-                                + SignedDecimal.of(x.upperSlopeDbPerYear(), 3)).orElse("—"),
+                        lt.map(EvaluationText::slopeInterval).orElse("—"),
                         Integer.toString(tr.steps().size()), db(margin), outlook(tr));
             }
             rank++;

@@ -113,6 +113,16 @@ class DemoCommandTest {
     }
 
     @Test
+    void aTrendRestartedByARepairSaysItsSlopeIsNotYetBounded() {
+        // Sen (1968), J. Am. Stat. Assoc. 63, 1379: with two readings there is one pairwise slope and
+        // no order statistic to bound it at 95 %; the demo replaces FT-4101's patch cord late in its history
+        CliRun r = CliRun.of("trend", workbook.toString(), "--point", "FT-4101");
+        assertEquals(0, r.exitCode(), r.err());
+        assertFalse(r.out().contains("Infinity"), r.out());
+        assertTrue(r.out().contains("too few scans"), r.out());
+    }
+
+    @Test
     void importingTheSameScanFileTwiceIsRefused() throws Exception {
         Path file;
         try (var files = Files.list(dir.resolve("demo").resolve("scans").resolve("FT-4101"))) {
