@@ -64,6 +64,14 @@ public final class DeviationDiagnoser {
      * 2800–3200 K (common practice); the shape barely changes over that range.
      */
     public static final double LAMP_COLOUR_TEMPERATURE_K = 3000;
+    /**
+     * Design choice: no shape is fitted when the usable wavelengths span less than this share of
+     * the scans' common range in photon energy. Over a short span the smooth shapes (flat, lamp
+     * drift, darkening edge, bend) differ by less than the noise and trade off against each other:
+     * a fit there names large opposite amounts that cancel, e.g. what is left beside a clipped
+     * reference.
+     */
+    public static final double MIN_USABLE_ENERGY_SHARE = 1.0 / 3;
 
     private final double minReportDb;
 
@@ -96,6 +104,12 @@ public final class DeviationDiagnoser {
         if (rows.length < 8) {
             return new Diagnosis(List.of(), Double.NaN, List.of(), Optional.empty(), List.of(),
                     "too few measured wavelengths (" + rows.length + ") to diagnose");
+        }
+        MeasuredRange range = MeasuredRange.of(measured);
+        double usableShare = range.usableEnergyShare();
+        if (usableShare < MIN_USABLE_ENERGY_SHARE) {
+            return new Diagnosis(List.of(), Double.NaN, List.of(), Optional.empty(), List.of(),
+                    tooShortSpan(range, usableShare, measured.saturationReasons()));
         }
         double[] b = new double[rows.length];
         double[] s = new double[rows.length];
@@ -130,7 +144,6 @@ public final class DeviationDiagnoser {
             }
             totalEffect += effect[j];
         }
-        MeasuredRange range = MeasuredRange.of(measured);
         List<Finding> findings = new ArrayList<>();
         Map<Finding, Double> peaks = new java.util.IdentityHashMap<>();
         for (int j = 0; j < columns.size(); j++) {
@@ -206,6 +219,15 @@ public final class DeviationDiagnoser {
                         + " (residual %.2f dB RMS)", minReportDb, rms)
                 : findings.get(0).text();
         return new Diagnosis(findings, rms, collinear, fringes, fitted, summary);
+    }
+
+    private static String tooShortSpan(MeasuredRange range, double share, List<String> saturationReasons) {
+        double[] span = range.usableSpanNm();
+        String why = saturationReasons.isEmpty() ? ""
+                : " The rest is masked: " + String.join("; ", saturationReasons) + ".";
+        return String.format(Locale.ROOT, "not diagnosed: the loss was measured only over %.0f–%.0f nm, %.0f %% of the"
+                + " range in photon energy, too short a span to tell the fault shapes apart.%s", span[0], span[1],
+                100 * share, why);
     }
 
     private static Diagnosis broken(PathEvidence evidence) {

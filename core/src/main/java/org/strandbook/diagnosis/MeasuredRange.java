@@ -34,6 +34,59 @@ final class MeasuredRange {
         return grid;
     }
 
+    /**
+     * Share (0–1) of the range all four scans reach, in photon energy (1/λ), that lies between the
+     * first and the last usable wavelength; 0 when nothing was usable. Energy, not wavelength: the
+     * fault shapes (an Urbach edge, Wien's lamp drift, Rayleigh's λ⁻⁴) are smooth in photon energy,
+     * so how far apart they can be told is set by the energy span the fit sees.
+     */
+    double usableEnergyShare() {
+        int firstReached = -1;
+        int lastReached = -1;
+        int firstUsable = -1;
+        int lastUsable = -1;
+        for (int i = 0; i < usable.length; i++) {
+            if (reached(grid.wavelengthNm(i))) {
+                firstReached = firstReached < 0 ? i : firstReached;
+                lastReached = i;
+            }
+            if (usable[i]) {
+                firstUsable = firstUsable < 0 ? i : firstUsable;
+                lastUsable = i;
+            }
+        }
+        if (firstUsable < 0 || lastReached <= firstReached) {
+            return 0;
+        }
+        return (1 / grid.wavelengthNm(firstUsable) - 1 / grid.wavelengthNm(lastUsable))
+                / (1 / grid.wavelengthNm(firstReached) - 1 / grid.wavelengthNm(lastReached));
+    }
+
+    /** The first and last usable wavelength, nm; NaN when nothing was usable. */
+    double[] usableSpanNm() {
+        int first = -1;
+        int last = -1;
+        for (int i = 0; i < usable.length; i++) {
+            if (usable[i]) {
+                first = first < 0 ? i : first;
+                last = i;
+            }
+        }
+        return first < 0 ? new double[] {Double.NaN, Double.NaN}
+                : new double[] {grid.wavelengthNm(first), grid.wavelengthNm(last)};
+    }
+
+    private boolean reached(double nm) {
+        for (MaskedRange m : masked) {
+            boolean outside = m.reason() == MaskReason.OUTSIDE_LOOP_SCAN || m.reason() == MaskReason.OUTSIDE_REFERENCE_SCAN
+                    || m.reason() == MaskReason.OUTSIDE_DARK_SCAN;
+            if (outside && nm >= m.fromNm() && nm <= m.toNm()) {
+                return false;
+            }
+        }
+        return true;
+    }
+
     boolean usable(int index) {
         return usable[index];
     }
