@@ -41,25 +41,20 @@ final class MeasuredRange {
      * so how far apart they can be told is set by the energy span the fit sees.
      */
     double usableEnergyShare() {
-        int firstReached = -1;
-        int lastReached = -1;
-        int firstUsable = -1;
-        int lastUsable = -1;
+        double firstReachedNm = Double.NaN;
+        double lastReachedNm = Double.NaN;
         for (int i = 0; i < usable.length; i++) {
-            if (reached(grid.wavelengthNm(i))) {
-                firstReached = firstReached < 0 ? i : firstReached;
-                lastReached = i;
-            }
-            if (usable[i]) {
-                firstUsable = firstUsable < 0 ? i : firstUsable;
-                lastUsable = i;
+            double nm = grid.wavelengthNm(i);
+            if (reached(nm)) {
+                firstReachedNm = Double.isNaN(firstReachedNm) ? nm : firstReachedNm;
+                lastReachedNm = nm;
             }
         }
-        if (firstUsable < 0 || lastReached <= firstReached) {
+        double[] span = usableSpanNm();
+        if (Double.isNaN(span[0]) || !(lastReachedNm > firstReachedNm)) {
             return 0;
         }
-        return (1 / grid.wavelengthNm(firstUsable) - 1 / grid.wavelengthNm(lastUsable))
-                / (1 / grid.wavelengthNm(firstReached) - 1 / grid.wavelengthNm(lastReached));
+        return (1 / span[0] - 1 / span[1]) / (1 / firstReachedNm - 1 / lastReachedNm);
     }
 
     /** The first and last usable wavelength, nm; NaN when nothing was usable. */
