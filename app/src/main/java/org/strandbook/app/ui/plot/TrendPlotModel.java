@@ -132,7 +132,9 @@ public final class TrendPlotModel extends PlotModel<TrendPlotModel.TrendLine> {
             if (t.trend().isPresent()) {
                 LossTrend trend = t.trend().get();
                 trended = true;
-                out.add(new TrendLine("", "", CurveStyle.line(colour, 2), along(trend, from, last, y)));
+                // after a repair the trend is fitted to the readings since it: draw it over those only
+                Instant fitted = trend.referenceTime().isAfter(from) ? trend.referenceTime() : from;
+                out.add(new TrendLine("", "", CurveStyle.line(colour, 2), along(trend, fitted, last, y)));
                 out.add(new TrendLine("", "", CurveStyle.dashed(colour, 2), along(trend, last, until, y)));
             }
         }

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.time.Instant;
 import java.time.ZoneOffset;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 
@@ -62,6 +63,28 @@ class TrendPlotModelTest {
         assertEquals(TrendPlotModel.epochDay(cleaned), marks.get(0).points().get(0).epochDay(), 1e-9);
         assertEquals(marks.get(0).points().get(0).epochDay(), marks.get(0).points().get(1).epochDay());
         assertTrue(model.linesProperty().get().stream().anyMatch(l -> l.label().equals("maintenance and inspections (1)")));
+    }
+
+    @Test
+    void aTrendRestartedAfterARepairIsDrawnFromTheFirstReadingAfterIt() {
+        // invented readings: 12 dB before a cleaning, then 10 dB growing 1 dB/year; the trend is
+        // fitted to the readings after the cleaning only (Sen 1968 on that subset), so its line must
+        // not reach back over the dirty regime
+        List<LossReading> before = List.of(new LossReading(T0.minusSeconds(15_778_800), 12),
+                new LossReading(T0.minusSeconds(7_889_400), 12.1));
+        List<LossReading> after = List.of(new LossReading(T0, 10), new LossReading(T0.plusSeconds(7_889_400), 10.25),
+                new LossReading(T0.plusSeconds(15_778_800), 10.5));
+        LossTrend sinceRepair = TheilSenTrend.withDefaults().fit(after);
+        List<LossReading> all = new ArrayList<>(before);
+        all.addAll(after);
+        BandTrend t = new BandTrend(BAND, all, List.of(), Optional.of(sinceRepair), List.of(), Optional.empty());
+        TrendPlotModel model = new TrendPlotModel(new PlotAxes(new MemoryPreferences()));
+
+        model.show("test", List.of(t), 12.75);
+
+        TrendPlotModel.TrendLine line = model.linesProperty().get().get(1);
+        assertEquals(TrendPlotModel.epochDay(T0), line.points().get(0).epochDay(), 1e-6);
+        assertEquals(10, line.points().get(0).y(), 1e-9);
     }
 
     @Test
