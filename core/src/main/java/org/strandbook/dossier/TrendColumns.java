@@ -8,7 +8,7 @@ import org.strandbook.trend.LossReading;
 /**
  * The loss history of one band as the Trend history sheet holds it and the trend chart plots it:
  * scan times (spreadsheet serial dates, UTC), the highest losses of the driving sub-band and the Theil–Sen line at each time
- * (NaN without a trend), losses to {@link SpectrumColumns#LOSS_STEP_DB}.
+ * (NaN without a trend, and before the first reading the trend was fitted to), losses to {@link SpectrumColumns#LOSS_STEP_DB}.
  */
 record TrendColumns(double[] excelTime, double[] lossDb, double[] trendDb) {
 
@@ -21,7 +21,9 @@ record TrendColumns(double[] excelTime, double[] lossDb, double[] trendDb) {
             LossReading r = readings.get(i);
             t[i] = TableSheet.excelTime(r.time());
             loss[i] = SpectrumColumns.round(r.lossDb());
-            line[i] = SpectrumColumns.round(trend.trend().map(f -> f.lossDbAt(r.time())).orElse(Double.NaN));
+            // after a repair the trend is fitted to the readings since it; earlier readings get no line
+            line[i] = SpectrumColumns.round(trend.trend().filter(f -> !r.time().isBefore(f.referenceTime()))
+                    .map(f -> f.lossDbAt(r.time())).orElse(Double.NaN));
         }
         return new TrendColumns(t, loss, line);
     }
