@@ -44,10 +44,6 @@ final class BandHistory {
         lastLitWorst = latestWorst.clone();
     }
 
-    SubBands subBands() {
-        return subBands;
-    }
-
     /** Adds the measured loss of one loop scan; scans come in time order. */
     void add(Instant takenAt, WavelengthGrid grid, double[] lossDb) {
         double[] worst = subBands.worstLossDb(grid, lossDb);

@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
@@ -18,12 +19,14 @@ import org.strandbook.optics.WavelengthGrid;
 import org.strandbook.optics.path.OpticsCache;
 import org.strandbook.site.MaintenanceAction;
 import org.strandbook.site.MaintenanceKind;
+import org.strandbook.site.PathLeg;
 import org.strandbook.site.ScanRecord;
 import org.strandbook.site.Spectrum;
 import org.strandbook.site.WavelengthBand;
 import org.strandbook.site.ScanKind;
 import org.strandbook.throughput.DarkNoise;
 import org.strandbook.throughput.OneCordThroughput;
+import org.strandbook.throughput.MaskedRange;
 import org.strandbook.throughput.RawSpectrum;
 import org.strandbook.throughput.ScanRegridder;
 import org.strandbook.throughput.ThroughputResult;
@@ -75,7 +78,7 @@ public final class PointEvaluator {
         List<WavelengthBand> bands = in.point().bands();
         for (WavelengthBand band : bands) {
             if (band.fromNm() < grid.firstNm() || band.toNm() > grid.lastNm()) {
-                throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
+                throw new IllegalArgumentException(String.format(Locale.ROOT,
                         "point %s: band %s (%.0f–%.0f nm) lies outside analyzer %s's range %.0f–%.0f nm",
                         in.point().tag(), band.name(), band.fromNm(), band.toNm(), in.analyzer().tag(),
                         grid.firstNm(), grid.lastNm()));
@@ -132,7 +135,7 @@ public final class PointEvaluator {
         ScanExposure exposure = latestPair.exposure();
         Optional<String> refusal = exposure.problem();
         if (refusal.isEmpty() && clippedNearlyEverywhere(latest)) {
-            refusal = Optional.of(String.format(java.util.Locale.ROOT, "not judged: %.0f %% of the range is clipped: %s",
+            refusal = Optional.of(String.format(Locale.ROOT, "not judged: %.0f %% of the range is clipped: %s",
                     100 * latest.saturatedFraction(), String.join("; ", latest.saturationReasons())));
         }
         List<BandVerdict> verdicts = new ArrayList<>();
@@ -141,11 +144,13 @@ public final class PointEvaluator {
             BandVerdict v = Acceptance.judge(grid, latest.lossDb(), predictedLoss, band, tolerance, allowed);
             if (refusal.isPresent()) {
                 v = notJudged(v, refusal.get());
-            } else if (v.measuredFraction() < Acceptance.MIN_MEASURED_FRACTION
-                    && 2 * saturatedShare(latest, grid, band) > 1 - v.measuredFraction()) {
-                // most of what could not be measured was clipped: that, not the light, is the finding
-                v = notJudged(v, String.format(java.util.Locale.ROOT, "not judged: %.0f %% of the band is clipped: %s",
-                        100 * saturatedShare(latest, grid, band), String.join("; ", latest.saturationReasons())));
+            } else if (v.measuredFraction() < Acceptance.MIN_MEASURED_FRACTION) {
+                double clipped = saturatedShare(latest, grid, band);
+                if (2 * clipped > 1 - v.measuredFraction()) {
+                    // most of what could not be measured was clipped: that, not the light, is the finding
+                    v = notJudged(v, String.format(Locale.ROOT, "not judged: %.0f %% of the band is clipped: %s",
+                            100 * clipped, String.join("; ", latest.saturationReasons())));
+                }
             }
             verdicts.add(v);
             status = status.worse(v.status());
@@ -162,17 +167,17 @@ public final class PointEvaluator {
             problems.add(earlierUnjudged + " earlier loop scan(s) left out of the trend: clipped nearly everywhere,"
                     + " or their integration times do not show that loop and reference are on one scale");
         }
+        Instant asOf = lastJudged == null ? latestPair.loop().takenAt() : lastJudged;
+        Optional<Instant> repaired = latestRepair(in.actions(), asOf);
         List<BandTrend> trends = new ArrayList<>();
         for (BandHistory history : histories) {
-            Instant asOf = lastJudged == null ? latestPair.loop().takenAt() : lastJudged;
-            trends.add(history.trend(allowed, asOf, latestRepair(in.actions(), asOf), theilSen, steps, forecast));
+            trends.add(history.trend(allowed, asOf, repaired, theilSen, steps, forecast));
         }
         return new PointEvaluation(in.point(), status, predicted, Optional.of(latestPair), Optional.of(latest),
                 verdicts, diagnosis, trends, problems);
     }
 
-    private static PredictedBudget predict(PointInputs in, org.strandbook.site.PathLeg send,
-                                           org.strandbook.site.PathLeg ret, OpticsCache cache) {
+    private static PredictedBudget predict(PointInputs in, PathLeg send, PathLeg ret, OpticsCache cache) {
         try {
             return new PointBudgetBuilder(in.catalog()).build(in.point(), send, ret, cache);
         } catch (IllegalArgumentException e) {
@@ -200,7 +205,7 @@ public final class PointEvaluator {
                 continue;
             }
             inBand++;
-            for (org.strandbook.throughput.MaskedRange r : result.maskedRanges()) {
+            for (MaskedRange r : result.maskedRanges()) {
                 if (r.reason().isSaturation() && nm >= r.fromNm() && nm <= r.toNm()) {
                     saturated++;
                     break;
