@@ -8,7 +8,7 @@ package org.strandbook.dossier;
 public interface DossierProgress {
 
     /**
-     * @param stage what is being done, e.g. "evaluating FT-4101" or "writing Spectra"
+     * @param stage what is being done, e.g. "evaluating AT-4101" or "writing Spectra"
      * @param done  steps done in this stage
      * @param total steps in this stage
      * @return false to cancel

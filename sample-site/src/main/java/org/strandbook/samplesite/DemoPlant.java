@@ -87,21 +87,23 @@ public final class DemoPlant {
         WavelengthBand sw = new WavelengthBand("C-H 3rd overtone", 860, 940);
         WavelengthBand ch3Wide = new WavelengthBand("C-H 2nd overtone, CH2", 1190, 1250);
 
-        add(point("FT-4101", "Reactor R-410 feed", "R-410 inlet, level 2", "AZ-41", 1, "PT-TX5",
+        // Tags read as analysis transmitters (ISA-5.1: first letter A = analysis), as an instrument
+        // engineer names an analyzer's measurement points.
+        add(point("AT-4101", "Reactor R-410 feed", "R-410 inlet, level 2", "AZ-41", 1, "PT-TX5",
                 List.of(ch3, ch2), false, false, 40), 25, 25, "LOH-200", Fault.NONE);
-        add(point("FT-4102", "Reactor R-410 outlet", "R-410 outlet, level 1", "AZ-41", 2, "PT-TX5",
+        add(point("AT-4102", "Reactor R-410 outlet", "R-410 outlet, level 1", "AZ-41", 2, "PT-TX5",
                 List.of(ch3, ch2), false, false, 85), 60, 60, "LOH-200", Fault.DIRTY_CONNECTOR);
-        add(point("FT-4103", "Column C-420 overhead", "C-420 top platform", "AZ-41", 3, "PT-TF2",
+        add(point("AT-4103", "Column C-420 overhead", "C-420 top platform", "AZ-41", 3, "PT-TF2",
                 List.of(ch3, oh1), true, false, 95), 120, 120, "LOH-400", Fault.TIGHT_BEND);
-        add(point("FT-4104", "Blender M-430 discharge", "Shelter S1 wall, sample loop", "AZ-41", 4, "PT-TX5",
+        add(point("AT-4104", "Blender M-430 discharge", "Shelter S1 wall, sample loop", "AZ-41", 4, "PT-TX5",
                 List.of(ch2, comb), false, false, 30), 2, 2, "LOH-200", Fault.NONE);
-        add(point("FT-4105", "Hydrogenator R-440", "R-440 bottom nozzle", "AZ-41", 5, "PT-TX5",
+        add(point("AT-4105", "Hydrogenator R-440", "R-440 bottom nozzle", "AZ-41", 5, "PT-TX5",
                 List.of(ch3Wide, ch2), true, true, 165), 45, 45, "LOH-200", Fault.HYDROGEN_DARKENING);
-        add(point("FT-4106", "Tank T-450 rundown", "T-450 roof", "AZ-41", 6, "PT-TF2",
+        add(point("AT-4106", "Tank T-450 rundown", "T-450 roof", "AZ-41", 6, "PT-TF2",
                 List.of(ch3, oh1, ch2), false, false, 25), 35, 35, "LOH-200", Fault.HIGH_OH_FIBER);
-        add(point("FT-4107", "Stripper C-460 bottoms", "C-460 skirt", "AZ-41", 7, "PT-TX5",
+        add(point("AT-4107", "Stripper C-460 bottoms", "C-460 skirt", "AZ-41", 7, "PT-TX5",
                 List.of(ch3, ch2), true, false, 140), 150, 150, "LOH-400", Fault.NONE);
-        add(point("FT-4108", "Dryer D-470 product", "D-470 discharge chute", "AZ-41", 8, "PT-DR",
+        add(point("AT-4108", "Dryer D-470 product", "D-470 discharge chute", "AZ-41", 8, "PT-DR",
                 List.of(ch3, oh1), false, false, 60), 80, 80, "LOH-600", Fault.BROKEN_FIBER);
         add(point("SW-4201", "Solvent recovery tank T-480", "T-480 pipe rack, far end", "AZ-42", 1, "PT-TX5",
                 List.of(sw), true, false, 30), 300, 300, "LOH-200", Fault.NONE);

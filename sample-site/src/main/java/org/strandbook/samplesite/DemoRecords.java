@@ -19,13 +19,13 @@ import org.strandbook.store.Workbook;
 
 /**
  * The demo's maintenance and handover records: commissioning inspections of every joint, notes, the
- * commissioning sign-offs of revision A, and a later like-for-like patch cord replacement at FT-4101
+ * commissioning sign-offs of revision A, and a later like-for-like patch cord replacement at AT-4101
  * that re-opens its signed point (and so the signed revision). People and events are invented.
  */
 final class DemoRecords {
 
-    static final String REOPENED = "FT-4101";
-    static final String DIRTY = "FT-4102";
+    static final String REOPENED = "AT-4101";
+    static final String DIRTY = "AT-4102";
     private static final Instant FIRST_VISIT = ScanGenerator.COMMISSIONING;
 
     private DemoRecords() {
@@ -53,7 +53,7 @@ final class DemoRecords {
             wb.notes().add(new Note(REOPENED, FIRST_VISIT.plus(Duration.ofDays(1)), "I. Marsh",
                     "loop accepted at commissioning; reference patch cord P-07 kept in the shelter"));
             Instant signed = FIRST_VISIT.plus(Duration.ofDays(14));
-            for (String tag : List.of(REOPENED, "FT-4104")) {
+            for (String tag : List.of(REOPENED, "AT-4104")) {
                 wb.signOffs().add(new SignOff(SignOffRole.CHECKED, "M. Okonedo", signed, tag, "loop within tolerance",
                         "commissioning lead", "", ""));
             }

@@ -80,7 +80,7 @@ final class DemoCommand implements Callable<Integer> {
         o.println();
         EvaluationText.summary(site, o);
         o.println();
-        o.println("Next: strandbook evaluate " + built.workbook() + " --point FT-4102   |   strandbook trend "
+        o.println("Next: strandbook evaluate " + built.workbook() + " --point AT-4102   |   strandbook trend "
                 + built.workbook());
         o.flush();
         return StrandbookCommand.EXIT_OK;

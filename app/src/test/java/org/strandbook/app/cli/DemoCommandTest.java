@@ -48,18 +48,18 @@ class DemoCommandTest {
 
     @Test
     void summaryNamesEachInjectedFault() {
-        assertTrue(lineOf(demo.out(), "FT-4102").contains("dirty or misaligned connector"));
-        assertTrue(lineOf(demo.out(), "FT-4102").contains("check J2"));
-        assertTrue(lineOf(demo.out(), "FT-4103").contains("tight bend or crush"));
-        assertTrue(lineOf(demo.out(), "FT-4105").contains("hydrogen darkening"));
-        assertTrue(lineOf(demo.out(), "FT-4106").contains("high-OH fiber"));
-        assertTrue(lineOf(demo.out(), "FT-4106").contains("check C4106-S1"));
-        assertTrue(lineOf(demo.out(), "FT-4108").contains("broken fiber or open connector"));
+        assertTrue(lineOf(demo.out(), "AT-4102").contains("dirty or misaligned connector"));
+        assertTrue(lineOf(demo.out(), "AT-4102").contains("check J2"));
+        assertTrue(lineOf(demo.out(), "AT-4103").contains("tight bend or crush"));
+        assertTrue(lineOf(demo.out(), "AT-4105").contains("hydrogen darkening"));
+        assertTrue(lineOf(demo.out(), "AT-4106").contains("high-OH fiber"));
+        assertTrue(lineOf(demo.out(), "AT-4106").contains("check C4106-S1"));
+        assertTrue(lineOf(demo.out(), "AT-4108").contains("broken fiber or open connector"));
     }
 
     @Test
     void healthyPointsPassAsPredicted() {
-        for (String tag : new String[] {"FT-4101", "FT-4104", "FT-4107", "SW-4201", "SW-4202"}) {
+        for (String tag : new String[] {"AT-4101", "AT-4104", "AT-4107", "SW-4201", "SW-4202"}) {
             String line = lineOf(demo.out(), tag);
             assertTrue(line.contains("✔ PASS") && line.contains("as predicted"), line);
         }
@@ -67,9 +67,9 @@ class DemoCommandTest {
 
     @Test
     void evaluateJsonCarriesTheDocumentedFields() {
-        CliRun r = CliRun.of("evaluate", workbook.toString(), "--point", "FT-4102", "--json");
+        CliRun r = CliRun.of("evaluate", workbook.toString(), "--point", "AT-4102", "--json");
         assertEquals(0, r.exitCode(), r.err());
-        for (String field : new String[] {"\"point\":\"FT-4102\"", "\"status\":\"FAIL\"", "\"worst_band\"",
+        for (String field : new String[] {"\"point\":\"AT-4102\"", "\"status\":\"FAIL\"", "\"worst_band\"",
             "\"margin_db\"", "\"finding\"", "\"loop_scan_id\"", "\"reference_scan_id\"", "\"bands\"",
             "\"mean_deviation_db\"", "\"findings\"", "\"cause\":\"DIRTY_CONNECTOR\"", "\"check_first\":\"J2\"",
             "\"pairing_rule\"", "\"masked\""}) {
@@ -81,7 +81,7 @@ class DemoCommandTest {
     void evaluateJsonCarriesThePredictionsCoverageIntervalAroundThePrediction() {
         // JCGM 101:2008, 7.7: the interval holds the estimate; its budget names every input with its
         // basis (JCGM 100:2008, 5.1.3).
-        CliRun r = CliRun.of("evaluate", workbook.toString(), "--point", "FT-4101", "--json");
+        CliRun r = CliRun.of("evaluate", workbook.toString(), "--point", "AT-4101", "--json");
         assertEquals(0, r.exitCode(), r.err());
         String band = r.out().substring(r.out().indexOf("\"bands\":[{"));
         double predicted = number(band, "predicted_loss_db");
@@ -109,14 +109,14 @@ class DemoCommandTest {
         assertTrue(r.out().contains("\"slope_db_per_year\""));
         assertTrue(r.out().contains("\"no_light\":[\""), "the broken fiber's dark scans are listed");
         String ranking = r.out().substring(r.out().indexOf("\"ranking\":["), r.out().indexOf(']'));
-        assertTrue(ranking.indexOf("FT-4101") > ranking.indexOf("FT-4108"), ranking);
+        assertTrue(ranking.indexOf("AT-4101") > ranking.indexOf("AT-4108"), ranking);
     }
 
     @Test
     void aTrendRestartedByARepairSaysItsSlopeIsNotYetBounded() {
         // Sen (1968), J. Am. Stat. Assoc. 63, 1379: with two readings there is one pairwise slope and
-        // no order statistic to bound it at 95 %; the demo replaces FT-4101's patch cord late in its history
-        CliRun r = CliRun.of("trend", workbook.toString(), "--point", "FT-4101");
+        // no order statistic to bound it at 95 %; the demo replaces AT-4101's patch cord late in its history
+        CliRun r = CliRun.of("trend", workbook.toString(), "--point", "AT-4101");
         assertEquals(0, r.exitCode(), r.err());
         assertFalse(r.out().contains("Infinity"), r.out());
         assertTrue(r.out().contains("too few scans"), r.out());
@@ -125,10 +125,10 @@ class DemoCommandTest {
     @Test
     void importingTheSameScanFileTwiceIsRefused() throws Exception {
         Path file;
-        try (var files = Files.list(dir.resolve("demo").resolve("scans").resolve("FT-4101"))) {
+        try (var files = Files.list(dir.resolve("demo").resolve("scans").resolve("AT-4101"))) {
             file = files.filter(f -> f.toString().endsWith("loop.jdx")).findFirst().orElseThrow();
         }
-        CliRun r = CliRun.of("import-scans", workbook.toString(), "--point", "FT-4101", "--kind", "loop", file.toString());
+        CliRun r = CliRun.of("import-scans", workbook.toString(), "--point", "AT-4101", "--kind", "loop", file.toString());
         assertEquals(1, r.exitCode());
         // refusals go to standard error (Strandbook command-line rule)
         assertTrue(r.err().contains("already stored as scan"), r.err());
@@ -138,7 +138,7 @@ class DemoCommandTest {
     void aBadScanFileIsRejectedWithFileAndLine() throws Exception {
         Path bad = dir.resolve("bad.csv");
         Files.writeString(bad, "Wavelength (nm);Counts\n1000;12\n1002;abc\n");
-        CliRun r = CliRun.of("import-scans", workbook.toString(), "--point", "FT-4101", "--kind", "dark", bad.toString());
+        CliRun r = CliRun.of("import-scans", workbook.toString(), "--point", "AT-4101", "--kind", "dark", bad.toString());
         assertEquals(1, r.exitCode());
         assertTrue(r.err().contains("bad.csv:3:"), r.err());
         assertFalse(r.err().contains("Exception"), r.err());
@@ -146,7 +146,7 @@ class DemoCommandTest {
 
     @Test
     void unknownKindIsWrongUsage() {
-        CliRun r = CliRun.of("import-scans", workbook.toString(), "--point", "FT-4101", "--kind", "lamp", "x.jdx");
+        CliRun r = CliRun.of("import-scans", workbook.toString(), "--point", "AT-4101", "--kind", "lamp", "x.jdx");
         assertEquals(2, r.exitCode());
         assertTrue(r.err().contains("use loop, reference or dark"), r.err());
     }
@@ -162,7 +162,7 @@ class DemoCommandTest {
     void evaluateJsonSaysWhenAnAmountIsOnlyALowerBound() {
         // the demo's high-OH cord holds over 1 ppm·km of OH: ≥ 60 dB at 1383 nm (62.7 dB/km/ppm, Humbach et
         // al., J. Non-Cryst. Solids 203, 19 (1996)), beyond any lamp, so the band is dark and the amount a bound
-        CliRun r = CliRun.of("evaluate", workbook.toString(), "--point", "FT-4106", "--json");
+        CliRun r = CliRun.of("evaluate", workbook.toString(), "--point", "AT-4106", "--json");
         assertEquals(0, r.exitCode(), r.err());
         assertTrue(r.out().contains("\"cause\":\"HIGH_OH_FIBER\""), r.out());
         assertTrue(r.out().contains("\"amount_at_least\":true"), r.out());

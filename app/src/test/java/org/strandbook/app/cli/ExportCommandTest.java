@@ -27,7 +27,7 @@ import org.strandbook.samplesite.ScanGenerator;
  */
 class ExportCommandTest {
 
-    static final List<String> POINTS = List.of("FT-4101", "FT-4102");
+    static final List<String> POINTS = List.of("AT-4101", "AT-4102");
 
     @TempDir
     static Path shared;
@@ -53,10 +53,10 @@ class ExportCommandTest {
             assertEquals(12, wb.getNumberOfSheets());
             assertEquals(POINTS, column(wb.getSheet("Point register"), 0));
             assertEquals("FINAL", wb.getProperties().getCoreProperties().getContentStatus());
-            // the generator dirties FT-4102's junction-box joint J2 by 1.5 to 3 dB, over the 1 dB tolerance
-            assertTrue(rowsOf(wb.getSheet("Acceptance"), "FT-4102").stream().allMatch(r -> r.contains("✖ FAIL")),
-                    rowsOf(wb.getSheet("Acceptance"), "FT-4102").toString());
-            assertTrue(rowsOf(wb.getSheet("Findings and actions"), "FT-4102").get(0).contains("\tJ2\t"),
+            // the generator dirties AT-4102's junction-box joint J2 by 1.5 to 3 dB, over the 1 dB tolerance
+            assertTrue(rowsOf(wb.getSheet("Acceptance"), "AT-4102").stream().allMatch(r -> r.contains("✖ FAIL")),
+                    rowsOf(wb.getSheet("Acceptance"), "AT-4102").toString());
+            assertTrue(rowsOf(wb.getSheet("Findings and actions"), "AT-4102").get(0).contains("\tJ2\t"),
                     "the first finding sends the crew to J2");
         }
     }
@@ -65,11 +65,11 @@ class ExportCommandTest {
     void pointsAndDatesNarrowTheScope() throws IOException {
         Path out = dir.resolve("dossier.xlsx");
         String firstVisit = ScanGenerator.COMMISSIONING.toString().substring(0, 10);
-        CliRun run = CliRun.of("export", site.toString(), "-o", out.toString(), "--points", "FT-4102",
+        CliRun run = CliRun.of("export", site.toString(), "-o", out.toString(), "--points", "AT-4102",
                 "--to", firstVisit);
         assertEquals(0, run.exitCode(), run.err());
         try (XSSFWorkbook wb = open(out)) {
-            assertEquals(List.of("FT-4102"), column(wb.getSheet("Point register"), 0));
+            assertEquals(List.of("AT-4102"), column(wb.getSheet("Point register"), 0));
             assertEquals(2, column(wb.getSheet("Trend history"), 0).size(), "one reading for each of its two bands");
             assertTrue(cover(wb).contains("scans taken up to " + firstVisit), cover(wb));
         }
@@ -107,7 +107,7 @@ class ExportCommandTest {
     @Test
     void anUnknownPointIsRejectedByNameAndNothingIsWritten() {
         Path out = dir.resolve("dossier.xlsx");
-        CliRun run = CliRun.of("export", site.toString(), "-o", out.toString(), "--points", "FT-4101,XX-9");
+        CliRun run = CliRun.of("export", site.toString(), "-o", out.toString(), "--points", "AT-4101,XX-9");
         assertEquals(1, run.exitCode());
         assertEquals("strandbook: no point tagged 'XX-9' in this workbook\n", run.err());
         assertTrue(Files.notExists(out));

@@ -26,8 +26,8 @@ import org.strandbook.store.Workbook;
  */
 class HandoverCommandsTest {
 
-    private static final String HEALTHY = "FT-4101";
-    private static final String HAZARDOUS = "FT-4103";
+    private static final String HEALTHY = "AT-4101";
+    private static final String HAZARDOUS = "AT-4103";
 
     @TempDir
     Path dir;
@@ -66,7 +66,7 @@ class HandoverCommandsTest {
     void anInspectionOfAnUnknownJointIsRejectedInOneLine() {
         CliRun r = run("inspect", site, "--point", HEALTHY, "--joint", "J9", "--grade", "clean", "--by", "k.ashdown");
         assertEquals(1, r.exitCode());
-        assertEquals("strandbook: point FT-4101 has no joint 'J9' on its path\n", r.err());
+        assertEquals("strandbook: point AT-4101 has no joint 'J9' on its path\n", r.err());
     }
 
     @Test
@@ -118,7 +118,7 @@ class HandoverCommandsTest {
         CliRun after = run("audit", "verify", site);
         assertEquals(0, after.exitCode(), after.err());
         assertTrue(after.out().contains("signature CHECKED by M. Okonedo (commissioning lead)"), after.out());
-        assertTrue(after.out().contains("superseded, point FT-4101 changed after it was signed"), after.out());
+        assertTrue(after.out().contains("superseded, point AT-4101 changed after it was signed"), after.out());
     }
 
     @Test
@@ -147,11 +147,11 @@ class HandoverCommandsTest {
 
     @Test
     void anEvaluationThatSendsSomeoneToAHazardousPointCautionsOnce() {
-        // the demo's FT-4103 has a crushed trunk (ScanGenerator) and lies in a classified area
+        // the demo's AT-4103 has a crushed trunk (ScanGenerator) and lies in a classified area
         CliRun r = run("evaluate", site, "--json");
         assertEquals(0, r.exitCode(), r.err());
         assertEquals(1, r.err().split("CAUTION:", -1).length - 1, r.err());
-        assertTrue(r.err().contains("FT-4103 lies in a classified hazardous area"), r.err());
+        assertTrue(r.err().contains("AT-4103 lies in a classified hazardous area"), r.err());
         assertTrue(r.out().startsWith("{"), "the JSON on standard output stays clean");
         CliRun healthy = run("evaluate", site, "--point", HEALTHY);
         assertFalse(healthy.err().contains("CAUTION"), healthy.err());

@@ -37,7 +37,7 @@ import org.testfx.util.WaitForAsyncUtils;
 @ExtendWith(SampleSite.Resolver.class)
 class HistoryPanelFxTest {
 
-    private static final String POINT = "FT-4102";
+    private static final String POINT = "AT-4102";
     private static SampleSite sample;
     private static HeadlessWindow shown;
     private static WorkbookViewModel vm;

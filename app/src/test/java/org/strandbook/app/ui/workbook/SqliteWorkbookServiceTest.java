@@ -89,15 +89,15 @@ class SqliteWorkbookServiceTest {
 
     @Test
     void savedLegsAreReadBackAndAuditedUnderTheUser() {
-        List<PathLeg> legs = loaded.legs().get("FT-4102");
+        List<PathLeg> legs = loaded.legs().get("AT-4102");
         List<PathLeg> longer = legs.stream().map(l -> new PathLeg(l.pointTag(), l.direction(), l.elements().stream()
                 .map(e -> e instanceof CableSegment s && s.label().equals("C4102-S2")
                         ? (PathElement) new CableSegment(s.label(), s.fiberTypeCode(), 186.5, s.bends()) : e).toList())).toList();
         long auditBefore = lastAuditId();
 
-        service.saveLegs("FT-4102", longer);
+        service.saveLegs("AT-4102", longer);
 
-        assertEquals(longer, service.reload(QUIET).legs().get("FT-4102"));
+        assertEquals(longer, service.reload(QUIET).legs().get("AT-4102"));
         List<AuditEntry> written = auditAfter(auditBefore);
         assertFalse(written.isEmpty());
         assertTrue(written.stream().allMatch(e -> e.user().equals(USER)), written.toString());
@@ -107,7 +107,7 @@ class SqliteWorkbookServiceTest {
 
     @Test
     void savedPointAndCatalogEntryAreReadBack() {
-        MeasurementPoint p = loaded.points().stream().filter(x -> x.tag().equals("FT-4101")).findFirst().orElseThrow();
+        MeasurementPoint p = loaded.points().stream().filter(x -> x.tag().equals("AT-4101")).findFirst().orElseThrow();
         MeasurementPoint tighter = new MeasurementPoint(p.tag(), p.service(), p.location(), p.analyzerTag(), p.channel(),
                 p.probeTypeCode(), p.bands(), OptionalDouble.of(0.5), p.hazardousArea(), p.hydrogenService(),
                 p.processTemperatureC());
@@ -157,8 +157,8 @@ class SqliteWorkbookServiceTest {
 
     @Test
     void evaluationFindsTheSampleSitesDirtyJoint() {
-        // the sample plant's FT-4102 has joint J2 graded dirty and a flat excess injected there
-        PointEvaluation e = service.evaluatePoint("FT-4102");
+        // the sample plant's AT-4102 has joint J2 graded dirty and a flat excess injected there
+        PointEvaluation e = service.evaluatePoint("AT-4102");
 
         assertEquals(Status.FAIL, e.status());
         assertTrue(e.finding().contains("J2"), e.finding());
@@ -168,13 +168,13 @@ class SqliteWorkbookServiceTest {
     void siteEvaluationStopsWhenToldTo() {
         List<Integer> told = new ArrayList<>();
 
-        List<PointStatus> done = service.evaluatePoints(List.of("FT-4101", "FT-4102", "FT-4103"), n -> {
+        List<PointStatus> done = service.evaluatePoints(List.of("AT-4101", "AT-4102", "AT-4103"), n -> {
             told.add(n);
             return n < 2;
         });
 
         assertEquals(List.of(1, 2), told);
-        assertEquals(List.of("FT-4101", "FT-4102"), done.stream().map(PointStatus::pointTag).toList());
+        assertEquals(List.of("AT-4101", "AT-4102"), done.stream().map(PointStatus::pointTag).toList());
         assertEquals(Optional.of(Status.PASS), done.get(0).status());
     }
 

@@ -80,7 +80,7 @@ class WorkbookViewModelTest {
     void openingShowsEveryPointAndTheFirstPointsLegs() {
         assertTrue(vm.openProperty().get());
         assertEquals(10, vm.points().rowCount());
-        assertEquals("FT-4101", vm.selectedTagProperty().get());
+        assertEquals("AT-4101", vm.selectedTagProperty().get());
         assertEquals(6, vm.point().segments().rowCount());
         assertEquals(6, vm.point().joints().rowCount());
         assertTrue(vm.titleProperty().get().endsWith(file.getFileName().toString()), vm.titleProperty().get());
@@ -107,31 +107,31 @@ class WorkbookViewModelTest {
 
     @Test
     void segmentLengthEditMovesThePredictionAtOnceAndIsSaved() {
-        vm.selectPoint("FT-4102");
+        vm.selectPoint("AT-4102");
         SheetModel<org.strandbook.app.ui.path.LegSegment> segments = vm.point().segments();
         int row = 1;
         CableSegment trunk = segments.records().get(row).segment();
         double centreNm = vm.point().point().orElseThrow().bands().get(0).centreNm();
         double segmentBefore = Double.parseDouble(segments.text(new CellAddress(row, segments.columnIndex(SegmentSheet.LOSS))));
-        double loopBefore = predictionOf("FT-4102").lossDbAt(centreNm);
+        double loopBefore = predictionOf("AT-4102").lossDbAt(centreNm);
         String summaryBefore = vm.point().summaryProperty().get();
 
         segments.edit(new CellAddress(row, segments.columnIndex("length")), String.format(Locale.ROOT, "%.1f", 3 * trunk.lengthM()));
 
         // loss is proportional to length, and losses in dB add: tripling the trunk adds twice its loss
-        double loopAfter = predictionOf("FT-4102").lossDbAt(centreNm);
+        double loopAfter = predictionOf("AT-4102").lossDbAt(centreNm);
         assertEquals(2 * segmentBefore, loopAfter - loopBefore, 0.0015);
         assertFalse(summaryBefore.equals(vm.point().summaryProperty().get()));
         try (Workbook wb = Workbook.open(file, "reader")) {
-            PathLeg send = wb.paths().legs("FT-4102").get(0);
+            PathLeg send = wb.paths().legs("AT-4102").get(0);
             assertEquals(3 * trunk.lengthM(), send.segments().get(1).lengthM(), 3 * trunk.lengthM() * RELATIVE_TOLERANCE);
         }
     }
 
     @Test
     void pointsSheetPredictedLossFollowsASegmentEdit() {
-        vm.selectPoint("FT-4102");
-        int row = vm.points().records().stream().map(MeasurementPoint::tag).toList().indexOf("FT-4102");
+        vm.selectPoint("AT-4102");
+        int row = vm.points().records().stream().map(MeasurementPoint::tag).toList().indexOf("AT-4102");
         CellAddress predicted = new CellAddress(row, vm.points().columnIndex(PointSheet.PREDICTED));
         String before = vm.points().text(predicted);
 
@@ -142,17 +142,17 @@ class WorkbookViewModelTest {
 
     @Test
     void connectorCatalogEditRaisesEveryJointThatUsesIt() {
-        vm.selectPoint("FT-4101");
+        vm.selectPoint("AT-4101");
         double centreNm = vm.point().point().orElseThrow().bands().get(0).centreNm();
-        double before = predictionOf("FT-4101").lossDbAt(centreNm);
+        double before = predictionOf("AT-4101").lossDbAt(centreNm);
         int row = vm.connectors().records().stream().map(ConnectorType::code).toList().indexOf("SMA-A");
         double typical = vm.connectors().records().get(row).typicalLossDb();
 
         vm.connectors().edit(new CellAddress(row, vm.connectors().columnIndex("typical")),
                 String.format(Locale.ROOT, "%.2f", typical + 1));
 
-        // FT-4101's six joints use the typical loss of their SMA-A pair; losses in dB add
-        assertEquals(6.0, predictionOf("FT-4101").lossDbAt(centreNm) - before, 1e-9);
+        // AT-4101's six joints use the typical loss of their SMA-A pair; losses in dB add
+        assertEquals(6.0, predictionOf("AT-4101").lossDbAt(centreNm) - before, 1e-9);
     }
 
     @Test
@@ -178,15 +178,15 @@ class WorkbookViewModelTest {
             measured.add(vm.points().records().get(r).tag() + " "
                     + vm.points().text(new CellAddress(r, vm.points().columnIndex(PointSheet.MEASURED))));
         }
-        // the sample plant injects faults at FT-4102 (dirty joint) and leaves FT-4101 as built
-        assertTrue(measured.contains("FT-4102 \u2716 FAIL"), measured.toString());
-        assertTrue(measured.contains("FT-4101 \u2714 PASS"), measured.toString());
+        // the sample plant injects faults at AT-4102 (dirty joint) and leaves AT-4101 as built
+        assertTrue(measured.contains("AT-4102 \u2716 FAIL"), measured.toString());
+        assertTrue(measured.contains("AT-4101 \u2714 PASS"), measured.toString());
         assertTrue(vm.noticeProperty().get().startsWith("Site evaluated: 10 points"), vm.noticeProperty().get());
     }
 
     @Test
     void selectingAPointBringsItsScansAndItsThreePlots() {
-        vm.selectPoint("FT-4106");
+        vm.selectPoint("AT-4106");
 
         assertEquals(27, vm.point().scans().rowCount());
         assertFalse(vm.point().budgetPlot().linesProperty().get().isEmpty());
@@ -197,7 +197,7 @@ class WorkbookViewModelTest {
 
     @Test
     void hazardousPointAsksForTheSafetyCautionOncePerSession() {
-        vm.selectPoint("FT-4103");
+        vm.selectPoint("AT-4103");
         assertTrue(vm.cautionBeforeRecording().isPresent());
 
         vm.caution().acknowledge();

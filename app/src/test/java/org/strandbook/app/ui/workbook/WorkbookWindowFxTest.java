@@ -65,13 +65,13 @@ class WorkbookWindowFxTest {
         window = shown.window();
     }
 
-    /** Each test works on its own copy of the sample workbook, with FT-4102's segments in front. */
+    /** Each test works on its own copy of the sample workbook, with AT-4102's segments in front. */
     @BeforeEach
     void openCopy() {
         Path copy = sample.workbookCopy(dir);
         robot.interact(() -> {
             vm.open(copy);
-            vm.selectPoint("FT-4102");
+            vm.selectPoint("AT-4102");
             window.tabs().getSelectionModel().select(SEGMENTS_TAB);
         });
         segments = vm.point().segments();
@@ -136,7 +136,7 @@ class WorkbookWindowFxTest {
     }
 
     private String pointsCell(String columnKey) {
-        int row = vm.points().records().stream().map(p -> p.tag()).toList().indexOf("FT-4102");
+        int row = vm.points().records().stream().map(p -> p.tag()).toList().indexOf("AT-4102");
         return vm.points().text(new CellAddress(row, vm.points().columnIndex(columnKey)));
     }
 
