@@ -6,7 +6,12 @@ import java.nio.charset.StandardCharsets;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
+import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 
 /**
  * Brings a workbook to the current schema, one version per transaction, keeping the version in
@@ -21,6 +26,9 @@ import java.util.List;
  * migration for the audit baseline, which here is one call.
  */
 final class SchemaMigrator {
+
+    private static final Pattern CREATE_TABLE = Pattern.compile(
+            "CREATE\\s+TABLE\\s+(?:IF\\s+NOT\\s+EXISTS\\s+)?([A-Za-z_][A-Za-z0-9_]*)", Pattern.CASE_INSENSITIVE);
 
     /** Schema version this Strandbook writes. */
     static final int LATEST = 5;
@@ -115,10 +123,34 @@ final class SchemaMigrator {
 
     private static void checkIdentity(Session session) {
         session.read(() -> {
-            WorkbookFile.checkIdentity(session.file(), pragma(session, "application_id"),
-                    pragma(session, "user_version"));
+            int recorded = pragma(session, "user_version");
+            WorkbookFile.checkIdentity(session.file(), pragma(session, "application_id"), recorded);
+            checkTablesPresent(session, recorded);
             return null;
         });
+    }
+
+    /**
+     * A file whose header says "workbook of schema n" but that lacks tables the steps up to n create
+     * (tables dropped or emptied by another program, a header copied onto another file) would
+     * otherwise fail later with SQLite's bare "no such table" in the middle of a command.
+     */
+    private static void checkTablesPresent(Session session, int recorded) throws SQLException {
+        List<String> missing = new ArrayList<>();
+        for (Step step : STEPS) {
+            if (step.version() > recorded) {
+                break;
+            }
+            for (String table : CreatedTables.BY_STEP.get(step.version())) {
+                if (!tableExists(session, table)) {
+                    missing.add(table);
+                }
+            }
+        }
+        if (!missing.isEmpty()) {
+            throw new DamagedWorkbookException(session.file(), "it records schema " + recorded + " but lacks the"
+                    + " tables " + String.join(", ", missing) + " of that schema; changed by another program?", null);
+        }
     }
 
     /**
@@ -166,6 +198,24 @@ final class SchemaMigrator {
             return new String(in.readAllBytes(), StandardCharsets.UTF_8);
         } catch (IOException e) {
             throw new IllegalStateException("cannot read schema script " + name, e);
+        }
+    }
+
+    /** The tables each step's script creates, read once from the scripts themselves. */
+    private static final class CreatedTables {
+        static final Map<Integer, List<String>> BY_STEP = byStep();
+
+        private static Map<Integer, List<String>> byStep() {
+            Map<Integer, List<String>> byStep = new HashMap<>();
+            for (Step step : STEPS) {
+                List<String> tables = new ArrayList<>();
+                Matcher created = CREATE_TABLE.matcher(script(step.script()));
+                while (created.find()) {
+                    tables.add(created.group(1));
+                }
+                byStep.put(step.version(), List.copyOf(tables));
+            }
+            return Map.copyOf(byStep);
         }
     }
 }

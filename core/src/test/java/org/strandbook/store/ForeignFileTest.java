@@ -122,6 +122,22 @@ class ForeignFileTest {
     }
 
     @Test
+    void aWorkbookMissingTablesOfItsRecordedSchemaIsRefusedBeforeAnyCommandRuns() throws Exception {
+        // a file that says "Strandbook workbook, schema n" but lacks a table its schema creates (dropped by
+        // another program) is refused when it is opened, in our words, not later with SQLite's bare "no such
+        // table" in the middle of a command (design choice)
+        Path file = dir.resolve("hollow.sqlite");
+        Workbook.create(file, DemoSite.site(), DemoSite.USER).close();
+        sql(file, "DROP TABLE scan_spectrum;");
+        byte[] before = Files.readAllBytes(file);
+        DamagedWorkbookException e = assertThrows(DamagedWorkbookException.class,
+                () -> Workbook.open(file, DemoSite.USER));
+        assertTrue(e.getMessage().contains("lacks the tables scan_spectrum of that schema"), e.getMessage());
+        assertFalse(e.getMessage().contains("SQLITE_"), e.getMessage());
+        assertArrayEquals(before, Files.readAllBytes(file));
+    }
+
+    @Test
     void aWorkbookCutShortIsReportedDamaged() throws Exception {
         Path whole = dir.resolve("whole.sqlite");
         try (Workbook wb = Workbook.create(whole, DemoSite.site(), DemoSite.USER)) {
