@@ -105,9 +105,9 @@ public final class DemoPlant {
                 List.of(ch3, ch2), true, false, 140), 150, 150, "LOH-400", Fault.NONE);
         add(point("AT-4108", "Dryer D-470 product", "D-470 discharge chute", "AZ-41", 8, "PT-DR",
                 List.of(ch3, oh1), false, false, 60), 80, 80, "LOH-600", Fault.BROKEN_FIBER);
-        add(point("SW-4201", "Solvent recovery tank T-480", "T-480 pipe rack, far end", "AZ-42", 1, "PT-TX5",
+        add(point("AT-4201", "Solvent recovery tank T-480", "T-480 pipe rack, far end", "AZ-42", 1, "PT-TX5",
                 List.of(sw), true, false, 30), 300, 300, "LOH-200", Fault.NONE);
-        add(point("SW-4202", "Crystalliser K-490 slurry", "K-490 side wall", "AZ-42", 2, "PT-DR",
+        add(point("AT-4202", "Crystalliser K-490 slurry", "K-490 side wall", "AZ-42", 2, "PT-DR",
                 List.of(sw), false, false, 20), 70, 70, "LOH-600", Fault.NONE);
     }
 

@@ -147,15 +147,15 @@ class IndependentRecoveryTest {
 
     private static DemoPlant.DemoPoint host(DemoPlant plant, Case c, int seed) {
         String tag = switch (c) {
-            case HEALTHY -> List.of("AT-4101", "AT-4104", "AT-4107", "SW-4201").get(seed % 4);
+            case HEALTHY -> List.of("AT-4101", "AT-4104", "AT-4107", "AT-4201").get(seed % 4);
             case DIRTY_CONNECTOR, DIRTY_PLUS_HYDROGEN, LONG_INTEGRATION_DIRTY -> "AT-4102";
             case TIGHT_BEND -> "AT-4103";
             case HIGH_OH_CORD -> "AT-4106";
             case HYDROGEN -> "AT-4105";
-            case DARKENING -> "SW-4201";
+            case DARKENING -> "AT-4201";
             case BROKEN_FIBER -> "AT-4108";
             case AIR_GAP_FRINGES -> List.of("AT-4101", "AT-4107").get(seed % 2);
-            case LAMP_DRIFT -> "SW-4202";
+            case LAMP_DRIFT -> "AT-4202";
             case WAVELENGTH_OFFSET -> List.of("AT-4104", "AT-4107").get(seed % 2);
             case LONG_INTEGRATION -> "AT-4107";
             case SATURATED_REFERENCE -> "AT-4101";

@@ -59,7 +59,7 @@ class DemoCommandTest {
 
     @Test
     void healthyPointsPassAsPredicted() {
-        for (String tag : new String[] {"AT-4101", "AT-4104", "AT-4107", "SW-4201", "SW-4202"}) {
+        for (String tag : new String[] {"AT-4101", "AT-4104", "AT-4107", "AT-4201", "AT-4202"}) {
             String line = lineOf(demo.out(), tag);
             assertTrue(line.contains("✔ PASS") && line.contains("as predicted"), line);
         }

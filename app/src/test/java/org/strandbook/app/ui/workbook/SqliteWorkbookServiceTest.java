@@ -180,14 +180,14 @@ class SqliteWorkbookServiceTest {
 
     @Test
     void importedScanFileIsListedUnderItsPoint() {
-        Path scan = sample.newLoopScan("SW-4202", dir, 5);
-        int before = service.scans("SW-4202").size();
+        Path scan = sample.newLoopScan("AT-4202", dir, 5);
+        int before = service.scans("AT-4202").size();
 
-        ScanFileImporter.Summary summary = service.importScans(new ScanFileImporter.Request("SW-4202", ScanKind.LOOP,
+        ScanFileImporter.Summary summary = service.importScans(new ScanFileImporter.Request("AT-4202", ScanKind.LOOP,
                 List.of(scan), Optional.empty(), USER), ScanFileImporter.Progress.NONE);
 
         assertEquals(1, summary.accepted().size(), summary.rejected().toString());
-        assertEquals(before + 1, service.scans("SW-4202").size());
+        assertEquals(before + 1, service.scans("AT-4202").size());
     }
 
     @Test

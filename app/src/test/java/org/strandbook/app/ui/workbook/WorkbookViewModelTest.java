@@ -208,10 +208,10 @@ class WorkbookViewModelTest {
 
     @Test
     void recordingReportsEachFileAndRefusesABadOneWithItsReason() throws Exception {
-        vm.selectPoint("SW-4202");
+        vm.selectPoint("AT-4202");
         int before = vm.point().scans().rowCount();
-        Path good = sample.newLoopScan("SW-4202", dir, 7);
-        Path bad = dir.resolve("SW-4202_torn.csv");
+        Path good = sample.newLoopScan("AT-4202", dir, 7);
+        Path bad = dir.resolve("AT-4202_torn.csv");
         Files.writeString(bad, "Wavelength (nm);Counts\n600;12\n600,5;oops\n", StandardCharsets.UTF_8);
         ScanImportViewModel importer = vm.recordMeasurement().orElseThrow();
         List<Double> progress = new ArrayList<>();
@@ -222,16 +222,16 @@ class WorkbookViewModelTest {
 
         assertEquals(1.0, importer.progressProperty().get());
         assertTrue(progress.containsAll(List.of(0.5, 1.0)), progress.toString());
-        assertEquals("Stored 1 of 2 files for SW-4202, 1 refused", importer.messageProperty().get());
-        assertTrue(importer.refusedProperty().get().get(0).startsWith("SW-4202_torn.csv:3"), importer.refusedProperty().get().toString());
+        assertEquals("Stored 1 of 2 files for AT-4202, 1 refused", importer.messageProperty().get());
+        assertTrue(importer.refusedProperty().get().get(0).startsWith("AT-4202_torn.csv:3"), importer.refusedProperty().get().toString());
         assertEquals(before + 1, vm.point().scans().rowCount());
     }
 
     @Test
     void recordingListsWhatAStoredFileHadTolerated() throws Exception {
         // MS-DOS text files may end with SUB (0x1A) (common practice): stored, and the dialog says it was ignored
-        vm.selectPoint("SW-4202");
-        Path good = sample.newLoopScan("SW-4202", dir, 11);
+        vm.selectPoint("AT-4202");
+        Path good = sample.newLoopScan("AT-4202", dir, 11);
         byte[] bytes = Files.readAllBytes(good);
         byte[] withEndOfFile = java.util.Arrays.copyOf(bytes, bytes.length + 1);
         withEndOfFile[bytes.length] = 0x1A;
@@ -249,10 +249,10 @@ class WorkbookViewModelTest {
 
     @Test
     void cancelStopsTheImportBeforeTheNextFileAndKeepsWhatWasStored() {
-        vm.selectPoint("SW-4202");
+        vm.selectPoint("AT-4202");
         ScanImportViewModel importer = vm.recordMeasurement().orElseThrow();
-        importer.addFiles(List.of(sample.newLoopScan("SW-4202", dir, 8), sample.newLoopScan("SW-4202", dir, 9),
-                sample.newLoopScan("SW-4202", dir, 10)));
+        importer.addFiles(List.of(sample.newLoopScan("AT-4202", dir, 8), sample.newLoopScan("AT-4202", dir, 9),
+                sample.newLoopScan("AT-4202", dir, 10)));
         vm.tasks().progressProperty().addListener((o, was, is) -> {
             if (is.doubleValue() > 0.3 && importer.runningProperty().get()) {
                 importer.cancel();

@@ -213,8 +213,8 @@ class WorkbookWindowFxTest {
 
     @Test
     void scanImportedThroughTheDialogFillsTheProgressBar() throws Exception {
-        Path scan = sample.newLoopScan("SW-4202", dir, 11);
-        robot.interact(() -> vm.selectPoint("SW-4202"));
+        Path scan = sample.newLoopScan("AT-4202", dir, 11);
+        robot.interact(() -> vm.selectPoint("AT-4202"));
         int before = vm.point().scans().rowCount();
         ScanImportViewModel importer = WaitForAsyncUtils.asyncFx(() -> window.recordMeasurement().orElseThrow()).get();
         robot.interact(() -> importer.addFiles(List.of(scan)));
@@ -223,7 +223,7 @@ class WorkbookWindowFxTest {
         WaitForAsyncUtils.waitForFxEvents();
 
         assertEquals(1.0, robot.lookup("#scan-import-progress").queryAs(ProgressBar.class).getProgress());
-        assertEquals("Stored 1 of 1 file for SW-4202", robot.lookup("#scan-import-message").queryAs(Label.class).getText());
+        assertEquals("Stored 1 of 1 file for AT-4202", robot.lookup("#scan-import-message").queryAs(Label.class).getText());
         assertEquals(before + 1, vm.point().scans().rowCount());
     }
 
