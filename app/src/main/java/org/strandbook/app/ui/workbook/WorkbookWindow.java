@@ -545,6 +545,11 @@ public final class WorkbookWindow {
                 attention.refresh();
             }
         });
+        attention.changesProperty().addListener((o, was, is) -> {
+            if (t.isSelected() && vm.openProperty().get()) {
+                attention.refresh();
+            }
+        });
         return t;
     }
 
