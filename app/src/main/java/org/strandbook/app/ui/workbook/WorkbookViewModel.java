@@ -166,12 +166,12 @@ public final class WorkbookViewModel {
         return probes;
     }
 
-    /** The selected point's sheets and plots. */
     /** The site's attention view: what needs a crew, most urgent first. */
     public AttentionViewModel attention() {
         return attention;
     }
 
+    /** The selected point's sheets and plots. */
     public PointViewModel point() {
         return point;
     }

@@ -166,6 +166,18 @@ public final class WorkbookWindow {
         return jointsView;
     }
 
+    public SheetView<FiberType> fibersView() {
+        return fibersView;
+    }
+
+    public SheetView<ConnectorType> connectorsView() {
+        return connectorsView;
+    }
+
+    public SheetView<ProbeType> probesView() {
+        return probesView;
+    }
+
     public SpectrumPlotView budgetPlot() {
         return budgetPlot;
     }
