@@ -120,6 +120,24 @@ public final class LocalPostgres implements AutoCloseable {
         return url(name);
     }
 
+    /**
+     * A plant server on a new database, migrated by its administrator (the superuser), with
+     * technician login roles (no password: the test server trusts loopback) that may work on it.
+     */
+    public String newPlantServer(String... technicians) {
+        String url = newDatabase();
+        new PlantServer(new ServerLogin(url, SUPERUSER, null)).migrate();
+        try (Connection c = superuser(url); Statement st = c.createStatement()) {
+            for (String tech : technicians) {
+                st.execute("DO $$ BEGIN IF NOT EXISTS (SELECT 1 FROM pg_roles WHERE rolname = '" + tech + "') THEN"
+                        + " CREATE ROLE " + tech + " LOGIN IN ROLE strandbook_technician; END IF; END $$");
+            }
+        } catch (SQLException e) {
+            throw new IllegalStateException("cannot add technicians: " + e.getMessage(), e);
+        }
+        return url;
+    }
+
     /** A connection as the superuser. */
     public Connection superuser(String url) throws SQLException {
         return DriverManager.getConnection(url, SUPERUSER, "");
