@@ -36,6 +36,8 @@ import picocli.CommandLine.Command;
             SignCommand.class,
             AuditCommand.class,
             ExportCommand.class,
+            SyncCommand.class,
+            CloneCommand.class,
             BenchCommand.class,
         })
 public final class StrandbookCommand implements Runnable {
