@@ -43,6 +43,7 @@ public final class LocalPostgres implements AutoCloseable {
     private final Path dataDir;
     private final int port;
     private final boolean asPostgresAccount;
+    private String plantTemplate;
 
     private LocalPostgres(Path bin, Path dataDir, int port, boolean asPostgresAccount) {
         this.bin = bin;
@@ -125,8 +126,23 @@ public final class LocalPostgres implements AutoCloseable {
      * technician login roles (no password: the test server trusts loopback) that may work on it.
      */
     public String newPlantServer(String... technicians) {
-        String url = newDatabase();
-        new PlantServer(new ServerLogin(url, SUPERUSER, null)).migrate();
+        String url;
+        synchronized (this) {
+            if (plantTemplate == null) {
+                // Flyway runs once per server; each test's database is a copy of the migrated one
+                String template = newDatabase();
+                new PlantServer(new ServerLogin(template, SUPERUSER, null)).migrate();
+                plantTemplate = template.substring(template.lastIndexOf('/') + 1);
+            }
+            String name = "sb" + ProcessHandle.current().pid() + "_" + DATABASES.incrementAndGet();
+            try (Connection c = DriverManager.getConnection(url("postgres"), SUPERUSER, "");
+                 Statement st = c.createStatement()) {
+                st.execute("CREATE DATABASE " + name + " TEMPLATE " + plantTemplate);
+            } catch (SQLException e) {
+                throw new IllegalStateException("cannot create a test database: " + e.getMessage(), e);
+            }
+            url = url(name);
+        }
         try (Connection c = superuser(url); Statement st = c.createStatement()) {
             for (String tech : technicians) {
                 st.execute("DO $$ BEGIN IF NOT EXISTS (SELECT 1 FROM pg_roles WHERE rolname = '" + tech + "') THEN"

@@ -66,6 +66,15 @@ class ServerSchemaTest {
     }
 
     @Test
+    void theSchemaVersionTheProgramKnowsIsItsNewestScript() throws SQLException {
+        try (Connection c = as(LocalPostgres.SUPERUSER); Statement st = c.createStatement();
+             ResultSet rs = st.executeQuery("SELECT max(version::int) FROM flyway_schema_history")) {
+            rs.next();
+            assertEquals(PlantServer.SCHEMA_VERSION, rs.getInt(1));
+        }
+    }
+
+    @Test
     void everyRecordAddedLeavesAChainedAuditRow() throws SQLException {
         try (Connection a = as("schema_tech_a"); Statement st = a.createStatement();
              ResultSet rs = st.executeQuery("SELECT table_name, db_user, prev_hash, hash,"
