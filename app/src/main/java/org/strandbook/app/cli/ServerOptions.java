@@ -14,7 +14,8 @@ import picocli.CommandLine.Option;
  */
 public final class ServerOptions {
 
-    @Option(names = "--server", required = true, paramLabel = "URL",
+    // checked in connect(), not by picocli: `fleet export` takes it before or after the word export
+    @Option(names = "--server", paramLabel = "URL",
             description = "The plant server: jdbc:postgresql://HOST:PORT/DATABASE (TLS: add ?sslmode=verify-full).")
     String url;
 
@@ -24,6 +25,16 @@ public final class ServerOptions {
 
     /** The server, its schema brought up to date (a no-op read when it already is). */
     public PlantServer connect() {
+        return connect(null);
+    }
+
+    /** As {@link #connect()}, taking the address and user from {@code outer} where these options lack them. */
+    public PlantServer connect(ServerOptions outer) {
+        String url = this.url != null || outer == null ? this.url : outer.url;
+        String user = this.user != null || outer == null ? this.user : outer.user;
+        if (url == null) {
+            throw new UsageProblem("give the plant server: --server jdbc:postgresql://HOST:PORT/DATABASE");
+        }
         ServerLogin login;
         try {
             login = ServerLogin.resolve(url, user, System.getenv(), Path.of(System.getProperty("user.home")));

@@ -38,6 +38,7 @@ import picocli.CommandLine.Command;
             ExportCommand.class,
             SyncCommand.class,
             CloneCommand.class,
+            FleetCommand.class,
             BenchCommand.class,
         })
 public final class StrandbookCommand implements Runnable {

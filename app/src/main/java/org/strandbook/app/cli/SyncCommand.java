@@ -5,8 +5,11 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 
+import org.strandbook.evaluation.SiteEvaluation;
+import org.strandbook.evaluation.SiteEvaluator;
 import org.strandbook.server.PlantServer;
 import org.strandbook.server.SiteSync;
+import org.strandbook.server.StandingReport;
 import org.strandbook.store.SyncLedger;
 import org.strandbook.store.Workbook;
 
@@ -53,6 +56,10 @@ final class SyncCommand implements Callable<Integer> {
     @Option(names = "--json", description = "Print the outcome and the open conflicts as JSON.")
     boolean json;
 
+    @Option(names = "--no-evaluate", negatable = false,
+            description = "Do not evaluate the site after the sync to report its points' status for `fleet`.")
+    boolean noEvaluate;
+
     @Spec
     CommandSpec spec;
 
@@ -71,13 +78,18 @@ final class SyncCommand implements Callable<Integer> {
                     .orElse(null);
             SiteSync.Outcome o = new SiteSync(server, wb, siteName != null ? siteName : wb.site().get().name(),
                     new ServerProgress(spec.commandLine().getErr())).run();
+            int reported = noEvaluate ? 0 : reportStanding(server, wb, siteName != null ? siteName
+                    : wb.site().get().name());
             if (json) {
-                out.println(json(o));
+                out.println(json(o, reported));
             } else {
                 out.println(String.format(Locale.ROOT, "synced with %s: %d record(s) pushed, %d pulled, %d changed"
                                 + " on the server, %d changed here; server audit head %d",
                         server.login().displayUrl(), o.pushed(), o.pulled(), o.changedThere(), o.changedHere(),
                         o.serverAuditHead()));
+                if (reported > 0) {
+                    out.println("reported the status of " + reported + " point(s) for the fleet view");
+                }
                 for (SyncLedger.Conflict c : o.openConflicts()) {
                     out.println("conflict " + c.id() + ": " + describe(c) + ": mine " + c.mine() + ", theirs "
                             + c.theirs() + (c.theirsBy().isEmpty() ? "" : " (by " + c.theirsBy() + ")"));
@@ -93,15 +105,29 @@ final class SyncCommand implements Callable<Integer> {
         return StrandbookCommand.EXIT_OK;
     }
 
+    /** Evaluates the site and sends the points whose standing changed; a failure here does not undo the sync. */
+    private int reportStanding(PlantServer server, Workbook wb, String siteName) {
+        try {
+            spec.commandLine().getErr().println("evaluating the site for the fleet view ...");
+            SiteEvaluation evaluation = SiteEvaluator.withDefaults().evaluate(wb, List.of(), SiteEvaluator.Progress.NONE);
+            return StandingReport.publish(server, siteName, StandingReport.of(evaluation, wb.points().list()));
+        } catch (RuntimeException e) {
+            spec.commandLine().getErr().println("strandbook: the sync is complete, but the points' status was not"
+                    + " reported for the fleet view: " + e.getMessage());
+            return 0;
+        }
+    }
+
     private static String describe(SyncLedger.Conflict c) {
         return c.table().workbookTable() + " " + c.key() + " " + c.field();
     }
 
-    private static String json(SiteSync.Outcome o) {
+    private static String json(SiteSync.Outcome o, int reported) {
         StringBuilder sb = new StringBuilder("{\"pushed\":").append(o.pushed()).append(",\"pulled\":")
                 .append(o.pulled()).append(",\"changed_on_server\":").append(o.changedThere())
                 .append(",\"changed_here\":").append(o.changedHere()).append(",\"server_audit_head\":")
-                .append(o.serverAuditHead()).append(",\"conflicts\":[");
+                .append(o.serverAuditHead()).append(",\"statuses_reported\":").append(reported)
+                .append(",\"conflicts\":[");
         List<SyncLedger.Conflict> open = o.openConflicts();
         for (int i = 0; i < open.size(); i++) {
             SyncLedger.Conflict c = open.get(i);
