@@ -76,6 +76,16 @@ public final class PathUncertainty {
     }
 
     /**
+     * Each input's contribution uᵢ(y) = |cᵢ|·u(xᵢ) (dB), in the order of {@link #at}'s rows, by the
+     * law of propagation alone (JCGM 100:2008, 5.1.3) with no Monte Carlo run: cheap enough for
+     * every point of an evaluation grid. Their root sum of squares is u_c(y).
+     */
+    public double[] contributionsDb(LossBudget budget, int gridIndex, List<JointSource> jointSources) {
+        return terms(budget, gridIndex, jointSources).list().stream().mapToDouble(t -> t.row().contribution())
+                .toArray();
+    }
+
+    /**
      * The chance that the path's loss at one wavelength stays within {@code allowedLossDb}, from
      * the same inputs and Monte Carlo trials that give {@link #at}'s interval: the design question
      * "with these parts, will the loop stay within the analyzer's allowed loss?".
