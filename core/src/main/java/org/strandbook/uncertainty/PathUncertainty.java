@@ -56,6 +56,15 @@ public final class PathUncertainty {
         return new PathUncertainty(BudgetInputUncertainties.SHIPPED, MonteCarloPropagation.standard(), 0.95);
     }
 
+    /** The same inputs and coverage with {@code trials} Monte Carlo trials per run. */
+    public PathUncertainty withTrials(int trials) {
+        return new PathUncertainty(inputs, monteCarlo.withTrials(trials), coverageProbability);
+    }
+
+    public int trials() {
+        return monteCarlo.trials();
+    }
+
     public double coverageProbability() {
         return coverageProbability;
     }

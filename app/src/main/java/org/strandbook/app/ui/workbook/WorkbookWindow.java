@@ -55,6 +55,7 @@ import org.strandbook.app.ui.path.LegSegment;
 import org.strandbook.app.ui.plot.PlotAxesBar;
 import org.strandbook.app.ui.plot.SpectrumPlotView;
 import org.strandbook.app.ui.plot.TrendPlotView;
+import org.strandbook.app.ui.uncertainty.UncertaintyPanel;
 import org.strandbook.app.ui.safety.SafetyCaution;
 import org.strandbook.app.ui.safety.SafetyCautionDialog;
 import org.strandbook.app.ui.sheet.SheetView;
@@ -451,6 +452,7 @@ public final class WorkbookWindow {
                 tab("Joints", "tab-joints", jointsView, pointContext(point)),
                 readOnlyTab("Scans", "tab-scans", scansView, pointContext(point), scanActions()),
                 historyTab(point),
+                uncertaintyTab(point),
                 catalogTab);
 
         Label summary = verdictLabel("budget-summary", point.summaryProperty(), point.summaryVerdictProperty());
@@ -526,6 +528,17 @@ public final class WorkbookWindow {
         VBox.setVgrow(panel.node(), Priority.ALWAYS);
         Tab t = new Tab("History", box);
         t.setId("tab-history");
+        return t;
+    }
+
+    /** The selected point's uncertainty budget per band and the design question. */
+    private Tab uncertaintyTab(PointViewModel point) {
+        UncertaintyPanel panel = new UncertaintyPanel(point.uncertainty());
+        VBox box = new VBox(4, pointContext(point), panel.node());
+        box.setPadding(new Insets(4));
+        VBox.setVgrow(panel.node(), Priority.ALWAYS);
+        Tab t = new Tab("Uncertainty", box);
+        t.setId("tab-uncertainty");
         return t;
     }
 
