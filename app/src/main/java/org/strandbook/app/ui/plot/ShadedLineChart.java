@@ -15,7 +15,7 @@ import javafx.scene.shape.Polygon;
 final class ShadedLineChart extends LineChart<Number, Number> {
 
     /** Fill opacity of a band: design choice, light enough for every line to stay readable on it. */
-    static final double BAND_OPACITY = 0.22;
+    static final double BAND_OPACITY = 0.3;
 
     private List<SpectrumPlotModel.PlotBand> bands = List.of();
     private final List<Polygon> shapes = new ArrayList<>();

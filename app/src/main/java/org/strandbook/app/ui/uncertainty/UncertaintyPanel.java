@@ -34,14 +34,14 @@ public final class UncertaintyPanel {
         table.setId("uncertainty-table");
         table.setItems(vm.rows());
         table.setPlaceholder(new Label("No uncertainty budget: select a point with a prediction"));
-        table.getColumns().add(column("uncertainty-band", "Band", 70, UncertaintyRow::band));
+        table.getColumns().add(column("uncertainty-band", "Band", 130, UncertaintyRow::band));
         table.getColumns().add(column("uncertainty-at", "At (nm)", 60, r -> f("%.0f", r.atNm())));
-        table.getColumns().add(column("uncertainty-input", "Input", 180, UncertaintyRow::input));
-        table.getColumns().add(column("uncertainty-u", "Standard uncertainty", 120,
+        table.getColumns().add(column("uncertainty-input", "Input", 210, UncertaintyRow::input));
+        table.getColumns().add(column("uncertainty-u", "Std. uncertainty", 110,
                 r -> f("%.3g", r.standardUncertainty()) + " " + r.unit()));
-        table.getColumns().add(column("uncertainty-sensitivity", "Sensitivity", 110,
+        table.getColumns().add(column("uncertainty-sensitivity", "Sensitivity", 100,
                 r -> f("%.3g", r.sensitivity()) + " " + r.sensitivityUnit()));
-        table.getColumns().add(column("uncertainty-contribution", "Contribution (dB)", 110,
+        table.getColumns().add(column("uncertainty-contribution", "Contribution (dB)", 125,
                 r -> f("%.3f", r.contributionDb())));
         table.getColumns().add(column("uncertainty-share", "Share (%)", 70, r -> f("%.1f", 100 * r.share())));
         table.getColumns().add(column("uncertainty-basis", "Basis", 420, UncertaintyRow::basis));
