@@ -105,7 +105,7 @@ public final class PointViewModel {
         this.uncertainty = new UncertaintyViewModel(tasks, PathUncertainty.standard());
         uncertainty.spreadProperty().addListener((o, was, is) -> shade(is));
         this.history = new PointHistoryViewModel(service, tasks, () -> point == null ? List.of() : shownLegs(),
-                events::pathReplaced);
+                events::pathReplaced, events::recorded);
         history.events().addListener((javafx.collections.ListChangeListener<PointEvent>) c -> trendPlot.marks(
                 history.events().stream().filter(e -> e.kind() == PointEvent.Kind.ACTION
                                 || e.kind() == PointEvent.Kind.INSPECTION)
