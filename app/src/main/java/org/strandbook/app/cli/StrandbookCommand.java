@@ -37,6 +37,8 @@ import picocli.CommandLine.Command;
             SignCommand.class,
             AuditCommand.class,
             ExportCommand.class,
+            SyncCommand.class,
+            CloneCommand.class,
             BenchCommand.class,
         })
 public final class StrandbookCommand implements Runnable {
