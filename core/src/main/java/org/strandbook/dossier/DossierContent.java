@@ -11,6 +11,7 @@ import org.strandbook.site.Catalog;
 import org.strandbook.site.Note;
 import org.strandbook.site.SignOff;
 import org.strandbook.site.SignOffRole;
+import org.strandbook.site.DecisionRule;
 import org.strandbook.site.Site;
 
 /**
@@ -33,7 +34,16 @@ import org.strandbook.site.Site;
 public record DossierContent(Site site, List<Analyzer> analyzers, Catalog catalog, DossierScope scope,
                              List<DossierPoint> points, String pairingRule, List<Note> siteNotes,
                              List<SignOff> siteSignOffs, AuditAppendix audit, Instant issuedAt, String software,
-                             String workbookName) {
+                             String workbookName, DecisionRule decisionRule) {
+
+    /** The content of a dossier judged by the fixed tolerance. */
+    public DossierContent(Site site, List<Analyzer> analyzers, Catalog catalog, DossierScope scope,
+                          List<DossierPoint> points, String pairingRule, List<Note> siteNotes,
+                          List<SignOff> siteSignOffs, AuditAppendix audit, Instant issuedAt, String software,
+                          String workbookName) {
+        this(site, analyzers, catalog, scope, points, pairingRule, siteNotes, siteSignOffs, audit, issuedAt, software,
+                workbookName, DecisionRule.FIXED);
+    }
 
     public DossierContent {
         Objects.requireNonNull(site, "site");
@@ -48,6 +58,7 @@ public record DossierContent(Site site, List<Analyzer> analyzers, Catalog catalo
         pairingRule = pairingRule == null ? "" : pairingRule;
         software = software == null || software.isBlank() ? "Strandbook" : software.strip();
         workbookName = workbookName == null ? "" : workbookName;
+        decisionRule = decisionRule == null ? DecisionRule.FIXED : decisionRule;
     }
 
     public long count(Status status) {

@@ -9,6 +9,7 @@ import java.util.Locale;
 
 import org.strandbook.evaluation.Status;
 import org.strandbook.evaluation.SubBands;
+import org.strandbook.site.DecisionRule;
 import org.strandbook.site.SignedDecimal;
 
 /**
@@ -169,7 +170,38 @@ final class DossierText {
                     + ": otherwise.",
             "The tolerance is the point's own, else the site default of " + Placeholder.DEFAULT_TOLERANCE.token()
                     + " dB. A point's status is that of its worst band. The margin is the analyzer's allowed"
-                    + " loss minus the highest measured loss in the band.");
+                    + " loss minus the highest measured loss in the band.",
+            "The rules above are those of the fixed tolerance. The decision rule in force for this dossier: "
+                    + Placeholder.DECISION_RULE.token());
+
+    /**
+     * The site's decision rule as the dossier states it, in the terms of ILAC-G8:09/2019 (decision
+     * rules and statements of conformity) and JCGM 106:2012 (acceptance zone, guard band).
+     */
+    static String decisionRule(DecisionRule rule, double toleranceDb) {
+        if (!rule.onInterval()) {
+            return "fixed tolerance, a simple acceptance rule in the sense of ILAC-G8:09/2019 (guard band w = 0):"
+                    + " the measurement uncertainty is not taken into account. A band conforms when its mean"
+                    + " measured loss exceeds the predicted loss by no more than the tolerance (site default "
+                    + decimal(toleranceDb, 2) + " dB).";
+        }
+        String pct = rule.percent();
+        return "coverage interval, a decision rule with a guard band in the sense of ILAC-G8:09/2019 and"
+                + " JCGM 106:2012 (clause 8: acceptance zone, guard band). The specified tolerance interval of a"
+                + " band is the prediction's " + pct + " % coverage interval (Monte Carlo propagation of the input"
+                + " uncertainties, JCGM 101:2008), widened in quadrature by the expanded uncertainty of the"
+                + " measurement itself, U = k·u with k for " + pct + " % coverage (detector noise from the dark"
+                + " scans and the repeatability of the reference). The acceptance zone is that widened interval:"
+                + " a band whose mean measured − predicted loss lies in it is declared "
+                + Status.PASS.label() + ". A guard band w = " + decimal(rule.guardBandDb(), 2) + " dB lies beyond"
+                + " its upper limit: a result within it is " + Status.REVIEW.label() + " (conformity can be"
+                + " neither shown nor rejected at the stated coverage); a result beyond limit + w lies in the"
+                + " rejection zone and is " + Status.FAIL.label() + ". A loss below the widened interval is "
+                + Status.REVIEW.label() + " (a reference or record problem). The worst sub-band of at most "
+                + decimal(SubBands.MAX_WIDTH_NM, 0) + " nm of each band is held to the same limits. A measured"
+                + " loss above the analyzer's allowed loss is " + Status.FAIL.label() + "; a margin smaller than U"
+                + " + w is " + Status.REVIEW.label() + ".";
+    }
 
     static final List<String> TREND_METHOD = List.of(
             "Each band is cut into sub-bands of at most " + decimal(SubBands.MAX_WIDTH_NM, 0) + " nm. In every"

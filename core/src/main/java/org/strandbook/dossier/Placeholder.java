@@ -31,7 +31,8 @@ public enum Placeholder {
     DEFAULT_TOLERANCE("default_tolerance", "the site's default acceptance tolerance, dB"),
     MIN_MEASURED("min_measured", "least share of a band that must be measured, %"),
     LOCAL_FAIL("local_fail", "local excess, in tolerances, that fails a band"),
-    GRID_STEP("grid_step", "step of the evaluation wavelength grid, nm");
+    GRID_STEP("grid_step", "step of the evaluation wavelength grid, nm"),
+    DECISION_RULE("decision_rule", "the site's decision rule, in the words of ILAC-G8 and JCGM 106");
 
     private final String key;
     private final String meaning;

@@ -53,6 +53,7 @@ final class PlaceholderValues {
         v.put(Placeholder.MIN_MEASURED, DossierText.decimal(100 * Acceptance.MIN_MEASURED_FRACTION, 0));
         v.put(Placeholder.LOCAL_FAIL, DossierText.decimal(Acceptance.LOCAL_FAIL_FACTOR, 0));
         v.put(Placeholder.GRID_STEP, DossierText.decimal(EvaluationGrid.STEP_NM, 0));
+        v.put(Placeholder.DECISION_RULE, DossierText.decisionRule(c.decisionRule(), c.site().defaultToleranceDb()));
         return v;
     }
 

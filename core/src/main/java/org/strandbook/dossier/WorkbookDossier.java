@@ -15,6 +15,7 @@ import org.strandbook.evaluation.PointEvaluator;
 import org.strandbook.evaluation.WorkbookInputs;
 import org.strandbook.site.Analyzer;
 import org.strandbook.site.Catalog;
+import org.strandbook.site.DecisionRule;
 import org.strandbook.site.Inspection;
 import org.strandbook.site.MaintenanceAction;
 import org.strandbook.site.MeasurementPoint;
@@ -68,6 +69,7 @@ public final class WorkbookDossier {
             site = new Site(site.name(), site.plantArea(), revision, site.defaultToleranceDb());
         }
 
+        DecisionRule rule = workbook.site().decisionRule();
         List<DossierPoint> points = new ArrayList<>();
         Set<String> analyzerTags = new LinkedHashSet<>();
         for (int i = 0; i < chosen.size(); i++) {
@@ -76,7 +78,7 @@ public final class WorkbookDossier {
             List<PathLeg> legs = workbook.paths().legs(point.tag());
             List<String> problems = new ArrayList<>();
             Optional<PointEvaluation> evaluation = evaluate(workbook, site, point, analyzers.get(point.analyzerTag()),
-                    legs, catalog, scope, evaluator, problems);
+                    legs, catalog, scope, evaluator, rule, problems);
             points.add(new DossierPoint(point, legs, inspections.getOrDefault(point.tag(), List.of()),
                     notes.stream().filter(n -> n.pointTag().equals(point.tag())).toList(),
                     signOffs.stream().filter(s -> s.pointTag().equals(point.tag())).toList(), evaluation, problems,
@@ -95,7 +97,7 @@ public final class WorkbookDossier {
                 catalog, scope, points, evaluator.pairing().describe(),
                 notes.stream().filter(n -> n.pointTag().isEmpty()).toList(),
                 signOffs.stream().filter(s -> s.pointTag().isEmpty()).toList(), audit, issuedAt, software,
-                workbook.file().getFileName().toString());
+                workbook.file().getFileName().toString(), rule);
     }
 
     /**
@@ -137,7 +139,7 @@ public final class WorkbookDossier {
     private static Optional<PointEvaluation> evaluate(Workbook workbook, Site site, MeasurementPoint point,
                                                       Analyzer analyzer, List<PathLeg> legs, Catalog catalog,
                                                       DossierScope scope, PointEvaluator evaluator,
-                                                      List<String> problems) {
+                                                      DecisionRule rule, List<String> problems) {
         if (analyzer == null) {
             problems.add("point " + point.tag() + ": unknown analyzer '" + point.analyzerTag() + "'");
             return Optional.empty();
@@ -154,7 +156,8 @@ public final class WorkbookDossier {
             problems.add("no scan of " + point.tag() + " among " + scope.describeDates());
         }
         try {
-            return Optional.of(evaluator.evaluate(WorkbookInputs.of(workbook, site, point, analyzer, catalog, inRange)));
+            return Optional.of(evaluator.evaluate(WorkbookInputs.of(workbook, site, point, analyzer, catalog, inRange),
+                    rule));
         } catch (IllegalArgumentException e) {
             problems.add(e.getMessage());
             return Optional.empty();

@@ -20,16 +20,32 @@ import org.strandbook.throughput.ThroughputResult;
  * @param diagnosis  the latest deviation's diagnosis, if measured
  * @param trends     loss history and forecast per band
  * @param problems   what could not be evaluated, in words (unpaired scans, missing data)
+ * @param intervals  under the coverage-interval rule, the limits each band was judged against (one
+ *                   per verdict, in its order); empty under the fixed tolerance
  */
 public record PointEvaluation(MeasurementPoint point, Status status, PredictedBudget predicted,
                               Optional<ScanPair> latest, Optional<ThroughputResult> measured,
                               List<BandVerdict> verdicts, Optional<Diagnosis> diagnosis, List<BandTrend> trends,
-                              List<String> problems) {
+                              List<String> problems, List<BandInterval> intervals) {
 
     public PointEvaluation {
         verdicts = List.copyOf(verdicts);
         trends = List.copyOf(trends);
         problems = List.copyOf(problems);
+        intervals = List.copyOf(intervals);
+    }
+
+    /** An evaluation under the fixed tolerance. */
+    public PointEvaluation(MeasurementPoint point, Status status, PredictedBudget predicted,
+                           Optional<ScanPair> latest, Optional<ThroughputResult> measured,
+                           List<BandVerdict> verdicts, Optional<Diagnosis> diagnosis, List<BandTrend> trends,
+                           List<String> problems) {
+        this(point, status, predicted, latest, measured, verdicts, diagnosis, trends, problems, List.of());
+    }
+
+    /** The limits {@code band} was judged against under the coverage-interval rule, if it was. */
+    public Optional<BandInterval> interval(org.strandbook.site.WavelengthBand band) {
+        return intervals.stream().filter(i -> i.prediction().band().equals(band)).findFirst();
     }
 
     /** The band with the least margin (or the first failing one), if any was judged. */

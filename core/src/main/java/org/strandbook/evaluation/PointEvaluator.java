@@ -17,8 +17,10 @@ import org.strandbook.diagnosis.Diagnosis;
 import org.strandbook.diagnosis.PathEvidence;
 import org.strandbook.optics.WavelengthGrid;
 import org.strandbook.optics.path.OpticsCache;
+import org.strandbook.site.DecisionRule;
 import org.strandbook.site.MaintenanceAction;
 import org.strandbook.site.MaintenanceKind;
+import org.strandbook.site.MeasurementPoint;
 import org.strandbook.site.PathLeg;
 import org.strandbook.site.ScanRecord;
 import org.strandbook.site.Spectrum;
@@ -34,6 +36,10 @@ import org.strandbook.throughput.ThroughputScans;
 import org.strandbook.trend.MarginForecast;
 import org.strandbook.trend.StepDetector;
 import org.strandbook.trend.TheilSenTrend;
+import org.strandbook.uncertainty.BudgetInputUncertainties;
+import org.strandbook.uncertainty.MonteCarloPropagation;
+import org.strandbook.uncertainty.PathUncertainty;
+import org.strandbook.uncertainty.PooledRepeatability;
 
 /**
  * Evaluates one measurement point end to end: prediction, pairing, measured throughput of every
@@ -55,6 +61,7 @@ public final class PointEvaluator {
     private final StepDetector steps = StepDetector.withDefaults();
     private final MarginForecast forecast = MarginForecast.withDefaults();
     private final Map<WavelengthGrid, OpticsCache> caches = new ConcurrentHashMap<>();
+    private final Map<Double, PathUncertainty> engines = new ConcurrentHashMap<>();
 
     public PointEvaluator(ScanPairing pairing, OneCordThroughput throughput, DeviationDiagnoser diagnoser) {
         this.pairing = pairing;
@@ -71,10 +78,16 @@ public final class PointEvaluator {
         return pairing;
     }
 
+    /** The point judged by the fixed tolerance. */
     public PointEvaluation evaluate(PointInputs in) {
+        return evaluate(in, DecisionRule.FIXED);
+    }
+
+    /** The point judged by {@code rule}. */
+    public PointEvaluation evaluate(PointInputs in, DecisionRule rule) {
         WavelengthGrid grid = EvaluationGrid.forAnalyzer(in.analyzer());
         OpticsCache cache = caches.computeIfAbsent(grid, OpticsCache::new);
-        PredictedBudget predictedToday = predict(in, in.send(), in.ret(), cache);
+        PredictedBudget predictedToday = predict(in, in.point(), in.send(), in.ret(), cache);
         List<WavelengthBand> bands = in.point().bands();
         for (WavelengthBand band : bands) {
             if (band.fromNm() < grid.firstNm() || band.toNm() > grid.lastNm()) {
@@ -97,12 +110,7 @@ public final class PointEvaluator {
         int unjudged = 0;
         for (ScanPair pair : pairs.paired()) {
             ScanExposure exposure = pair.exposure();
-            ThroughputResult result = throughput.measure(new ThroughputScans(
-                    raw(pair.loop(), exposure, in.spectra(), fetched, regridder),
-                    raw(pair.loopDark(), exposure, in.spectra(), fetched, regridder),
-                    raw(pair.reference(), exposure, in.spectra(), fetched, regridder),
-                    raw(pair.referenceDark(), exposure, in.spectra(), fetched, regridder)),
-                    regridder);
+            ThroughputResult result = measure(pair, in.spectra(), fetched, regridder);
             if (exposure.judgeable() && !clippedNearlyEverywhere(result)) {
                 double[] loss = result.lossDb();
                 for (BandHistory history : histories) {
@@ -127,8 +135,9 @@ public final class PointEvaluator {
         }
         // the latest scan is judged against the path it went through, graded as inspected by then
         PathTimeline.Legs then = in.history().at(latestPair.loop().takenAt());
+        MeasurementPoint pointThen = then.probeTypeCode().map(in.point()::withProbeTypeCode).orElse(in.point());
         PredictedBudget predicted = then.send().equals(in.send()) && then.ret().equals(in.ret())
-                ? predictedToday : predict(in, then.send(), then.ret(), cache);
+                && pointThen.equals(in.point()) ? predictedToday : predict(in, pointThen, then.send(), then.ret(), cache);
         double[] predictedLoss = predicted.totalLossDb();
         double tolerance = in.point().effectiveToleranceDb(in.site());
         double allowed = in.analyzer().allowedLossDb();
@@ -139,9 +148,42 @@ public final class PointEvaluator {
                     100 * latest.saturatedFraction(), String.join("; ", latest.saturationReasons())));
         }
         List<BandVerdict> verdicts = new ArrayList<>();
+        List<BandInterval> intervals = new ArrayList<>();
         Status status = Status.PASS;
-        for (WavelengthBand band : bands) {
-            BandVerdict v = Acceptance.judge(grid, latest.lossDb(), predictedLoss, band, tolerance, allowed);
+        List<BandUncertainty> spreads = List.of();
+        List<PooledRepeatability> repeats = List.of();
+        boolean onInterval = rule.onInterval();
+        if (onInterval) {
+            try {
+                spreads = BandUncertainty.of(predicted, bands, uncertaintyEngine(rule.coverage()));
+            } catch (IllegalArgumentException e) {
+                onInterval = false;
+                problems.add("no coverage interval for this point's prediction (" + e.getMessage()
+                        + "): its bands are judged by the fixed tolerance");
+            }
+        }
+        if (onInterval) {
+            Map<ScaledScan, RawSpectrum> repeatScans = new HashMap<>();
+            repeats = ReferenceRepeats.of(in.scans(), pairing, pair -> measure(pair, in.spectra(), repeatScans,
+                    regridder), grid, bands);
+        }
+        double[] measuredLoss = latest.lossDb();
+        double[] lossSigma = latest.sigmaDb();
+        for (int b = 0; b < bands.size(); b++) {
+            WavelengthBand band = bands.get(b);
+            BandVerdict v;
+            if (onInterval) {
+                PooledRepeatability pooled = repeats.get(b);
+                MeasurementUncertainty repeatability = pooled == null
+                        ? MeasurementUncertainty.withDefaultRepeatability(0)
+                        : MeasurementUncertainty.withPooledRepeatability(0, pooled);
+                IntervalAcceptance.Judged judged = IntervalAcceptance.judge(grid, measuredLoss, lossSigma,
+                        predictedLoss, band, spreads.get(b), repeatability, rule, tolerance, allowed);
+                v = judged.verdict();
+                intervals.add(judged.interval());
+            } else {
+                v = Acceptance.judge(grid, measuredLoss, predictedLoss, band, tolerance, allowed);
+            }
             if (refusal.isPresent()) {
                 v = notJudged(v, refusal.get());
             } else if (v.measuredFraction() < Acceptance.MIN_MEASURED_FRACTION) {
@@ -158,7 +200,7 @@ public final class PointEvaluator {
         Optional<Diagnosis> diagnosis = Optional.empty();
         if (refusal.isEmpty()) {
             diagnosis = Optional.of(diagnoser.diagnose(latest, predictedLoss,
-                    PathEvidence.of(in.point(), then.send(), then.ret(), in.catalog())));
+                    PathEvidence.of(pointThen, then.send(), then.ret(), in.catalog())));
         } else {
             problems.add(0, refusal.get());
         }
@@ -174,12 +216,30 @@ public final class PointEvaluator {
             trends.add(history.trend(allowed, asOf, repaired, theilSen, steps, forecast));
         }
         return new PointEvaluation(in.point(), status, predicted, Optional.of(latestPair), Optional.of(latest),
-                verdicts, diagnosis, trends, problems);
+                verdicts, diagnosis, trends, problems, intervals);
     }
 
-    private static PredictedBudget predict(PointInputs in, PathLeg send, PathLeg ret, OpticsCache cache) {
+    /** The engine of the prediction's interval at {@code coverage}: one per coverage, kept. */
+    private PathUncertainty uncertaintyEngine(double coverage) {
+        return engines.computeIfAbsent(coverage, p -> new PathUncertainty(BudgetInputUncertainties.SHIPPED,
+                MonteCarloPropagation.standard(), p));
+    }
+
+    private ThroughputResult measure(ScanPair pair, SpectrumSource spectra, Map<ScaledScan, RawSpectrum> fetched,
+                                     ScanRegridder regridder) {
+        ScanExposure exposure = pair.exposure();
+        return throughput.measure(new ThroughputScans(
+                raw(pair.loop(), exposure, spectra, fetched, regridder),
+                raw(pair.loopDark(), exposure, spectra, fetched, regridder),
+                raw(pair.reference(), exposure, spectra, fetched, regridder),
+                raw(pair.referenceDark(), exposure, spectra, fetched, regridder)),
+                regridder);
+    }
+
+    private static PredictedBudget predict(PointInputs in, MeasurementPoint point, PathLeg send, PathLeg ret,
+                                           OpticsCache cache) {
         try {
-            return new PointBudgetBuilder(in.catalog()).build(in.point(), send, ret, cache);
+            return new PointBudgetBuilder(in.catalog()).build(point, send, ret, cache);
         } catch (IllegalArgumentException e) {
             throw new IllegalArgumentException("point " + in.point().tag() + ": cannot predict its loss: "
                     + e.getMessage(), e);

@@ -10,6 +10,7 @@ import java.util.stream.Collectors;
 
 import org.strandbook.site.Analyzer;
 import org.strandbook.site.Catalog;
+import org.strandbook.site.DecisionRule;
 import org.strandbook.site.MeasurementPoint;
 import org.strandbook.site.Site;
 import org.strandbook.store.Workbook;
@@ -61,12 +62,13 @@ public final class SiteEvaluator {
                         .orElseThrow(() -> new IllegalArgumentException("no point tagged '" + tag + "' in this workbook")));
             }
         }
+        DecisionRule rule = workbook.site().decisionRule();
         List<PointEvaluation> done = new ArrayList<>();
         List<String> problems = new ArrayList<>();
         for (int i = 0; i < chosen.size(); i++) {
             MeasurementPoint point = chosen.get(i);
             try {
-                done.add(evaluator.evaluate(inputs(workbook, site, point, analyzers, catalog)));
+                done.add(evaluator.evaluate(inputs(workbook, site, point, analyzers, catalog), rule));
             } catch (IllegalArgumentException e) {
                 problems.add(e.getMessage());
             }
@@ -76,7 +78,7 @@ public final class SiteEvaluator {
             }
         }
         return new SiteEvaluation(site, clock.instant(), evaluator.pairing().describe(), Urgency.rank(done),
-                problems);
+                problems, rule);
     }
 
     private static PointInputs inputs(Workbook workbook, Site site, MeasurementPoint point,

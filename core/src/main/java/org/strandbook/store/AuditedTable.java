@@ -26,7 +26,8 @@ enum AuditedTable {
     SIGN_OFF("sign_off"),
     NOTE("note"),
     MAINTENANCE_ACTION("maintenance_action"),
-    RETIRED_PATH_ELEMENT("retired_path_element");
+    RETIRED_PATH_ELEMENT("retired_path_element"),
+    DECISION_RULE("decision_rule");
 
     /**
      * The last column of a scan's image, its spectrum: {@link AuditLog} builds the image of a new

@@ -52,6 +52,7 @@ final class SchemaMigrator {
             new Step(2, "V2__audit_trail.sql"),
             new Step(3, "V3__scan_y_unit.sql", List.of(AuditedTable.SCAN)),
             new Step(5, "V5__maintenance_and_sign_off.sql"),
+            new Step(6, "V6__decision_rule.sql"),
             new Step(7, "V7__plant_server_sync.sql"));
 
     private SchemaMigrator() {

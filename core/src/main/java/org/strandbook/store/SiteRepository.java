@@ -9,6 +9,7 @@ import java.util.Optional;
 import java.util.OptionalLong;
 
 import org.strandbook.site.Analyzer;
+import org.strandbook.site.DecisionRule;
 import org.strandbook.site.DetectorType;
 import org.strandbook.site.Site;
 
@@ -53,6 +54,42 @@ public final class SiteRepository {
                 ps.executeUpdate();
             }
             audit.updated(AuditedTable.SITE, 1, before);
+            return null;
+        });
+    }
+
+    /** The site's decision rule; the fixed tolerance while none has been chosen. */
+    public DecisionRule decisionRule() {
+        return session.read(() -> {
+            try (PreparedStatement ps = session.connection().prepareStatement(
+                    "SELECT kind, coverage, guard_band_db FROM decision_rule WHERE id = 1");
+                 ResultSet rs = ps.executeQuery()) {
+                if (!rs.next()) {
+                    return DecisionRule.FIXED;
+                }
+                return new DecisionRule(DecisionRule.Kind.valueOf(rs.getString("kind")), rs.getDouble("coverage"),
+                        rs.getDouble("guard_band_db"));
+            }
+        });
+    }
+
+    /** Sets the site's decision rule; audited like the site record. */
+    public void setDecisionRule(DecisionRule rule) {
+        session.write(() -> {
+            Optional<RowImage> before = audit.capture(AuditedTable.DECISION_RULE, 1);
+            try (PreparedStatement ps = session.connection().prepareStatement(before.isPresent()
+                    ? "UPDATE decision_rule SET kind = ?, coverage = ?, guard_band_db = ? WHERE id = 1"
+                    : "INSERT INTO decision_rule (kind, coverage, guard_band_db, id) VALUES (?, ?, ?, 1)")) {
+                ps.setString(1, rule.kind().name());
+                ps.setDouble(2, rule.coverage());
+                ps.setDouble(3, rule.guardBandDb());
+                ps.executeUpdate();
+            }
+            if (before.isPresent()) {
+                audit.updated(AuditedTable.DECISION_RULE, 1, before.get());
+            } else {
+                audit.inserted(AuditedTable.DECISION_RULE, 1);
+            }
             return null;
         });
     }

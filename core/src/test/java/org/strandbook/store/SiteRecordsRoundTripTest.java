@@ -10,6 +10,7 @@ import java.util.OptionalDouble;
 
 import org.junit.jupiter.api.Test;
 import org.strandbook.site.AttenuationPoint;
+import org.strandbook.site.DecisionRule;
 import org.strandbook.site.FiberType;
 import org.strandbook.site.Inspection;
 import org.strandbook.site.InspectionGrade;
@@ -33,6 +34,19 @@ class SiteRecordsRoundTripTest extends PopulatedWorkbookTest {
         assertEquals(List.of(DemoSite.fiber()), wb.catalog().fiberTypes());
         assertEquals(List.of(DemoSite.connector()), wb.catalog().connectorTypes());
         assertEquals(List.of(DemoSite.probe()), wb.catalog().probeTypes());
+    }
+
+    @Test
+    void theDecisionRuleComesBackAsSetAndEachChangeIsAudited() {
+        assertEquals(DecisionRule.FIXED, wb.site().decisionRule(), "a new workbook keeps the fixed tolerance");
+        DecisionRule interval = new DecisionRule(DecisionRule.Kind.COVERAGE_INTERVAL, 0.99, 0.3);
+        wb.site().setDecisionRule(interval);
+        assertEquals(interval, wb.site().decisionRule());
+        wb.site().setDecisionRule(interval.withKind(DecisionRule.Kind.FIXED_TOLERANCE));
+        assertEquals(interval.withKind(DecisionRule.Kind.FIXED_TOLERANCE), wb.site().decisionRule());
+        List<String> changes = wb.audit().entries(0, 1000).stream()
+                .filter(e -> e.table().equals("decision_rule")).map(e -> e.action()).toList();
+        assertEquals(List.of("INSERT", "UPDATE"), changes);
     }
 
     @Test

@@ -9,6 +9,7 @@ import java.util.stream.Collectors;
 import org.strandbook.diagnosis.Finding;
 import org.strandbook.diagnosis.FringeReport;
 import org.strandbook.diagnosis.Signature;
+import org.strandbook.evaluation.BandInterval;
 import org.strandbook.evaluation.BandTrend;
 import org.strandbook.evaluation.BandUncertainty;
 import org.strandbook.evaluation.BandVerdict;
@@ -17,6 +18,7 @@ import org.strandbook.evaluation.SiteEvaluation;
 import org.strandbook.evaluation.SubBands;
 import org.strandbook.evaluation.Urgency;
 import org.strandbook.handover.StepAttribution;
+import org.strandbook.site.DecisionRule;
 import org.strandbook.site.MaintenanceAction;
 import org.strandbook.site.SignedDecimal;
 import org.strandbook.throughput.MaskedRange;
@@ -24,6 +26,7 @@ import org.strandbook.trend.LossReading;
 import org.strandbook.trend.LossTrend;
 import org.strandbook.trend.MarginForecast;
 import org.strandbook.trend.StepEvent;
+import org.strandbook.uncertainty.BasisKind;
 import org.strandbook.uncertainty.BudgetRow;
 import org.strandbook.uncertainty.PathUncertainty;
 
@@ -54,6 +57,7 @@ final class EvaluationText {
             }
         }
         site.problems().forEach(p -> out.println("not evaluated: " + p));
+        out.println("Decision rule: " + site.decisionRule().describe(site.site().defaultToleranceDb()));
         out.printf(Locale.ROOT, "%d point%s: %d pass, %d review, %d fail. Pairing rule: %s%n", site.points().size(),
                 site.points().size() == 1 ? "" : "s",
                 site.count(org.strandbook.evaluation.Status.PASS), site.count(org.strandbook.evaluation.Status.REVIEW),
@@ -78,6 +82,15 @@ final class EvaluationText {
                     v.reason());
         }
         bands.print(out);
+        for (BandVerdict v : e.verdicts()) {
+            e.interval(v.band()).ifPresent(i -> out.printf(Locale.ROOT, "  %s: predicted %.2f dB, %s %% interval"
+                    + " %.2f … %.2f dB; measurement ±%.2f dB (u = %.3f dB, repeatability %s); accepted up to %+.2f dB"
+                    + " over the prediction, REVIEW to %+.2f dB, FAIL beyond%n", v.band().name(), v.predictedLossDb(),
+                    percent(i.coverage()), i.prediction().lowDb(v.predictedLossDb()),
+                    i.prediction().highDb(v.predictedLossDb()), i.measurementExpandedDb(),
+                    i.measurement().standardUncertaintyDb(), basisWord(i.measurement().repeatabilityBasis()),
+                    i.upperDeviationDb(), i.upperDeviationDb() + i.guardBandDb()));
+        }
         e.diagnosis().ifPresent(d -> {
             for (Finding f : d.findings()) {
                 if (f.signature() == Signature.FRINGES) {
@@ -104,6 +117,7 @@ final class EvaluationText {
         b.append("{\"site\":").append(JsonText.string(site.site().name()))
                 .append(",\"evaluated_at\":").append(JsonText.string(site.evaluatedAt().toString()))
                 .append(",\"pairing_rule\":").append(JsonText.string(site.pairingRule()))
+                .append(",\"decision_rule\":").append(json(site.decisionRule(), site.site().defaultToleranceDb()))
                 .append(",\"points\":[");
         boolean firstPoint = true;
         for (PointEvaluation e : site.points()) {
@@ -126,12 +140,13 @@ final class EvaluationText {
                     .append(",\"loop_co_added\":").append(p.loop().conditions().coAdded())
                     .append(",\"reference_co_added\":").append(p.reference().conditions().coAdded())
                     .append(",\"integration\":").append(JsonText.string(p.exposure().describeNormalisation())));
-            List<BandUncertainty> spreads = uncertainties(e);
+            List<BandUncertainty> spreads = e.intervals().isEmpty() ? uncertainties(e)
+                    : e.intervals().stream().map(BandInterval::prediction).toList();
             b.append(",\"bands\":[");
             for (int i = 0; i < e.verdicts().size(); i++) {
                 BandVerdict v = e.verdicts().get(i);
                 b.append(i == 0 ? "" : ",").append(json(v, spreads.stream()
-                        .filter(u -> u.band().equals(v.band())).findFirst()));
+                        .filter(u -> u.band().equals(v.band())).findFirst(), e.interval(v.band())));
             }
             b.append(']');
             b.append(",\"findings\":[");
@@ -181,7 +196,39 @@ final class EvaluationText {
         }
     }
 
-    private static String json(BandVerdict v, Optional<BandUncertainty> spread) {
+    private static String json(DecisionRule rule, double toleranceDb) {
+        return "{\"kind\":" + JsonText.string(rule.kind().code())
+                + ",\"name\":" + JsonText.string(rule.kind().words())
+                + ",\"coverage\":" + JsonText.number(rule.coverage())
+                + ",\"guard_band_db\":" + JsonText.number(rule.guardBandDb())
+                + ",\"site_tolerance_db\":" + JsonText.number(toleranceDb)
+                + ",\"text\":" + JsonText.string(rule.describe(toleranceDb)) + "}";
+    }
+
+    /** The acceptance limits of a band judged on the interval; nulls under the fixed tolerance. */
+    private static String limits(BandVerdict v, Optional<BandInterval> interval) {
+        return interval.map(i -> ",\"measurement_uncertainty_db\":"
+                + JsonText.number(i.measurement().standardUncertaintyDb())
+                + ",\"measurement_expanded_db\":" + JsonText.number(i.measurementExpandedDb())
+                + ",\"measurement_budget\":" + i.measurement().rows().stream().map(EvaluationText::json)
+                        .collect(Collectors.joining(",", "[", "]"))
+                + ",\"accept_low_db\":" + JsonText.number(v.predictedLossDb() + i.lowerDeviationDb())
+                + ",\"accept_high_db\":" + JsonText.number(v.predictedLossDb() + i.upperDeviationDb())
+                + ",\"guard_band_db\":" + JsonText.number(i.guardBandDb()))
+                .orElse(",\"measurement_uncertainty_db\":null,\"measurement_expanded_db\":null"
+                        + ",\"measurement_budget\":[],\"accept_low_db\":null,\"accept_high_db\":null"
+                        + ",\"guard_band_db\":null");
+    }
+
+    private static String percent(double coverage) {
+        return DecisionRule.FIXED.withCoverage(coverage).percent();
+    }
+
+    private static String basisWord(BasisKind basis) {
+        return basis.name().toLowerCase(Locale.ROOT).replace('_', ' ');
+    }
+
+    private static String json(BandVerdict v, Optional<BandUncertainty> spread, Optional<BandInterval> limits) {
         String interval = spread.map(u -> ",\"predicted_low_db\":" + JsonText.number(u.lowDb(v.predictedLossDb()))
                 + ",\"predicted_high_db\":" + JsonText.number(u.highDb(v.predictedLossDb()))
                 + ",\"coverage\":" + JsonText.number(u.atCentre().budget().interval().probability())
@@ -203,6 +250,7 @@ final class EvaluationText {
                 + ",\"worst_at_nm\":" + JsonText.number(v.worstAtNm())
                 + ",\"margin_db\":" + JsonText.number(v.marginDb())
                 + ",\"measured_fraction\":" + JsonText.number(v.measuredFraction())
+                + limits(v, limits)
                 + ",\"reason\":" + JsonText.string(v.reason()) + "}";
     }
 
@@ -297,7 +345,7 @@ final class EvaluationText {
         return tr.outlook().map(o -> switch (o.status()) {
             case ALREADY_EXHAUSTED -> "already used up";
             case PROJECTED -> o.expectedDate().map(Object::toString).orElse("—")
-                    + o.earliestDate().map(d -> " (earliest " + d + ")").orElse("");
+                    + o.earliestDate().map(d -> " (earliest " + d + ")").orElse(" (earliest: not bounded yet)");
             case BEYOND_HORIZON -> "beyond " + (int) MarginForecast.withDefaults().horizonYears() + " years";
             case NOT_SHRINKING -> "not shrinking";
         }).orElse("—");

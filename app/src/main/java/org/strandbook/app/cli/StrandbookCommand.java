@@ -23,6 +23,7 @@ import picocli.CommandLine.Command;
             OpenCommand.class,
             FiberCommand.class,
             InitCommand.class,
+            AcceptanceCommand.class,
             ImportScheduleCommand.class,
             ImportScansCommand.class,
             ScansCommand.class,

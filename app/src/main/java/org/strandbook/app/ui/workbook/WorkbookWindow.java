@@ -55,6 +55,7 @@ import org.strandbook.app.ui.path.LegSegment;
 import org.strandbook.app.ui.plot.PlotAxesBar;
 import org.strandbook.app.ui.plot.SpectrumPlotView;
 import org.strandbook.app.ui.plot.TrendPlotView;
+import org.strandbook.app.ui.uncertainty.UncertaintyPanel;
 import org.strandbook.app.ui.safety.SafetyCaution;
 import org.strandbook.app.ui.safety.SafetyCautionDialog;
 import org.strandbook.app.ui.sheet.SheetView;
@@ -451,6 +452,8 @@ public final class WorkbookWindow {
                 tab("Joints", "tab-joints", jointsView, pointContext(point)),
                 readOnlyTab("Scans", "tab-scans", scansView, pointContext(point), scanActions()),
                 historyTab(point),
+                uncertaintyTab(point),
+                attentionTab(),
                 catalogTab);
 
         Label summary = verdictLabel("budget-summary", point.summaryProperty(), point.summaryVerdictProperty());
@@ -527,6 +530,39 @@ public final class WorkbookWindow {
         Tab t = new Tab("History", box);
         t.setId("tab-history");
         return t;
+    }
+
+    /** The selected point's uncertainty budget per band and the design question. */
+    private Tab uncertaintyTab(PointViewModel point) {
+        UncertaintyPanel panel = new UncertaintyPanel(point.uncertainty());
+        VBox box = new VBox(4, pointContext(point), panel.node());
+        box.setPadding(new Insets(4));
+        VBox.setVgrow(panel.node(), Priority.ALWAYS);
+        Tab t = new Tab("Uncertainty", box);
+        t.setId("tab-uncertainty");
+        return t;
+    }
+
+    /**
+     * The site's attention view; ranked when the tab is shown and the lists are out of date. A point
+     * opened from it shows in the History tab, with its plots below.
+     */
+    private Tab attentionTab() {
+        AttentionViewModel attention = vm.attention();
+        Tab t = new Tab("Attention");
+        AttentionView view = new AttentionView(attention, () -> tabs.getSelectionModel().select(tabById("tab-history")));
+        t.setContent(view.node());
+        t.setId("tab-attention");
+        t.selectedProperty().addListener((o, was, is) -> {
+            if (is && attention.staleProperty().get() && vm.openProperty().get()) {
+                attention.refresh();
+            }
+        });
+        return t;
+    }
+
+    private Tab tabById(String id) {
+        return tabs.getTabs().stream().filter(t -> id.equals(t.getId())).findFirst().orElseThrow();
     }
 
     private static Label heading(String text) {
