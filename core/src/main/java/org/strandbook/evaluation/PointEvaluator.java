@@ -20,6 +20,7 @@ import org.strandbook.optics.path.OpticsCache;
 import org.strandbook.site.DecisionRule;
 import org.strandbook.site.MaintenanceAction;
 import org.strandbook.site.MaintenanceKind;
+import org.strandbook.site.MeasurementPoint;
 import org.strandbook.site.PathLeg;
 import org.strandbook.site.ScanRecord;
 import org.strandbook.site.Spectrum;
@@ -86,7 +87,7 @@ public final class PointEvaluator {
     public PointEvaluation evaluate(PointInputs in, DecisionRule rule) {
         WavelengthGrid grid = EvaluationGrid.forAnalyzer(in.analyzer());
         OpticsCache cache = caches.computeIfAbsent(grid, OpticsCache::new);
-        PredictedBudget predictedToday = predict(in, in.send(), in.ret(), cache);
+        PredictedBudget predictedToday = predict(in, in.point(), in.send(), in.ret(), cache);
         List<WavelengthBand> bands = in.point().bands();
         for (WavelengthBand band : bands) {
             if (band.fromNm() < grid.firstNm() || band.toNm() > grid.lastNm()) {
@@ -134,8 +135,9 @@ public final class PointEvaluator {
         }
         // the latest scan is judged against the path it went through, graded as inspected by then
         PathTimeline.Legs then = in.history().at(latestPair.loop().takenAt());
+        MeasurementPoint pointThen = then.probeTypeCode().map(in.point()::withProbeTypeCode).orElse(in.point());
         PredictedBudget predicted = then.send().equals(in.send()) && then.ret().equals(in.ret())
-                ? predictedToday : predict(in, then.send(), then.ret(), cache);
+                && pointThen.equals(in.point()) ? predictedToday : predict(in, pointThen, then.send(), then.ret(), cache);
         double[] predictedLoss = predicted.totalLossDb();
         double tolerance = in.point().effectiveToleranceDb(in.site());
         double allowed = in.analyzer().allowedLossDb();
@@ -198,7 +200,7 @@ public final class PointEvaluator {
         Optional<Diagnosis> diagnosis = Optional.empty();
         if (refusal.isEmpty()) {
             diagnosis = Optional.of(diagnoser.diagnose(latest, predictedLoss,
-                    PathEvidence.of(in.point(), then.send(), then.ret(), in.catalog())));
+                    PathEvidence.of(pointThen, then.send(), then.ret(), in.catalog())));
         } else {
             problems.add(0, refusal.get());
         }
@@ -234,9 +236,10 @@ public final class PointEvaluator {
                 regridder);
     }
 
-    private static PredictedBudget predict(PointInputs in, PathLeg send, PathLeg ret, OpticsCache cache) {
+    private static PredictedBudget predict(PointInputs in, MeasurementPoint point, PathLeg send, PathLeg ret,
+                                           OpticsCache cache) {
         try {
-            return new PointBudgetBuilder(in.catalog()).build(in.point(), send, ret, cache);
+            return new PointBudgetBuilder(in.catalog()).build(point, send, ret, cache);
         } catch (IllegalArgumentException e) {
             throw new IllegalArgumentException("point " + in.point().tag() + ": cannot predict its loss: "
                     + e.getMessage(), e);

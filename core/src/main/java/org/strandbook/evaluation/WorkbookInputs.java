@@ -3,6 +3,7 @@ package org.strandbook.evaluation;
 import java.time.Instant;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 
 import org.strandbook.site.Analyzer;
 import org.strandbook.site.Catalog;
@@ -32,7 +33,11 @@ public final class WorkbookInputs {
                                  Catalog catalog, List<ScanRecord> scans) {
         String tag = point.tag();
         InspectionHistory inspected = new InspectionHistory(workbook.inspections().list(tag));
-        PathTimeline history = when -> legs(tag, workbook.paths().legsAt(tag, when), inspected, when);
+        PathTimeline history = when -> {
+            PathTimeline.Legs then = legs(tag, workbook.paths().legsAt(tag, when), inspected, when);
+            return new PathTimeline.Legs(then.send(), then.ret(),
+                    Optional.of(workbook.maintenance().probeTypeAt(tag, when)));
+        };
         PathTimeline.Legs today = legs(tag, workbook.paths().legs(tag), inspected, Instant.MAX);
         return new PointInputs(site, point, analyzer, today.send(), today.ret(), catalog, scans,
                 id -> workbook.scans().spectrum(id), history, workbook.maintenance().list(tag));

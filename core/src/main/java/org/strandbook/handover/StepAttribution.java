@@ -50,7 +50,8 @@ public final class StepAttribution {
             case REPLACE_CONNECTOR -> "the connector at " + e + " was replaced";
             case REPLACE_SEGMENT -> "cable " + e + " was replaced";
             case REROUTE -> "cable " + e + " was re-routed";
-            case REPLACE_PROBE -> "the probe was replaced";
+            case REPLACE_PROBE -> a.changesProbe() ? "probe " + e + " was replaced by " + a.newProbeTypeCode()
+                    : "the probe was replaced";
             case RETAKE_REFERENCE -> "the reference was re-taken";
         };
     }

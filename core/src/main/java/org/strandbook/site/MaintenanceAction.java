@@ -16,9 +16,20 @@ import java.util.Optional;
  * @param replacement  the element as it is after the action, when the action changed the path
  *                     (a new segment's length and fiber type, a rerouted segment's bends, a new
  *                     connector); the element before it is kept in the path's history
+ * @param newProbeTypeCode the catalog code of the probe type fitted by a probe replacement that
+ *                     changed the type; empty otherwise. The probe type removed is then the
+ *                     action's {@code elementLabel} once recorded (the element worked on), so that
+ *                     scans before the action are judged with the probe they went through
  */
 public record MaintenanceAction(String pointTag, MaintenanceKind kind, String elementLabel, Instant performedAt,
-                                String performedBy, String what, String why, Optional<PathElement> replacement) {
+                                String performedBy, String what, String why, Optional<PathElement> replacement,
+                                String newProbeTypeCode) {
+
+    /** An action that fits no probe type of another kind. */
+    public MaintenanceAction(String pointTag, MaintenanceKind kind, String elementLabel, Instant performedAt,
+                             String performedBy, String what, String why, Optional<PathElement> replacement) {
+        this(pointTag, kind, elementLabel, performedAt, performedBy, what, why, replacement, "");
+    }
 
     public MaintenanceAction {
         pointTag = Require.text(pointTag, "point tag");
@@ -46,6 +57,16 @@ public record MaintenanceAction(String pointTag, MaintenanceKind kind, String el
                         + " cannot put a " + (e instanceof Joint ? "joint" : "cable segment") + " into the path");
             }
         }
+        newProbeTypeCode = newProbeTypeCode == null ? "" : newProbeTypeCode.strip();
+        if (!newProbeTypeCode.isEmpty() && kind != MaintenanceKind.REPLACE_PROBE) {
+            throw new IllegalArgumentException("maintenance at " + pointTag + ": " + kind.words()
+                    + " does not fit a probe; only replace probe takes a new probe type");
+        }
+    }
+
+    /** True when a probe replacement fitted another probe type, which the prediction uses from its date on. */
+    public boolean changesProbe() {
+        return !newProbeTypeCode.isEmpty();
     }
 
     /** True when the action replaced an element of the path. */

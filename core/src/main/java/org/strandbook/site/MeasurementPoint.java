@@ -44,6 +44,12 @@ public record MeasurementPoint(String tag, String service, String location, Stri
         processTemperatureC = processTemperatureC == null ? OptionalDouble.empty() : processTemperatureC;
     }
 
+    /** The same point with another probe type, as it was before (or after) a probe replacement. */
+    public MeasurementPoint withProbeTypeCode(String code) {
+        return code.equals(probeTypeCode) ? this : new MeasurementPoint(tag, service, location, analyzerTag, channel,
+                code, bands, toleranceDb, hazardousArea, hydrogenService, processTemperatureC);
+    }
+
     /** The tolerance that applies: the point's own, else the site default. */
     public double effectiveToleranceDb(Site site) {
         return toleranceDb.orElse(site.defaultToleranceDb());

@@ -6,7 +6,9 @@ import java.sql.SQLException;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.HashMap;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
 
 import org.strandbook.site.CableSegment;
@@ -65,6 +67,8 @@ public final class MaintenanceRepository {
                             + "); changes to the path are recorded in the order they were made");
                 }
             }
+            Optional<String> probeRemoved = action.changesProbe()
+                    ? Optional.of(probeChange(pointId, action, what)) : Optional.empty();
             List<PathLeg> before = action.changesPath() ? paths.legs(action.pointTag()) : List.of();
             long id;
             try (PreparedStatement ps = session.connection().prepareStatement("INSERT INTO maintenance_action "
@@ -72,10 +76,12 @@ public final class MaintenanceRepository {
                     + "VALUES (?, ?, ?, ?, ?, ?, ?) RETURNING id")) {
                 ps.setLong(1, pointId);
                 ps.setString(2, action.kind().name());
-                ps.setString(3, action.elementLabel());
+                // the probe and the reference carry no label, except the probe type a replacement removed
+                ps.setString(3, action.kind().role() == MaintenanceKind.ElementRole.NONE ? probeRemoved.orElse("")
+                        : action.elementLabel());
                 ps.setString(4, StoredTime.format(action.performedAt()));
                 ps.setString(5, action.performedBy());
-                ps.setString(6, described(action, before));
+                ps.setString(6, probeRemoved.map(old -> probeDescribed(action, old)).orElse(described(action, before)));
                 ps.setString(7, action.why());
                 id = Columns.insertReturningId(ps);
                 audit.inserted(AuditedTable.MAINTENANCE_ACTION, id);
@@ -84,8 +90,83 @@ public final class MaintenanceRepository {
                 PathHistory.retire(session, audit, id, before);
                 paths.replaceElement(pointId, action.pointTag(), action.elementLabel(), action.replacement().get());
             }
+            if (action.changesProbe()) {
+                long probeTypeId = RowKeys.probeType(session, action.newProbeTypeCode()).orElseThrow();
+                RowImage was = audit.capture(AuditedTable.POINT, pointId).orElseThrow();
+                try (PreparedStatement ps = session.connection().prepareStatement(
+                        "UPDATE point SET probe_type_id = ? WHERE id = ?")) {
+                    ps.setLong(1, probeTypeId);
+                    ps.setLong(2, pointId);
+                    ps.executeUpdate();
+                }
+                audit.updated(AuditedTable.POINT, pointId, was);
+            }
             return id;
         });
+    }
+
+    /**
+     * Checks a probe replacement that fits another type and returns the type it removes.
+     *
+     * @throws UnknownEntryException    for a probe type not in the catalog
+     * @throws IllegalArgumentException when dated before the point's latest probe change
+     */
+    private String probeChange(long pointId, MaintenanceAction action, String what) throws SQLException {
+        if (RowKeys.probeType(session, action.newProbeTypeCode()).isEmpty()) {
+            throw new UnknownEntryException(what + ": unknown probe type '" + action.newProbeTypeCode()
+                    + "'; add it to the probe catalog first");
+        }
+        try (PreparedStatement ps = session.connection().prepareStatement("SELECT max(performed_at) FROM "
+                + "maintenance_action WHERE point_id = ? AND kind = 'REPLACE_PROBE' AND element_label <> ''")) {
+            ps.setLong(1, pointId);
+            try (ResultSet rs = ps.executeQuery()) {
+                String last = rs.next() ? rs.getString(1) : null;
+                if (last != null && !action.performedAt().isAfter(StoredTime.parse(last))) {
+                    throw new IllegalArgumentException(what + ": dated " + action.performedAt()
+                            + ", not after the point's latest recorded probe change (" + StoredTime.parse(last)
+                            + "); probe changes are recorded in the order they were made");
+                }
+            }
+        }
+        return probeTypeNow(pointId);
+    }
+
+    private String probeTypeNow(long pointId) throws SQLException {
+        try (PreparedStatement ps = session.connection().prepareStatement(
+                "SELECT pt.code FROM point p JOIN probe_type pt ON pt.id = p.probe_type_id WHERE p.id = ?")) {
+            ps.setLong(1, pointId);
+            try (ResultSet rs = ps.executeQuery()) {
+                rs.next();
+                return rs.getString(1);
+            }
+        }
+    }
+
+    /**
+     * The probe type a scan taken at {@code at} went through: the type removed by the first probe
+     * change after it, or the point's probe type today when none came after.
+     */
+    public String probeTypeAt(String pointTag, Instant at) {
+        return session.read(() -> {
+            long pointId = RowKeys.requirePoint(session, pointTag);
+            try (PreparedStatement ps = session.connection().prepareStatement("SELECT element_label FROM "
+                    + "maintenance_action WHERE point_id = ? AND kind = 'REPLACE_PROBE' AND element_label <> '' "
+                    + "AND performed_at > ? ORDER BY performed_at, id LIMIT 1")) {
+                ps.setLong(1, pointId);
+                ps.setString(2, StoredTime.format(at));
+                try (ResultSet rs = ps.executeQuery()) {
+                    if (rs.next()) {
+                        return rs.getString(1);
+                    }
+                }
+            }
+            return probeTypeNow(pointId);
+        });
+    }
+
+    private static String probeDescribed(MaintenanceAction action, String removed) {
+        String change = "before: probe " + removed + "; after: probe " + action.newProbeTypeCode();
+        return action.what().isEmpty() ? change : action.what() + " (" + change + ")";
     }
 
     /**
@@ -98,7 +179,7 @@ public final class MaintenanceRepository {
             try (PreparedStatement ps = session.connection().prepareStatement(
                     SELECT + " WHERE a.point_id = ? ORDER BY a.performed_at, a.id")) {
                 ps.setLong(1, pointId);
-                return actions(ps);
+                return withProbesFitted(actions(ps));
             }
         });
     }
@@ -108,9 +189,32 @@ public final class MaintenanceRepository {
         return session.read(() -> {
             try (PreparedStatement ps = session.connection().prepareStatement(
                     SELECT + " ORDER BY p.tag, a.performed_at, a.id")) {
-                return actions(ps);
+                return withProbesFitted(actions(ps));
             }
         });
+    }
+
+    /**
+     * Probe changes read back with the type they fitted: the type the point's next probe change
+     * removed, or its probe type today. Expects the actions of each point in time order.
+     */
+    private List<MaintenanceAction> withProbesFitted(List<MaintenanceAction> actions) throws SQLException {
+        List<MaintenanceAction> out = new ArrayList<>(actions);
+        Map<String, String> fittedLater = new HashMap<>();
+        for (int i = out.size() - 1; i >= 0; i--) {
+            MaintenanceAction a = out.get(i);
+            if (a.kind() != MaintenanceKind.REPLACE_PROBE || a.elementLabel().isEmpty()) {
+                continue;
+            }
+            String fitted = fittedLater.get(a.pointTag());
+            if (fitted == null) {
+                fitted = probeTypeNow(RowKeys.requirePoint(session, a.pointTag()));
+            }
+            out.set(i, new MaintenanceAction(a.pointTag(), a.kind(), a.elementLabel(), a.performedAt(),
+                    a.performedBy(), a.what(), a.why(), Optional.empty(), fitted));
+            fittedLater.put(a.pointTag(), a.elementLabel());
+        }
+        return out;
     }
 
     private static List<MaintenanceAction> actions(PreparedStatement ps) throws SQLException {

@@ -44,7 +44,8 @@ public final class MarginForecast {
      * @param yearsToZero  years from {@code asOf} to zero margin on the trend line; {@code NaN}
      *                     unless {@link Status#PROJECTED} or {@link Status#ALREADY_EXHAUSTED} (0)
      * @param expectedDate date of zero margin on the trend line
-     * @param earliestDate date of zero margin at the upper slope limit, if within the horizon
+     * @param earliestDate date of zero margin at the upper slope limit, if that limit is bounded and
+     *                     the date lies within the horizon
      * @param latestDate   date of zero margin at the lower slope limit, if it is positive and the
      *                     date lies within the horizon
      */
@@ -112,7 +113,9 @@ public final class MarginForecast {
     }
 
     private Optional<LocalDate> dateAtSlope(double marginDb, double slopeDbPerYear, Instant asOf, ZoneId zone) {
-        if (!(slopeDbPerYear > 0)) {
+        // an unbounded limit (too few readings, as just after a repair) gives no date: "at the last
+        // scan" would read as a date already past
+        if (!(slopeDbPerYear > 0) || Double.isInfinite(slopeDbPerYear)) {
             return Optional.empty();
         }
         double years = marginDb / slopeDbPerYear;

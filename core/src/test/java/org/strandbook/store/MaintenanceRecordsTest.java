@@ -26,6 +26,8 @@ import org.strandbook.site.MaintenanceAction;
 import org.strandbook.site.MaintenanceKind;
 import org.strandbook.site.Note;
 import org.strandbook.site.PathLeg;
+import org.strandbook.site.ProbeKind;
+import org.strandbook.site.ProbeType;
 
 /**
  * Inspections as dated events, maintenance actions and the path's history, notes on elements.
@@ -112,6 +114,58 @@ class MaintenanceRecordsTest {
                 "k.ashdown", "", "ferrule chipped", Optional.of(fresh)));
         assertEquals(OptionalDouble.of(0.4), wb.paths().legs(DemoSite.POINT_A).get(1).joints().get(0).lossDb());
         assertEquals(OptionalDouble.of(0.7), wb.paths().legsAt(DemoSite.POINT_A, DAY_1).get(1).joints().get(0).lossDb());
+    }
+
+    @Test
+    void aProbeReplacementFitsTheNewTypeFromItsDateOnAndKeepsTheOldOneForEarlierScans() {
+        wb.catalog().addProbeType(transflectance());
+        wb.maintenance().add(new MaintenanceAction(DemoSite.POINT_A, MaintenanceKind.REPLACE_PROBE, "", DAY_2,
+                "k.ashdown", "probe swapped at the shutdown", "window etched", Optional.empty(), "TF-2"));
+
+        assertEquals("TF-2", wb.points().get(DemoSite.POINT_A).orElseThrow().probeTypeCode());
+        assertEquals(DemoSite.PROBE, wb.maintenance().probeTypeAt(DemoSite.POINT_A, DAY_1));
+        assertEquals("TF-2", wb.maintenance().probeTypeAt(DemoSite.POINT_A, DAY_2));
+        MaintenanceAction stored = wb.maintenance().list(DemoSite.POINT_A).get(0);
+        assertEquals(DemoSite.PROBE, stored.elementLabel());
+        assertEquals("TF-2", stored.newProbeTypeCode());
+        assertEquals("probe swapped at the shutdown (before: probe TX-5; after: probe TF-2)", stored.what());
+        assertTrue(wb.audit().verify().intact(), () -> wb.audit().verify().toString());
+    }
+
+    @Test
+    void aProbeReplacementWithAnUnknownTypeIsRefusedAndWritesNothing() {
+        UnknownEntryException e = assertThrows(UnknownEntryException.class, () -> wb.maintenance().add(
+                new MaintenanceAction(DemoSite.POINT_A, MaintenanceKind.REPLACE_PROBE, "", DAY_2, "k.ashdown", "", "",
+                        Optional.empty(), "TF-9")));
+        assertTrue(e.getMessage().contains("unknown probe type 'TF-9'"), e.getMessage());
+        assertEquals(List.of(), wb.maintenance().list(DemoSite.POINT_A));
+        assertEquals(DemoSite.PROBE, wb.points().get(DemoSite.POINT_A).orElseThrow().probeTypeCode());
+    }
+
+    @Test
+    void aProbeReplacementDatedInTheFutureIsRefused() {
+        wb.catalog().addProbeType(transflectance());
+        Instant nextYear = Instant.now().plus(Duration.ofDays(365));
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> wb.maintenance().add(
+                new MaintenanceAction(DemoSite.POINT_A, MaintenanceKind.REPLACE_PROBE, "", nextYear, "k.ashdown", "",
+                        "", Optional.empty(), "TF-2")));
+        assertTrue(e.getMessage().contains("in the future"), e.getMessage());
+        assertEquals(DemoSite.PROBE, wb.points().get(DemoSite.POINT_A).orElseThrow().probeTypeCode());
+    }
+
+    @Test
+    void aProbeChangeDatedBeforeTheLatestOneIsRefused() {
+        wb.catalog().addProbeType(transflectance());
+        wb.maintenance().add(new MaintenanceAction(DemoSite.POINT_A, MaintenanceKind.REPLACE_PROBE, "", DAY_2,
+                "k.ashdown", "", "", Optional.empty(), "TF-2"));
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> wb.maintenance().add(
+                new MaintenanceAction(DemoSite.POINT_A, MaintenanceKind.REPLACE_PROBE, "", DAY_1, "k.ashdown", "", "",
+                        Optional.empty(), DemoSite.PROBE)));
+        assertTrue(e.getMessage().contains("latest recorded probe change"), e.getMessage());
+    }
+
+    private static ProbeType transflectance() {
+        return new ProbeType("TF-2", "transflectance, 2 mm path", ProbeKind.TRANSFLECTANCE, "SAPPHIRE", 4, 4.0, 2.5);
     }
 
     @Test

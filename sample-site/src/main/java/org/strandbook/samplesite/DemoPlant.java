@@ -1,7 +1,9 @@
 package org.strandbook.samplesite;
 
+import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.OptionalDouble;
 
 import org.strandbook.site.Analyzer;
@@ -47,17 +49,33 @@ public final class DemoPlant {
     /**
      * One demo point: its record, its two legs, and the fault its scans carry.
      *
+     * @param cleaning a joint found dirty at commissioning and cleaned later, if any
      * @param faultSizeDb the fault's size where the demo fixes it (dB); NaN: drawn from the seed
      * @param jointExcessDb how much more each joint truly loses than its record says (dB), within the
      *        connector type's normal spread: a healthy loop at the lossy end of its parts
      */
     public record DemoPoint(MeasurementPoint point, PathLeg send, PathLeg ret, Fault fault, String faultyElement,
-                            double faultSizeDb, double jointExcessDb) {
+                            Optional<JointCleaning> cleaning, double faultSizeDb, double jointExcessDb) {
 
-        public DemoPoint(MeasurementPoint point, PathLeg send, PathLeg ret, Fault fault, String faultyElement) {
-            this(point, send, ret, fault, faultyElement, Double.NaN, 0);
+        public DemoPoint {
+            cleaning = cleaning == null ? Optional.empty() : cleaning;
+        }
+
+        public DemoPoint(MeasurementPoint point, PathLeg send, PathLeg ret, Fault fault, String faultyElement,
+                         Optional<JointCleaning> cleaning) {
+            this(point, send, ret, fault, faultyElement, cleaning, Double.NaN, 0);
         }
     }
+
+    /**
+     * A joint found dirty at commissioning and cleaned later: its scans carry the dirty-connector excess
+     * until {@code cleanedAt}, and none after, so the trend shows the step the cleaning made.
+     */
+    public record JointCleaning(String jointLabel, Instant cleanedAt) {
+    }
+
+    /** When the crew cleaned AT-4104's junction-box joint J5 (an invented event). */
+    public static final Instant J5_CLEANED = Instant.parse("2026-01-12T10:30:00Z");
 
     private final Site site = new Site(SITE_NAME, "Unit 40 – Polyols and solvent recovery", "A", 1.0);
     private final List<Analyzer> analyzers = List.of(
@@ -110,7 +128,8 @@ public final class DemoPlant {
         add(point("AT-4103", "Column C-420 overhead", "C-420 top platform", "AZ-41", 3, "PT-TF2",
                 List.of(ch3, oh1), true, false, 95), 120, 120, "LOH-400", Fault.TIGHT_BEND);
         add(point("AT-4104", "Blender M-430 discharge", "Shelter S1 wall, sample loop", "AZ-41", 4, "PT-TX5",
-                List.of(ch2, comb), false, false, 30), 2, 2, "LOH-200", Fault.NONE);
+                List.of(ch2, comb), false, false, 30), 2, 2, "LOH-200", Fault.NONE,
+                Optional.of(new JointCleaning("J5", J5_CLEANED)));
         add(point("AT-4105", "Hydrogenator R-440", "R-440 bottom nozzle", "AZ-41", 5, "PT-TX5",
                 List.of(ch3Wide, ch2), true, true, 165), 45, 45, "LOH-200", Fault.HYDROGEN_DARKENING);
         add(point("AT-4106", "Tank T-450 rundown", "T-450 roof", "AZ-41", 6, "PT-TF2",
@@ -142,7 +161,7 @@ public final class DemoPlant {
         PathLeg ret = new PathLeg(p.tag(), PathDirection.RETURN, List.of(
                 new Joint("J2", "SMA-B", "SMA-B", InspectionGrade.DIRTY, OptionalDouble.of(0.85), LossBasis.MEASURED),
                 new CableSegment("C4109-R1", "LOH-200", 0.75, List.of())));
-        points.add(new DemoPoint(p, send, ret, Fault.DIRTY_CONNECTOR, "J2", 0.8, 0));
+        points.add(new DemoPoint(p, send, ret, Fault.DIRTY_CONNECTOR, "J2", Optional.empty(), 0.8, 0));
     }
 
     /**
@@ -163,7 +182,7 @@ public final class DemoPlant {
                 joint("J6", ""), new CableSegment("C4203-R2", fiber, 145.0, List.of()),
                 joint("J7", ""), new CableSegment("C4203-R3", fiber, 150.0, List.of()),
                 joint("J8", ""), new CableSegment("C4203-R4", fiber, 2.0, List.of())));
-        points.add(new DemoPoint(p, send, ret, Fault.NONE, "", Double.NaN, 0.13));
+        points.add(new DemoPoint(p, send, ret, Fault.NONE, "", Optional.empty(), Double.NaN, 0.13));
     }
 
     private static MeasurementPoint point(String tag, String service, String location, String analyzer, int channel,
@@ -183,6 +202,11 @@ public final class DemoPlant {
      * inspection caught.
      */
     private void add(MeasurementPoint p, double sendM, double returnM, String fiber, Fault fault) {
+        add(p, sendM, returnM, fiber, fault, Optional.empty());
+    }
+
+    private void add(MeasurementPoint p, double sendM, double returnM, String fiber, Fault fault,
+                     Optional<JointCleaning> cleaning) {
         String t = p.tag().substring(p.tag().indexOf('-') + 1);
         String faulty = switch (fault) {
             case DIRTY_CONNECTOR -> "J2";
@@ -192,13 +216,16 @@ public final class DemoPlant {
             case BROKEN_FIBER -> "C" + t + "-R2";
             case NONE -> "";
         };
-        PathLeg send = leg(p.tag(), PathDirection.SEND, "C" + t + "-S", sendM, fiber, faulty, 1);
-        PathLeg ret = leg(p.tag(), PathDirection.RETURN, "C" + t + "-R", returnM, fiber, faulty, 4);
-        points.add(new DemoPoint(p, send, ret, fault, faulty));
+        // the records carry the grade of the commissioning inspection: dirty for the faulty joint and
+        // for a joint that is cleaned later
+        String dirty = cleaning.map(JointCleaning::jointLabel).orElse(faulty);
+        PathLeg send = leg(p.tag(), PathDirection.SEND, "C" + t + "-S", sendM, fiber, dirty, 1);
+        PathLeg ret = leg(p.tag(), PathDirection.RETURN, "C" + t + "-R", returnM, fiber, dirty, 4);
+        points.add(new DemoPoint(p, send, ret, fault, faulty, cleaning));
     }
 
     private static PathLeg leg(String tag, PathDirection dir, String cable, double lengthM, String fiber,
-                               String faulty, int firstJoint) {
+                               String dirtyJoint, int firstJoint) {
         double patchM = Math.min(2.0, lengthM / 4);
         double tailM = Math.min(3.0, lengthM / 4);
         double trunkM = lengthM - patchM - tailM;
@@ -207,25 +234,25 @@ public final class DemoPlant {
         if (send) {
             // analyzer port → patch cord → panel J1 → trunk → junction box J2 → tail → probe J3
             e.add(new CableSegment(cable + "1", fiber, patchM, List.of()));
-            e.add(joint("J" + firstJoint, faulty));
+            e.add(joint("J" + firstJoint, dirtyJoint));
             e.add(new CableSegment(cable + "2", fiber, trunkM, List.of()));
-            e.add(joint("J" + (firstJoint + 1), faulty));
+            e.add(joint("J" + (firstJoint + 1), dirtyJoint));
             e.add(new CableSegment(cable + "3", fiber, tailM, List.of()));
-            e.add(joint("J" + (firstJoint + 2), faulty));
+            e.add(joint("J" + (firstJoint + 2), dirtyJoint));
         } else {
             // probe J4 → tail → junction box J5 → trunk → panel J6 → patch cord → detector port
-            e.add(joint("J" + firstJoint, faulty));
+            e.add(joint("J" + firstJoint, dirtyJoint));
             e.add(new CableSegment(cable + "1", fiber, tailM, List.of()));
-            e.add(joint("J" + (firstJoint + 1), faulty));
+            e.add(joint("J" + (firstJoint + 1), dirtyJoint));
             e.add(new CableSegment(cable + "2", fiber, trunkM, List.of()));
-            e.add(joint("J" + (firstJoint + 2), faulty));
+            e.add(joint("J" + (firstJoint + 2), dirtyJoint));
             e.add(new CableSegment(cable + "3", fiber, patchM, List.of()));
         }
         return new PathLeg(tag, dir, e);
     }
 
-    private static Joint joint(String label, String faulty) {
-        InspectionGrade grade = label.equals(faulty) ? InspectionGrade.DIRTY : InspectionGrade.CLEAN;
+    private static Joint joint(String label, String dirtyJoint) {
+        InspectionGrade grade = label.equals(dirtyJoint) ? InspectionGrade.DIRTY : InspectionGrade.CLEAN;
         return new Joint(label, "SMA-A", "SMA-A", grade, OptionalDouble.empty(), LossBasis.ASSUMED);
     }
 

@@ -19,13 +19,15 @@ import org.strandbook.store.Workbook;
 
 /**
  * The demo's maintenance and handover records: commissioning inspections of every joint, notes, the
- * commissioning sign-offs of revision A, and a later like-for-like patch cord replacement at AT-4101
- * that re-opens its signed point (and so the signed revision). People and events are invented.
+ * commissioning sign-offs of revision A, the cleaning of AT-4104's dirty junction-box joint J5 (a step
+ * in its trend), and a later like-for-like patch cord replacement at AT-4101 that re-opens its signed
+ * point (and so the signed revision). People and events are invented.
  */
 final class DemoRecords {
 
     static final String REOPENED = "AT-4101";
     static final String DIRTY = "AT-4102";
+    static final String CLEANED = "AT-4104";
     private static final Instant FIRST_VISIT = ScanGenerator.COMMISSIONING;
 
     private DemoRecords() {
@@ -53,7 +55,7 @@ final class DemoRecords {
             wb.notes().add(new Note(REOPENED, FIRST_VISIT.plus(Duration.ofDays(1)), "I. Marsh",
                     "loop accepted at commissioning; reference patch cord P-07 kept in the shelter"));
             Instant signed = FIRST_VISIT.plus(Duration.ofDays(14));
-            for (String tag : List.of(REOPENED, "AT-4104")) {
+            for (String tag : List.of(REOPENED, "AT-4107")) {
                 wb.signOffs().add(new SignOff(SignOffRole.CHECKED, "M. Okonedo", signed, tag, "loop within tolerance",
                         "commissioning lead", "", ""));
             }
@@ -63,6 +65,7 @@ final class DemoRecords {
             wb.signOffs().add(new SignOff(SignOffRole.APPROVED, "R. Fairbairn", signed.plus(Duration.ofDays(2)), "",
                     "", "site analyzer engineer", "", ""));
         });
+        addCleaning(wb, plant);
         // after the signatures: a later change that re-opens the signed point and revision A
         DemoPlant.DemoPoint reopened = plant.points().stream().filter(p -> p.point().tag().equals(REOPENED))
                 .findFirst().orElseThrow();
@@ -72,5 +75,28 @@ final class DemoRecords {
                 sixthVisit.minus(Duration.ofDays(10)), "T. Okonjo", "patch cord replaced like for like",
                 "jacket cut by the cabinet door", Optional.of(new CableSegment(cord.label(), cord.fiberTypeCode(),
                         cord.lengthM(), List.of()))));
+    }
+
+    /** AT-4104's J5: dirty at commissioning, re-inspected still dirty, cleaned on the recorded day. */
+    private static void addCleaning(Workbook wb, DemoPlant plant) {
+        DemoPlant.JointCleaning cleaning = plant.points().stream().filter(p -> p.point().tag().equals(CLEANED))
+                .findFirst().orElseThrow().cleaning().orElseThrow();
+        String joint = cleaning.jointLabel();
+        Instant cleaned = cleaning.cleanedAt();
+        Instant thirdVisit = FIRST_VISIT.plus(ScanGenerator.VISIT_INTERVAL.multipliedBy(2));
+        wb.inTransaction(() -> {
+            wb.inspections().add(new Inspection(CLEANED, joint, thirdVisit.plus(Duration.ofHours(4)), "R. Valdés",
+                    InspectionGrade.DIRTY, "film over the core again after re-mating; swab only, no dry cleaner",
+                    ""));
+            wb.notes().add(new Note(CLEANED, joint, thirdVisit.plus(Duration.ofHours(4)), "R. Valdés",
+                    "loop reads about 2 dB over prediction since commissioning; clean J5 with a dry cleaner at the "
+                            + "next visit"));
+            wb.maintenance().add(new MaintenanceAction(CLEANED, MaintenanceKind.CLEAN_JOINT, joint, cleaned,
+                    "K. Lindqvist", "both end faces cleaned with a dry reel cleaner, re-inspected",
+                    "dirty at commissioning and at the third visit; excess flat across the range",
+                    Optional.empty()));
+            wb.inspections().add(new Inspection(CLEANED, joint, cleaned, "K. Lindqvist", InspectionGrade.CLEAN,
+                    "after clean joint", ""));
+        });
     }
 }

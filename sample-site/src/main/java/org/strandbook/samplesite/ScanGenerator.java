@@ -44,7 +44,8 @@ import org.strandbook.site.ScanKind;
  *   <li>Loop: the reference's lamp light times the true loop transmittance, where the true loop is the
  *       recorded one with each joint re-mated at every visit (±0.05 dB) and the fault applied; the lamp
  *       also drifts a little between reference and loop (a tilt of ±0.02 dB).</li>
- *   <li>Faults, with seed-drawn sizes: a dirty junction-box joint (+1.5 to 3 dB); a crushed trunk
+ *   <li>Faults, with seed-drawn sizes: a dirty junction-box joint (+1.5 to 3 dB), at one point until the
+ *       recorded cleaning, after which it is gone; a crushed trunk
  *       (a Gloge bend of 38–48 mm on a 400 µm core, not in the records); a high-OH patch cord in place
  *       of a low-OH one (500–1000 ppm); hydrogen darkening growing linearly to 1.5–3 dB at 1240 nm over
  *       two years; a return trunk that breaks at visit 5, 6 or 7.</li>
@@ -138,8 +139,10 @@ public final class ScanGenerator {
             double integrationMs = analyzer.detector() == org.strandbook.site.DetectorType.SILICON ? 20 : 50;
             double yearFraction = Duration.between(COMMISSIONING, t0).toHours() / (24 * 365.25);
 
-            PathLeg send = truthLeg(dp, dp.send(), rnd, dirtyDb, bendRadiusMm);
-            PathLeg ret = truthLeg(dp, dp.ret(), rnd, dirtyDb, bendRadiusMm);
+            String stillDirty = dp.cleaning().filter(c -> t0.isBefore(c.cleanedAt()))
+                    .map(DemoPlant.JointCleaning::jointLabel).orElse("");
+            PathLeg send = truthLeg(dp, dp.send(), rnd, dirtyDb, bendRadiusMm, stillDirty);
+            PathLeg ret = truthLeg(dp, dp.ret(), rnd, dirtyDb, bendRadiusMm, stillDirty);
             Catalog truthCatalog = dp.fault() == DemoPlant.Fault.HIGH_OH_FIBER ? withHighOh(highOhPpm) : catalog;
             double[] lossDb = new PointBudgetBuilder(truthCatalog).build(point, send, ret, cache).totalLossDb();
             double[] faultDb = new double[axis.size()];
@@ -211,16 +214,20 @@ public final class ScanGenerator {
         return dp.ret().segments().get(1).fiberTypeCode();
     }
 
-    /** The leg as it really is at one visit: re-mated joints, and the fault where it sits. */
+    /**
+     * The leg as it really is at one visit: re-mated joints, the fault where it sits, and the
+     * dirty-connector excess at a joint not yet cleaned ({@code stillDirty}, empty when none).
+     */
     private PathLeg truthLeg(DemoPlant.DemoPoint dp, PathLeg recorded, Random rnd, double dirtyDb,
-                             double bendRadiusMm) {
+                             double bendRadiusMm, String stillDirty) {
         List<PathElement> out = new ArrayList<>();
         for (PathElement e : recorded.elements()) {
             if (e instanceof Joint j) {
                 // a joint measured at commissioning truly loses what was measured, else its type's typical loss
                 double asRecorded = j.lossDb().orElse(catalog.connector(j.connectorTypeA()).typicalLossDb());
                 double loss = Math.max(0, asRecorded + dp.jointExcessDb() + 0.05 * rnd.nextGaussian());
-                if (dp.fault() == DemoPlant.Fault.DIRTY_CONNECTOR && j.label().equals(dp.faultyElement())) {
+                boolean dirty = dp.fault() == DemoPlant.Fault.DIRTY_CONNECTOR && j.label().equals(dp.faultyElement());
+                if (dirty || j.label().equals(stillDirty)) {
                     loss += dirtyDb;
                 }
                 out.add(new Joint(j.label(), j.connectorTypeA(), j.connectorTypeB(), j.grade(),

@@ -345,7 +345,7 @@ final class EvaluationText {
         return tr.outlook().map(o -> switch (o.status()) {
             case ALREADY_EXHAUSTED -> "already used up";
             case PROJECTED -> o.expectedDate().map(Object::toString).orElse("—")
-                    + o.earliestDate().map(d -> " (earliest " + d + ")").orElse("");
+                    + o.earliestDate().map(d -> " (earliest " + d + ")").orElse(" (earliest: not bounded yet)");
             case BEYOND_HORIZON -> "beyond " + (int) MarginForecast.withDefaults().horizonYears() + " years";
             case NOT_SHRINKING -> "not shrinking";
         }).orElse("—");

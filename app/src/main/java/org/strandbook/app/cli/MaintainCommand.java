@@ -36,7 +36,7 @@ import picocli.CommandLine.Spec;
             + "replace-segment, reroute, replace-probe or retake-reference, with who, when, what and why. "
             + "A replacement (--new-length-m, --new-fiber, --new-label, --bend, --straight, --connector, --loss-db) "
             + "changes the predicted budget from its date on; scans taken before it are still judged against "
-            + "the path as it was. Work on fibers and process connections: see the README's Safety section.")
+            + "the path as it was; likewise a replaced probe's new type (--probe-type). Work on fibers and process connections: see the README's Safety section.")
 final class MaintainCommand implements Callable<Integer> {
 
     @Mixin
@@ -88,6 +88,10 @@ final class MaintainCommand implements Callable<Integer> {
     @Option(names = "--loss-db", paramLabel = "DB", description = "Replacement joint: its measured loss, dB.")
     Double lossDb;
 
+    @Option(names = "--probe-type", paramLabel = "CODE", description = "replace-probe: the catalog code of the probe "
+            + "type fitted, when it differs; the prediction uses it from this date on.")
+    String probeType;
+
     @Option(names = "--grade-after", paramLabel = "GRADE",
             description = "Also record the end-face inspection done after the work (clean, acceptable, dirty, damaged).")
     String gradeAfter;
@@ -109,10 +113,18 @@ final class MaintainCommand implements Callable<Integer> {
             throw new UsageProblem("--grade-after applies to work on a joint, not to " + kind.words());
         }
         String label = element == null ? "" : element.strip();
+        if (!label.isEmpty() && kind.role() == MaintenanceKind.ElementRole.NONE) {
+            throw new UsageProblem("--element names a joint or cable; " + kind.words() + " works on none"
+                    + (kind == MaintenanceKind.REPLACE_PROBE ? " (the new probe type goes in --probe-type)" : ""));
+        }
+        if (probeType != null && kind != MaintenanceKind.REPLACE_PROBE) {
+            throw new UsageProblem("--probe-type applies to replace-probe, not to " + kind.words());
+        }
+        String fitted = probeType == null ? "" : probeType.strip();
         boolean hazardous;
         try (Workbook wb = workbook.open()) {
             Optional<PathElement> replacement = replacement(wb, kind, label);
-            MaintenanceAction a = new MaintenanceAction(point, kind, label, when, by, what, why, replacement);
+            MaintenanceAction a = new MaintenanceAction(point, kind, label, when, by, what, why, replacement, fitted);
             wb.inTransaction(() -> {
                 wb.maintenance().add(a);
                 if (after != null) {
@@ -123,7 +135,8 @@ final class MaintainCommand implements Callable<Integer> {
         }
         PrintWriter out = spec.commandLine().getOut();
         out.println("recorded: " + kind.words() + " at " + point + (label.isEmpty() ? "" : " " + label) + " on " + when
-                + " by " + by.strip() + (replacement(kind) ? "; the path changes from this date on" : ""));
+                + " by " + by.strip() + (replacement(kind) ? "; the path changes from this date on" : "")
+                + (fitted.isEmpty() ? "" : "; probe type " + fitted + " is predicted from this date on"));
         out.flush();
         if (hazardous) {
             FieldCautions.hazardousPoint(spec.commandLine().getErr(), point);

@@ -123,6 +123,44 @@ class DemoCommandTest {
     }
 
     @Test
+    void theDemosCleaningOfJ5IsTheCauseOfAT4104sStep() {
+        // design choice of the demo: J5 dirty (+1.5 to 3 dB, seed-drawn) until the cleaning recorded on
+        // 2026-01-12, between the fifth and sixth visits
+        CliRun r = CliRun.of("trend", workbook.toString(), "--point", "AT-4104");
+        assertEquals(0, r.exitCode(), r.err());
+        Matcher step = Pattern.compile("step of -(\\d+\\.\\d+) dB between 2025-11-03\\S* and 2026-02-02\\S*; "
+                + "\u2212\\d+\\.\\d dB after J5 was cleaned on 2026-01-12").matcher(r.out());
+        assertTrue(step.find(), r.out());
+        double stepDb = Double.parseDouble(step.group(1));
+        assertTrue(stepDb >= 1.2 && stepDb <= 3.3, "the injected 1.5 to 3 dB, give or take re-mating scatter: "
+                + stepDb);
+    }
+
+    @Test
+    void aForecastRestartedByTheCleaningGivesNoDateBeforeTheLastScan() {
+        // Sen (1968), J. Am. Stat. Assoc. 63, 1379: four readings since the cleaning do not bound the
+        // slope at 95 %, so there is no earliest date; any date given lies after the last visit (2026-11-02)
+        CliRun r = CliRun.of("trend", workbook.toString(), "--point", "AT-4104", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        Matcher dates = Pattern.compile("\"(expected|earliest|latest)_date\":\"(\\d{4}-\\d{2}-\\d{2})\"")
+                .matcher(r.out());
+        while (dates.find()) {
+            assertTrue(dates.group(2).compareTo("2026-11-02") > 0, dates.group() + " in " + r.out());
+        }
+    }
+
+    @Test
+    void theDossierSaysWhatWasDoneAboutAT4104sDirtyJoint() throws Exception {
+        Path dossier = dir.resolve("demo").resolve("saltmarsh-ridge-dossier.xlsx");
+        try (org.apache.poi.xssf.usermodel.XSSFWorkbook x = new org.apache.poi.xssf.usermodel.XSSFWorkbook(
+                Files.newInputStream(dossier))) {
+            StringBuilder text = new StringBuilder();
+            x.forEach(sheet -> sheet.forEach(row -> row.forEach(cell -> text.append(cell.toString()).append('\n'))));
+            assertTrue(text.toString().contains("after J5 was cleaned on 2026-01-12"), "no attributed step in the dossier");
+        }
+    }
+
+    @Test
     void importingTheSameScanFileTwiceIsRefused() throws Exception {
         Path file;
         try (var files = Files.list(dir.resolve("demo").resolve("scans").resolve("AT-4101"))) {

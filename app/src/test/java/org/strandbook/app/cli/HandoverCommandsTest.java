@@ -97,6 +97,46 @@ class HandoverCommandsTest {
     }
 
     @Test
+    void aProbeReplacementRecordsTheNewTypeWhichThePointThenCarries() {
+        // the demo's catalog holds PT-TX5 (AT-4101's probe) and PT-TF2 (invented demo data)
+        CliRun r = run("maintain", site, "--point", HEALTHY, "--action", "replace-probe", "--probe-type", "PT-TF2",
+                "--by", "t.okonjo", "--at", afterScans.toString(), "--why", "window etched");
+        assertEquals(0, r.exitCode(), r.err());
+        assertTrue(r.out().contains("probe type PT-TF2 is predicted from this date on"), r.out());
+        CliRun history = run("history", site, "--point", HEALTHY);
+        assertTrue(history.out().contains("before: probe PT-TX5; after: probe PT-TF2"), history.out());
+        try (Workbook wb = Workbook.open(Path.of(site), DemoWorkbook.USER)) {
+            assertEquals("PT-TF2", wb.points().get(HEALTHY).orElseThrow().probeTypeCode());
+        }
+        assertEquals(0, run("audit", "verify", site).exitCode());
+    }
+
+    @Test
+    void aProbeReplacementWithAnUnknownTypeIsRejectedInOneLine() {
+        CliRun r = run("maintain", site, "--point", HEALTHY, "--action", "replace-probe", "--probe-type", "PT-ZZ",
+                "--by", "t.okonjo", "--at", afterScans.toString());
+        assertEquals(1, r.exitCode());
+        assertTrue(r.err().contains("unknown probe type 'PT-ZZ'"), r.err());
+        assertEquals(1, r.err().lines().count());
+    }
+
+    @Test
+    void aProbeReplacementDatedInTheFutureIsRejected() {
+        CliRun r = run("maintain", site, "--point", HEALTHY, "--action", "replace-probe", "--probe-type", "PT-TF2",
+                "--by", "t.okonjo", "--at", Instant.now().plus(Duration.ofDays(400)).toString().substring(0, 10));
+        assertEquals(1, r.exitCode());
+        assertTrue(r.err().contains("in the future"), r.err());
+    }
+
+    @Test
+    void aProbeTypeOnAnotherActionIsWrongUsage() {
+        CliRun r = run("maintain", site, "--point", HEALTHY, "--action", "clean-joint", "--element", "J2",
+                "--probe-type", "PT-TF2", "--by", "t.okonjo", "--at", afterScans.toString());
+        assertEquals(2, r.exitCode());
+        assertTrue(r.err().contains("--probe-type applies to replace-probe"), r.err());
+    }
+
+    @Test
     void signingWithoutANameIsWrongUsageAndAnUnevaluatedPointIsRefused() {
         assertEquals(2, run("sign", site, "--point", HEALTHY, "--role", "approved").exitCode());
         CliRun blank = run("sign", site, "--point", HEALTHY, "--role", "approved", "--name", " ");

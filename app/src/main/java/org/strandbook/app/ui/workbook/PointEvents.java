@@ -22,6 +22,10 @@ interface PointEvents {
     /** A recorded maintenance action replaced an element of the point's path in the workbook. */
     void pathReplaced(String pointTag);
 
+    /** A record (inspection, action, note, sign-off) was written or withdrawn at the point. */
+    default void recorded(String pointTag) {
+    }
+
     /** Anything else worth a line in the status bar. */
     void failed(Exception e);
 }

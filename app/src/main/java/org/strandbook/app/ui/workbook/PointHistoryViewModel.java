@@ -30,6 +30,7 @@ public final class PointHistoryViewModel {
     private final TaskExecutor tasks;
     private final Supplier<List<PathLeg>> legs;
     private final Consumer<String> pathChanged;
+    private final Consumer<String> recorded;
     private final ObservableList<PointEvent> events = FXCollections.observableArrayList();
     /** One read-only view, kept: listeners on a view that is dropped would go with it. */
     private final ObservableList<PointEvent> shownEvents = FXCollections.unmodifiableObservableList(events);
@@ -39,13 +40,15 @@ public final class PointHistoryViewModel {
     /**
      * @param legs        the shown point's legs, for the dialogs' choices
      * @param pathChanged told the point's tag after a recorded replacement changed its path
+     * @param recorded    told the point's tag after any record was written or withdrawn
      */
     PointHistoryViewModel(WorkbookService service, TaskExecutor tasks, Supplier<List<PathLeg>> legs,
-                          Consumer<String> pathChanged) {
+                          Consumer<String> pathChanged, Consumer<String> recorded) {
         this.service = service;
         this.tasks = tasks;
         this.legs = legs;
         this.pathChanged = pathChanged;
+        this.recorded = recorded;
     }
 
     public ObservableList<PointEvent> events() {
@@ -95,7 +98,7 @@ public final class PointHistoryViewModel {
     }
 
     public void recordMaintenance(MaintenanceAction action) {
-        record(action.kind().words(), s -> s.addMaintenance(action), action.changesPath());
+        record(action.kind().words(), s -> s.addMaintenance(action), action.changesPath() || action.changesProbe());
     }
 
     public void recordNote(Note note) {
@@ -120,6 +123,7 @@ public final class PointHistoryViewModel {
                 events.setAll(list);
             }
             message.set("recorded: " + what + " at " + tag);
+            recorded.accept(tag);
             if (changesPath) {
                 pathChanged.accept(tag);
             }

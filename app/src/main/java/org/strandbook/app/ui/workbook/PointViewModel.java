@@ -95,7 +95,7 @@ public final class PointViewModel {
         this.measuredPlot = new SpectrumPlotModel(axes);
         this.trendPlot = new TrendPlotModel(axes);
         this.history = new PointHistoryViewModel(service, tasks, () -> point == null ? List.of() : shownLegs(),
-                events::pathReplaced);
+                events::pathReplaced, events::recorded);
         history.events().addListener((javafx.collections.ListChangeListener<PointEvent>) c -> trendPlot.marks(
                 history.events().stream().filter(e -> e.kind() == PointEvent.Kind.ACTION
                                 || e.kind() == PointEvent.Kind.INSPECTION)

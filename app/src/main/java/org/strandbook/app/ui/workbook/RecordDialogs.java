@@ -52,8 +52,8 @@ final class RecordDialogs {
 
     static RecordDialog<MaintenanceAction> maintenance(Window owner, PointHistoryViewModel vm) {
         return new RecordDialog<>(owner, "maintenance-dialog", "Record maintenance",
-                "Work done at " + vm.pointTag() + ". A replaced segment changes the prediction from its date on; "
-                        + "older scans keep the path of their day.") {
+                "Work done at " + vm.pointTag() + ". A replaced segment or probe changes the prediction from its "
+                        + "date on; older scans keep the path and probe of their day.") {
             private final ComboBox<MaintenanceKind> kind = choice("maintenance-kind", "Action",
                     List.of(MaintenanceKind.values()));
             private final TextField element = text("maintenance-element", "Joint or cable ID", "J2, C4102-R2");
@@ -64,6 +64,7 @@ final class RecordDialogs {
             private final TextField lengthM = text("maintenance-length", "New segment length (m)",
                     "replace segment only");
             private final TextField fiber = text("maintenance-fiber", "New fiber type", "replace segment only");
+            private final TextField probe = text("maintenance-probe", "New probe type", "replace probe, if another type");
 
             @Override
             MaintenanceAction build() {
@@ -76,8 +77,12 @@ final class RecordDialogs {
                             ? vm.cableFiber(label) : fiber.getText().strip();
                     replacement = Optional.of(new CableSegment(label, code, parseMetres(length), List.of()));
                 }
+                String probeType = probe.getText() == null ? "" : probe.getText().strip();
+                if (!probeType.isEmpty() && k != MaintenanceKind.REPLACE_PROBE) {
+                    throw new IllegalArgumentException("a new probe type goes with replace probe, not with " + k.words());
+                }
                 return new MaintenanceAction(vm.pointTag(), k, label, time(at), by.getText(), what.getText(),
-                        why.getText(), replacement);
+                        why.getText(), replacement, probeType);
             }
 
             @Override

@@ -5,10 +5,12 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.CancellationException;
 import java.util.function.IntPredicate;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
@@ -17,7 +19,9 @@ import org.strandbook.app.ui.task.JobProgress;
 import org.strandbook.evaluation.PointEvaluation;
 import org.strandbook.evaluation.PointEvaluator;
 import org.strandbook.evaluation.PointInputs;
+import org.strandbook.evaluation.Urgency;
 import org.strandbook.evaluation.WorkbookInputs;
+import org.strandbook.handover.FollowUps;
 import org.strandbook.handover.PointEvent;
 import org.strandbook.handover.PointHistory;
 import org.strandbook.handover.PointSigning;
@@ -201,6 +205,37 @@ public final class SqliteWorkbookService implements WorkbookService {
             }
         }
         return out;
+    }
+
+    @Override
+    public synchronized List<AttentionRow> attention(PointsDone progress) {
+        Workbook wb = require();
+        Site site = wb.site().get();
+        Catalog catalog = Catalog.of(wb.catalog().fiberTypes(), wb.catalog().connectorTypes(), wb.catalog().probeTypes());
+        List<MeasurementPoint> points = wb.points().list();
+        List<PointEvaluation> evaluated = new ArrayList<>();
+        Map<String, String> refused = new LinkedHashMap<>();
+        for (int i = 0; i < points.size(); i++) {
+            String tag = points.get(i).tag();
+            try {
+                evaluated.add(evaluator.evaluate(inputs(wb, site, catalog, tag)));
+            } catch (IllegalArgumentException e) {
+                refused.put(tag, e.getMessage());
+            }
+            if (!progress.done(i + 1, points.size())) {
+                throw new CancellationException("ranking stopped");
+            }
+        }
+        List<AttentionRow> rows = new ArrayList<>();
+        for (PointEvaluation e : Urgency.rank(evaluated)) {
+            String tag = e.point().tag();
+            rows.add(new AttentionRow(rows.size() + 1, tag, Optional.of(e.status()),
+                    e.worstBand().map(v -> v.band().name()).orElse(""), Urgency.leastMarginDb(e),
+                    Urgency.runOutDate(e), e.shortFinding(), FollowUps.of(e, wb.maintenance().list(tag))));
+        }
+        refused.forEach((tag, why) -> rows.add(new AttentionRow(rows.size() + 1, tag, Optional.empty(), "", Double.NaN,
+                Optional.empty(), why, List.of())));
+        return rows;
     }
 
     private static PointInputs inputs(Workbook wb, Site site, Catalog catalog, String tag) {

@@ -74,6 +74,20 @@ public interface WorkbookService extends AutoCloseable {
      */
     List<PointStatus> evaluatePoints(List<String> pointTags, IntPredicate pointDone);
 
+    /** Told the count of points done and their total after each point; returns false to stop. */
+    @FunctionalInterface
+    interface PointsDone {
+        boolean done(int done, int total);
+    }
+
+    /**
+     * Evaluates every point and ranks them as the {@code trend} command does (failing first, then by
+     * margin run-out date, then review, then least margin), each with its follow-ups. A point that
+     * cannot be evaluated comes last, saying why. Stopped by {@code progress}: throws
+     * {@link java.util.concurrent.CancellationException}.
+     */
+    List<AttentionRow> attention(PointsDone progress);
+
     ScanFileImporter.Summary importScans(ScanFileImporter.Request request, ScanFileImporter.Progress progress);
 
     /** Imports a filled cable schedule; nothing is written when it has problems. */

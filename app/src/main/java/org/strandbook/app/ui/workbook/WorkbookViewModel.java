@@ -74,6 +74,7 @@ public final class WorkbookViewModel {
     private final SheetModel<ConnectorType> connectors = ConnectorSheet.create();
     private final SheetModel<ProbeType> probes = ProbeSheet.create();
     private final PointViewModel point;
+    private final AttentionViewModel attention;
 
     private final ReadOnlyObjectWrapper<SiteOutline> outline = new ReadOnlyObjectWrapper<>(this, "outline",
             new SiteOutline(site.site(), List.of(), List.of()));
@@ -103,6 +104,7 @@ public final class WorkbookViewModel {
         this.point = new PointViewModel(site, service, tasks, axes, new PointEvents() {
             @Override
             public void legsChanged(String pointTag) {
+                attention.invalidate();
                 recomputePointRow(pointTag);
             }
 
@@ -129,10 +131,16 @@ public final class WorkbookViewModel {
             }
 
             @Override
+            public void recorded(String pointTag) {
+                attention.invalidate();
+            }
+
+            @Override
             public void failed(Exception e) {
                 fail(e);
             }
         });
+        this.attention = new AttentionViewModel(service, tasks, this::selectPoint);
         points.addChangeListener(this::pointsEdited);
         fibers.addChangeListener(rows -> catalogEdited(rows, site.connectors(), site.probes()));
         connectors.addChangeListener(rows -> catalogEdited(site.fibers(), rows, site.probes()));
@@ -159,6 +167,11 @@ public final class WorkbookViewModel {
     }
 
     /** The selected point's sheets and plots. */
+    /** The site's attention view: what needs a crew, most urgent first. */
+    public AttentionViewModel attention() {
+        return attention;
+    }
+
     public PointViewModel point() {
         return point;
     }
@@ -424,6 +437,7 @@ public final class WorkbookViewModel {
             measured.clear();
         }
         pointRow.clear();
+        attention.invalidate();
         List<MeasurementPoint> list = site.points();
         for (int i = 0; i < list.size(); i++) {
             pointRow.put(list.get(i).tag(), i);

@@ -451,6 +451,7 @@ public final class WorkbookWindow {
                 tab("Joints", "tab-joints", jointsView, pointContext(point)),
                 readOnlyTab("Scans", "tab-scans", scansView, pointContext(point), scanActions()),
                 historyTab(point),
+                attentionTab(),
                 catalogTab);
 
         Label summary = verdictLabel("budget-summary", point.summaryProperty(), point.summaryVerdictProperty());
@@ -527,6 +528,28 @@ public final class WorkbookWindow {
         Tab t = new Tab("History", box);
         t.setId("tab-history");
         return t;
+    }
+
+    /**
+     * The site's attention view; ranked when the tab is shown and the lists are out of date. A point
+     * opened from it shows in the History tab, with its plots below.
+     */
+    private Tab attentionTab() {
+        AttentionViewModel attention = vm.attention();
+        Tab t = new Tab("Attention");
+        AttentionView view = new AttentionView(attention, () -> tabs.getSelectionModel().select(tabById("tab-history")));
+        t.setContent(view.node());
+        t.setId("tab-attention");
+        t.selectedProperty().addListener((o, was, is) -> {
+            if (is && attention.staleProperty().get() && vm.openProperty().get()) {
+                attention.refresh();
+            }
+        });
+        return t;
+    }
+
+    private Tab tabById(String id) {
+        return tabs.getTabs().stream().filter(t -> id.equals(t.getId())).findFirst().orElseThrow();
     }
 
     private static Label heading(String text) {
