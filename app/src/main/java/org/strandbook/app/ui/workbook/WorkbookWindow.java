@@ -350,7 +350,7 @@ public final class WorkbookWindow {
         heading.getStyleClass().add("welcome-heading");
         Label text = new Label("A workbook holds one site: its analyzers, measurement points, light paths, catalogs "
                 + "and every scan. Start from a contractor's cable schedule in a new workbook, open one, or look "
-                + "around the sample site first: an invented plant with ten points, some of them with faults, and two "
+                + "around the sample site first: an invented plant with twelve points, some of them with faults, and two "
                 + "years of scans.");
         text.setWrapText(true);
         text.setMaxWidth(620);
