@@ -57,6 +57,7 @@ public final class Workbook implements AutoCloseable {
     private final SignOffRepository signOffs;
     private final NoteRepository notes;
     private final MaintenanceRepository maintenance;
+    private final RecordWithdrawal withdrawal;
 
     private Workbook(Session session, AuditLog audit) {
         this.session = session;
@@ -70,6 +71,7 @@ public final class Workbook implements AutoCloseable {
         this.signOffs = new SignOffRepository(session, audit, site);
         this.notes = new NoteRepository(session, audit);
         this.maintenance = new MaintenanceRepository(session, audit, paths);
+        this.withdrawal = new RecordWithdrawal(session, audit, paths);
     }
 
     /**
@@ -379,6 +381,11 @@ public final class Workbook implements AutoCloseable {
 
     public NoteRepository notes() {
         return notes;
+    }
+
+    /** Withdrawing a point's latest record (the history panel's undo). */
+    public RecordWithdrawal withdrawal() {
+        return withdrawal;
     }
 
     public MaintenanceRepository maintenance() {

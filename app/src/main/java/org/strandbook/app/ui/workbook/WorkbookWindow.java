@@ -167,6 +167,18 @@ public final class WorkbookWindow {
         return jointsView;
     }
 
+    public SheetView<FiberType> fibersView() {
+        return fibersView;
+    }
+
+    public SheetView<ConnectorType> connectorsView() {
+        return connectorsView;
+    }
+
+    public SheetView<ProbeType> probesView() {
+        return probesView;
+    }
+
     public SpectrumPlotView budgetPlot() {
         return budgetPlot;
     }
@@ -555,6 +567,11 @@ public final class WorkbookWindow {
         t.setId("tab-attention");
         t.selectedProperty().addListener((o, was, is) -> {
             if (is && attention.staleProperty().get() && vm.openProperty().get()) {
+                attention.refresh();
+            }
+        });
+        attention.changesProperty().addListener((o, was, is) -> {
+            if (t.isSelected() && vm.openProperty().get()) {
                 attention.refresh();
             }
         });
