@@ -396,6 +396,16 @@ public final class Workbook implements AutoCloseable {
         return audit;
     }
 
+    /** The records in the form they travel to a plant server. */
+    public WorkbookRecords records() {
+        return new WorkbookRecords(session, audit);
+    }
+
+    /** What this workbook knows of its plant server. */
+    public SyncLedger syncLedger() {
+        return new SyncLedger(session);
+    }
+
     /**
      * Runs {@code work} as one transaction: every repository call inside it commits together or,
      * if {@code work} throws, not at all. A repository call that fails inside undoes only itself,

@@ -55,6 +55,7 @@ import org.strandbook.app.ui.path.LegSegment;
 import org.strandbook.app.ui.plot.PlotAxesBar;
 import org.strandbook.app.ui.plot.SpectrumPlotView;
 import org.strandbook.app.ui.plot.TrendPlotView;
+import org.strandbook.app.ui.uncertainty.UncertaintyPanel;
 import org.strandbook.app.ui.safety.SafetyCaution;
 import org.strandbook.app.ui.safety.SafetyCautionDialog;
 import org.strandbook.app.ui.sheet.SheetView;
@@ -361,7 +362,7 @@ public final class WorkbookWindow {
         heading.getStyleClass().add("welcome-heading");
         Label text = new Label("A workbook holds one site: its analyzers, measurement points, light paths, catalogs "
                 + "and every scan. Start from a contractor's cable schedule in a new workbook, open one, or look "
-                + "around the sample site first: an invented plant with ten points, some of them with faults, and two "
+                + "around the sample site first: an invented plant with twelve points, some of them with faults, and two "
                 + "years of scans.");
         text.setWrapText(true);
         text.setMaxWidth(620);
@@ -463,6 +464,7 @@ public final class WorkbookWindow {
                 tab("Joints", "tab-joints", jointsView, pointContext(point)),
                 readOnlyTab("Scans", "tab-scans", scansView, pointContext(point), scanActions()),
                 historyTab(point),
+                uncertaintyTab(point),
                 attentionTab(),
                 catalogTab);
 
@@ -539,6 +541,17 @@ public final class WorkbookWindow {
         VBox.setVgrow(panel.node(), Priority.ALWAYS);
         Tab t = new Tab("History", box);
         t.setId("tab-history");
+        return t;
+    }
+
+    /** The selected point's uncertainty budget per band and the design question. */
+    private Tab uncertaintyTab(PointViewModel point) {
+        UncertaintyPanel panel = new UncertaintyPanel(point.uncertainty());
+        VBox box = new VBox(4, pointContext(point), panel.node());
+        box.setPadding(new Insets(4));
+        VBox.setVgrow(panel.node(), Priority.ALWAYS);
+        Tab t = new Tab("Uncertainty", box);
+        t.setId("tab-uncertainty");
         return t;
     }
 
