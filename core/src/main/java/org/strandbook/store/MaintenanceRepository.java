@@ -91,15 +91,8 @@ public final class MaintenanceRepository {
                 paths.replaceElement(pointId, action.pointTag(), action.elementLabel(), action.replacement().get());
             }
             if (action.changesProbe()) {
-                long probeTypeId = RowKeys.probeType(session, action.newProbeTypeCode()).orElseThrow();
-                RowImage was = audit.capture(AuditedTable.POINT, pointId).orElseThrow();
-                try (PreparedStatement ps = session.connection().prepareStatement(
-                        "UPDATE point SET probe_type_id = ? WHERE id = ?")) {
-                    ps.setLong(1, probeTypeId);
-                    ps.setLong(2, pointId);
-                    ps.executeUpdate();
-                }
-                audit.updated(AuditedTable.POINT, pointId, was);
+                PointRepository.changeProbeType(session, audit, pointId,
+                        RowKeys.probeType(session, action.newProbeTypeCode()).orElseThrow());
             }
             return id;
         });

@@ -75,6 +75,18 @@ public final class PointRepository {
         });
     }
 
+    /** Fits another probe type at a point (a probe replacement, or its withdrawal), audited. */
+    static void changeProbeType(Session session, AuditLog audit, long pointId, long probeTypeId) throws SQLException {
+        RowImage was = audit.capture(AuditedTable.POINT, pointId).orElseThrow();
+        try (PreparedStatement ps = session.connection().prepareStatement(
+                "UPDATE point SET probe_type_id = ? WHERE id = ?")) {
+            ps.setLong(1, probeTypeId);
+            ps.setLong(2, pointId);
+            ps.executeUpdate();
+        }
+        audit.updated(AuditedTable.POINT, pointId, was);
+    }
+
     private void insert(MeasurementPoint point) throws SQLException {
         try (PreparedStatement ps = session.connection().prepareStatement("INSERT INTO point (tag, service, location, "
                 + "analyzer_id, channel, probe_type_id, tolerance_db, hazardous_area, hydrogen_service, "

@@ -124,14 +124,7 @@ public final class RecordWithdrawal {
         if (probe) {
             long probeTypeId = RowKeys.probeType(session, kindAndLabel[1]).orElseThrow(() -> new WorkbookException(
                     "the probe type " + kindAndLabel[1] + " this action removed is no longer in the catalog"));
-            RowImage was = audit.capture(AuditedTable.POINT, pointId).orElseThrow();
-            try (PreparedStatement ps = session.connection().prepareStatement(
-                    "UPDATE point SET probe_type_id = ? WHERE id = ?")) {
-                ps.setLong(1, probeTypeId);
-                ps.setLong(2, pointId);
-                ps.executeUpdate();
-            }
-            audit.updated(AuditedTable.POINT, pointId, was);
+            PointRepository.changeProbeType(session, audit, pointId, probeTypeId);
         }
         audit.deleteRow(AuditedTable.MAINTENANCE_ACTION, actionId);
         return probe || !before.isEmpty();

@@ -1,9 +1,7 @@
 package org.strandbook.app.ui.workbook;
 
 import java.util.List;
-import java.util.function.Function;
 
-import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.geometry.Insets;
 import javafx.geometry.Orientation;
 import javafx.geometry.Pos;
@@ -11,7 +9,6 @@ import javafx.scene.Node;
 import javafx.scene.control.Button;
 import javafx.scene.control.Label;
 import javafx.scene.control.SplitPane;
-import javafx.scene.control.TableColumn;
 import javafx.scene.control.TableView;
 import javafx.scene.input.KeyCode;
 import javafx.scene.input.MouseButton;
@@ -35,23 +32,23 @@ final class AttentionView {
         needing.setId("attention-needing");
         needing.setItems(vm.needing());
         needing.setPlaceholder(new Label("No failing or review point, or the site is not ranked yet"));
-        needing.getColumns().add(column("attention-point", "Point", 80, AttentionRow::pointTag));
-        needing.getColumns().add(column("attention-status", "Status", 110, AttentionRow::statusText));
-        needing.getColumns().add(column("attention-finding", "Finding", 420, AttentionRow::finding));
-        needing.getColumns().add(column("attention-follow-up", "Follow-up", 420, AttentionRow::followUpText));
-        needing.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY);
+        needing.getColumns().add(TextColumns.of("attention-point", "Point", 80, AttentionRow::pointTag));
+        needing.getColumns().add(TextColumns.of("attention-status", "Status", 110, AttentionRow::statusText));
+        needing.getColumns().add(TextColumns.of("attention-finding", "Finding", 420, AttentionRow::finding));
+        needing.getColumns().add(TextColumns.of("attention-follow-up", "Follow-up", 420, AttentionRow::followUpText));
+        needing.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
 
         ranking.setId("attention-ranking");
         ranking.setItems(vm.ranking());
         ranking.setPlaceholder(new Label("Not ranked yet"));
-        ranking.getColumns().add(column("ranking-rank", "Rank", 50, r -> Integer.toString(r.rank())));
-        ranking.getColumns().add(column("ranking-point", "Point", 80, AttentionRow::pointTag));
-        ranking.getColumns().add(column("ranking-status", "Status", 110, AttentionRow::statusText));
-        ranking.getColumns().add(column("ranking-band", "Worst band", 160, AttentionRow::worstBand));
-        ranking.getColumns().add(column("ranking-margin", "Margin (dB)", 90, AttentionRow::marginText));
-        ranking.getColumns().add(column("ranking-run-out", "Runs out (date)", 120, AttentionRow::runOutText));
-        ranking.getColumns().add(column("ranking-finding", "Finding", 380, AttentionRow::finding));
-        ranking.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY);
+        ranking.getColumns().add(TextColumns.of("ranking-rank", "Rank", 50, r -> Integer.toString(r.rank())));
+        ranking.getColumns().add(TextColumns.of("ranking-point", "Point", 80, AttentionRow::pointTag));
+        ranking.getColumns().add(TextColumns.of("ranking-status", "Status", 110, AttentionRow::statusText));
+        ranking.getColumns().add(TextColumns.of("ranking-band", "Worst band", 160, AttentionRow::worstBand));
+        ranking.getColumns().add(TextColumns.of("ranking-margin", "Margin (dB)", 90, AttentionRow::marginText));
+        ranking.getColumns().add(TextColumns.of("ranking-run-out", "Runs out (date)", 120, AttentionRow::runOutText));
+        ranking.getColumns().add(TextColumns.of("ranking-finding", "Finding", 380, AttentionRow::finding));
+        ranking.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
 
         for (TableView<AttentionRow> t : List.of(needing, ranking)) {
             t.setOnMouseClicked(e -> {
@@ -103,15 +100,5 @@ final class AttentionView {
         VBox box = new VBox(2, heading, table);
         VBox.setVgrow(table, Priority.ALWAYS);
         return box;
-    }
-
-    private static TableColumn<AttentionRow, String> column(String id, String title, double width,
-                                                            Function<AttentionRow, String> value) {
-        TableColumn<AttentionRow, String> c = new TableColumn<>(title);
-        c.setId(id);
-        c.setPrefWidth(width);
-        c.setSortable(false);
-        c.setCellValueFactory(f -> new ReadOnlyStringWrapper(value.apply(f.getValue())).getReadOnlyProperty());
-        return c;
     }
 }

@@ -4,9 +4,7 @@ import java.time.ZoneOffset;
 import java.time.format.DateTimeFormatter;
 import java.util.Locale;
 import java.util.function.BiFunction;
-import java.util.function.Function;
 
-import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.geometry.Insets;
 import javafx.scene.Node;
 import javafx.scene.control.Alert;
@@ -38,11 +36,11 @@ final class HistoryPanel {
         table.setId("history-table");
         table.setItems(vm.events());
         table.setPlaceholder(new Label("No records for this point yet"));
-        table.getColumns().add(column("history-at", "Time (UTC)", 130, e -> MINUTE.format(e.at())));
-        table.getColumns().add(column("history-kind", "Record", 90, e -> e.kind().word()));
-        table.getColumns().add(column("history-subject", "On", 90, PointEvent::subject));
-        table.getColumns().add(column("history-who", "By", 110, PointEvent::who));
-        TableColumn<PointEvent, String> what = column("history-text", "What", 520, PointEvent::text);
+        table.getColumns().add(TextColumns.of("history-at", "Time (UTC)", 130, e -> MINUTE.format(e.at())));
+        table.getColumns().add(TextColumns.of("history-kind", "Record", 90, e -> e.kind().word()));
+        table.getColumns().add(TextColumns.of("history-subject", "On", 90, PointEvent::subject));
+        table.getColumns().add(TextColumns.of("history-who", "By", 110, PointEvent::who));
+        TableColumn<PointEvent, String> what = TextColumns.of("history-text", "What", 520, PointEvent::text);
         table.getColumns().add(what);
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY);
 
@@ -104,15 +102,5 @@ final class HistoryPanel {
             confirm.show();
         });
         return b;
-    }
-
-    private static TableColumn<PointEvent, String> column(String id, String title, double width,
-                                                          Function<PointEvent, String> value) {
-        TableColumn<PointEvent, String> c = new TableColumn<>(title);
-        c.setId(id);
-        c.setPrefWidth(width);
-        c.setSortable(false);
-        c.setCellValueFactory(f -> new ReadOnlyStringWrapper(value.apply(f.getValue())).getReadOnlyProperty());
-        return c;
     }
 }
