@@ -89,8 +89,11 @@ class AttentionViewModelTest {
         vm.attention().refresh();
 
         List<String> needing = vm.attention().needing().stream().map(AttentionRow::pointTag).toList();
-        // the demo's five injected faults fail; its healthy points, AT-4104 cleaned, pass
-        assertEquals(List.of("AT-4102", "AT-4103", "AT-4105", "AT-4106", "AT-4108"), needing.stream().sorted().toList());
+        // the demo's five injected faults fail, and so, under the fixed tolerance the demo keeps, does the
+        // long loop AT-4203 (the false FAIL the coverage interval clears); its other healthy points, AT-4104
+        // cleaned, pass, and so does AT-4109, whose 0.8 dB of dirt only the interval catches
+        assertEquals(List.of("AT-4102", "AT-4103", "AT-4105", "AT-4106", "AT-4108", "AT-4203"),
+                needing.stream().sorted().toList());
         AttentionRow dirty = row("AT-4102");
         assertTrue(dirty.finding().contains("dirty or misaligned connector"), dirty.finding());
         assertTrue(dirty.followUpText().startsWith("open: check J2"), dirty.followUpText());
