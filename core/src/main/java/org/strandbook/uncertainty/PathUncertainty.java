@@ -34,6 +34,14 @@ import org.strandbook.optics.path.ProbeElement;
  */
 public final class PathUncertainty {
 
+    /**
+     * Digits of u(y) the adaptive Monte Carlo run stabilises (JCGM 101:2008, 7.9.2 allows 1 or 2).
+     * Design choice: 1, so the interval's ends are fixed to δ = ½·10^ℓ (0.05 dB for u between 0.1 and
+     * 0.95 dB), a quarter of the default guard band and below the measurement's own expanded
+     * uncertainty; two digits would cost about five times the trials for limits no verdict needs.
+     */
+    static final int SIGNIFICANT_DIGITS = 1;
+
     /** Relative step of the central difference for the bend slope: design choice. */
     private static final double BEND_STEP = 0.01;
 
@@ -93,13 +101,13 @@ public final class PathUncertainty {
         UncertaintyBudget framework = LinearPropagation.propagate(predicted, rows, coverageProbability);
         List<InputDistribution> distributions = rows.stream().map(r -> r.input().distribution()).toList();
         DoubleUnaryOperator[] effects = terms.stream().map(Term::effectDb).toArray(DoubleUnaryOperator[]::new);
-        MonteCarloResult mc = monteCarlo.propagate(distributions, x -> {
+        MonteCarloResult mc = monteCarlo.propagateAdaptive(distributions, x -> {
             double y = predicted;
             for (int i = 0; i < x.length; i++) {
                 y += effects[i].applyAsDouble(x[i]);
             }
             return y;
-        }, coverageProbability, CoverageInterval.Method.PROBABILISTICALLY_SYMMETRIC);
+        }, coverageProbability, CoverageInterval.Method.PROBABILISTICALLY_SYMMETRIC, SIGNIFICANT_DIGITS);
         return new LossUncertainty(wavelengthNm, predicted, framework.withInterval(mc.interval()),
                 framework.interval());
     }
