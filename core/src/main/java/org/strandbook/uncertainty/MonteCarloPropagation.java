@@ -105,6 +105,108 @@ public final class MonteCarloPropagation {
         return y;
     }
 
+    /**
+     * The adaptive Monte Carlo procedure of JCGM 101:2008, 7.9: batches of M = max(⌈100/(1 − p)⌉,
+     * 10⁴) trials (7.9.4 b) until twice the standard deviation of the batch averages of the
+     * estimate, the standard uncertainty and both interval ends is within the numerical tolerance δ
+     * of u(y) stated to {@code significantDigits} digits (7.9.2: u = c·10^ℓ with c of that many
+     * digits, δ = ½·10^ℓ), then the summary of every trial run. It stops at {@link #trials()}
+     * trials whether stabilised or not, so it never costs more than {@link #propagate}.
+     *
+     * @param significantDigits n_dig, 1 or 2 (7.9.2)
+     */
+    public MonteCarloResult propagateAdaptive(List<InputDistribution> inputs, MeasurementModel model,
+            double coverageProbability, CoverageInterval.Method method, int significantDigits) {
+        Objects.requireNonNull(inputs, "inputs");
+        Objects.requireNonNull(model, "model");
+        if (method == CoverageInterval.Method.NORMAL_COVERAGE_FACTOR) {
+            throw new IllegalArgumentException("Monte Carlo gives a shortest or a probabilistically symmetric interval");
+        }
+        if (significantDigits < 1 || significantDigits > 2) {
+            throw new IllegalArgumentException("significant digits of u(y) must be 1 or 2, was " + significantDigits);
+        }
+        int batch = Math.max((int) Math.ceil(100 / (1 - coverageProbability)), 10_000);
+        int maxBatches = Math.max(2, trials / batch);
+        InputDistribution[] dist = inputs.toArray(InputDistribution[]::new);
+        RandomGenerator random = new MersenneTwister(seed);
+        double[] x = new double[dist.length];
+        double[] all = new double[maxBatches * batch];
+        double[][] perBatch = new double[4][maxBatches];
+        int h = 0;
+        while (h < maxBatches) {
+            int from = h * batch;
+            for (int r = 0; r < batch; r++) {
+                for (int i = 0; i < dist.length; i++) {
+                    x[i] = dist[i].sample(random);
+                }
+                double value = model.value(x);
+                if (!Double.isFinite(value)) {
+                    throw new IllegalArgumentException("the model gave " + value + " at trial " + (from + r + 1)
+                            + " for inputs " + Arrays.toString(x));
+                }
+                all[from + r] = value;
+            }
+            MonteCarloResult one = summarise(Arrays.copyOfRange(all, from, from + batch), coverageProbability, method);
+            perBatch[0][h] = one.estimate();
+            perBatch[1][h] = one.standardUncertainty();
+            perBatch[2][h] = one.interval().low();
+            perBatch[3][h] = one.interval().high();
+            h++;
+            if (h >= 2 && stabilised(perBatch, h, Arrays.copyOf(all, h * batch), significantDigits)) {
+                break;
+            }
+        }
+        return summarise(Arrays.copyOf(all, h * batch), coverageProbability, method);
+    }
+
+    /** JCGM 101:2008, 7.9.4 f to i: 2·s of each batch-average below δ. */
+    private static boolean stabilised(double[][] perBatch, int h, double[] values, int significantDigits) {
+        double u = standardDeviation(values);
+        if (u == 0) {
+            return true;
+        }
+        double delta = numericalTolerance(u, significantDigits);
+        for (double[] q : perBatch) {
+            double mean = 0;
+            for (int r = 0; r < h; r++) {
+                mean += q[r];
+            }
+            mean /= h;
+            double squares = 0;
+            for (int r = 0; r < h; r++) {
+                squares += (q[r] - mean) * (q[r] - mean);
+            }
+            double sOfAverage = Math.sqrt(squares / (h * (double) (h - 1)));
+            if (2 * sOfAverage > delta) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** δ = ½·10^ℓ for u = c·10^ℓ, c an integer of {@code significantDigits} digits (JCGM 101:2008, 7.9.2). */
+    static double numericalTolerance(double u, int significantDigits) {
+        int exponent = (int) Math.floor(Math.log10(u)) - significantDigits + 1;
+        // rounding can carry c to one digit more (0.0996 to two digits is 0.10): ℓ follows the rounded c
+        if (Math.round(u / Math.pow(10, exponent)) >= Math.pow(10, significantDigits)) {
+            exponent++;
+        }
+        return 0.5 * Math.pow(10, exponent);
+    }
+
+    private static double standardDeviation(double[] values) {
+        double sum = 0;
+        for (double v : values) {
+            sum += v;
+        }
+        double mean = sum / values.length;
+        double squares = 0;
+        for (double v : values) {
+            squares += (v - mean) * (v - mean);
+        }
+        return Math.sqrt(squares / (values.length - 1));
+    }
+
     /** Estimate, standard uncertainty (JCGM 101:2008, 7.6) and interval (7.7) of model values. */
     static MonteCarloResult summarise(double[] values, double p, CoverageInterval.Method method) {
         int m = values.length;
