@@ -246,8 +246,7 @@ public final class DossierWriter {
             }
             int n = content.points().size();
             int[] done = {0};
-            Map<String, PointUncertainty> uncertainties = PointUncertainty.of(content,
-                    (d, of) -> step("working out the coverage intervals", d, of));
+            Map<String, PointUncertainty> uncertainties = content.uncertainties();
             List<SpectraRows.Block> spectra = SpectraRows.fill(sheets.get(DossierSheet.SPECTRA), content, uncertainties,
                     () -> step("writing " + DossierSheet.SPECTRA.title(), ++done[0], n));
             done[0] = 0;

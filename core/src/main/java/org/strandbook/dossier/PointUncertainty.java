@@ -1,8 +1,6 @@
 package org.strandbook.dossier;
 
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
 
 import org.strandbook.evaluation.BandInterval;
@@ -18,39 +16,29 @@ import org.strandbook.uncertainty.PathUncertainty;
  * A point's prediction with its uncertainty as the dossier shows it: the coverage band over the
  * evaluation grid (Spectra columns and the chart) and the uncertainty budget at each band centre
  * (the Uncertainty sheet). Under the coverage-interval rule the budgets are the ones the verdicts
- * were judged with; under the fixed tolerance they are worked out here, at the site's coverage.
+ * were judged with; under the fixed tolerance they are worked out here, at the site's coverage. Worked
+ * out with the evaluation ({@link WorkbookDossier}), before the writer starts.
  *
  * @param spread the coverage band, absent when it could not be worked out
  * @param bands the budget per band whose centre the analyzer measures, in band order
  * @param problem why there is none, empty when there is
  */
-record PointUncertainty(Optional<PredictionSpread> spread, List<BandUncertainty> bands, String problem) {
+public record PointUncertainty(Optional<PredictionSpread> spread, List<BandUncertainty> bands, String problem) {
 
-    PointUncertainty {
+    public PointUncertainty {
         bands = List.copyOf(bands);
     }
 
-    /** Told after each point; returns false to stop (an export cancelled). */
-    @FunctionalInterface
-    interface AfterPoint {
-        void done(int done, int of);
+    /** The engine of the intervals at {@code coverage}: the shipped input spreads, the standard Monte Carlo. */
+    public static PathUncertainty engine(double coverage) {
+        return new PathUncertainty(BudgetInputUncertainties.SHIPPED, MonteCarloPropagation.standard(), coverage);
     }
 
-    /** By point tag, for every evaluated point of {@code content}. */
-    static Map<String, PointUncertainty> of(DossierContent content, AfterPoint afterPoint) {
-        PathUncertainty engine = new PathUncertainty(BudgetInputUncertainties.SHIPPED, MonteCarloPropagation.standard(),
-                content.decisionRule().coverage());
-        Map<String, PointUncertainty> out = new LinkedHashMap<>();
-        int n = content.points().size();
-        int done = 0;
-        for (DossierPoint p : content.points()) {
-            p.evaluation().ifPresent(e -> out.put(p.tag(), of(e, engine)));
-            afterPoint.done(++done, n);
-        }
-        return out;
-    }
-
-    private static PointUncertainty of(PointEvaluation e, PathUncertainty engine) {
+    /**
+     * The uncertainty of {@code e}'s prediction: the budgets its verdicts were judged with when there
+     * are any, else worked out at each band centre the analyzer measures; and the coverage band.
+     */
+    public static PointUncertainty of(PointEvaluation e, PathUncertainty engine) {
         try {
             List<BandUncertainty> bands;
             if (!e.intervals().isEmpty()) {
