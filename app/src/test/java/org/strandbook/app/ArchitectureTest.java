@@ -49,10 +49,19 @@ class ArchitectureTest {
 
     @Test
     void jdbcStaysInTheStore() {
-        // a benchmark's floor is the bare library doing the same work, so the bench package may call it
-        ArchRule rule = noClasses().that().resideOutsideOfPackages("org.strandbook.store..", BENCH)
+        // a benchmark's floor is the bare library doing the same work, so the bench package may call it;
+        // the plant server's package speaks SQL to PostgreSQL, never to the workbook file
+        ArchRule rule = noClasses().that().resideOutsideOfPackages("org.strandbook.store..", "org.strandbook.server..", BENCH)
                 .should().dependOnClassesThat().resideInAnyPackage("java.sql..", "org.sqlite..")
                 .because("explicit SQL lives in small repository classes of one package");
+        rule.check(classes);
+    }
+
+    @Test
+    void thePlantServerReachesTheWorkbookOnlyThroughTheStore() {
+        ArchRule rule = noClasses().that().resideInAPackage("org.strandbook.server..")
+                .should().dependOnClassesThat().resideInAnyPackage("org.sqlite..", "org.postgresql..")
+                .because("the workbook is the store's; the server is reached through plain JDBC and its URL");
         rule.check(classes);
     }
 

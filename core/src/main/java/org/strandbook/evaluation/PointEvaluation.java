@@ -63,10 +63,22 @@ public record PointEvaluation(MeasurementPoint point, Status status, PredictedBu
         return Double.isNaN(v) ? Double.NEGATIVE_INFINITY : v;
     }
 
+    /**
+     * True when every band was judged on the coverage interval and passed: whatever the fit found
+     * lies within what the recorded parts may lose, and sends nobody into the field.
+     */
+    public boolean passedOnInterval() {
+        return status == Status.PASS && !intervals.isEmpty();
+    }
+
     /** The finding in one line: the diagnosis summary, or why nothing was measured. */
     public String finding() {
         if (diagnosis.isPresent()) {
-            return diagnosis.get().summary();
+            return passedOnInterval() && diagnosis.get().first().isPresent()
+                    ? "every band lies inside the prediction's coverage interval widened by the measurement's own"
+                    + " uncertainty: what the fit found is within what the recorded parts may lose ("
+                    + diagnosis.get().summary() + ")"
+                    : diagnosis.get().summary();
         }
         return problems.isEmpty() ? "not measured yet" : problems.get(0);
     }
@@ -86,6 +98,9 @@ public record PointEvaluation(MeasurementPoint point, Status status, PredictedBu
                     ? String.format(java.util.Locale.ROOT, "≈%.1f dB, wavelength-flat", f.amountDb())
                     : String.format(java.util.Locale.ROOT, "%s%.1f dB at %.0f nm", f.atLeast() ? "≥" : "≈",
                     f.amountDb(), f.atNm());
+            if (passedOnInterval()) {
+                return "as predicted within its coverage interval (largest fitted term " + size + ")";
+            }
             return f.cause().words() + ", " + size + (f.checkFirst().isEmpty() ? "" : "; check " + f.checkFirst());
         }).orElse("as predicted");
     }

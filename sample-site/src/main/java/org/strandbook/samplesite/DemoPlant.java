@@ -28,8 +28,9 @@ import org.strandbook.site.WavelengthBand;
  * The invented demo plant: "Saltmarsh Ridge Works", a polyol and solvent plant that exists nowhere.
  * Every name, tag and number here is made up for the demonstration.
  *
- * <p>Ten measurement points on two analyzers, 2 m to 300 m of fiber each way, with the faults the
- * generator injects: {@link Fault}.
+ * <p>Twelve measurement points on two analyzers, 0.75 m to 300 m of fiber each way, with the faults
+ * the generator injects: {@link Fault}. AT-4109 and AT-4203 show why a site may judge on the
+ * prediction's coverage interval rather than a fixed tolerance.
  */
 public final class DemoPlant {
 
@@ -45,12 +46,24 @@ public final class DemoPlant {
         BROKEN_FIBER
     }
 
-    /** One demo point: its record, its two legs, and the fault its scans carry. */
+    /**
+     * One demo point: its record, its two legs, and the fault its scans carry.
+     *
+     * @param cleaning a joint found dirty at commissioning and cleaned later, if any
+     * @param faultSizeDb the fault's size where the demo fixes it (dB); NaN: drawn from the seed
+     * @param jointExcessDb how much more each joint truly loses than its record says (dB), within the
+     *        connector type's normal spread: a healthy loop at the lossy end of its parts
+     */
     public record DemoPoint(MeasurementPoint point, PathLeg send, PathLeg ret, Fault fault, String faultyElement,
-                            Optional<JointCleaning> cleaning) {
+                            Optional<JointCleaning> cleaning, double faultSizeDb, double jointExcessDb) {
 
         public DemoPoint {
             cleaning = cleaning == null ? Optional.empty() : cleaning;
+        }
+
+        public DemoPoint(MeasurementPoint point, PathLeg send, PathLeg ret, Fault fault, String faultyElement,
+                         Optional<JointCleaning> cleaning) {
+            this(point, send, ret, fault, faultyElement, cleaning, Double.NaN, 0);
         }
     }
 
@@ -66,7 +79,7 @@ public final class DemoPlant {
 
     private final Site site = new Site(SITE_NAME, "Unit 40 – Polyols and solvent recovery", "A", 1.0);
     private final List<Analyzer> analyzers = List.of(
-            new Analyzer("AZ-41", "Fourier-transform NIR analyzer, shelter S1", 1000, 2500, 8, 20.0,
+            new Analyzer("AZ-41", "Fourier-transform NIR analyzer, shelter S1", 1000, 2500, 10, 20.0,
                     DetectorType.EXTENDED_INGAAS),
             new Analyzer("AZ-42", "Short-wave NIR diode-array analyzer, shelter S1", 600, 1100, 4, 18.0,
                     DetectorType.SILICON));
@@ -92,7 +105,9 @@ public final class DemoPlant {
             new ProbeType("PT-TF2", "Transflectance probe, 2 mm path, sapphire window and mirror",
                     ProbeKind.TRANSFLECTANCE, "SAPPHIRE", 4, 4.0, 4.5),
             new ProbeType("PT-DR", "Diffuse reflectance probe, sapphire window", ProbeKind.DIFFUSE_REFLECTANCE,
-                    "SAPPHIRE", 4, 0.0, 9.0));
+                    "SAPPHIRE", 4, 0.0, 9.0),
+            new ProbeType("PT-FC1", "Flow cell, 1 mm path, sapphire windows", ProbeKind.TRANSMISSION,
+                    "SAPPHIRE", 4, 1.0, 1.0));
 
     private final List<DemoPoint> points = new ArrayList<>();
 
@@ -127,6 +142,47 @@ public final class DemoPlant {
                 List.of(sw), true, false, 30), 300, 300, "LOH-200", Fault.NONE);
         add(point("AT-4202", "Crystalliser K-490 slurry", "K-490 side wall", "AZ-42", 2, "PT-DR",
                 List.of(sw), false, false, 20), 70, 70, "LOH-600", Fault.NONE);
+        addShortLoop(point("AT-4109", "Solvent make-up, sample panel flow cell", "Shelter S1, sample panel P2",
+                "AZ-41", 9, "PT-FC1", List.of(ch3, ch2), false, false, 25));
+        addLongLoop(point("AT-4203", "Effluent sump S-495", "S-495 far bank, pipe rack end", "AZ-42", 3,
+                "PT-TX5", List.of(sw), true, false, 20));
+    }
+
+    /**
+     * A 1.5 m loop on the sample panel beside the analyzer: a 0.75 m cord to the flow cell and one
+     * back, each joint's loss measured at commissioning. Its prediction is known to a few tenths of a
+     * dB, so a fixed 1 dB tolerance hides what the coverage interval catches: J2 has picked up dirt
+     * worth 0.8 dB.
+     */
+    private void addShortLoop(MeasurementPoint p) {
+        PathLeg send = new PathLeg(p.tag(), PathDirection.SEND, List.of(
+                new CableSegment("C4109-S1", "LOH-200", 0.75, List.of()),
+                new Joint("J1", "SMA-B", "SMA-B", InspectionGrade.CLEAN, OptionalDouble.of(0.75), LossBasis.MEASURED)));
+        PathLeg ret = new PathLeg(p.tag(), PathDirection.RETURN, List.of(
+                new Joint("J2", "SMA-B", "SMA-B", InspectionGrade.DIRTY, OptionalDouble.of(0.85), LossBasis.MEASURED),
+                new CableSegment("C4109-R1", "LOH-200", 0.75, List.of())));
+        points.add(new DemoPoint(p, send, ret, Fault.DIRTY_CONNECTOR, "J2", Optional.empty(), 0.8, 0));
+    }
+
+    /**
+     * A 300 m loop each way through two junction boxes: eight unmeasured air-gap pairs whose normal
+     * spread (0.5–1.5 dB a pair) makes the prediction uncertain by well over a dB. Its pairs all sit a
+     * little above the typical 1 dB, 0.13 dB each: healthy, yet more than 1 dB over the predicted
+     * line, so the fixed tolerance raises a false FAIL that the coverage interval clears.
+     */
+    private void addLongLoop(MeasurementPoint p) {
+        String fiber = "LOH-200";
+        PathLeg send = new PathLeg(p.tag(), PathDirection.SEND, List.of(
+                new CableSegment("C4203-S1", fiber, 2.0, List.of()), joint("J1", ""),
+                new CableSegment("C4203-S2", fiber, 150.0, List.of()), joint("J2", ""),
+                new CableSegment("C4203-S3", fiber, 145.0, List.of()), joint("J3", ""),
+                new CableSegment("C4203-S4", fiber, 3.0, List.of()), joint("J4", "")));
+        PathLeg ret = new PathLeg(p.tag(), PathDirection.RETURN, List.of(
+                joint("J5", ""), new CableSegment("C4203-R1", fiber, 3.0, List.of()),
+                joint("J6", ""), new CableSegment("C4203-R2", fiber, 145.0, List.of()),
+                joint("J7", ""), new CableSegment("C4203-R3", fiber, 150.0, List.of()),
+                joint("J8", ""), new CableSegment("C4203-R4", fiber, 2.0, List.of())));
+        points.add(new DemoPoint(p, send, ret, Fault.NONE, "", Optional.empty(), Double.NaN, 0.13));
     }
 
     private static MeasurementPoint point(String tag, String service, String location, String analyzer, int channel,

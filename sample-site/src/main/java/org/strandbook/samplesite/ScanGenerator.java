@@ -124,7 +124,8 @@ public final class ScanGenerator {
         OpticsCache cache = new OpticsCache(axis);
         double[] lamp = lampCounts(axis, analyzer);
 
-        double dirtyDb = 1.5 + 1.5 * rnd.nextDouble();
+        double drawnDirtyDb = 1.5 + 1.5 * rnd.nextDouble();
+        double dirtyDb = Double.isNaN(dp.faultSizeDb()) ? drawnDirtyDb : dp.faultSizeDb();
         double bendRadiusMm = 38 + 10 * rnd.nextDouble();
         double highOhPpm = 500 + 500 * rnd.nextDouble();
         double hydrogenFinalDb = 1.5 + 1.5 * rnd.nextDouble();
@@ -183,7 +184,7 @@ public final class ScanGenerator {
     private InjectedFault describe(DemoPlant.DemoPoint dp, double dirtyDb, double bendRadiusMm, double highOhPpm,
                                    double[] lastFaultDb, WavelengthGrid axis) {
         return switch (dp.fault()) {
-            case NONE -> new InjectedFault(DemoPlant.Fault.NONE, "", 0, Double.NaN);
+            case NONE -> new InjectedFault(DemoPlant.Fault.NONE, "", dp.jointExcessDb() * joints(dp), Double.NaN);
             case DIRTY_CONNECTOR -> new InjectedFault(dp.fault(), dp.faultyElement(), dirtyDb, Double.NaN);
             case TIGHT_BEND -> {
                 FiberType f = catalog.fiber(trunkFiber(dp));
@@ -204,6 +205,11 @@ public final class ScanGenerator {
         };
     }
 
+    private static int joints(DemoPlant.DemoPoint dp) {
+        return (int) (dp.send().elements().stream().filter(e -> e instanceof Joint).count()
+                + dp.ret().elements().stream().filter(e -> e instanceof Joint).count());
+    }
+
     private static String trunkFiber(DemoPlant.DemoPoint dp) {
         return dp.ret().segments().get(1).fiberTypeCode();
     }
@@ -217,8 +223,9 @@ public final class ScanGenerator {
         List<PathElement> out = new ArrayList<>();
         for (PathElement e : recorded.elements()) {
             if (e instanceof Joint j) {
-                double loss = Math.max(0, catalog.connector(j.connectorTypeA()).typicalLossDb()
-                        + 0.05 * rnd.nextGaussian());
+                // a joint measured at commissioning truly loses what was measured, else its type's typical loss
+                double asRecorded = j.lossDb().orElse(catalog.connector(j.connectorTypeA()).typicalLossDb());
+                double loss = Math.max(0, asRecorded + dp.jointExcessDb() + 0.05 * rnd.nextGaussian());
                 boolean dirty = dp.fault() == DemoPlant.Fault.DIRTY_CONNECTOR && j.label().equals(dp.faultyElement());
                 if (dirty || j.label().equals(stillDirty)) {
                     loss += dirtyDb;

@@ -43,7 +43,7 @@ class DemoCommandTest {
     void demoSucceedsAndSaysWhereItsFilesAre() {
         assertEquals(0, demo.exitCode(), demo.err());
         assertTrue(Files.exists(workbook));
-        assertTrue(demo.out().contains("270 files under"));
+        assertTrue(demo.out().contains("324 files under"));
     }
 
     @Test

@@ -167,6 +167,18 @@ public final class WorkbookWindow {
         return jointsView;
     }
 
+    public SheetView<FiberType> fibersView() {
+        return fibersView;
+    }
+
+    public SheetView<ConnectorType> connectorsView() {
+        return connectorsView;
+    }
+
+    public SheetView<ProbeType> probesView() {
+        return probesView;
+    }
+
     public SpectrumPlotView budgetPlot() {
         return budgetPlot;
     }
@@ -350,7 +362,7 @@ public final class WorkbookWindow {
         heading.getStyleClass().add("welcome-heading");
         Label text = new Label("A workbook holds one site: its analyzers, measurement points, light paths, catalogs "
                 + "and every scan. Start from a contractor's cable schedule in a new workbook, open one, or look "
-                + "around the sample site first: an invented plant with ten points, some of them with faults, and two "
+                + "around the sample site first: an invented plant with twelve points, some of them with faults, and two "
                 + "years of scans.");
         text.setWrapText(true);
         text.setMaxWidth(620);
@@ -555,6 +567,11 @@ public final class WorkbookWindow {
         t.setId("tab-attention");
         t.selectedProperty().addListener((o, was, is) -> {
             if (is && attention.staleProperty().get() && vm.openProperty().get()) {
+                attention.refresh();
+            }
+        });
+        attention.changesProperty().addListener((o, was, is) -> {
+            if (t.isSelected() && vm.openProperty().get()) {
                 attention.refresh();
             }
         });

@@ -82,8 +82,8 @@ class SqliteWorkbookServiceTest {
 
     @Test
     void openingReadsEveryPointWithBothLegs() {
-        assertEquals(10, loaded.points().size());
-        assertEquals(20, loaded.legs().values().stream().mapToInt(List::size).sum());
+        assertEquals(12, loaded.points().size());
+        assertEquals(24, loaded.legs().values().stream().mapToInt(List::size).sum());
         assertEquals(Optional.of(file), service.file());
     }
 
@@ -152,7 +152,7 @@ class SqliteWorkbookServiceTest {
         assertThrows(NotAWorkbookException.class, () -> service.open(notes, QUIET));
 
         assertEquals(Optional.of(file), service.file());
-        assertEquals(10, service.reload(QUIET).points().size());
+        assertEquals(12, service.reload(QUIET).points().size());
     }
 
     @Test
@@ -198,7 +198,7 @@ class SqliteWorkbookServiceTest {
 
         assertEquals(0, empty.points().size());
         assertTrue(outcome.written(), outcome.problems().toString());
-        assertEquals(10, service.reload(QUIET).points().size());
+        assertEquals(12, service.reload(QUIET).points().size());
     }
 
     private long lastAuditId() {

@@ -79,7 +79,7 @@ class WorkbookViewModelTest {
     @Test
     void openingShowsEveryPointAndTheFirstPointsLegs() {
         assertTrue(vm.openProperty().get());
-        assertEquals(10, vm.points().rowCount());
+        assertEquals(12, vm.points().rowCount());
         assertEquals("AT-4101", vm.selectedTagProperty().get());
         assertEquals(6, vm.point().segments().rowCount());
         assertEquals(6, vm.point().joints().rowCount());
@@ -101,7 +101,7 @@ class WorkbookViewModelTest {
     void theSampleSiteAlreadyBuiltInItsFolderOpensWithoutBuildingAgain() {
         vm.openSample(sample.folder());
 
-        assertEquals(10, vm.points().rowCount());
+        assertEquals(12, vm.points().rowCount());
         assertTrue(vm.titleProperty().get().contains("Saltmarsh Ridge Works"), vm.titleProperty().get());
     }
 
@@ -181,7 +181,7 @@ class WorkbookViewModelTest {
         // the sample plant injects faults at AT-4102 (dirty joint) and leaves AT-4101 as built
         assertTrue(measured.contains("AT-4102 \u2716 FAIL"), measured.toString());
         assertTrue(measured.contains("AT-4101 \u2714 PASS"), measured.toString());
-        assertTrue(vm.noticeProperty().get().startsWith("Site evaluated: 10 points"), vm.noticeProperty().get());
+        assertTrue(vm.noticeProperty().get().startsWith("Site evaluated: 12 points"), vm.noticeProperty().get());
     }
 
     @Test
@@ -273,7 +273,7 @@ class WorkbookViewModelTest {
 
         assertFalse(vm.scheduleProblemsProperty().get().isEmpty());
         assertTrue(vm.noticeProperty().get().contains("nothing was written"), vm.noticeProperty().get());
-        assertEquals(10, vm.points().rowCount());
+        assertEquals(12, vm.points().rowCount());
     }
 
     @Test
@@ -296,6 +296,6 @@ class WorkbookViewModelTest {
         vm.open(other);
 
         assertTrue(vm.noticeProperty().get().contains("other.strandbook"), vm.noticeProperty().get());
-        assertEquals(10, vm.points().rowCount());
+        assertEquals(12, vm.points().rowCount());
     }
 }
