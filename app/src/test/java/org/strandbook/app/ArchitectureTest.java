@@ -25,11 +25,12 @@ class ArchitectureTest {
 
     /**
      * Strandbook's own modules, whether they come as class folders ({@code mvn test}) or as the jars
-     * a reactor build packages first ({@code mvn verify}); never third-party jars.
+     * a reactor build packages first ({@code mvn verify}); never third-party jars, and never core's
+     * test-jar (the test server and child programs the app's tests borrow are test code).
      */
-    private static final ImportOption OWN_MODULES = location -> !location.isJar()
-            || location.contains("strandbook-core") || location.contains("strandbook-sample-site")
-            || location.contains("strandbook-templates");
+    private static final ImportOption OWN_MODULES = location -> !location.contains("-tests.jar")
+            && (!location.isJar() || location.contains("strandbook-core")
+                    || location.contains("strandbook-sample-site") || location.contains("strandbook-templates"));
 
     @BeforeAll
     static void importClasses() {
@@ -49,10 +50,19 @@ class ArchitectureTest {
 
     @Test
     void jdbcStaysInTheStore() {
-        // a benchmark's floor is the bare library doing the same work, so the bench package may call it
-        ArchRule rule = noClasses().that().resideOutsideOfPackages("org.strandbook.store..", BENCH)
+        // a benchmark's floor is the bare library doing the same work, so the bench package may call it;
+        // the plant server's package speaks SQL to PostgreSQL, never to the workbook file
+        ArchRule rule = noClasses().that().resideOutsideOfPackages("org.strandbook.store..", "org.strandbook.server..", BENCH)
                 .should().dependOnClassesThat().resideInAnyPackage("java.sql..", "org.sqlite..")
                 .because("explicit SQL lives in small repository classes of one package");
+        rule.check(classes);
+    }
+
+    @Test
+    void thePlantServerReachesTheWorkbookOnlyThroughTheStore() {
+        ArchRule rule = noClasses().that().resideInAPackage("org.strandbook.server..")
+                .should().dependOnClassesThat().resideInAnyPackage("org.sqlite..", "org.postgresql..")
+                .because("the workbook is the store's; the server is reached through plain JDBC and its URL");
         rule.check(classes);
     }
 

@@ -31,7 +31,7 @@ final class SchemaMigrator {
             "CREATE\\s+TABLE\\s+(?:IF\\s+NOT\\s+EXISTS\\s+)?([A-Za-z_][A-Za-z0-9_]*)", Pattern.CASE_INSENSITIVE);
 
     /** Schema version this Strandbook writes. */
-    static final int LATEST = 6;
+    static final int LATEST = 7;
 
     /** The version that created the audit trail; from it on, every step is itself audited. */
     static final int AUDIT_TRAIL = 2;
@@ -52,7 +52,8 @@ final class SchemaMigrator {
             new Step(2, "V2__audit_trail.sql"),
             new Step(3, "V3__scan_y_unit.sql", List.of(AuditedTable.SCAN)),
             new Step(5, "V5__maintenance_and_sign_off.sql"),
-            new Step(6, "V6__decision_rule.sql"));
+            new Step(6, "V6__decision_rule.sql"),
+            new Step(7, "V7__plant_server_sync.sql"));
 
     private SchemaMigrator() {
     }

@@ -57,6 +57,7 @@ public final class Workbook implements AutoCloseable {
     private final SignOffRepository signOffs;
     private final NoteRepository notes;
     private final MaintenanceRepository maintenance;
+    private final RecordWithdrawal withdrawal;
 
     private Workbook(Session session, AuditLog audit) {
         this.session = session;
@@ -70,6 +71,7 @@ public final class Workbook implements AutoCloseable {
         this.signOffs = new SignOffRepository(session, audit, site);
         this.notes = new NoteRepository(session, audit);
         this.maintenance = new MaintenanceRepository(session, audit, paths);
+        this.withdrawal = new RecordWithdrawal(session, audit, paths);
     }
 
     /**
@@ -381,12 +383,27 @@ public final class Workbook implements AutoCloseable {
         return notes;
     }
 
+    /** Withdrawing a point's latest record (the history panel's undo). */
+    public RecordWithdrawal withdrawal() {
+        return withdrawal;
+    }
+
     public MaintenanceRepository maintenance() {
         return maintenance;
     }
 
     public AuditLog audit() {
         return audit;
+    }
+
+    /** The records in the form they travel to a plant server. */
+    public WorkbookRecords records() {
+        return new WorkbookRecords(session, audit);
+    }
+
+    /** What this workbook knows of its plant server. */
+    public SyncLedger syncLedger() {
+        return new SyncLedger(session);
     }
 
     /**

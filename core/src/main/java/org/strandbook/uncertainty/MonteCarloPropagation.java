@@ -85,6 +85,31 @@ public final class MonteCarloPropagation {
         if (method == CoverageInterval.Method.NORMAL_COVERAGE_FACTOR) {
             throw new IllegalArgumentException("Monte Carlo gives a shortest or a probabilistically symmetric interval");
         }
+        return summarise(modelValues(inputs, model), coverageProbability, method);
+    }
+
+    /**
+     * The share of trials whose model value does not exceed {@code limit}: the probability that
+     * the output stays at or below it, read from the same distribution of model values that gives
+     * the coverage interval (JCGM 101:2008, 7.5: the ordered values stand for the output's
+     * distribution function). Its own standard error is √(P(1 − P)/M) (binomial counting).
+     */
+    public Chance chanceAtMost(List<InputDistribution> inputs, MeasurementModel model, double limit) {
+        Objects.requireNonNull(inputs, "inputs");
+        Objects.requireNonNull(model, "model");
+        if (Double.isNaN(limit)) {
+            throw new IllegalArgumentException("the limit must be a number");
+        }
+        int within = 0;
+        for (double v : modelValues(inputs, model)) {
+            if (v <= limit) {
+                within++;
+            }
+        }
+        return new Chance((double) within / trials, trials);
+    }
+
+    private double[] modelValues(List<InputDistribution> inputs, MeasurementModel model) {
         InputDistribution[] dist = inputs.toArray(InputDistribution[]::new);
         RandomGenerator random = newRandom();
         double[] x = new double[dist.length];
@@ -100,7 +125,7 @@ public final class MonteCarloPropagation {
             }
             y[r] = value;
         }
-        return summarise(y, coverageProbability, method);
+        return y;
     }
 
     /**

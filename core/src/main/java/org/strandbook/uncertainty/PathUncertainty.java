@@ -65,6 +65,15 @@ public final class PathUncertainty {
                 .withGenerator(MonteCarloPropagation.Generator.SPLITMIX64), 0.95);
     }
 
+    /** The same inputs and coverage with {@code trials} Monte Carlo trials per run. */
+    public PathUncertainty withTrials(int trials) {
+        return new PathUncertainty(inputs, monteCarlo.withTrials(trials), coverageProbability);
+    }
+
+    public int trials() {
+        return monteCarlo.trials();
+    }
+
     public double coverageProbability() {
         return coverageProbability;
     }
@@ -75,6 +84,42 @@ public final class PathUncertainty {
      * @param jointSources what each joint of the path rests on, in path order (one per joint)
      */
     public LossUncertainty at(LossBudget budget, int gridIndex, List<JointSource> jointSources) {
+        Terms terms = terms(budget, gridIndex, jointSources);
+        List<SensitivityTerm> rows = terms.list().stream().map(Term::row).toList();
+        UncertaintyBudget framework = LinearPropagation.propagate(terms.predictedDb(), rows, coverageProbability);
+        MonteCarloResult mc = monteCarlo.propagateAdaptive(terms.distributions(), terms.model(), coverageProbability,
+                CoverageInterval.Method.PROBABILISTICALLY_SYMMETRIC, SIGNIFICANT_DIGITS);
+        return new LossUncertainty(terms.wavelengthNm(), terms.predictedDb(), framework.withInterval(mc.interval()),
+                framework.interval());
+    }
+
+    /**
+     * Each input's contribution uᵢ(y) = |cᵢ|·u(xᵢ) (dB), in the order of {@link #at}'s rows, by the
+     * law of propagation alone (JCGM 100:2008, 5.1.3) with no Monte Carlo run: cheap enough for
+     * every point of an evaluation grid. Their root sum of squares is u_c(y).
+     */
+    public double[] contributionsDb(LossBudget budget, int gridIndex, List<JointSource> jointSources) {
+        return terms(budget, gridIndex, jointSources).list().stream().mapToDouble(t -> t.row().contribution())
+                .toArray();
+    }
+
+    /**
+     * The chance that the path's loss at one wavelength stays within {@code allowedLossDb}, from
+     * the same inputs and Monte Carlo trials that give {@link #at}'s interval: the design question
+     * "with these parts, will the loop stay within the analyzer's allowed loss?".
+     *
+     * @param allowedLossDb the loss the loop may have there (dB)
+     */
+    public Chance chanceWithin(LossBudget budget, int gridIndex, List<JointSource> jointSources,
+            double allowedLossDb) {
+        if (!Double.isFinite(allowedLossDb)) {
+            throw new IllegalArgumentException("the allowed loss must be a finite number of dB, was " + allowedLossDb);
+        }
+        Terms terms = terms(budget, gridIndex, jointSources);
+        return monteCarlo.chanceAtMost(terms.distributions(), terms.model(), allowedLossDb);
+    }
+
+    private Terms terms(LossBudget budget, int gridIndex, List<JointSource> jointSources) {
         double wavelengthNm = budget.grid().wavelengthNm(gridIndex);
         List<Term> terms = new ArrayList<>();
         Iterator<JointSource> joints = jointSources.iterator();
@@ -97,20 +142,7 @@ public final class PathUncertainty {
         if (joints.hasNext()) {
             throw new IllegalArgumentException("more joint sources than joints on path '" + budget.path().name() + "'");
         }
-        double predicted = budget.totalLossDbAt(gridIndex);
-        List<SensitivityTerm> rows = terms.stream().map(Term::row).toList();
-        UncertaintyBudget framework = LinearPropagation.propagate(predicted, rows, coverageProbability);
-        List<InputDistribution> distributions = rows.stream().map(r -> r.input().distribution()).toList();
-        DoubleUnaryOperator[] effects = terms.stream().map(Term::effectDb).toArray(DoubleUnaryOperator[]::new);
-        MonteCarloResult mc = monteCarlo.propagateAdaptive(distributions, x -> {
-            double y = predicted;
-            for (int i = 0; i < x.length; i++) {
-                y += effects[i].applyAsDouble(x[i]);
-            }
-            return y;
-        }, coverageProbability, CoverageInterval.Method.PROBABILISTICALLY_SYMMETRIC, SIGNIFICANT_DIGITS);
-        return new LossUncertainty(wavelengthNm, predicted, framework.withInterval(mc.interval()),
-                framework.interval());
+        return new Terms(wavelengthNm, budget.totalLossDbAt(gridIndex), terms);
     }
 
     private void fiberTerms(FiberSegment f, double wavelengthNm, List<Term> out) {
@@ -140,6 +172,26 @@ public final class PathUncertainty {
         double slope = (lossAt.applyAsDouble(BEND_STEP) - lossAt.applyAsDouble(-BEND_STEP)) / (2 * BEND_STEP);
         UncertainInput input = inputs.bendRadius().input(f.label(), 1, 0.9);
         return new Term(new SensitivityTerm(input, slope), d -> lossAt.applyAsDouble(d) - nominal);
+    }
+
+    /** The inputs of the budget at one wavelength, around the prediction there. */
+    private record Terms(double wavelengthNm, double predictedDb, List<Term> list) {
+
+        List<InputDistribution> distributions() {
+            return list.stream().map(t -> t.row().input().distribution()).toList();
+        }
+
+        /** The prediction plus every input's effect: the full model a Monte Carlo trial evaluates. */
+        MeasurementModel model() {
+            DoubleUnaryOperator[] effects = list.stream().map(Term::effectDb).toArray(DoubleUnaryOperator[]::new);
+            return x -> {
+                double y = predictedDb;
+                for (int i = 0; i < x.length; i++) {
+                    y += effects[i].applyAsDouble(x[i]);
+                }
+                return y;
+            };
+        }
     }
 
     /** A budget row and how the output moves with the input's deviation in a Monte Carlo trial. */

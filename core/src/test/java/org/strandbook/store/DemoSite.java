@@ -29,47 +29,47 @@ import org.strandbook.site.Spectrum;
 import org.strandbook.site.WavelengthBand;
 
 /** An invented little site for the store tests: one analyzer, two points, one catalog entry of each kind. */
-final class DemoSite {
+public final class DemoSite {
 
-    static final String USER = "r.inglenook";
-    static final String ANALYZER = "QA-7";
-    static final String FIBER = "LOH-400";
-    static final String CONNECTOR = "SMA-A";
-    static final String PROBE = "TX-5";
-    static final String POINT_A = "AT-101";
-    static final String POINT_B = "AT-102";
+    public static final String USER = "r.inglenook";
+    public static final String ANALYZER = "QA-7";
+    public static final String FIBER = "LOH-400";
+    public static final String CONNECTOR = "SMA-A";
+    public static final String PROBE = "TX-5";
+    public static final String POINT_A = "AT-101";
+    public static final String POINT_B = "AT-102";
 
     private DemoSite() {
     }
 
-    static Site site() {
+    public static Site site() {
         return new Site("Fennwick Basin Works", "Unit 3 aromatics", "A", 1.0);
     }
 
-    static Analyzer analyzer() {
+    public static Analyzer analyzer() {
         return new Analyzer(ANALYZER, "process NIR, 4 channels", 1000, 2200, 4, 18.0, DetectorType.EXTENDED_INGAAS);
     }
 
-    static FiberType fiber() {
+    public static FiberType fiber() {
         return new FiberType(FIBER, "400 um low-OH silica/silica", 400, 440, 480, 0.22, "FUSED_SILICA", OhGrade.LOW_OH,
                 0.5, List.of(new AttenuationPoint(1000, 8.0), new AttenuationPoint(1550, 4.5)));
     }
 
-    static ConnectorType connector() {
+    public static ConnectorType connector() {
         return new ConnectorType(CONNECTOR, "SMA 905 bulkhead pair", "SMA 905", 1.0, true);
     }
 
-    static ProbeType probe() {
+    public static ProbeType probe() {
         return new ProbeType(PROBE, "transmission cell, 5 mm gap", ProbeKind.TRANSMISSION, "SAPPHIRE", 4, 5.0, 0.8);
     }
 
-    static MeasurementPoint point(String tag, int channel) {
+    public static MeasurementPoint point(String tag, int channel) {
         return new MeasurementPoint(tag, "reactor feed", "pipe rack 3, el. 12 m", ANALYZER, channel, PROBE,
                 List.of(new WavelengthBand("C-H 1st overtone", 1650, 1800), new WavelengthBand("", 1100, 1250)),
                 OptionalDouble.of(1.5), true, false, OptionalDouble.of(180.0));
     }
 
-    static List<PathLeg> legs(String tag, String cablePrefix) {
+    public static List<PathLeg> legs(String tag, String cablePrefix) {
         PathLeg send = new PathLeg(tag, PathDirection.SEND, List.of(
                 new CableSegment(cablePrefix + "-S1", FIBER, 2.0, List.of()),
                 new Joint("J1", CONNECTOR, null, InspectionGrade.CLEAN, OptionalDouble.empty(), LossBasis.ASSUMED),
@@ -83,7 +83,7 @@ final class DemoSite {
     }
 
     /** Fills a fresh workbook with the catalog, the analyzer and both points with their legs. */
-    static void populate(Workbook wb) {
+    public static void populate(Workbook wb) {
         wb.inTransaction(() -> {
             wb.site().addAnalyzer(analyzer());
             wb.catalog().addFiberType(fiber());
@@ -97,7 +97,7 @@ final class DemoSite {
     }
 
     /** A smooth invented lamp-like spectrum with a little noise, on an even grid. */
-    static Spectrum spectrum(int points, long seed) {
+    public static Spectrum spectrum(int points, long seed) {
         Random random = new Random(seed);
         double[] wl = new double[points];
         double[] v = new double[points];
@@ -109,11 +109,11 @@ final class DemoSite {
         return new Spectrum(wl, v);
     }
 
-    static String sha256Of(String text) {
+    public static String sha256Of(String text) {
         return Sha256.hex(text.getBytes(StandardCharsets.UTF_8));
     }
 
-    static long insertScan(Workbook wb, String tag, int seq, Instant takenAt) {
+    public static long insertScan(Workbook wb, String tag, int seq, Instant takenAt) {
         return wb.scans().insert(tag, ScanKind.LOOP, takenAt, ScanConditions.unknown("k.ashdown"),
                 spectrum(256, seq), "loop-" + seq + ".csv", sha256Of(tag + "/" + seq));
     }

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import java.util.Collections;
 import java.util.List;
 
+import org.apache.commons.math3.distribution.NormalDistribution;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -101,5 +102,40 @@ class MonteCarloPropagationTest {
         MonteCarloPropagation small = MonteCarloPropagation.standard().withTrials(10_000);
         assertEquals(small.propagate(inputs, model, 0.95, CoverageInterval.Method.SHORTEST),
                 small.propagate(inputs, model, 0.95, CoverageInterval.Method.SHORTEST));
+    }
+
+    @Test
+    void chanceOfAnAllNormalLinearBudgetIsTheNormalDistributionFunction() {
+        // A linear model in normal inputs has a normal output (JCGM 101:2008, 9.2.2), so the chance
+        // that it stays at or below X is Φ((X − μ)/σ); Φ from Apache Commons Math's
+        // NormalDistribution, a general-purpose reference library. Three joints and a fiber term
+        // with made-up spreads (dB): μ = 1 + 0.8 + 0.6 + 2.5, σ² = 0.3² + 0.2² + 0.2² + 0.4².
+        List<InputDistribution> inputs = List.of(new InputDistribution.Normal(1.0, 0.3),
+                new InputDistribution.Normal(0.8, 0.2), new InputDistribution.Normal(0.6, 0.2),
+                new InputDistribution.Normal(2.5, 0.4));
+        double sigma = Math.sqrt(0.09 + 0.04 + 0.04 + 0.16);
+        NormalDistribution output = new NormalDistribution(null, 4.9, sigma, 1e-12);
+        for (double allowedDb : new double[] {4.5, 4.9, 5.6}) {
+            Chance c = MCM.chanceAtMost(inputs, SUM, allowedDb);
+            // Design choice: four binomial standard errors, √(P(1 − P)/M) ≤ 0.0005 at M = 10⁶.
+            assertEquals(output.cumulativeProbability(allowedDb), c.probability(), 4 * 0.0005, "X = " + allowedDb);
+            assertEquals(TRIALS, c.trials());
+        }
+    }
+
+    @Test
+    void chanceOfASumOfRectanglesFollowsItsExactDistributionFunction() {
+        // JCGM 101:2008, 9.2.4's inputs (rectangular, one dominant); the exact distribution function
+        // of the sum is Bradley & Gupta's (Ann. Inst. Statist. Math. 54 (2002) 689–700).
+        double a = Math.sqrt(3);
+        double a4 = 10 * Math.sqrt(3);
+        SumOfRectangles exact = new SumOfRectangles(a, a, a, a4);
+        List<InputDistribution> inputs = List.of(InputDistribution.Rectangular.around(0, a),
+                InputDistribution.Rectangular.around(0, a), InputDistribution.Rectangular.around(0, a),
+                InputDistribution.Rectangular.around(0, a4));
+        for (double limit : new double[] {-16, 0, 12}) {
+            assertEquals(exact.cumulative(limit), MCM.chanceAtMost(inputs, SUM, limit).probability(), 0.002,
+                    "limit " + limit);
+        }
     }
 }

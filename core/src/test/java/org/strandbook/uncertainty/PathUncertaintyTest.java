@@ -113,4 +113,35 @@ class PathUncertaintyTest {
         assertThrows(IllegalArgumentException.class, () -> ENGINE.at(budget, AT_2300,
                 List.of(JointSource.MEASURED, JointSource.MEASURED, JointSource.MEASURED)));
     }
+
+    @Test
+    void chanceWithinTheAllowedLossFollowsTheTwoAirGapTriangle() {
+        // As above: two ±0.5 dB rectangles dominate a 1 m loop, their sum is the triangle on ±1 dB,
+        // F(s) = (1 + s)²/2 below 0 (JCGM 100:2008, 4.3.9); the fiber terms add a few thousandths.
+        LightPath shortLoop = LightPath.of("short", FiberSegment.straight("send", FIBER, 0.5), airGap("J1"),
+                airGap("J2"), FiberSegment.straight("return", FIBER, 0.5));
+        LossBudget budget = LossBudget.of(shortLoop, GRID);
+        double predicted = budget.totalLossDbAt(AT_1050);
+        Chance c = ENGINE.chanceWithin(budget, AT_1050, TWO_AIR_GAPS, predicted - 0.5);
+        assertEquals(new SumOfRectangles(0.5, 0.5).cumulative(-0.5), c.probability(), 0.01);
+        assertEquals(0.125, c.probability(), 0.01);
+        assertEquals(1.0, ENGINE.chanceWithin(budget, AT_1050, TWO_AIR_GAPS, predicted + 1.1).probability());
+    }
+
+    @Test
+    void chanceAgreesWithTheCoverageIntervalFromTheSameTrials() {
+        // JCGM 101:2008, 7.7.1: the probabilistically symmetric interval's upper end is the 97.5 %
+        // point of the output's distribution; the interval comes from the adaptive run (7.9), whose
+        // ends are fixed only to its numerical tolerance δ (7.9.4), so the 97.5 % point of the
+        // chance's own trials lies within δ of it.
+        LossBudget budget = LossBudget.of(loop(100, 30, 600), GRID);
+        LossUncertainty u = ENGINE.at(budget, AT_2300, TWO_AIR_GAPS);
+        double high = u.budget().interval().high();
+        double delta = MonteCarloPropagation.numericalTolerance(u.budget().combinedStandardUncertainty(),
+                PathUncertainty.SIGNIFICANT_DIGITS);
+        Chance below = ENGINE.chanceWithin(budget, AT_2300, TWO_AIR_GAPS, high - delta);
+        Chance above = ENGINE.chanceWithin(budget, AT_2300, TWO_AIR_GAPS, high + delta);
+        assertTrue(below.probability() <= 0.975 && 0.975 <= above.probability(),
+                below.probability() + " … " + above.probability());
+    }
 }

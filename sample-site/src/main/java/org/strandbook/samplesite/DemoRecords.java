@@ -95,8 +95,8 @@ final class DemoRecords {
                     "K. Lindqvist", "both end faces cleaned with a dry reel cleaner, re-inspected",
                     "dirty at commissioning and at the third visit; excess flat across the range",
                     Optional.empty()));
-            wb.inspections().add(new Inspection(CLEANED, joint, cleaned, "K. Lindqvist", InspectionGrade.CLEAN,
-                    "after clean joint", ""));
+            wb.inspections().add(new Inspection(CLEANED, joint, cleaned.plus(Duration.ofMinutes(15)), "K. Lindqvist",
+                    InspectionGrade.CLEAN, "after cleaning, under the inspection scope", ""));
         });
     }
 }

@@ -25,6 +25,10 @@ import org.strandbook.optics.path.LightPath;
 import org.strandbook.optics.path.LossBudget;
 import org.strandbook.optics.path.Reach;
 import org.strandbook.optics.path.SpectralWindow;
+import org.strandbook.uncertainty.Allowance;
+import org.strandbook.uncertainty.BudgetInputUncertainties;
+import org.strandbook.uncertainty.Chance;
+import org.strandbook.uncertainty.PathUncertainty;
 
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
@@ -107,6 +111,16 @@ public final class FiberCommand implements Callable<Integer> {
             description = "Allowed one-pass loss in dB for reach and usable windows (default: ${DEFAULT-VALUE} dB).")
     double allowedLossDb;
 
+    @Option(names = "--chance-within-db", paramLabel = "dB",
+            description = "Also give the chance that the fiber stays within this loss at --chance-at-nm, by Monte Carlo "
+                    + "(JCGM 101:2008) over the spreads of length, attenuation, OH content and bend radius.")
+    Double chanceWithinDb;
+
+    @Option(names = "--chance-at-nm", paramLabel = "nm",
+            description = "Wavelength in nm for --chance-within-db (default: 2300, where silica's infrared edge and "
+                    + "OH bands make the spread largest in the usual NIR range).")
+    Double chanceAtNm;
+
     @Option(names = "--json", description = "Print {\"points\":[...]} as JSON instead of a table.")
     boolean json;
 
@@ -114,6 +128,13 @@ public final class FiberCommand implements Callable<Integer> {
     record Point(double wavelengthNm, double attenuationDbPerKm, double fiberLossDb, double faceLossDb,
             double bendLossDb, boolean bendClamped, double totalLossDb, double transmittance, double reachM) {
     }
+
+    /** The design question's answer: how likely the fiber stays within an allowed loss. */
+    record WithinChance(double allowedLossDb, double wavelengthNm, double predictedLossDb, Chance chance) {
+    }
+
+    /** Default wavelength of the design question: design choice (the usual NIR range's lossy end). */
+    static final double DEFAULT_CHANCE_AT_NM = 2300;
 
     @Override
     public Integer call() {
@@ -132,15 +153,19 @@ public final class FiberCommand implements Callable<Integer> {
         for (double w : wavelengths) {
             points.add(point(fiber, w));
         }
+        WithinChance chance = chanceWithinDb == null ? null : withinChance(fiber);
         BendRadiusCheck radiusCheck = bendRadiusMm == null ? null : MinimumBendRadius.check(claddingUm, bendRadiusMm);
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
-            printJson(out, points);
+            printJson(out, points, chance);
             if (radiusCheck != null && !radiusCheck.ok()) {
                 spec.commandLine().getErr().println("strandbook: note: " + radiusCheck.message());
             }
         } else {
             printTable(out, fiber, points, radiusCheck);
+            if (chance != null) {
+                printChance(out, chance);
+            }
         }
         out.flush();
         return StrandbookCommand.EXIT_OK;
@@ -199,9 +224,45 @@ public final class FiberCommand implements Callable<Integer> {
         if (bendCount < 0) {
             throw new UsageProblem("--bend-count must not be negative, was " + bendCount);
         }
+        if (chanceWithinDb != null) {
+            requireFinite(chanceWithinDb, "--chance-within-db");
+            if (chanceWithinDb < 0) {
+                throw new UsageProblem("--chance-within-db must not be negative, was " + chanceWithinDb);
+            }
+        }
+        if (chanceAtNm != null) {
+            requireFinite(chanceAtNm, "--chance-at-nm");
+            if (chanceWithinDb == null) {
+                throw new UsageProblem("--chance-at-nm needs --chance-within-db");
+            }
+        }
         if (bendRadiusMm == null && spec.commandLine().getParseResult().hasMatchedOption("--bend-count")) {
             throw new UsageProblem("--bend-count needs --bend-radius-mm");
         }
+    }
+
+    /**
+     * The same one-pass path as the table, on a one-wavelength grid, through the engine that gives
+     * the workbook's coverage intervals; the faces carry no spread (Fresnel with a known index).
+     */
+    private WithinChance withinChance(FiberSpec fiber) {
+        double atNm = chanceAtNm == null ? DEFAULT_CHANCE_AT_NM : chanceAtNm;
+        try {
+            fiber.attenuation().validRange().require(atNm, "the silica attenuation model");
+        } catch (IllegalArgumentException e) {
+            throw new UsageProblem("--chance-at-nm: " + e.getMessage());
+        }
+        LossBudget budget = LossBudget.of(onePass(fiber), WavelengthGrid.ofNm(atNm));
+        Chance chance = PathUncertainty.standard().chanceWithin(budget, 0, List.of(), chanceWithinDb);
+        return new WithinChance(chanceWithinDb, atNm, budget.totalLossDbAt(0), chance);
+    }
+
+    private LightPath onePass(FiberSpec fiber) {
+        FiberSegment segment = new FiberSegment("fiber", fiber, lengthM,
+                bendRadiusMm == null ? OptionalDouble.empty() : OptionalDouble.of(bendRadiusMm),
+                bendRadiusMm == null ? 0 : bendCount);
+        return LightPath.of("one fiber", FaceElement.inAir("entry face", fiber), segment,
+                FaceElement.inAir("exit face", fiber));
     }
 
     private double[] requestedWavelengthsNm() {
@@ -229,7 +290,7 @@ public final class FiberCommand implements Callable<Integer> {
         }
     }
 
-    private static void printJson(PrintWriter out, List<Point> points) {
+    private static void printJson(PrintWriter out, List<Point> points, WithinChance chance) {
         StringBuilder b = new StringBuilder("{\"points\":[");
         for (int i = 0; i < points.size(); i++) {
             Point p = points.get(i);
@@ -246,7 +307,33 @@ public final class FiberCommand implements Callable<Integer> {
                     .append(",\"transmittance\":").append(JsonText.number(p.transmittance()))
                     .append('}');
         }
-        out.println(b.append("]}"));
+        b.append(']');
+        if (chance != null) {
+            b.append(",\"chance\":{")
+                    .append("\"within_db\":").append(JsonText.number(chance.allowedLossDb()))
+                    .append(",\"at_nm\":").append(JsonText.number(chance.wavelengthNm()))
+                    .append(",\"predicted_loss_db\":").append(JsonText.number(chance.predictedLossDb()))
+                    .append(",\"probability\":").append(JsonText.number(chance.chance().probability()))
+                    .append(",\"standard_error\":").append(JsonText.number(chance.chance().standardError()))
+                    .append(",\"trials\":").append(chance.chance().trials())
+                    .append('}');
+        }
+        out.println(b.append('}'));
+    }
+
+    private static void printChance(PrintWriter out, WithinChance c) {
+        out.println();
+        out.println(String.format(Locale.ROOT, "chance the loop stays within %s dB at %s nm: %.1f %%",
+                plain(c.allowedLossDb()), plain(c.wavelengthNm()), 100 * c.chance().probability()));
+        out.println(String.format(Locale.ROOT, "  predicted %.3f dB there; Monte Carlo, %d trials (JCGM 101:2008),"
+                + " statistical scatter ±%.1f %%; faces taken as exact. Spreads:", c.predictedLossDb(),
+                c.chance().trials(), 100 * c.chance().standardError()));
+        BudgetInputUncertainties spreads = BudgetInputUncertainties.SHIPPED;
+        for (Allowance a : List.of(spreads.fiberLength(), spreads.attenuation(), spreads.ohContent(),
+                spreads.bendRadius())) {
+            out.println("  - " + a.what() + ": " + a.basisText() + " (" + a.basis().name().toLowerCase(Locale.ROOT)
+                    .replace('_', ' ') + ")");
+        }
     }
 
     private void printTable(PrintWriter out, FiberSpec fiber, List<Point> points, BendRadiusCheck radiusCheck) {
@@ -297,12 +384,7 @@ public final class FiberCommand implements Callable<Integer> {
 
     private List<SpectralWindow> usableWindows(FiberSpec fiber) {
         WavelengthGrid grid = WavelengthGrid.uniformNm(WINDOW_GRID_START_NM, WINDOW_GRID_END_NM, WINDOW_GRID_POINTS);
-        FiberSegment segment = new FiberSegment("fiber", fiber, lengthM,
-                bendRadiusMm == null ? OptionalDouble.empty() : OptionalDouble.of(bendRadiusMm),
-                bendRadiusMm == null ? 0 : bendCount);
-        LightPath path = LightPath.of("one fiber", FaceElement.inAir("entry face", fiber), segment,
-                FaceElement.inAir("exit face", fiber));
-        return Reach.usableWindows(LossBudget.of(path, grid), allowedLossDb);
+        return Reach.usableWindows(LossBudget.of(onePass(fiber), grid), allowedLossDb);
     }
 
     private static String f(String format, double v) {

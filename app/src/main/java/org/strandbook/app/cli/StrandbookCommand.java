@@ -37,6 +37,9 @@ import picocli.CommandLine.Command;
             SignCommand.class,
             AuditCommand.class,
             ExportCommand.class,
+            SyncCommand.class,
+            CloneCommand.class,
+            FleetCommand.class,
             BenchCommand.class,
         })
 public final class StrandbookCommand implements Runnable {

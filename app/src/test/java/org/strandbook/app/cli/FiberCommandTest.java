@@ -148,6 +148,60 @@ class FiberCommandTest {
         assertEquals(2, run.exitCode());
     }
 
+    /** A straight, OH-free fiber: its only spreads are the shipped length and attenuation rectangles. */
+    private static final String[] STRAIGHT_DRY = {"fiber", "--core-um", "200", "--clad-um", "220", "--na", "0.22",
+        "--oh-ppm", "0", "--length-m", "30", "--wavelengths-nm", "2300", "--json"};
+
+    private static CliRun chance(String[] base, double withinDb) {
+        List<String> args = new ArrayList<>(List.of(base));
+        args.addAll(List.of("--chance-within-db", Double.toString(withinDb)));
+        return CliRun.of(args.toArray(String[]::new));
+    }
+
+    @Test
+    void chanceFollowsTheTrapezoidOfTwoRectangularSpreads() {
+        // Design choice (the shipped spreads): length ±2 % and attenuation ±15 %, both rectangular, both
+        // linear in the fiber's loss L_f, so the total is the prediction plus the sum of two rectangles of
+        // half-widths a = 0.15·L_f and b = 0.02·L_f. Their sum has the trapezoidal distribution function
+        // F(s) = 1/2 + s/(2a) for |s| ≤ a − b and 1 − (a + b − s)²/(8ab) above (the convolution of two
+        // uniform densities; Bradley & Gupta, Ann. Inst. Statist. Math. 54 (2002) 689–700, n = 2).
+        CliRun plain = CliRun.of(STRAIGHT_DRY);
+        double total = values(plain.out(), "total_loss_db").get(0);
+        double fiber = values(plain.out(), "fiber_loss_db").get(0);
+        double a = 0.15 * fiber;
+        double b = 0.02 * fiber;
+        double inside = 0.5 * (a - b);
+        double tail = a;
+        CliRun atPrediction = chance(STRAIGHT_DRY, total);
+        assertEquals(0, atPrediction.exitCode(), atPrediction.err());
+        // Design choice: 0.005, over four binomial standard errors at M = 2·10⁵.
+        assertEquals(0.5, values(atPrediction.out(), "probability").get(0), 0.005);
+        assertEquals(0.5 + inside / (2 * a), values(chance(STRAIGHT_DRY, total + inside).out(), "probability").get(0),
+                0.005);
+        assertEquals(1 - Math.pow(a + b - tail, 2) / (8 * a * b),
+                values(chance(STRAIGHT_DRY, total + tail).out(), "probability").get(0), 0.005);
+        assertEquals(total, values(atPrediction.out(), "predicted_loss_db").get(0), 1e-9);
+        assertEquals(List.of(2300.0), values(atPrediction.out(), "at_nm"));
+    }
+
+    @Test
+    void chanceIsPrintedAsAPercentageAtTheStatedWavelength() {
+        // the output contract of the design question in the table form
+        CliRun run = CliRun.of("fiber", "--core-um", "200", "--clad-um", "220", "--na", "0.22", "--length-m", "2",
+                "--wavelengths-nm", "1000", "--chance-within-db", "5", "--chance-at-nm", "1550");
+        assertEquals(0, run.exitCode(), run.err());
+        assertTrue(run.out().contains("chance the loop stays within 5 dB at 1550 nm: 100.0 %"), run.out());
+    }
+
+    @Test
+    void chanceWavelengthWithoutAnAllowedLossIsRefused() {
+        // a design question needs its limit; never a silent default
+        CliRun run = CliRun.of("fiber", "--core-um", "200", "--clad-um", "220", "--na", "0.22", "--length-m", "2",
+                "--wavelengths-nm", "1000", "--chance-at-nm", "2300");
+        assertEquals(2, run.exitCode());
+        assertTrue(run.err().contains("--chance-at-nm needs --chance-within-db"), run.err());
+    }
+
     private static List<Double> values(String json, String field) {
         Matcher m = Pattern.compile("\"" + field + "\":(-?[0-9.]+(?:[eE][-+]?[0-9]+)?)").matcher(json);
         List<Double> out = new ArrayList<>();

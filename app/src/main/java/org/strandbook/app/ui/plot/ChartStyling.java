@@ -12,6 +12,7 @@ import javafx.scene.layout.FlowPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.shape.Circle;
 import javafx.scene.shape.Line;
+import javafx.scene.shape.Rectangle;
 import javafx.util.StringConverter;
 
 import org.strandbook.app.ui.sheet.CellFormats;
@@ -118,6 +119,21 @@ final class ChartStyling {
             entry.maxWidthProperty().bind(legend.widthProperty());
             legend.getChildren().add(entry);
         }
+    }
+
+    /** A legend entry for a shaded band: a filled swatch as translucent as the band. */
+    static Node bandLegendEntry(FlowPane legend, String label, String colour) {
+        Rectangle key = new Rectangle(22, 10);
+        key.setStyle("-fx-fill: " + colour + ";");
+        key.setOpacity(ShadedLineChart.BAND_OPACITY);
+        Label text = new Label(label);
+        text.getStyleClass().add("plot-legend-text");
+        text.setMinWidth(0);
+        text.setTooltip(new Tooltip(label));
+        HBox entry = new HBox(4, key, text);
+        entry.setAlignment(javafx.geometry.Pos.CENTER_LEFT);
+        entry.maxWidthProperty().bind(legend.widthProperty());
+        return entry;
     }
 
     static FlowPane legend(String id) {

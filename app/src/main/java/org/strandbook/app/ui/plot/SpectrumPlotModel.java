@@ -3,6 +3,10 @@ package org.strandbook.app.ui.plot;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
+import java.util.Optional;
+
+import javafx.beans.property.ReadOnlyObjectProperty;
+import javafx.beans.property.ReadOnlyObjectWrapper;
 
 
 /**
@@ -28,6 +32,20 @@ public final class SpectrumPlotModel extends PlotModel<SpectrumPlotModel.PlotLin
         }
     }
 
+    /** A point of a shaded band in the chosen axes: the band runs from {@code y1} to {@code y2} at {@code x}. */
+    public record BandPoint(double x, double y1, double y2) {
+    }
+
+    /** A shaded band in the chosen axes, x ascending. */
+    public record PlotBand(String label, String colour, List<BandPoint> points) {
+
+        public PlotBand {
+            points = List.copyOf(points);
+        }
+    }
+
+    private final ReadOnlyObjectWrapper<List<PlotBand>> bands = new ReadOnlyObjectWrapper<>(this, "bands", List.of());
+    private CoverageBand band;
     private List<Curve> curves = List.of();
     private double ceilingDb = Double.POSITIVE_INFINITY;
 
@@ -56,11 +74,29 @@ public final class SpectrumPlotModel extends PlotModel<SpectrumPlotModel.PlotLin
         recompute();
     }
 
+    /** The shaded bands drawn behind the lines (none, or the prediction's coverage interval). */
+    public ReadOnlyObjectProperty<List<PlotBand>> bandsProperty() {
+        return bands.getReadOnlyProperty();
+    }
+
+    /** The band shown now, if any. */
+    public Optional<CoverageBand> band() {
+        return Optional.ofNullable(band);
+    }
+
+    /** Shades {@code shown} behind the curves; {@code null} removes the band. */
+    public void showBand(CoverageBand shown) {
+        band = shown;
+        bands.set(band == null ? List.of() : List.of(plotBand(band, axes().axisProperty().get(),
+                axes().scaleProperty().get())));
+    }
+
     /** Shows nothing, and {@code message} in its place. */
     public void clear(String caption, String message) {
         title.set(caption);
         placeholder.set(message);
         curves = List.of();
+        band = null;
         ceilingDb = Double.POSITIVE_INFINITY;
         recompute();
     }
@@ -75,6 +111,24 @@ public final class SpectrumPlotModel extends PlotModel<SpectrumPlotModel.PlotLin
         }
         lines.set(List.copyOf(out));
         ranges(out, y);
+        bands.set(band == null ? List.of() : List.of(plotBand(band, x, y)));
+    }
+
+    private static PlotBand plotBand(CoverageBand b, SpectralAxis x, LossScale y) {
+        double[] nm = b.wavelengthsNm();
+        double[] low = b.lowDb();
+        double[] high = b.highDb();
+        int stride = Math.max(1, (nm.length + MAX_POINTS - 1) / MAX_POINTS);
+        List<BandPoint> points = new ArrayList<>();
+        for (int i = 0; i < nm.length; i++) {
+            if (i % stride == 0 || i == nm.length - 1) {
+                points.add(new BandPoint(x.fromNm(nm[i]), y.fromLossDb(low[i]), y.fromLossDb(high[i])));
+            }
+        }
+        if (x == SpectralAxis.WAVENUMBER_CM) {
+            Collections.reverse(points);
+        }
+        return new PlotBand(b.label(), b.colour(), points);
     }
 
     private void ranges(List<PlotLine> shown, LossScale y) {

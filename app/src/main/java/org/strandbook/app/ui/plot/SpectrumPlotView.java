@@ -11,19 +11,21 @@ import javafx.scene.control.Label;
 import javafx.scene.layout.BorderPane;
 import javafx.scene.layout.FlowPane;
 import javafx.scene.layout.StackPane;
+import javafx.scene.shape.Polygon;
 
 /** A spectral plot bound to a {@link SpectrumPlotModel}: a line chart, its legend below, and a message when empty. */
 public final class SpectrumPlotView {
 
     private final NumberAxis xAxis = ChartStyling.axis();
     private final NumberAxis yAxis = ChartStyling.axis();
-    private final LineChart<Number, Number> chart = new LineChart<>(xAxis, yAxis);
+    private final ShadedLineChart chart = new ShadedLineChart(xAxis, yAxis);
     private final FlowPane legend;
     private final Label placeholder = new Label();
     private final BorderPane root = new BorderPane();
     private List<CurveStyle> drawnStyles = List.of();
     private List<String> legendLabels = List.of();
     private List<CurveStyle> legendStyles = List.of();
+    private List<SpectrumPlotModel.PlotBand> shownBands = List.of();
 
     /** {@code id} names the chart node; the legend is {@code id + "-legend"}. */
     public SpectrumPlotView(SpectrumPlotModel model, String id) {
@@ -47,9 +49,11 @@ public final class SpectrumPlotView {
         xAxis.setLabel(model.axes().axisProperty().get().label());
         yAxis.setLabel(model.axes().scaleProperty().get().label());
         model.linesProperty().addListener((o, was, is) -> draw(is));
+        model.bandsProperty().addListener((o, was, is) -> shade(is));
         model.xRangeProperty().addListener((o, was, is) -> ChartStyling.apply(xAxis, is));
         model.yRangeProperty().addListener((o, was, is) -> ChartStyling.apply(yAxis, is));
         draw(model.linesProperty().get());
+        shade(model.bandsProperty().get());
         ChartStyling.apply(xAxis, model.xRangeProperty().get());
         ChartStyling.apply(yAxis, model.yRangeProperty().get());
 
@@ -68,6 +72,28 @@ public final class SpectrumPlotView {
 
     public FlowPane legend() {
         return legend;
+    }
+
+    /** The polygons of the shaded bands drawn now. */
+    public List<Polygon> bandShapes() {
+        return chart.bandShapes();
+    }
+
+    private void shade(List<SpectrumPlotModel.PlotBand> bands) {
+        boolean sameLegend = bands.stream().map(SpectrumPlotModel.PlotBand::label).toList()
+                .equals(shownBands.stream().map(SpectrumPlotModel.PlotBand::label).toList());
+        shownBands = bands;
+        chart.setBands(bands);
+        if (!sameLegend) {
+            fillLegend();
+        }
+    }
+
+    private void fillLegend() {
+        ChartStyling.fillLegend(legend, legendLabels, legendStyles);
+        for (SpectrumPlotModel.PlotBand b : shownBands) {
+            legend.getChildren().add(ChartStyling.bandLegendEntry(legend, b.label(), b.colour()));
+        }
     }
 
     /**
@@ -113,9 +139,9 @@ public final class SpectrumPlotView {
         List<String> labels = lines.stream().map(SpectrumPlotModel.PlotLine::label).toList();
         List<CurveStyle> lineStyles = lines.stream().map(SpectrumPlotModel.PlotLine::style).toList();
         if (!labels.equals(legendLabels) || !lineStyles.equals(legendStyles)) {
-            ChartStyling.fillLegend(legend, labels, lineStyles);
             legendLabels = labels;
             legendStyles = lineStyles;
+            fillLegend();
         }
     }
 

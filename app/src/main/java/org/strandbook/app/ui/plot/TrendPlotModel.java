@@ -108,6 +108,7 @@ public final class TrendPlotModel extends PlotModel<TrendPlotModel.TrendLine> {
         Instant first = null;
         Instant end = null;
         boolean trended = false;
+        double fanned = 0;
         for (int b = 0; b < trends.size(); b++) {
             BandTrend t = trends.get(b);
             if (t.readings().isEmpty()) {
@@ -136,6 +137,15 @@ public final class TrendPlotModel extends PlotModel<TrendPlotModel.TrendLine> {
                 Instant fitted = trend.referenceTime().isAfter(from) ? trend.referenceTime() : from;
                 out.add(new TrendLine("", "", CurveStyle.line(colour, 2), along(trend, fitted, last, y)));
                 out.add(new TrendLine("", "", CurveStyle.dashed(colour, 2), along(trend, last, until, y)));
+                if (trend.slopeIsBounded()) {
+                    // the forecast's interval: the slope's confidence limits from the trend's value at the last scan,
+                    // the lines whose crossings of the allowed loss give the earliest and latest run-out dates
+                    out.add(new TrendLine("", "", CurveStyle.dashed(colour, 1),
+                            fan(trend, trend.lowerSlopeDbPerYear(), last, until, y)));
+                    out.add(new TrendLine("", "", CurveStyle.dashed(colour, 1),
+                            fan(trend, trend.upperSlopeDbPerYear(), last, until, y)));
+                    fanned = Math.max(fanned, trend.confidenceLevel());
+                }
             }
         }
         if (first != null && Double.isFinite(allowedLossDb)) {
@@ -152,6 +162,10 @@ public final class TrendPlotModel extends PlotModel<TrendPlotModel.TrendLine> {
         if (trended) {
             out.add(new TrendLine("Theil\u2013Sen trend", "", CurveStyle.line(CurveStyle.GREY, 2), List.of()));
             out.add(new TrendLine("forecast", "", CurveStyle.dashed(CurveStyle.GREY, 2), List.of()));
+        }
+        if (fanned > 0) {
+            out.add(new TrendLine(String.format(Locale.ROOT, "forecast interval (slope's %.0f %% confidence limits)",
+                    100 * fanned), "", CurveStyle.dashed(CurveStyle.GREY, 1), List.of()));
         }
         lines.set(List.copyOf(out));
         ranges(out);
@@ -221,6 +235,19 @@ public final class TrendPlotModel extends PlotModel<TrendPlotModel.TrendLine> {
             years = Math.max(years, Math.min(MAX_LOOK_AHEAD_YEARS, t.outlook().get().yearsToZero() * 1.1));
         }
         return YearScale.plusYears(last, years);
+    }
+
+    /** From the trend's value at {@code from}, on at {@code slopeDbPerYear} until {@code to}. */
+    private static List<TimePoint> fan(LossTrend trend, double slopeDbPerYear, Instant from, Instant to, LossScale y) {
+        double start = trend.lossDbAt(from);
+        double span = YearScale.yearsBetween(from, to);
+        List<TimePoint> points = new ArrayList<>(TREND_POINTS + 1);
+        for (int i = 0; i <= TREND_POINTS; i++) {
+            double years = span * i / TREND_POINTS;
+            points.add(new TimePoint(epochDay(YearScale.plusYears(from, years)),
+                    y.fromLossDb(start + slopeDbPerYear * years)));
+        }
+        return points;
     }
 
     private static List<TimePoint> along(LossTrend trend, Instant from, Instant to, LossScale y) {

@@ -47,9 +47,9 @@ final class AttentionView {
         ranking.getColumns().add(column("ranking-rank", "Rank", 50, r -> Integer.toString(r.rank())));
         ranking.getColumns().add(column("ranking-point", "Point", 80, AttentionRow::pointTag));
         ranking.getColumns().add(column("ranking-status", "Status", 110, AttentionRow::statusText));
-        ranking.getColumns().add(column("ranking-band", "Worst band", 170, AttentionRow::worstBand));
+        ranking.getColumns().add(column("ranking-band", "Worst band", 160, AttentionRow::worstBand));
         ranking.getColumns().add(column("ranking-margin", "Margin (dB)", 90, AttentionRow::marginText));
-        ranking.getColumns().add(column("ranking-run-out", "Margin runs out (date)", 150, AttentionRow::runOutText));
+        ranking.getColumns().add(column("ranking-run-out", "Runs out (date)", 120, AttentionRow::runOutText));
         ranking.getColumns().add(column("ranking-finding", "Finding", 380, AttentionRow::finding));
         ranking.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY);
 

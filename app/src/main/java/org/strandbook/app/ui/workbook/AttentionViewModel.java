@@ -7,6 +7,8 @@ import java.util.function.Consumer;
 
 import javafx.beans.property.ReadOnlyBooleanProperty;
 import javafx.beans.property.ReadOnlyBooleanWrapper;
+import javafx.beans.property.ReadOnlyIntegerProperty;
+import javafx.beans.property.ReadOnlyIntegerWrapper;
 import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.collections.FXCollections;
@@ -32,6 +34,7 @@ public final class AttentionViewModel {
     private final ReadOnlyStringWrapper summary = new ReadOnlyStringWrapper(this, "summary",
             "Not ranked yet: rank the site to see what needs attention");
     private final ReadOnlyBooleanWrapper stale = new ReadOnlyBooleanWrapper(this, "stale", true);
+    private final ReadOnlyIntegerWrapper changes = new ReadOnlyIntegerWrapper(this, "changes", 0);
     private int run;
 
     /** @param opener told the tag of a point the user opens from the lists */
@@ -58,6 +61,11 @@ public final class AttentionViewModel {
     /** True until the lists reflect the workbook as it is now. */
     public ReadOnlyBooleanProperty staleProperty() {
         return stale.getReadOnlyProperty();
+    }
+
+    /** Counts the changes that made the lists out of date; a shown view re-ranks on each. */
+    public ReadOnlyIntegerProperty changesProperty() {
+        return changes.getReadOnlyProperty();
     }
 
     /** Evaluates and ranks every point in the background. */
@@ -92,11 +100,13 @@ public final class AttentionViewModel {
     void invalidate() {
         run++;
         stale.set(true);
+        changes.set(changes.get() + 1);
     }
 
     /** Empties the lists (no workbook open). */
     void clear() {
-        invalidate();
+        run++;
+        stale.set(true);
         needing.clear();
         ranking.clear();
         summary.set("Not ranked yet: rank the site to see what needs attention");

@@ -9,7 +9,9 @@ import java.util.function.Function;
 import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.geometry.Insets;
 import javafx.scene.Node;
+import javafx.scene.control.Alert;
 import javafx.scene.control.Button;
+import javafx.scene.control.ButtonType;
 import javafx.scene.control.Label;
 import javafx.scene.control.TableColumn;
 import javafx.scene.control.TableView;
@@ -48,7 +50,8 @@ final class HistoryPanel {
                 button("history-inspect", "Record inspection\u2026", vm, owner, RecordDialogs::inspection),
                 button("history-maintain", "Record maintenance\u2026", vm, owner, RecordDialogs::maintenance),
                 button("history-note", "Add note\u2026", vm, owner, RecordDialogs::note),
-                button("history-sign", "Sign point\u2026", vm, owner, RecordDialogs::signOff));
+                button("history-sign", "Sign point\u2026", vm, owner, RecordDialogs::signOff),
+                withdrawButton(vm, owner));
         Label message = new Label();
         message.setId("history-message");
         message.setWrapText(true);
@@ -72,6 +75,33 @@ final class HistoryPanel {
                 return;
             }
             dialog.apply(owner.get(), vm).dialog().show();
+        });
+        return b;
+    }
+
+    /** Undo of the latest record, after a confirmation that says what it does. */
+    private static Button withdrawButton(PointHistoryViewModel vm, java.util.function.Supplier<Window> owner) {
+        Button b = new Button("Withdraw latest record\u2026");
+        b.setId("history-withdraw");
+        b.setOnAction(e -> {
+            if (vm.pointTag().isEmpty()) {
+                return;
+            }
+            Alert confirm = new Alert(Alert.AlertType.CONFIRMATION, "The inspection, maintenance action or note "
+                    + "entered last at " + vm.pointTag() + " is withdrawn; a replacement it recorded is undone. The "
+                    + "audit trail keeps the record and who withdrew it. A record covered by a later signature is "
+                    + "not withdrawn.", ButtonType.OK, ButtonType.CANCEL);
+            confirm.initOwner(owner.get());
+            confirm.setTitle("Withdraw the latest record");
+            confirm.setHeaderText("Withdraw the latest record of " + vm.pointTag() + "?");
+            confirm.getDialogPane().setId("withdraw-dialog");
+            ((Button) confirm.getDialogPane().lookupButton(ButtonType.OK)).setId("withdraw-dialog-ok");
+            confirm.resultProperty().addListener((o, was, is) -> {
+                if (is == ButtonType.OK) {
+                    vm.withdrawLatest();
+                }
+            });
+            confirm.show();
         });
         return b;
     }

@@ -18,6 +18,7 @@ import org.strandbook.site.MaintenanceAction;
 import org.strandbook.site.Note;
 import org.strandbook.site.PathLeg;
 import org.strandbook.site.SignOff;
+import org.strandbook.store.WithdrawnRecord;
 
 /**
  * The selected point's history and the records made from the window. Every read and write runs as
@@ -77,9 +78,12 @@ public final class PointHistoryViewModel {
     }
 
     void show(String tag) {
+        if (!tag.equals(pointTag)) {
+            // the outcome of a record stays while the same point is shown again (the workbook re-read)
+            message.set("");
+        }
         pointTag = tag;
         events.clear();
-        message.set("");
         tasks.submit("Reading the history of " + tag, p -> service.history(tag), list -> {
             if (tag.equals(pointTag)) {
                 events.setAll(list);
@@ -107,6 +111,34 @@ public final class PointHistoryViewModel {
 
     public void recordSignOff(SignOff signOff) {
         record("sign-off by " + signOff.name(), s -> s.signOff(signOff), false);
+    }
+
+    /**
+     * Withdraws the point's latest-entered inspection, action or note (the undo of a record); the
+     * workbook is read again, since a withdrawn replacement puts the old path or probe back.
+     */
+    public void withdrawLatest() {
+        String tag = pointTag;
+        if (tag == null) {
+            message.set("select a point first");
+            return;
+        }
+        tasks.submit("Withdrawing the latest record at " + tag, p -> {
+            WithdrawnRecord what = service.withdrawLatest(tag);
+            return new Withdrawn(what, service.history(tag));
+        }, done -> {
+            if (tag.equals(pointTag)) {
+                events.setAll(done.history());
+            }
+            message.set("withdrawn: " + done.what().description() + "; the audit trail keeps it");
+            recorded.accept(tag);
+            if (done.what().pathRestored()) {
+                pathChanged.accept(tag);
+            }
+        }, e -> message.set("not withdrawn: " + e.getMessage()));
+    }
+
+    private record Withdrawn(WithdrawnRecord what, List<PointEvent> history) {
     }
 
     private void record(String what, Consumer<WorkbookService> write, boolean changesPath) {

@@ -24,6 +24,8 @@ import org.strandbook.app.ui.path.LegSegment;
 import org.strandbook.app.ui.path.PathFigures;
 import org.strandbook.app.ui.path.SegmentSheet;
 import org.strandbook.app.ui.plot.PlotAxes;
+import org.strandbook.app.ui.plot.CoverageBand;
+import org.strandbook.app.ui.plot.CurveStyle;
 import org.strandbook.app.ui.plot.PointCurves;
 import org.strandbook.app.ui.plot.SpectrumPlotModel;
 import org.strandbook.app.ui.plot.TrendPlotModel;
@@ -33,14 +35,17 @@ import org.strandbook.app.ui.sheet.RowFigures;
 import org.strandbook.app.ui.sheet.SheetModel;
 import org.strandbook.app.ui.sheet.Verdict;
 import org.strandbook.app.ui.task.TaskExecutor;
+import org.strandbook.app.ui.uncertainty.UncertaintyViewModel;
 import org.strandbook.evaluation.PointEvaluation;
 import org.strandbook.evaluation.PredictedBudget;
+import org.strandbook.evaluation.PredictionSpread;
 import org.strandbook.site.ConnectorType;
 import org.strandbook.site.FiberType;
 import org.strandbook.site.MeasurementPoint;
 import org.strandbook.site.PathLeg;
 import org.strandbook.site.ScanRecord;
 import org.strandbook.site.WavelengthBand;
+import org.strandbook.uncertainty.PathUncertainty;
 
 /**
  * The selected point: its segment, joint and scan sheets, its three plots and the lines that sum
@@ -79,6 +84,9 @@ public final class PointViewModel {
     private final SpectrumPlotModel measuredPlot;
     private final TrendPlotModel trendPlot;
     private final PointHistoryViewModel history;
+    private final UncertaintyViewModel uncertainty;
+    /** The prediction's coverage band as the plots shade it, once worked out. */
+    private CoverageBand coverageBand;
 
     private final ReadOnlyStringWrapper context = new ReadOnlyStringWrapper(this, "context", "No point selected");
     private final ReadOnlyStringWrapper summary = new ReadOnlyStringWrapper(this, "summary", "");
@@ -94,6 +102,8 @@ public final class PointViewModel {
         this.budgetPlot = new SpectrumPlotModel(axes);
         this.measuredPlot = new SpectrumPlotModel(axes);
         this.trendPlot = new TrendPlotModel(axes);
+        this.uncertainty = new UncertaintyViewModel(tasks, PathUncertainty.standard());
+        uncertainty.spreadProperty().addListener((o, was, is) -> shade(is));
         this.history = new PointHistoryViewModel(service, tasks, () -> point == null ? List.of() : shownLegs(),
                 events::pathReplaced, events::recorded);
         history.events().addListener((javafx.collections.ListChangeListener<PointEvent>) c -> trendPlot.marks(
@@ -138,6 +148,11 @@ public final class PointViewModel {
     }
 
     /** Predicted loss spectrum with each element's contribution. */
+    /** The selected point's prediction uncertainty: the Uncertainty tab and the plots' shaded band. */
+    public UncertaintyViewModel uncertainty() {
+        return uncertainty;
+    }
+
     public SpectrumPlotModel budgetPlot() {
         return budgetPlot;
     }
@@ -234,6 +249,7 @@ public final class PointViewModel {
         measuredPlot.clear("", "No point selected");
         trendPlot.clear("", "No point selected");
         history.clear();
+        uncertainty.clear("No point selected");
     }
 
     /** The point's own record changed (tolerance, probe, analyzer): the prediction follows. */
@@ -306,8 +322,11 @@ public final class PointViewModel {
         Optional<PredictedBudget> budget = prediction.budget();
         if (budget.isPresent()) {
             budgetPlot.show(budgetTitle(), PointCurves.budget(budget.get()), ceilingDb());
+            uncertainty.show(point.tag(), budget.get(), point.bands(),
+                    site.analyzer(point.analyzerTag()).map(a -> a.allowedLossDb()).orElse(Double.NaN));
         } else {
             budgetPlot.clear(budgetTitle(), "No prediction: " + prediction.problem());
+            uncertainty.clear("No prediction: " + prediction.problem());
         }
         showMeasuredPlot(prediction);
     }
@@ -396,6 +415,16 @@ public final class PointViewModel {
                         + DAY.format(p.loop().takenAt())).orElse(""),
                 PointCurves.deviation(budget, evaluation.measured().get(),
                         evaluation.diagnosis().map(d -> d.fitted()).orElse(List.of())), ceilingDb());
+        measuredPlot.showBand(coverageBand);
+    }
+
+    /** Shades the prediction's coverage band in both spectral plots, or removes it (null). */
+    private void shade(PredictionSpread spread) {
+        coverageBand = spread == null ? null : new CoverageBand(String.format(Locale.ROOT,
+                "predicted, %.0f %% coverage interval", 100 * spread.coverageProbability()), CurveStyle.GREY,
+                spread.grid().wavelengthsNm(), spread.lowDb(), spread.highDb());
+        budgetPlot.showBand(coverageBand);
+        measuredPlot.showBand(evaluation == null || evaluation.measured().isEmpty() ? null : coverageBand);
     }
 
     /**

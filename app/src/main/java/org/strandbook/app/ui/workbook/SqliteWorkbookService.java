@@ -43,6 +43,7 @@ import org.strandbook.site.ProbeType;
 import org.strandbook.site.ScanRecord;
 import org.strandbook.site.Site;
 import org.strandbook.store.Workbook;
+import org.strandbook.store.WithdrawnRecord;
 import org.strandbook.store.WorkbookException;
 
 /**
@@ -205,6 +206,11 @@ public final class SqliteWorkbookService implements WorkbookService {
             }
         }
         return out;
+    }
+
+    @Override
+    public synchronized WithdrawnRecord withdrawLatest(String pointTag) {
+        return require().withdrawal().withdrawLatest(pointTag);
     }
 
     @Override

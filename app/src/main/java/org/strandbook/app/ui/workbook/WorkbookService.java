@@ -21,6 +21,7 @@ import org.strandbook.site.PathLeg;
 import org.strandbook.site.ProbeType;
 import org.strandbook.site.ScanRecord;
 import org.strandbook.site.Site;
+import org.strandbook.store.WithdrawnRecord;
 
 /**
  * Everything the window asks of the open workbook file. View models call it only inside jobs of a
@@ -106,6 +107,14 @@ public interface WorkbookService extends AutoCloseable {
 
     /** Records a note. */
     void addNote(Note note);
+
+    /**
+     * Withdraws the point's latest-entered inspection, action or note as an audited change, putting
+     * back a path or probe it replaced; refused when a later signature covers it.
+     *
+     * @return what was withdrawn
+     */
+    WithdrawnRecord withdrawLatest(String pointTag);
 
     /** Signs a point (only once it has been evaluated) or the site record. */
     void signOff(SignOff signOff);

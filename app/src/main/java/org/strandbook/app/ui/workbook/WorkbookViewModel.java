@@ -166,12 +166,12 @@ public final class WorkbookViewModel {
         return probes;
     }
 
-    /** The selected point's sheets and plots. */
     /** The site's attention view: what needs a crew, most urgent first. */
     public AttentionViewModel attention() {
         return attention;
     }
 
+    /** The selected point's sheets and plots. */
     public PointViewModel point() {
         return point;
     }
@@ -385,6 +385,7 @@ public final class WorkbookViewModel {
     /** Closes the workbook file once the jobs before this one are done. */
     public void close() {
         siteRun++;
+        attention.clear();
         tasks.submit("Closing the workbook", p -> {
             service.close();
             return Boolean.TRUE;
@@ -437,7 +438,6 @@ public final class WorkbookViewModel {
             measured.clear();
         }
         pointRow.clear();
-        attention.invalidate();
         List<MeasurementPoint> list = site.points();
         for (int i = 0; i < list.size(); i++) {
             pointRow.put(list.get(i).tag(), i);
@@ -448,6 +448,7 @@ public final class WorkbookViewModel {
         probes.load(site.probes());
         outline.set(new SiteOutline(site.site(), site.analyzers(), list));
         open.set(true);
+        attention.invalidate();
         remember(loaded.file());
         updateTitle();
         selectedTag.set("");

@@ -55,6 +55,7 @@ import org.strandbook.app.ui.path.LegSegment;
 import org.strandbook.app.ui.plot.PlotAxesBar;
 import org.strandbook.app.ui.plot.SpectrumPlotView;
 import org.strandbook.app.ui.plot.TrendPlotView;
+import org.strandbook.app.ui.uncertainty.UncertaintyPanel;
 import org.strandbook.app.ui.safety.SafetyCaution;
 import org.strandbook.app.ui.safety.SafetyCautionDialog;
 import org.strandbook.app.ui.sheet.SheetView;
@@ -164,6 +165,18 @@ public final class WorkbookWindow {
 
     public SheetView<LegJoint> jointsView() {
         return jointsView;
+    }
+
+    public SheetView<FiberType> fibersView() {
+        return fibersView;
+    }
+
+    public SheetView<ConnectorType> connectorsView() {
+        return connectorsView;
+    }
+
+    public SheetView<ProbeType> probesView() {
+        return probesView;
     }
 
     public SpectrumPlotView budgetPlot() {
@@ -451,6 +464,7 @@ public final class WorkbookWindow {
                 tab("Joints", "tab-joints", jointsView, pointContext(point)),
                 readOnlyTab("Scans", "tab-scans", scansView, pointContext(point), scanActions()),
                 historyTab(point),
+                uncertaintyTab(point),
                 attentionTab(),
                 catalogTab);
 
@@ -530,6 +544,17 @@ public final class WorkbookWindow {
         return t;
     }
 
+    /** The selected point's uncertainty budget per band and the design question. */
+    private Tab uncertaintyTab(PointViewModel point) {
+        UncertaintyPanel panel = new UncertaintyPanel(point.uncertainty());
+        VBox box = new VBox(4, pointContext(point), panel.node());
+        box.setPadding(new Insets(4));
+        VBox.setVgrow(panel.node(), Priority.ALWAYS);
+        Tab t = new Tab("Uncertainty", box);
+        t.setId("tab-uncertainty");
+        return t;
+    }
+
     /**
      * The site's attention view; ranked when the tab is shown and the lists are out of date. A point
      * opened from it shows in the History tab, with its plots below.
@@ -542,6 +567,11 @@ public final class WorkbookWindow {
         t.setId("tab-attention");
         t.selectedProperty().addListener((o, was, is) -> {
             if (is && attention.staleProperty().get() && vm.openProperty().get()) {
+                attention.refresh();
+            }
+        });
+        attention.changesProperty().addListener((o, was, is) -> {
+            if (t.isSelected() && vm.openProperty().get()) {
                 attention.refresh();
             }
         });

@@ -112,4 +112,24 @@ class SpectrumPlotModelTest {
         assertEquals(1000, run.get(0).x());
         assertEquals(2500, run.get(run.size() - 1).x());
     }
+
+    @Test
+    void coverageBandFollowsTheChosenAxesAndGoesWithClear() {
+        // σ = 1/λ (ISO 80000-7:2019, 7-13) and T = 10^(−L/10) (IEC 60027-3:2002) apply to both ends of the band
+        SpectrumPlotModel model = new SpectrumPlotModel(new PlotAxes(new MemoryPreferences()));
+        double[] nm = {1000, 2000};
+        model.show("p", List.of(new Curve("predicted", CurveStyle.line(CurveStyle.BLACK, 2), nm, new double[] {10, 11})));
+        model.showBand(new CoverageBand("95 %", CurveStyle.GREY, nm, new double[] {9, 10}, new double[] {11, 13}));
+        SpectrumPlotModel.BandPoint first = model.bandsProperty().get().get(0).points().get(0);
+        assertEquals(new SpectrumPlotModel.BandPoint(1000, 9, 11), first);
+        model.axes().axisProperty().set(SpectralAxis.WAVENUMBER_CM);
+        model.axes().scaleProperty().set(LossScale.TRANSMITTANCE_PERCENT);
+        List<SpectrumPlotModel.BandPoint> points = model.bandsProperty().get().get(0).points();
+        // read left to right: 2000 nm (5000 cm⁻¹) first, its 10 and 13 dB as 10 % and 5.01 %
+        assertEquals(5000, points.get(0).x(), 5000 * RELATIVE_TOLERANCE);
+        assertEquals(10, points.get(0).y1(), 10 * RELATIVE_TOLERANCE);
+        assertEquals(100 * Math.pow(10, -1.3), points.get(0).y2(), RELATIVE_TOLERANCE);
+        model.clear("p", "nothing");
+        assertTrue(model.bandsProperty().get().isEmpty());
+    }
 }

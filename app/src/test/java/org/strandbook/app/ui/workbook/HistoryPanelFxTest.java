@@ -24,6 +24,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.strandbook.handover.PointEvent;
 import org.strandbook.site.InspectionGrade;
 import org.strandbook.site.MaintenanceKind;
+import org.strandbook.store.Workbook;
 import org.testfx.api.FxRobot;
 import org.testfx.api.FxToolkit;
 import org.testfx.util.WaitForAsyncUtils;
@@ -58,9 +59,11 @@ class HistoryPanelFxTest {
                 .filter(t -> "tab-history".equals(t.getId())).findFirst().orElseThrow()));
     }
 
+    private Path copy;
+
     @BeforeEach
     void openCopy() {
-        Path copy = sample.workbookCopy(dir);
+        copy = sample.workbookCopy(dir);
         robot.interact(() -> {
             vm.open(copy);
             vm.selectPoint(POINT);
@@ -199,5 +202,36 @@ class HistoryPanelFxTest {
         ok("sign-off-dialog");
         assertEquals("a sign-off needs the signer's name", problem("sign-off-dialog"));
         assertEquals(0, count(PointEvent.Kind.SIGN_OFF));
+    }
+
+    @Test
+    void aNoteJustWrittenIsWithdrawnAndTheTrailStillVerifies() {
+        open("history-note");
+        type("note-by", "k.ashdown");
+        type("note-text", "wrong point: this was meant for AT-4103");
+        ok("note-dialog");
+        long notes = count(PointEvent.Kind.NOTE);
+
+        open("history-withdraw");
+        ok("withdraw-dialog");
+
+        assertEquals(notes - 1, count(PointEvent.Kind.NOTE));
+        assertTrue(history().messageProperty().get().startsWith("withdrawn: note of "), history().messageProperty().get());
+        try (Workbook wb = Workbook.openForReading(copy, "auditor")) {
+            assertTrue(wb.audit().verify().intact(), () -> wb.audit().verify().toString());
+        }
+    }
+
+    @Test
+    void aRecordTheSignedRevisionCoversIsNotWithdrawn() {
+        // the demo's AT-4102 records all predate its signed commissioning revision A
+        long before = history().events().size();
+        open("history-withdraw");
+        ok("withdraw-dialog");
+
+        assertTrue(history().messageProperty().get().startsWith("not withdrawn: the note of "),
+                history().messageProperty().get());
+        assertTrue(history().messageProperty().get().contains("signature of"), history().messageProperty().get());
+        assertEquals(before, history().events().size());
     }
 }

@@ -1,0 +1,104 @@
+package org.strandbook.server;
+
+import java.sql.Connection;
+import java.sql.DriverManager;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.util.Properties;
+import java.util.logging.Level;
+import java.util.logging.Logger;
+
+import org.flywaydb.core.Flyway;
+import org.flywaydb.core.api.FlywayException;
+
+/**
+ * A plant server: one PostgreSQL database holding many sites. Its schema is versioned by Flyway
+ * migrations ({@code org/strandbook/server/migration/V<n>__<what>.sql}); unlike the SQLite workbook,
+ * PostgreSQL gives Flyway the lock it needs, so two laptops reaching a new server at once migrate it
+ * once.
+ */
+public final class PlantServer {
+
+    /** The newest server schema this Strandbook carries: the highest V&lt;n&gt; script (a test keeps them equal). */
+    static final int SCHEMA_VERSION = 2;
+
+    /** Where the migrations live on the classpath. */
+    static final String MIGRATIONS = "classpath:org/strandbook/server/migration";
+
+    // kept here: java.util.logging holds loggers weakly, and a collected one forgets its level
+    private static final Logger FLYWAY_LOG = Logger.getLogger("org.flywaydb");
+
+    static {
+        // standard output holds only results; Flyway's progress lines would mix into them
+        FLYWAY_LOG.setLevel(Level.SEVERE);
+    }
+
+    private final ServerLogin login;
+
+    public PlantServer(ServerLogin login) {
+        this.login = login;
+    }
+
+    public ServerLogin login() {
+        return login;
+    }
+
+    /**
+     * Brings the server's schema to this Strandbook's version; a server already there is only
+     * read. Run first by the server's administrator (the owner of the database); a technician then
+     * finds the schema in place.
+     */
+    public void migrate() {
+        if (installedVersion() >= SCHEMA_VERSION) {
+            // Flyway's own start costs a cold command about half a second; a server in date needs none of it
+            return;
+        }
+        try {
+            Flyway.configure().loggers("org.flywaydb.core.internal.logging.javautil.JavaUtilLogCreator")
+                    .dataSource(login.url(), login.user(), login.password())
+                    .locations(MIGRATIONS)
+                    .connectRetries(0)
+                    .load()
+                    .migrate();
+        } catch (FlywayException e) {
+            throw new ServerException("cannot bring the plant server " + login.displayUrl() + " to this"
+                    + " Strandbook's schema: " + ServerException.firstLine(e), e);
+        }
+    }
+
+    /** The schema version the server records, 0 when it has none yet. */
+    int installedVersion() {
+        try (Connection c = connect(); Statement st = c.createStatement()) {
+            try (ResultSet rs = st.executeQuery("SELECT max(version::int) FROM flyway_schema_history WHERE success")) {
+                return rs.next() ? rs.getInt(1) : 0;
+            } catch (SQLException e) {
+                return 0;
+            }
+        } catch (SQLException e) {
+            return 0;
+        }
+    }
+
+    /** A new connection, autocommit off. */
+    public Connection connect() {
+        Properties props = new Properties();
+        props.setProperty("user", login.user());
+        if (login.password() != null) {
+            props.setProperty("password", login.password());
+        }
+        props.setProperty("ApplicationName", "strandbook");
+        // a batch of INSERTs goes as multi-row statements: a first sync of tens of thousands of scans
+        // would otherwise pay one round trip and one statement-level audit per scan
+        props.setProperty("reWriteBatchedInserts", "true");
+        props.setProperty("connectTimeout", "10");
+        try {
+            Connection c = DriverManager.getConnection(login.url(), props);
+            c.setAutoCommit(false);
+            return c;
+        } catch (SQLException e) {
+            throw new ServerException("cannot reach the plant server " + login.displayUrl() + " as "
+                    + login.user() + ": " + ServerException.firstLine(e), e);
+        }
+    }
+}

@@ -1,0 +1,560 @@
+package org.strandbook.server;
+
+import java.sql.Array;
+import java.sql.Connection;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.Set;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
+
+import org.strandbook.store.AuditEntry;
+import org.strandbook.store.AuditReport;
+import org.strandbook.store.PortableFields;
+import org.strandbook.store.PortableTable;
+import org.strandbook.store.SyncLedger;
+import org.strandbook.store.Workbook;
+import org.strandbook.store.WorkbookRecords;
+
+/**
+ * One sync of a workbook with its site on a plant server: push what is new here, pull what others
+ * recorded, and find two edits of one field since the last sync.
+ *
+ * <p>The server's side runs in one transaction, under a lock per site so that two laptops syncing
+ * the same site take turns; the workbook's side runs in one transaction after the server's commit.
+ * A sync cut off anywhere (killed, server stopped) leaves either nothing or the server ahead of the
+ * workbook, and the next sync finds the records it pushed already there (the same values on both
+ * sides are agreement, not a conflict) and pulls what it missed.
+ *
+ * <p>Editable records merge field by field against the last agreed version (the base): a field
+ * changed on one side only takes that side's value; a field changed on both sides to different
+ * values is a conflict, each side keeps its own value, and a person chooses ({@link #resolve}).
+ */
+public final class SiteSync {
+
+    /** Records fetched from the server per query when pulling. */
+    private static final int PULL_CHUNK = 500;
+    /** Immutable records per batch when pushing. */
+    private static final int PUSH_BATCH = 200;
+    /** The lock class of a site's sync (pg_advisory_xact_lock's first key), our own number. */
+    private static final int SYNC_LOCK_CLASS = 0x5342;
+
+    /** What one sync did. */
+    public record Outcome(int pushed, int pulled, int changedThere, int changedHere,
+                          List<SyncLedger.Conflict> openConflicts, long serverAuditHead) {
+    }
+
+    /** The field name a conflict over a whole record (removed on one side, changed on the other) carries. */
+    public static final String RECORD = "(record)";
+
+    private final PlantServer server;
+    private final Workbook workbook;
+    private final String siteName;
+    private final SyncProgress progress;
+
+    public SiteSync(PlantServer server, Workbook workbook, String siteName, SyncProgress progress) {
+        this.server = server;
+        this.workbook = workbook;
+        this.siteName = siteName;
+        this.progress = progress;
+    }
+
+    private record ServerRow(Map<String, Object> fields, long revision, boolean deleted, String changedBy) {
+    }
+
+    /** A change to make in the workbook after the server's commit. */
+    private record LocalChange(PortableTable table, String key, Map<String, Object> fields, byte[] spectrum) {
+    }
+
+    private record NewConflict(PortableTable table, String key, String field, String mine, String theirs,
+                               String theirsBy) {
+    }
+
+    /** Everything the workbook's transaction must write once the server has committed. */
+    private static final class Plan {
+        final List<LocalChange> puts = new ArrayList<>();
+        final List<LocalChange> removals = new ArrayList<>();
+        final Map<PortableTable, Map<String, SyncLedger.Base>> bases = new EnumMap<>(PortableTable.class);
+        final Map<PortableTable, Set<String>> droppedBases = new EnumMap<>(PortableTable.class);
+        final List<NewConflict> conflicts = new ArrayList<>();
+        int pushed;
+        int pulled;
+        int changedThere;
+        int changedHere;
+
+        void base(PortableTable t, String key, SyncLedger.Base base) {
+            bases.computeIfAbsent(t, x -> new LinkedHashMap<>()).put(key, base);
+        }
+    }
+
+    public Outcome run() {
+        progress.step("checking the workbook's audit trail");
+        // checked on a connection of its own while the exchange runs, which commits only once the
+        // check has passed: a refused workbook leaves nothing on the server, and a sound one does not
+        // wait for the check before its records start moving
+        CompletableFuture<AuditReport> verification = CompletableFuture.supplyAsync(() -> {
+            try (Workbook reader = Workbook.openForReading(workbook.file(), workbook.user())) {
+                return reader.audit().verify();
+            }
+        });
+        SyncLedger ledger = workbook.syncLedger();
+        SyncLedger.State state = workbook.inTransaction(ledger::state);
+        if (state.siteName() != null && !state.siteName().equals(siteName)) {
+            verification.cancel(false);
+            throw new SyncRefusedException("this workbook syncs with site \"" + state.siteName() + "\", not \""
+                    + siteName + "\"");
+        }
+        AuditEntry head = workbook.audit().head().orElse(null);
+        progress.step("reading the workbook");
+        WorkbookRecords records = workbook.records();
+        Map<PortableTable, Map<String, Map<String, Object>>> local = records.readAll();
+        Map<PortableTable, Map<String, SyncLedger.Base>> bases = ledger.bases();
+
+        Plan plan = new Plan();
+        long serverHead;
+        try (Connection c = server.connect()) {
+            try {
+                long siteId = openSite(c);
+                progress.step("comparing with the server");
+                for (PortableTable t : PortableTable.values()) {
+                    if (t.editable()) {
+                        mergeEditable(c, siteId, t, local.get(t), bases.get(t), plan);
+                    } else {
+                        exchangeImmutable(c, siteId, t, local.get(t), bases.get(t), records, plan);
+                    }
+                }
+                if (head != null && head.id() > state.pushedEntryId()) {
+                    recordTaken(c, siteId, state, head);
+                }
+                serverHead = auditHead(c, siteId);
+                requireVerified(verification);
+                c.commit();
+            } catch (SQLException | RuntimeException e) {
+                rollbackQuietly(c);
+                throw e instanceof SQLException sql ? new ServerException("the sync with "
+                        + server.login().displayUrl() + " failed and changed nothing there: "
+                        + ServerException.firstLine(sql), sql) : (RuntimeException) e;
+            }
+        } catch (SQLException e) {
+            throw new ServerException("cannot close the connection to " + server.login().displayUrl(), e);
+        }
+        progress.step("writing what others recorded into the workbook");
+        Instant now = Instant.now();
+        workbook.inTransaction(() -> {
+            for (LocalChange ch : plan.puts) {
+                records.put(ch.table(), ch.key(), ch.fields(), ch.spectrum());
+            }
+            for (int i = plan.removals.size() - 1; i >= 0; i--) {
+                records.remove(plan.removals.get(i).table(), plan.removals.get(i).key());
+            }
+            plan.bases.forEach((t, byKey) -> byKey.forEach((k, b) -> ledger.putBase(t, k, b)));
+            plan.droppedBases.forEach((t, keys) -> keys.forEach(k -> ledger.removeBase(t, k)));
+            for (NewConflict nc : plan.conflicts) {
+                ledger.conflict(nc.table(), nc.key(), nc.field(), nc.mine(), nc.theirs(), nc.theirsBy(), now);
+            }
+            // entries this sync wrote came from the server: nothing of them is left to push
+            ledger.synced(server.login().displayUrl(), siteName,
+                    workbook.audit().head().map(AuditEntry::id).orElse(0L), now);
+        });
+        List<SyncLedger.Conflict> open = ledger.conflicts().stream().filter(SyncLedger.Conflict::open).toList();
+        return new Outcome(plan.pushed, plan.pulled, plan.changedThere, plan.changedHere, open, serverHead);
+    }
+
+    private void requireVerified(CompletableFuture<AuditReport> verification) {
+        AuditReport report;
+        try {
+            report = verification.join();
+        } catch (CompletionException e) {
+            throw e.getCause() instanceof RuntimeException r ? r : e;
+        }
+        if (!report.intact()) {
+            throw new SyncRefusedException("the workbook " + workbook.file() + " fails `audit verify` ("
+                    + report.chainBreak().map(f -> "chain broken").orElse(report.unrecordedChanges().size()
+                    + " change(s) made outside Strandbook") + "); the server takes only a verifiable workbook");
+        }
+    }
+
+    private long openSite(Connection c) throws SQLException {
+        long siteId;
+        try (PreparedStatement ps = c.prepareStatement("SELECT open_site(?)")) {
+            ps.setString(1, siteName);
+            try (ResultSet rs = ps.executeQuery()) {
+                rs.next();
+                siteId = rs.getLong(1);
+            }
+        } catch (SQLException e) {
+            if ("42501".equals(e.getSQLState())) {
+                throw new SyncRefusedException("the server refused: " + ServerException.firstLine(e));
+            }
+            throw e;
+        }
+        try (PreparedStatement ps = c.prepareStatement("SELECT pg_advisory_xact_lock(?, ?)")) {
+            ps.setInt(1, SYNC_LOCK_CLASS);
+            ps.setInt(2, (int) siteId);
+            ps.execute();
+        }
+        return siteId;
+    }
+
+    private void mergeEditable(Connection c, long siteId, PortableTable t, Map<String, Map<String, Object>> mine,
+                               Map<String, SyncLedger.Base> base, Plan plan) throws SQLException {
+        Map<String, ServerRow> theirs = new HashMap<>();
+        try (PreparedStatement ps = c.prepareStatement("SELECT record_key, fields::text, revision, deleted, changed_by"
+                + " FROM " + t.serverTable() + " WHERE site_id = ?")) {
+            ps.setLong(1, siteId);
+            try (ResultSet rs = ps.executeQuery()) {
+                while (rs.next()) {
+                    theirs.put(rs.getString(1), new ServerRow(PortableFields.parse(rs.getString(2)), rs.getLong(3),
+                            rs.getBoolean(4), rs.getString(5)));
+                }
+            }
+        }
+        Set<String> keys = new LinkedHashSet<>(mine.keySet());
+        keys.addAll(theirs.keySet());
+        keys.addAll(base.keySet());
+        for (String key : keys) {
+            Map<String, Object> m = mine.get(key);
+            ServerRow row = theirs.get(key);
+            Map<String, Object> th = row == null || row.deleted() ? null : row.fields();
+            SyncLedger.Base b = base.get(key);
+            Map<String, Object> bf = b == null ? null : PortableFields.parse(b.fieldsJson());
+            long revision = row == null ? 0 : row.revision();
+            if (Objects.equals(m, th)) {
+                agree(t, key, m, revision, b, plan);
+            } else if (b != null && Objects.equals(th, bf)) {
+                revision = pushRecord(c, siteId, t, key, m, row);
+                agree(t, key, m, revision, b, plan);
+                plan.changedThere++;
+            } else if (b != null && Objects.equals(m, bf) || m == null && b == null) {
+                pullRecord(t, key, th, plan);
+                agree(t, key, th, revision, b, plan);
+            } else if (th == null && b == null) {
+                revision = pushRecord(c, siteId, t, key, m, row);
+                agree(t, key, m, revision, b, plan);
+                plan.changedThere++;
+            } else {
+                mergeFields(c, siteId, t, key, m, row, th, bf, plan);
+            }
+        }
+    }
+
+    /** Both sides hold {@code fields} (null: neither holds the record); it becomes the base. */
+    private static void agree(PortableTable t, String key, Map<String, Object> fields, long revision,
+                              SyncLedger.Base old, Plan plan) {
+        if (fields == null) {
+            if (old != null) {
+                plan.droppedBases.computeIfAbsent(t, x -> new HashSet<>()).add(key);
+            }
+            return;
+        }
+        SyncLedger.Base now = new SyncLedger.Base(PortableFields.json(fields), revision);
+        if (!now.equals(old)) {
+            plan.base(t, key, now);
+        }
+    }
+
+    private static void pullRecord(PortableTable t, String key, Map<String, Object> fields, Plan plan) {
+        if (fields == null) {
+            plan.removals.add(new LocalChange(t, key, null, null));
+        } else {
+            plan.puts.add(new LocalChange(t, key, fields, null));
+        }
+        plan.changedHere++;
+    }
+
+    /** Writes {@code fields} (null: marks the record removed) on the server; the new revision. */
+    private static long pushRecord(Connection c, long siteId, PortableTable t, String key, Map<String, Object> fields,
+                                   ServerRow row) throws SQLException {
+        if (row == null) {
+            if (fields == null) {
+                return 0;
+            }
+            try (PreparedStatement ps = c.prepareStatement("INSERT INTO " + t.serverTable()
+                    + " (site_id, record_key, fields) VALUES (?, ?, ?::jsonb)")) {
+                ps.setLong(1, siteId);
+                ps.setString(2, key);
+                ps.setString(3, PortableFields.json(fields));
+                ps.executeUpdate();
+            }
+            return 1;
+        }
+        try (PreparedStatement ps = c.prepareStatement("UPDATE " + t.serverTable() + " SET fields = ?::jsonb,"
+                + " deleted = ?, revision = revision + 1, changed_at = clock_timestamp(), changed_by = session_user"
+                + " WHERE site_id = ? AND record_key = ? AND revision = ?")) {
+            ps.setString(1, PortableFields.json(fields == null ? row.fields() : fields));
+            ps.setBoolean(2, fields == null);
+            ps.setLong(3, siteId);
+            ps.setString(4, key);
+            ps.setLong(5, row.revision());
+            if (ps.executeUpdate() != 1) {
+                throw new ServerException(t.workbookTable() + " " + key + " changed on the server during this sync;"
+                        + " nothing was changed: sync again");
+            }
+        }
+        return row.revision() + 1;
+    }
+
+    /**
+     * Both sides changed the record since the base: field by field, a field changed on one side
+     * takes that value, a field changed on both sides to different values is a conflict.
+     */
+    private static void mergeFields(Connection c, long siteId, PortableTable t, String key, Map<String, Object> m,
+                                    ServerRow row, Map<String, Object> th, Map<String, Object> bf, Plan plan)
+            throws SQLException {
+        String theirsBy = row == null ? "" : row.changedBy();
+        if (m == null || th == null) {
+            // removed on one side, changed on the other: the whole record is the question
+            plan.conflicts.add(new NewConflict(t, key, RECORD, m == null ? "null" : PortableFields.json(m),
+                    th == null ? "null" : PortableFields.json(th), theirsBy));
+            return;
+        }
+        Map<String, Object> b = bf == null ? Map.of() : bf;
+        Set<String> fields = new LinkedHashSet<>(m.keySet());
+        fields.addAll(th.keySet());
+        Map<String, Object> forServer = new LinkedHashMap<>(th);
+        Map<String, Object> forHere = new LinkedHashMap<>(m);
+        Map<String, Object> agreed = new LinkedHashMap<>(b);
+        boolean conflicted = false;
+        for (String f : fields) {
+            Object mv = m.get(f);
+            Object tv = th.get(f);
+            Object bv = b.get(f);
+            if (Objects.equals(mv, tv)) {
+                agreed.put(f, mv);
+            } else if (bf != null && Objects.equals(mv, bv)) {
+                forHere.put(f, tv);
+                agreed.put(f, tv);
+            } else if (bf != null && Objects.equals(tv, bv)) {
+                forServer.put(f, mv);
+                agreed.put(f, mv);
+            } else {
+                conflicted = true;
+                plan.conflicts.add(new NewConflict(t, key, f, PortableFields.value(mv), PortableFields.value(tv),
+                        theirsBy));
+            }
+        }
+        long revision = row.revision();
+        if (!forServer.equals(th)) {
+            revision = pushRecord(c, siteId, t, key, forServer, row);
+            plan.changedThere++;
+        }
+        if (!forHere.equals(m)) {
+            pullRecord(t, key, forHere, plan);
+        }
+        if (!conflicted) {
+            agree(t, key, agreed, revision, null, plan);
+        } else if (bf != null) {
+            plan.base(t, key, new SyncLedger.Base(PortableFields.json(agreed), revision));
+        }
+    }
+
+    private void exchangeImmutable(Connection c, long siteId, PortableTable t, Map<String, Map<String, Object>> mine,
+                                   Map<String, SyncLedger.Base> base, WorkbookRecords records, Plan plan)
+            throws SQLException {
+        Set<String> theirs = new HashSet<>();
+        try (PreparedStatement ps = c.prepareStatement("SELECT record_key FROM " + t.serverTable()
+                + " WHERE site_id = ?")) {
+            ps.setLong(1, siteId);
+            ps.setFetchSize(10_000);
+            try (ResultSet rs = ps.executeQuery()) {
+                while (rs.next()) {
+                    theirs.add(rs.getString(1));
+                }
+            }
+        }
+        List<String> toPush = mine.keySet().stream().filter(k -> !theirs.contains(k)).toList();
+        if (!toPush.isEmpty()) {
+            progress.step("pushing " + toPush.size() + " " + t.workbookTable() + " record(s)");
+            boolean scan = t == PortableTable.SCAN;
+            String sql = "INSERT INTO " + t.serverTable() + " (site_id, record_key, fields"
+                    + (scan ? ", spectrum" : "") + ") VALUES (?, ?, ?::jsonb" + (scan ? ", ?" : "") + ")"
+                    + " ON CONFLICT DO NOTHING";
+            try (PreparedStatement ps = c.prepareStatement(sql)) {
+                int[] n = {0};
+                WorkbookRecords.SpectrumSink add = (key, spectrum) -> {
+                    ps.setLong(1, siteId);
+                    ps.setString(2, key);
+                    ps.setString(3, PortableFields.json(mine.get(key)));
+                    if (scan) {
+                        ps.setBytes(4, spectrum);
+                    }
+                    ps.addBatch();
+                    if (++n[0] % PUSH_BATCH == 0) {
+                        ps.executeBatch();
+                        progress.done(n[0], toPush.size());
+                    }
+                };
+                if (scan) {
+                    try {
+                        records.spectra(new HashSet<>(toPush), add);
+                    } catch (WorkbookRecords.SinkFailure f) {
+                        if (f.getCause() instanceof SQLException serverFailure) {
+                            throw serverFailure;
+                        }
+                        throw f.getCause() instanceof RuntimeException r ? r : f;
+                    }
+                } else {
+                    for (String key : toPush) {
+                        try {
+                            add.accept(key, null);
+                        } catch (SQLException | RuntimeException e) {
+                            throw e;
+                        } catch (Exception e) {
+                            throw new IllegalStateException(e);
+                        }
+                    }
+                }
+                ps.executeBatch();
+                progress.done(n[0], toPush.size());
+            }
+            plan.pushed += toPush.size();
+        }
+        List<String> toPull = theirs.stream().filter(k -> !mine.containsKey(k) && !base.containsKey(k)).sorted().toList();
+        if (!toPull.isEmpty()) {
+            progress.step("pulling " + toPull.size() + " " + t.workbookTable() + " record(s)");
+            pullImmutable(c, siteId, t, toPull, plan);
+        }
+        SyncLedger.Base seen = new SyncLedger.Base("", 0);
+        for (String key : mine.keySet()) {
+            if (!base.containsKey(key)) {
+                plan.base(t, key, seen);
+            }
+        }
+        for (String key : toPull) {
+            plan.base(t, key, seen);
+        }
+    }
+
+    private void pullImmutable(Connection c, long siteId, PortableTable t, List<String> keys, Plan plan)
+            throws SQLException {
+        boolean scan = t == PortableTable.SCAN;
+        String sql = "SELECT record_key, fields::text" + (scan ? ", spectrum" : "") + " FROM " + t.serverTable()
+                + " WHERE site_id = ? AND record_key = ANY (?)";
+        List<LocalChange> pulled = new ArrayList<>();
+        for (int from = 0; from < keys.size(); from += PULL_CHUNK) {
+            List<String> chunk = keys.subList(from, Math.min(keys.size(), from + PULL_CHUNK));
+            try (PreparedStatement ps = c.prepareStatement(sql)) {
+                Array array = c.createArrayOf("text", chunk.toArray());
+                ps.setLong(1, siteId);
+                ps.setArray(2, array);
+                try (ResultSet rs = ps.executeQuery()) {
+                    while (rs.next()) {
+                        pulled.add(new LocalChange(t, rs.getString(1), PortableFields.parse(rs.getString(2)),
+                                scan ? rs.getBytes(3) : null));
+                    }
+                }
+            }
+            progress.done(Math.min(keys.size(), from + PULL_CHUNK), keys.size());
+        }
+        plan.puts.addAll(pulled);
+        plan.pulled += pulled.size();
+    }
+
+    /** Notes on the server which of this workbook's audit entries it has now taken. */
+    private static void recordTaken(Connection c, long siteId, SyncLedger.State state, AuditEntry head)
+            throws SQLException {
+        long taken = state.pushedEntryId();
+        try (PreparedStatement ps = c.prepareStatement("SELECT max(last_entry_id) FROM workbook_push"
+                + " WHERE site_id = ? AND workbook_id = ?")) {
+            ps.setLong(1, siteId);
+            ps.setString(2, state.workbookId());
+            try (ResultSet rs = ps.executeQuery()) {
+                rs.next();
+                taken = Math.max(taken, rs.getLong(1));
+            }
+        }
+        if (head.id() <= taken) {
+            return;
+        }
+        try (PreparedStatement ps = c.prepareStatement("INSERT INTO workbook_push (site_id, workbook_id,"
+                + " first_entry_id, last_entry_id, last_entry_hash) VALUES (?, ?, ?, ?, ?)")) {
+            ps.setLong(1, siteId);
+            ps.setString(2, state.workbookId());
+            ps.setLong(3, taken + 1);
+            ps.setLong(4, head.id());
+            ps.setString(5, head.hash());
+            ps.executeUpdate();
+        }
+    }
+
+    private static long auditHead(Connection c, long siteId) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("SELECT coalesce(max(id), 0) FROM audit_entry WHERE site_id = ?")) {
+            ps.setLong(1, siteId);
+            try (ResultSet rs = ps.executeQuery()) {
+                rs.next();
+                return rs.getLong(1);
+            }
+        }
+    }
+
+    private static void rollbackQuietly(Connection c) {
+        try {
+            c.rollback();
+        } catch (SQLException e) {
+            // the connection is gone; the server rolls back on its own
+        }
+    }
+
+    /**
+     * A person's choice for an open conflict, made in the workbook before the next sync carries it
+     * out: keeping theirs changes the workbook now (an audited update); keeping mine makes the base
+     * the server's value, so that the sync that follows pushes mine as an edit made here (an
+     * audited update on the server).
+     */
+    public static SyncLedger.Conflict resolve(Workbook workbook, long conflictId, boolean keepMine, String by) {
+        SyncLedger ledger = workbook.syncLedger();
+        SyncLedger.Conflict cf = ledger.conflicts().stream().filter(x -> x.id() == conflictId && x.open()).findFirst()
+                .orElseThrow(() -> new SyncRefusedException("no open conflict " + conflictId
+                        + "; `sync` lists the open ones"));
+        WorkbookRecords records = workbook.records();
+        workbook.inTransaction(() -> {
+            PortableTable t = cf.table();
+            Map<String, Object> m = records.readAll().get(t).get(cf.key());
+            SyncLedger.Base b = ledger.bases().get(t).get(cf.key());
+            long revision = b == null ? 0 : b.revision();
+            if (cf.field().equals(RECORD)) {
+                Map<String, Object> theirs = cf.theirs().equals("null") ? null : PortableFields.parse(cf.theirs());
+                if (!keepMine) {
+                    if (theirs == null) {
+                        records.remove(t, cf.key());
+                    } else {
+                        records.put(t, cf.key(), theirs, null);
+                    }
+                }
+                if (theirs == null) {
+                    ledger.removeBase(t, cf.key());
+                } else {
+                    ledger.putBase(t, cf.key(), new SyncLedger.Base(PortableFields.json(theirs), revision));
+                }
+            } else {
+                Object theirs = PortableFields.parseValue(cf.theirs());
+                Map<String, Object> base = new LinkedHashMap<>(b == null ? m : PortableFields.parse(b.fieldsJson()));
+                if (b == null) {
+                    // never agreed: other fields still in question must not look agreed on my value
+                    ledger.conflicts().stream().filter(x -> x.open() && x.table() == t && x.key().equals(cf.key())
+                            && x.id() != cf.id()).forEach(x -> base.put(x.field(), null));
+                }
+                base.put(cf.field(), theirs);
+                if (!keepMine && m != null) {
+                    Map<String, Object> here = new LinkedHashMap<>(m);
+                    here.put(cf.field(), theirs);
+                    records.put(t, cf.key(), here, null);
+                }
+                ledger.putBase(t, cf.key(), new SyncLedger.Base(PortableFields.json(base), revision));
+            }
+            ledger.resolved(cf.id(), keepMine ? "MINE" : "THEIRS", by, Instant.now());
+        });
+        return cf;
+    }
+}

@@ -1,0 +1,172 @@
+package org.strandbook.server;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.sql.Connection;
+import java.sql.DriverManager;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The plant server's rules are the server's, not only the program's: every refusal here comes from
+ * PostgreSQL itself (privileges, row-level security, triggers), tried by a plain JDBC connection
+ * that skips Strandbook's code entirely.
+ */
+class ServerSchemaTest {
+
+    private static String url;
+
+    @BeforeAll
+    static void migratedServer() throws SQLException {
+        LocalPostgres pg = LocalPostgres.shared();
+        url = pg.newDatabase();
+        new PlantServer(new ServerLogin(url, LocalPostgres.SUPERUSER, null)).migrate();
+        try (Connection c = pg.superuser(url); Statement st = c.createStatement()) {
+            for (String tech : new String[] {"schema_tech_a", "schema_tech_b"}) {
+                st.execute("DO $$ BEGIN IF NOT EXISTS (SELECT 1 FROM pg_roles WHERE rolname = '" + tech + "') THEN"
+                        + " CREATE ROLE " + tech + " LOGIN IN ROLE strandbook_technician; END IF; END $$");
+            }
+        }
+        try (Connection a = as("schema_tech_a"); Statement st = a.createStatement()) {
+            st.execute("SELECT open_site('Site A')");
+            st.execute("INSERT INTO point (site_id, record_key, fields) SELECT id, 'AT-4101', '{\"service\":\"x\"}'"
+                    + " FROM site WHERE name = 'Site A'");
+            st.execute("INSERT INTO note (site_id, record_key, fields) SELECT id, 'n1', '{\"text\":\"ok\"}'"
+                    + " FROM site WHERE name = 'Site A'");
+        }
+    }
+
+    private static Connection as(String user) throws SQLException {
+        return DriverManager.getConnection(url, user, "");
+    }
+
+    private static SQLException refused(Connection c, String sql) {
+        return assertThrows(SQLException.class, () -> {
+            try (Statement st = c.createStatement()) {
+                st.execute(sql);
+            }
+        }, sql);
+    }
+
+    @Test
+    void aMigrationIsRecordedOnceAndASecondRunChangesNothing() throws SQLException {
+        new PlantServer(new ServerLogin(url, LocalPostgres.SUPERUSER, null)).migrate();
+        try (Connection c = as(LocalPostgres.SUPERUSER); Statement st = c.createStatement();
+             ResultSet rs = st.executeQuery("SELECT count(*) FROM flyway_schema_history WHERE success")) {
+            rs.next();
+            assertEquals(PlantServer.SCHEMA_VERSION, rs.getInt(1));
+        }
+    }
+
+    @Test
+    void theSchemaVersionTheProgramKnowsIsItsNewestScript() throws SQLException {
+        try (Connection c = as(LocalPostgres.SUPERUSER); Statement st = c.createStatement();
+             ResultSet rs = st.executeQuery("SELECT max(version::int) FROM flyway_schema_history")) {
+            rs.next();
+            assertEquals(PlantServer.SCHEMA_VERSION, rs.getInt(1));
+        }
+    }
+
+    @Test
+    void everyRecordAddedLeavesAChainedAuditRow() throws SQLException {
+        try (Connection a = as("schema_tech_a"); Statement st = a.createStatement();
+             ResultSet rs = st.executeQuery("SELECT table_name, db_user, prev_hash, hash,"
+                     + " hash = audit_hash(prev_hash, id, at, db_user, action, table_name, record_key, old_fields,"
+                     + " new_fields) FROM audit_entry ORDER BY id")) {
+            assertTrue(rs.next());
+            assertEquals("point", rs.getString(1));
+            assertEquals("schema_tech_a", rs.getString(2));
+            assertEquals("0".repeat(64), rs.getString(3));
+            assertTrue(rs.getBoolean(5), "the row's hash is recomputable");
+            String first = rs.getString(4);
+            assertTrue(rs.next());
+            assertEquals(first, rs.getString(3), "the second row names the first");
+        }
+    }
+
+    @Test
+    void aMultiRowInsertLeavesOneChainedAuditRowPerRecord() throws SQLException {
+        try (Connection a = as("schema_tech_a"); Statement st = a.createStatement()) {
+            st.execute("INSERT INTO inspection (site_id, record_key, fields) SELECT id, k, '{}' FROM site,"
+                    + " (VALUES ('i1'), ('i2'), ('i3')) v(k) WHERE name = 'Site A'");
+        }
+        try (Connection a = as("schema_tech_a"); Statement st = a.createStatement();
+             ResultSet rs = st.executeQuery("SELECT table_name, prev_hash, hash, hash = audit_hash(prev_hash, id, at,"
+                     + " db_user, action, table_name, record_key, old_fields, new_fields) FROM audit_entry ORDER BY id")) {
+            String previous = "0".repeat(64);
+            int inspections = 0;
+            while (rs.next()) {
+                assertEquals(previous, rs.getString(2), "each row names the one before it");
+                assertTrue(rs.getBoolean(4), "each row's hash recomputes");
+                previous = rs.getString(3);
+                inspections += rs.getString(1).equals("inspection") ? 1 : 0;
+            }
+            assertEquals(3, inspections, "one audit row per record of the statement");
+        }
+    }
+
+    @Test
+    void aTechnicianCannotChangeOrDeleteAuditRows() throws SQLException {
+        try (Connection a = as("schema_tech_a")) {
+            assertEquals("42501", refused(a, "UPDATE audit_entry SET db_user = 'someone'").getSQLState());
+            assertEquals("42501", refused(a, "DELETE FROM audit_entry").getSQLState());
+            assertEquals("42501", refused(a, "TRUNCATE audit_entry").getSQLState());
+            assertEquals("42501", refused(a, "INSERT INTO audit_entry (site_id, db_user, action, table_name,"
+                    + " record_key, prev_hash, hash) SELECT id, 'x', 'INSERT', 'point', 'k', repeat('0', 64),"
+                    + " repeat('0', 64) FROM site").getSQLState());
+        }
+    }
+
+    @Test
+    void evenTheOwnerCannotRewriteTheAuditTrail() throws SQLException {
+        try (Connection owner = as(LocalPostgres.SUPERUSER)) {
+            assertTrue(refused(owner, "UPDATE audit_entry SET db_user = 'someone'").getMessage().contains("append-only"));
+            assertTrue(refused(owner, "DELETE FROM audit_entry").getMessage().contains("append-only"));
+        }
+    }
+
+    @Test
+    void immutableRecordsAndEditableRecordsCannotBeDeleted() throws SQLException {
+        try (Connection a = as("schema_tech_a")) {
+            assertEquals("42501", refused(a, "UPDATE note SET fields = '{}'").getSQLState());
+            assertEquals("42501", refused(a, "DELETE FROM note").getSQLState());
+            assertEquals("42501", refused(a, "DELETE FROM point").getSQLState());
+        }
+    }
+
+    @Test
+    void anotherSitesTechnicianNeitherSeesNorWritesIt() throws SQLException {
+        try (Connection b = as("schema_tech_b"); Statement st = b.createStatement()) {
+            try (ResultSet rs = st.executeQuery("SELECT count(*) FROM point")) {
+                rs.next();
+                assertEquals(0, rs.getInt(1), "row-level security hides site A");
+            }
+            assertEquals(0, st.executeUpdate("UPDATE point SET fields = '{}'"), "nothing of site A to update");
+            assertTrue(refused(b, "SELECT open_site('Site A')").getMessage().contains("not one of its members"));
+            try (PreparedStatement ps = b.prepareStatement(
+                    "INSERT INTO point (site_id, record_key, fields) VALUES (?, 'AT-4999', '{}')")) {
+                ps.setLong(1, siteId("Site A"));
+                SQLException e = assertThrows(SQLException.class, ps::executeUpdate);
+                assertTrue(e.getMessage().contains("row-level security"), e.getMessage());
+            }
+        }
+    }
+
+    private static long siteId(String name) throws SQLException {
+        try (Connection owner = as(LocalPostgres.SUPERUSER);
+             PreparedStatement ps = owner.prepareStatement("SELECT id FROM site WHERE name = ?")) {
+            ps.setString(1, name);
+            try (ResultSet rs = ps.executeQuery()) {
+                rs.next();
+                return rs.getLong(1);
+            }
+        }
+    }
+}
