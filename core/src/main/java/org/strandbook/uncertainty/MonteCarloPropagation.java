@@ -26,15 +26,38 @@ public final class MonteCarloPropagation {
     /** Design choice: any fixed value; it only has to be the same every run. */
     public static final long DEFAULT_SEED = 20_081_001L;
 
+    /** The uniform generator behind every draw. */
+    public enum Generator {
+        /** Matsumoto &amp; Nishimura, ACM TOMACS 8 (1998) 3–30. */
+        MERSENNE_TWISTER,
+        /** SplitMix64 ({@link SplitMixGenerator}): the same quality in tests, several times faster. */
+        SPLITMIX64
+    }
+
     private final int trials;
     private final long seed;
+    private final Generator generator;
 
     public MonteCarloPropagation(int trials, long seed) {
+        this(trials, seed, Generator.MERSENNE_TWISTER);
+    }
+
+    public MonteCarloPropagation(int trials, long seed, Generator generator) {
         if (trials < 100) {
             throw new IllegalArgumentException("Monte Carlo needs at least 100 trials, was " + trials);
         }
         this.trials = trials;
         this.seed = seed;
+        this.generator = java.util.Objects.requireNonNull(generator, "generator");
+    }
+
+    /** The same settings drawing from {@code newGenerator}. */
+    public MonteCarloPropagation withGenerator(Generator newGenerator) {
+        return new MonteCarloPropagation(trials, seed, newGenerator);
+    }
+
+    private RandomGenerator newRandom() {
+        return generator == Generator.SPLITMIX64 ? new SplitMixGenerator(seed) : new MersenneTwister(seed);
     }
 
     public static MonteCarloPropagation standard() {
@@ -42,7 +65,7 @@ public final class MonteCarloPropagation {
     }
 
     public MonteCarloPropagation withTrials(int newTrials) {
-        return new MonteCarloPropagation(newTrials, seed);
+        return new MonteCarloPropagation(newTrials, seed, generator);
     }
 
     public int trials() {
@@ -88,7 +111,7 @@ public final class MonteCarloPropagation {
 
     private double[] modelValues(List<InputDistribution> inputs, MeasurementModel model) {
         InputDistribution[] dist = inputs.toArray(InputDistribution[]::new);
-        RandomGenerator random = new MersenneTwister(seed);
+        RandomGenerator random = newRandom();
         double[] x = new double[dist.length];
         double[] y = new double[trials];
         for (int r = 0; r < trials; r++) {
@@ -128,7 +151,7 @@ public final class MonteCarloPropagation {
         int batch = Math.max((int) Math.ceil(100 / (1 - coverageProbability)), 10_000);
         int maxBatches = Math.max(2, trials / batch);
         InputDistribution[] dist = inputs.toArray(InputDistribution[]::new);
-        RandomGenerator random = new MersenneTwister(seed);
+        RandomGenerator random = newRandom();
         double[] x = new double[dist.length];
         double[] all = new double[maxBatches * batch];
         double[][] perBatch = new double[4][maxBatches];
@@ -221,9 +244,64 @@ public final class MonteCarloPropagation {
             squares += d * d;
         }
         double u = Math.sqrt(squares / (m - 1));
+        if (method == CoverageInterval.Method.PROBABILISTICALLY_SYMMETRIC) {
+            return new MonteCarloResult(mean, u, symmetricBySelection(values.clone(), p), m);
+        }
         double[] sorted = values.clone();
         Arrays.sort(sorted);
         return new MonteCarloResult(mean, u, interval(sorted, p, method), m);
+    }
+
+    /**
+     * The probabilistically symmetric interval of 7.7.1 from its two order statistics, found by
+     * selection (Hoare's FIND, Commun. ACM 4 (1961) 321) in linear time rather than by sorting all
+     * M values, which cost most of a trial run; the same ends as {@link #interval} on sorted values.
+     */
+    static CoverageInterval symmetricBySelection(double[] values, double p) {
+        int m = values.length;
+        double pm = p * m;
+        int q = pm == Math.rint(pm) ? (int) pm : (int) Math.floor(pm + 0.5);
+        if (q >= m) {
+            throw new IllegalArgumentException("too few trials (" + m + ") for a " + p + " coverage interval");
+        }
+        int r = Math.max((m - q) % 2 == 0 ? (m - q) / 2 : (m - q + 1) / 2, 1);
+        double low = select(values, 0, m - 1, r - 1);
+        double high = select(values, r, m - 1, r + q - 1);
+        return new CoverageInterval(low, high, p, CoverageInterval.Method.PROBABILISTICALLY_SYMMETRIC);
+    }
+
+    /** The k-th smallest of a[from..to] (0-based k), partially reordering that range. */
+    private static double select(double[] a, int from, int to, int k) {
+        int lo = from;
+        int hi = to;
+        while (lo < hi) {
+            double pivot = a[(lo + hi) >>> 1];
+            int i = lo;
+            int j = hi;
+            while (i <= j) {
+                while (a[i] < pivot) {
+                    i++;
+                }
+                while (a[j] > pivot) {
+                    j--;
+                }
+                if (i <= j) {
+                    double t = a[i];
+                    a[i] = a[j];
+                    a[j] = t;
+                    i++;
+                    j--;
+                }
+            }
+            if (k <= j) {
+                hi = j;
+            } else if (k >= i) {
+                lo = i;
+            } else {
+                return a[k];
+            }
+        }
+        return a[k];
     }
 
     /** JCGM 101:2008, 7.7.1 (q and the symmetric r) and 7.7.2 (the shortest r*), 1-based as printed. */

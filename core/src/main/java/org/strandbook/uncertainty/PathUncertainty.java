@@ -61,7 +61,8 @@ public final class PathUncertainty {
 
     /** Shipped defaults, 95 % coverage, the standard Monte Carlo settings. */
     public static PathUncertainty standard() {
-        return new PathUncertainty(BudgetInputUncertainties.SHIPPED, MonteCarloPropagation.standard(), 0.95);
+        return new PathUncertainty(BudgetInputUncertainties.SHIPPED, MonteCarloPropagation.standard()
+                .withGenerator(MonteCarloPropagation.Generator.SPLITMIX64), 0.95);
     }
 
     /** The same inputs and coverage with {@code trials} Monte Carlo trials per run. */
