@@ -158,7 +158,7 @@ public final class SiteSync {
             for (int i = plan.removals.size() - 1; i >= 0; i--) {
                 records.remove(plan.removals.get(i).table(), plan.removals.get(i).key());
             }
-            plan.bases.forEach((t, byKey) -> byKey.forEach((k, b) -> ledger.putBase(t, k, b)));
+            plan.bases.forEach(ledger::putBases);
             plan.droppedBases.forEach((t, keys) -> keys.forEach(k -> ledger.removeBase(t, k)));
             for (NewConflict nc : plan.conflicts) {
                 ledger.conflict(nc.table(), nc.key(), nc.field(), nc.mine(), nc.theirs(), nc.theirsBy(), now);
