@@ -2,6 +2,7 @@ package org.strandbook.dossier;
 
 import java.util.HexFormat;
 import java.util.List;
+import java.util.Optional;
 
 import org.apache.poi.xddf.usermodel.PresetLineDash;
 import org.apache.poi.xddf.usermodel.XDDFColor;
@@ -43,10 +44,15 @@ final class DossierCharts {
     static final double MIN_TREND_SPAN_DB = 2.0;
 
     private static final String BLUE = "1F4E9A";
+    private static final String LIGHT_BLUE = "7FA7D9";
     private static final String ORANGE = "C8500A";
     private static final String GREY = "4D4D4D";
     private static final String GRID = "D9D9D9";
     private static final List<String> BAND_COLOURS = List.of(BLUE, ORANGE, "2E7D32", "6A1B9A", "00838F", "8D6E63");
+
+    /** The prediction's coverage interval on a spectrum chart: its two ends and the coverage in words. */
+    record IntervalSeries(String lowRange, String highRange, String coverage) {
+    }
 
     /** One band's series of a trend chart. */
     record BandSeries(String band, String timeRange, String lossRange, String trendRange) {
@@ -60,7 +66,8 @@ final class DossierCharts {
      * @param lowestDb    the lowest value plotted (a deviation may be negative), dB
      */
     static XSSFChart spectrum(XSSFDrawing drawing, int firstRow, String title, String wavelengthRange,
-                              String predictedRange, String measuredRange, String deviationRange,
+                              String predictedRange, Optional<IntervalSeries> interval, String measuredRange,
+                              String deviationRange,
                               double firstNm, double lastNm, double lossScaleDb, double lowestDb) {
         XSSFChart chart = chart(drawing, firstRow, ChartPlacement.SPECTRUM_ROWS, ChartPlacement.COLUMNS, title);
         XDDFValueAxis x = chart.createValueAxis(AxisPosition.BOTTOM);
@@ -80,6 +87,13 @@ final class DossierCharts {
         XDDFScatterChartData data = axes(chart, x, y);
         RangeSource wl = new RangeSource(wavelengthRange);
         series(data, wl, predictedRange, PREDICTED, BLUE, 2.0, false, false);
+        // a native chart has no band between two series: its ends are drawn as thin dashed lines in the prediction's colour
+        interval.ifPresent(i -> {
+            series(data, wl, i.lowRange(), PREDICTED + ", " + i.coverage() + " coverage interval, low", LIGHT_BLUE, 1.0,
+                    true, false);
+            series(data, wl, i.highRange(), PREDICTED + ", " + i.coverage() + " coverage interval, high", LIGHT_BLUE,
+                    1.0, true, false);
+        });
         series(data, wl, measuredRange, MEASURED, ORANGE, 2.0, false, false);
         series(data, wl, deviationRange, DEVIATION, GREY, 1.25, true, false);
         chart.plot(data);

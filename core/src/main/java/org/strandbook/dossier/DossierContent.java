@@ -2,6 +2,7 @@ package org.strandbook.dossier;
 
 import java.time.Instant;
 import java.util.List;
+import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
 
@@ -30,11 +31,25 @@ import org.strandbook.site.Site;
  * @param issuedAt      when the dossier is issued
  * @param software      the software and its version, e.g. "strandbook 0.1.0"
  * @param workbookName  the workbook file's name (without its folder)
+ * @param decisionRule  how the bands were judged
+ * @param uncertainties each evaluated point's prediction uncertainty by tag, worked out with the
+ *                      evaluation (Monte Carlo is evaluation work, not writing); a point without one
+ *                      shows no coverage interval
  */
 public record DossierContent(Site site, List<Analyzer> analyzers, Catalog catalog, DossierScope scope,
                              List<DossierPoint> points, String pairingRule, List<Note> siteNotes,
                              List<SignOff> siteSignOffs, AuditAppendix audit, Instant issuedAt, String software,
-                             String workbookName, DecisionRule decisionRule) {
+                             String workbookName, DecisionRule decisionRule,
+                             Map<String, PointUncertainty> uncertainties) {
+
+    /** The content of a dossier whose predictions carry no worked-out uncertainty. */
+    public DossierContent(Site site, List<Analyzer> analyzers, Catalog catalog, DossierScope scope,
+                          List<DossierPoint> points, String pairingRule, List<Note> siteNotes,
+                          List<SignOff> siteSignOffs, AuditAppendix audit, Instant issuedAt, String software,
+                          String workbookName, DecisionRule decisionRule) {
+        this(site, analyzers, catalog, scope, points, pairingRule, siteNotes, siteSignOffs, audit, issuedAt, software,
+                workbookName, decisionRule, Map.of());
+    }
 
     /** The content of a dossier judged by the fixed tolerance. */
     public DossierContent(Site site, List<Analyzer> analyzers, Catalog catalog, DossierScope scope,
@@ -59,6 +74,7 @@ public record DossierContent(Site site, List<Analyzer> analyzers, Catalog catalo
         software = software == null || software.isBlank() ? "Strandbook" : software.strip();
         workbookName = workbookName == null ? "" : workbookName;
         decisionRule = decisionRule == null ? DecisionRule.FIXED : decisionRule;
+        uncertainties = uncertainties == null ? Map.of() : Map.copyOf(uncertainties);
     }
 
     public long count(Status status) {

@@ -24,10 +24,14 @@ public enum DossierSheet {
             "Cable segments and joints of every leg in the order light meets them, with inspections."),
     BUDGET("Loss budget", Layout.TABLE,
             "Each element's predicted loss at the centre of every band, the total, allowed loss and margin."),
+    UNCERTAINTY("Uncertainty", Layout.TABLE,
+            "How sure each prediction is: per band, every input with its basis, standard uncertainty, sensitivity "
+                    + "and contribution, and the coverage interval."),
     CHARTS("Measured vs predicted", Layout.CHARTS,
-            "One chart per point: predicted, measured and deviation against wavelength."),
+            "One chart per point: predicted with its coverage interval, measured and deviation against wavelength."),
     TREND("Trend", Layout.TABLE, "Loss trend per point and band: slope, confidence interval, forecast, chart."),
-    SPECTRA("Spectra", Layout.TABLE, "Appendix: predicted and measured loss at every wavelength of every point."),
+    SPECTRA("Spectra", Layout.TABLE,
+            "Appendix: predicted loss with its coverage interval and measured loss at every wavelength of every point."),
     HISTORY("Trend history", Layout.TABLE, "Appendix: every loss reading behind the trends (highest in each band's driving range)."),
     AUDIT("Audit log", Layout.TABLE, "Appendix: the workbook's hash-chained audit trail, row by row.");
 

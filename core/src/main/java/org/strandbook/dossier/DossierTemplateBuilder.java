@@ -205,6 +205,8 @@ public final class DossierTemplateBuilder {
             case SPECTRA -> "Spectra: predicted and measured loop loss of the latest paired scan, every wavelength";
             case HISTORY -> "Trend history: highest loss in each band's driving range, every paired loop scan";
             case BUDGET -> "Loss budget: predicted one-pass loop loss at the centre of each band of interest";
+            case UNCERTAINTY -> "Uncertainty of the prediction at the centre of each band: inputs, basis and "
+                    + "contributions (JCGM 100:2008), coverage interval by Monte Carlo (JCGM 101:2008)";
             default -> sheet.title() + " · " + Placeholder.SITE.token() + " · revision " + Placeholder.REVISION.token();
         };
     }
@@ -215,7 +217,8 @@ public final class DossierTemplateBuilder {
         titleRow.setHeightInPoints(24);
         cell(titleRow, 0, "Measured against predicted loop loss, latest paired scan of each point", title);
         cell(sheet.createRow(1), 0, "Data: sheet '" + DossierSheet.SPECTRA.title() + "'. Deviation is measured minus"
-                + " predicted loss; a gap in the measured line is a wavelength that could not be measured.", subtitle);
+                + " predicted loss; the thin dashed lines either side of the prediction are its coverage interval; a gap"
+                + " in the measured line is a wavelength that could not be measured.", subtitle);
         for (int c = 0; c < ChartPlacement.COLUMNS; c++) {
             sheet.setColumnWidth(c, 12 * 256);
         }

@@ -246,7 +246,8 @@ public final class DossierWriter {
             }
             int n = content.points().size();
             int[] done = {0};
-            List<SpectraRows.Block> spectra = SpectraRows.fill(sheets.get(DossierSheet.SPECTRA), content,
+            Map<String, PointUncertainty> uncertainties = content.uncertainties();
+            List<SpectraRows.Block> spectra = SpectraRows.fill(sheets.get(DossierSheet.SPECTRA), content, uncertainties,
                     () -> step("writing " + DossierSheet.SPECTRA.title(), ++done[0], n));
             done[0] = 0;
             List<HistoryRows.Block> history = HistoryRows.fill(sheets.get(DossierSheet.HISTORY), content,
@@ -258,6 +259,7 @@ public final class DossierWriter {
             PointRegisterRows.fill(sheets.get(DossierSheet.POINTS), content);
             CableScheduleRows.fill(sheets.get(DossierSheet.CABLES), content);
             LossBudgetRows.fill(sheets.get(DossierSheet.BUDGET), content);
+            UncertaintyRows.fill(sheets.get(DossierSheet.UNCERTAINTY), content, uncertainties);
             step("writing the record sheets", 1, 1);
             long pages = Math.max(1, (content.audit().rows() + AuditRows.PAGE - 1) / AuditRows.PAGE);
             int[] page = {0};
@@ -265,7 +267,7 @@ public final class DossierWriter {
                     () -> step("writing " + DossierSheet.AUDIT.title(), ++page[0], (int) Math.min(Integer.MAX_VALUE,
                             pages)));
             for (DossierSheet s : List.of(DossierSheet.ACCEPTANCE, DossierSheet.FINDINGS, DossierSheet.POINTS,
-                    DossierSheet.CABLES, DossierSheet.SPECTRA, DossierSheet.HISTORY, DossierSheet.AUDIT)) {
+                    DossierSheet.CABLES, DossierSheet.UNCERTAINTY, DossierSheet.SPECTRA, DossierSheet.HISTORY, DossierSheet.AUDIT)) {
                 filter(sheets.get(s));
             }
             step("saving", 0, 1);

@@ -46,15 +46,43 @@ final class Placeholders {
         }
     }
 
-    /** A value of several lines (one analyzer per line, say) gets the height it needs. */
+    /**
+     * A value of several lines (one analyzer per line, say), or one longer than its cell is wide (the
+     * decision rule in words), gets the height it needs.
+     */
     private static void growForLines(Row row, Cell cell, String text, DossierStyles styles) {
-        int lines = (int) text.chars().filter(c -> c == '\n').count() + 1;
-        if (lines > 1 && styles.wraps(cell.getCellStyle())) {
+        if (!styles.wraps(cell.getCellStyle())) {
+            return;
+        }
+        double perLine = Math.max(1, styles.charsPerLine(cell.getCellStyle(), widthChars(row.getSheet(), cell)));
+        int lines = 0;
+        for (String line : text.split("\n", -1)) {
+            lines += Math.max(1, (int) Math.ceil(line.length() / perLine));
+        }
+        if (lines > 1) {
             float needed = lines * styles.lineHeightPoints(cell.getCellStyle()) + 2f;
             if (needed > row.getHeightInPoints()) {
                 row.setHeightInPoints(needed);
             }
         }
+    }
+
+    /** Width of the cell in characters of the default font, across its merged region if it has one. */
+    private static double widthChars(org.apache.poi.ss.usermodel.Sheet sheet, Cell cell) {
+        int first = cell.getColumnIndex();
+        int last = first;
+        for (org.apache.poi.ss.util.CellRangeAddress merged : sheet.getMergedRegions()) {
+            if (merged.isInRange(cell.getRowIndex(), first)) {
+                first = merged.getFirstColumn();
+                last = merged.getLastColumn();
+                break;
+            }
+        }
+        double width = 0;
+        for (int c = first; c <= last; c++) {
+            width += sheet.getColumnWidth(c) / 256.0;
+        }
+        return width;
     }
 
     private static void fill(HeaderFooter part, Map<Placeholder, String> values) {

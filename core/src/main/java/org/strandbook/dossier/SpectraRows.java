@@ -2,6 +2,8 @@ package org.strandbook.dossier;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
+import java.util.Optional;
 
 import org.apache.poi.ss.usermodel.Row;
 import org.strandbook.evaluation.PointEvaluation;
@@ -11,7 +13,7 @@ import org.strandbook.throughput.ThroughputResult;
 
 /**
  * The Spectra appendix: for every evaluated point, one row per wavelength of the evaluation grid
- * with predicted, measured and deviation loss, the band of interest it lies in and, where nothing
+ * with predicted loss and its coverage interval, measured and deviation loss, the band of interest it lies in and, where nothing
  * could be measured, why. Streams row by row; a point's rows stay on one sheet (a long site
  * continues on "Spectra (2)" and so on); tells where each point's rows went, for its chart.
  */
@@ -20,14 +22,15 @@ final class SpectraRows {
     static final String NOT_MEASURED = "no paired loop scan";
 
     /** Where a point's table went: the cell ranges of its columns. */
-    record Block(DossierPoint point, PointEvaluation evaluation, String wavelengthRange, String predictedRange,
-                 String measuredRange, String deviationRange) {
+    record Block(DossierPoint point, PointEvaluation evaluation, SpectrumColumns columns, String wavelengthRange,
+                 String predictedRange, String lowRange, String highRange, String measuredRange, String deviationRange) {
     }
 
     private SpectraRows() {
     }
 
-    static List<Block> fill(TableSheet t, DossierContent content, Runnable afterPoint) {
+    static List<Block> fill(TableSheet t, DossierContent content, Map<String, PointUncertainty> uncertainties,
+                            Runnable afterPoint) {
         List<Block> blocks = new ArrayList<>();
         for (DossierPoint p : content.points()) {
             if (p.evaluation().isEmpty()) {
@@ -35,7 +38,8 @@ final class SpectraRows {
                 continue;
             }
             PointEvaluation e = p.evaluation().get();
-            SpectrumColumns s = SpectrumColumns.of(e);
+            PointUncertainty u = uncertainties.get(p.tag());
+            SpectrumColumns s = SpectrumColumns.of(e, u == null ? Optional.empty() : u.spread());
             List<WavelengthBand> bands = p.point().bands();
             List<MaskedRange> masked = s.measured().map(ThroughputResult::maskedRanges).orElse(List.of());
             t.ensureRoom(s.size());
@@ -47,6 +51,8 @@ final class SpectraRows {
                 t.text(r, DossierColumn.SPECTRA_TAG, p.tag());
                 t.number(r, DossierColumn.SPECTRA_WAVELENGTH_NM, w);
                 t.number(r, DossierColumn.SPECTRA_PREDICTED_DB, s.predictedDb()[i]);
+                t.number(r, DossierColumn.SPECTRA_LOW_DB, s.lowDb()[i]);
+                t.number(r, DossierColumn.SPECTRA_HIGH_DB, s.highDb()[i]);
                 t.number(r, DossierColumn.SPECTRA_MEASURED_DB, s.measuredDb()[i]);
                 t.number(r, DossierColumn.SPECTRA_DEVIATION_DB, s.deviationDb()[i]);
                 for (WavelengthBand b : bands) {
@@ -65,8 +71,10 @@ final class SpectraRows {
                 }
             }
             int last = t.nextRowIndex() - 1;
-            blocks.add(new Block(p, e, t.range(DossierColumn.SPECTRA_WAVELENGTH_NM, first, last),
+            blocks.add(new Block(p, e, s, t.range(DossierColumn.SPECTRA_WAVELENGTH_NM, first, last),
                     t.range(DossierColumn.SPECTRA_PREDICTED_DB, first, last),
+                    t.range(DossierColumn.SPECTRA_LOW_DB, first, last),
+                    t.range(DossierColumn.SPECTRA_HIGH_DB, first, last),
                     t.range(DossierColumn.SPECTRA_MEASURED_DB, first, last),
                     t.range(DossierColumn.SPECTRA_DEVIATION_DB, first, last)));
             afterPoint.run();

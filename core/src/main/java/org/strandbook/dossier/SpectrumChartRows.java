@@ -1,6 +1,7 @@
 package org.strandbook.dossier;
 
 import java.util.List;
+import java.util.Optional;
 import java.util.stream.Collectors;
 
 import org.apache.poi.ss.usermodel.Row;
@@ -9,7 +10,8 @@ import org.strandbook.evaluation.PointEvaluation;
 
 /**
  * The Measured vs predicted sheet: per point a caption (tag, service, status, scan time, band
- * verdicts, the diagnosis in one line) and a chart of predicted, measured and deviation loss
+ * verdicts, the diagnosis in one line) and a chart of predicted loss with its coverage interval,
+ * measured and deviation loss
  * against wavelength, plotting the point's rows of the Spectra sheet.
  */
 final class SpectrumChartRows {
@@ -34,22 +36,33 @@ final class SpectrumChartRows {
             String predicted = b.predictedRange();
             String measured = b.measuredRange();
             String deviation = b.deviationRange();
-            caches.register(wl, () -> SpectrumColumns.of(e).wavelengthNm());
-            caches.register(predicted, () -> SpectrumColumns.of(e).predictedDb());
-            caches.register(measured, () -> SpectrumColumns.of(e).measuredDb());
-            caches.register(deviation, () -> SpectrumColumns.of(e).deviationDb());
-            SpectrumColumns columns = SpectrumColumns.of(e);
+            SpectrumColumns columns = b.columns();
+            boolean banded = Double.isFinite(columns.lowDb()[0]);
+            caches.register(wl, columns::wavelengthNm);
+            caches.register(predicted, columns::predictedDb);
+            caches.register(measured, columns::measuredDb);
+            caches.register(deviation, columns::deviationDb);
+            if (banded) {
+                caches.register(b.lowRange(), columns::lowDb);
+                caches.register(b.highRange(), columns::highDb);
+            }
             double[] grid = columns.wavelengthNm();
             double top = DossierCharts.lossScaleTopDb(allowedDb(content, p), max(columns.measuredDb()),
                     max(columns.predictedDb()));
             double lowest = Math.min(min(columns.deviationDb()), min(columns.predictedDb()));
             DossierCharts.spectrum(drawing, t.nextRowIndex(), p.tag() + ": measured against predicted loop loss", wl,
-                    predicted, measured, deviation, grid[0], grid[grid.length - 1], top, lowest);
+                    predicted, banded ? Optional.of(new DossierCharts.IntervalSeries(b.lowRange(), b.highRange(),
+                            percent(content))) : Optional.empty(), measured, deviation, grid[0], grid[grid.length - 1],
+                    top, lowest);
             t.skipRows(ChartPlacement.SPECTRUM_ROWS + 1);
             charts++;
             t.sheet().setRowBreak(t.nextRowIndex() - 1);
         }
         return charts;
+    }
+
+    private static String percent(DossierContent content) {
+        return DossierText.decimal(100 * content.decisionRule().coverage(), 0) + " %";
     }
 
     private static double allowedDb(DossierContent content, DossierPoint p) {

@@ -3,6 +3,7 @@ package org.strandbook.dossier;
 import java.util.Optional;
 
 import org.strandbook.evaluation.PointEvaluation;
+import org.strandbook.evaluation.PredictionSpread;
 import org.strandbook.optics.WavelengthGrid;
 import org.strandbook.throughput.ThroughputResult;
 
@@ -14,8 +15,8 @@ import org.strandbook.throughput.ThroughputResult;
  * tenth of a millidecibel is far below what any loss measurement resolves, and seventeen digits
  * of noise would make the file five times larger and slower to write.
  */
-record SpectrumColumns(double[] wavelengthNm, double[] predictedDb, double[] measuredDb, double[] deviationDb,
-                       Optional<ThroughputResult> measured) {
+record SpectrumColumns(double[] wavelengthNm, double[] predictedDb, double[] lowDb, double[] highDb,
+                       double[] measuredDb, double[] deviationDb, Optional<ThroughputResult> measured) {
 
     /** Resolution losses are written to, dB. */
     static final double LOSS_STEP_DB = 1e-4;
@@ -23,6 +24,11 @@ record SpectrumColumns(double[] wavelengthNm, double[] predictedDb, double[] mea
     private static final double STEPS_PER_DB = 1e4;
 
     static SpectrumColumns of(PointEvaluation evaluation) {
+        return of(evaluation, Optional.empty());
+    }
+
+    /** With the prediction's coverage band (NaN where there is none). */
+    static SpectrumColumns of(PointEvaluation evaluation, Optional<PredictionSpread> spread) {
         WavelengthGrid grid = evaluation.predicted().grid();
         double[] predicted = evaluation.predicted().totalLossDb();
         double[] measured = new double[predicted.length];
@@ -31,13 +37,24 @@ record SpectrumColumns(double[] wavelengthNm, double[] predictedDb, double[] mea
             ThroughputResult r = evaluation.measured().get();
             measured = r.grid().equals(grid) ? r.lossDb() : r.grid().resample(r.lossDb(), grid);
         }
+        double[] low = new double[predicted.length];
+        double[] high = new double[predicted.length];
+        java.util.Arrays.fill(low, Double.NaN);
+        java.util.Arrays.fill(high, Double.NaN);
+        if (spread.isPresent() && spread.get().grid().equals(grid)) {
+            low = spread.get().lowDb();
+            high = spread.get().highDb();
+        }
         double[] deviation = new double[predicted.length];
         for (int i = 0; i < deviation.length; i++) {
+            low[i] = round(low[i]);
+            high[i] = round(high[i]);
             predicted[i] = round(predicted[i]);
             measured[i] = round(measured[i]);
             deviation[i] = round(measured[i] - predicted[i]);
         }
-        return new SpectrumColumns(grid.wavelengthsNm(), predicted, measured, deviation, evaluation.measured());
+        return new SpectrumColumns(grid.wavelengthsNm(), predicted, low, high, measured, deviation,
+                evaluation.measured());
     }
 
     /** {@code lossDb} to the nearest {@link #LOSS_STEP_DB}; NaN stays NaN. */

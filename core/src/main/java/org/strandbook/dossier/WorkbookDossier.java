@@ -2,6 +2,7 @@ package org.strandbook.dossier;
 
 import java.time.Instant;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
@@ -30,6 +31,7 @@ import org.strandbook.store.AuditFinding;
 import org.strandbook.store.AuditReport;
 import org.strandbook.store.SignatureState;
 import org.strandbook.store.Workbook;
+import org.strandbook.uncertainty.PathUncertainty;
 
 /**
  * Gathers a dossier's content from an open workbook: records, evaluations of the points in scope
@@ -70,6 +72,8 @@ public final class WorkbookDossier {
         }
 
         DecisionRule rule = workbook.site().decisionRule();
+        PathUncertainty engine = PointUncertainty.engine(rule.coverage());
+        Map<String, PointUncertainty> uncertainties = new HashMap<>();
         List<DossierPoint> points = new ArrayList<>();
         Set<String> analyzerTags = new LinkedHashSet<>();
         for (int i = 0; i < chosen.size(); i++) {
@@ -79,6 +83,7 @@ public final class WorkbookDossier {
             List<String> problems = new ArrayList<>();
             Optional<PointEvaluation> evaluation = evaluate(workbook, site, point, analyzers.get(point.analyzerTag()),
                     legs, catalog, scope, evaluator, rule, problems);
+            evaluation.ifPresent(e -> uncertainties.put(point.tag(), PointUncertainty.of(e, engine)));
             points.add(new DossierPoint(point, legs, inspections.getOrDefault(point.tag(), List.of()),
                     notes.stream().filter(n -> n.pointTag().equals(point.tag())).toList(),
                     signOffs.stream().filter(s -> s.pointTag().equals(point.tag())).toList(), evaluation, problems,
@@ -97,7 +102,7 @@ public final class WorkbookDossier {
                 catalog, scope, points, evaluator.pairing().describe(),
                 notes.stream().filter(n -> n.pointTag().isEmpty()).toList(),
                 signOffs.stream().filter(s -> s.pointTag().isEmpty()).toList(), audit, issuedAt, software,
-                workbook.file().getFileName().toString(), rule);
+                workbook.file().getFileName().toString(), rule, uncertainties);
     }
 
     /**

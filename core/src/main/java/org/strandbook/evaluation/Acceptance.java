@@ -111,20 +111,24 @@ public final class Acceptance {
         if (margin >= 0 && margin < toleranceDb) {
             reviews.add(f("margin only %.2f dB against the allowed %.2f dB", margin, allowedLossDb));
         }
-        Status status;
-        String reason;
-        if (!fails.isEmpty()) {
-            status = Status.FAIL;
-            reason = String.join("; ", fails);
-        } else if (!reviews.isEmpty()) {
-            status = Status.REVIEW;
-            reason = String.join("; ", reviews);
-        } else {
-            status = Status.PASS;
-            reason = f("within %.2f dB of prediction (mean %+.2f dB), margin %.2f dB", toleranceDb, meanDev, margin);
+        Outcome outcome = Outcome.of(fails, reviews,
+                f("within %.2f dB of prediction (mean %+.2f dB), margin %.2f dB", toleranceDb, meanDev, margin));
+        return new BandVerdict(band, outcome.status(), meanDev, worstDev, worstAt, predicted, worstLoss, margin,
+                fraction, outcome.reason());
+    }
+
+    /** The worst outcome of a band's checks: any failure, else any review, else the pass in words. */
+    record Outcome(Status status, String reason) {
+
+        static Outcome of(List<String> fails, List<String> reviews, String passReason) {
+            if (!fails.isEmpty()) {
+                return new Outcome(Status.FAIL, String.join("; ", fails));
+            }
+            if (!reviews.isEmpty()) {
+                return new Outcome(Status.REVIEW, String.join("; ", reviews));
+            }
+            return new Outcome(Status.PASS, passReason);
         }
-        return new BandVerdict(band, status, meanDev, worstDev, worstAt, predicted, worstLoss, margin, fraction,
-                reason);
     }
 
     private static String f(String format, Object... args) {

@@ -107,22 +107,12 @@ public final class IntervalAcceptance {
         if (figures.measuredFraction() < Acceptance.MIN_MEASURED_FRACTION) {
             reviews.add(f("only %.0f %% of the band could be measured", 100 * figures.measuredFraction()));
         }
-        Status status;
-        String reason;
-        if (!fails.isEmpty()) {
-            status = Status.FAIL;
-            reason = String.join("; ", fails);
-        } else if (!reviews.isEmpty()) {
-            status = Status.REVIEW;
-            reason = String.join("; ", reviews);
-        } else {
-            status = Status.PASS;
-            reason = f("inside %s (mean %+.2f dB%s), margin %.2f dB", widened, meanDev,
-                    worst == null ? "" : f(", worst sub-band %s %+.2f dB", worst.range(), worst.deviationDb()), margin);
-        }
-        return new Judged(new BandVerdict(band, status, meanDev, figures.worstDeviationDb(), figures.worstAtNm(),
-                figures.predictedLossDb(), figures.worstMeasuredLossDb(), margin, figures.measuredFraction(), reason),
-                limits);
+        Acceptance.Outcome outcome = Acceptance.Outcome.of(fails, reviews, f("inside %s (mean %+.2f dB%s), margin"
+                + " %.2f dB", widened, meanDev, worst == null ? ""
+                        : f(", worst sub-band %s %+.2f dB", worst.range(), worst.deviationDb()), margin));
+        return new Judged(new BandVerdict(band, outcome.status(), meanDev, figures.worstDeviationDb(),
+                figures.worstAtNm(), figures.predictedLossDb(), figures.worstMeasuredLossDb(), margin,
+                figures.measuredFraction(), outcome.reason()), limits);
     }
 
     /** The sub-band that lies furthest above its own widened limit. */

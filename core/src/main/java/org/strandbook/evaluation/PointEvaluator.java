@@ -222,7 +222,7 @@ public final class PointEvaluator {
     /** The engine of the prediction's interval at {@code coverage}: one per coverage, kept. */
     private PathUncertainty uncertaintyEngine(double coverage) {
         return engines.computeIfAbsent(coverage, p -> new PathUncertainty(BudgetInputUncertainties.SHIPPED,
-                MonteCarloPropagation.standard(), p));
+                MonteCarloPropagation.standard().withGenerator(MonteCarloPropagation.Generator.SPLITMIX64), p));
     }
 
     private ThroughputResult measure(ScanPair pair, SpectrumSource spectra, Map<ScaledScan, RawSpectrum> fetched,

@@ -16,6 +16,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Set;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
 
 import org.strandbook.store.AuditEntry;
 import org.strandbook.store.AuditReport;
@@ -98,19 +100,22 @@ public final class SiteSync {
 
     public Outcome run() {
         progress.step("checking the workbook's audit trail");
-        AuditReport report = workbook.audit().verify();
-        if (!report.intact()) {
-            throw new SyncRefusedException("the workbook " + workbook.file() + " fails `audit verify` ("
-                    + report.chainBreak().map(f -> "chain broken").orElse(report.unrecordedChanges().size()
-                    + " change(s) made outside Strandbook") + "); the server takes only a verifiable workbook");
-        }
+        // checked on a connection of its own while the exchange runs, which commits only once the
+        // check has passed: a refused workbook leaves nothing on the server, and a sound one does not
+        // wait for the check before its records start moving
+        CompletableFuture<AuditReport> verification = CompletableFuture.supplyAsync(() -> {
+            try (Workbook reader = Workbook.openForReading(workbook.file(), workbook.user())) {
+                return reader.audit().verify();
+            }
+        });
         SyncLedger ledger = workbook.syncLedger();
         SyncLedger.State state = workbook.inTransaction(ledger::state);
         if (state.siteName() != null && !state.siteName().equals(siteName)) {
+            verification.cancel(false);
             throw new SyncRefusedException("this workbook syncs with site \"" + state.siteName() + "\", not \""
                     + siteName + "\"");
         }
-        AuditEntry head = report.rows() == 0 ? null : workbook.audit().entries(report.rows() - 1, 1).get(0);
+        AuditEntry head = workbook.audit().head().orElse(null);
         progress.step("reading the workbook");
         WorkbookRecords records = workbook.records();
         Map<PortableTable, Map<String, Map<String, Object>>> local = records.readAll();
@@ -133,6 +138,7 @@ public final class SiteSync {
                     recordTaken(c, siteId, state, head);
                 }
                 serverHead = auditHead(c, siteId);
+                requireVerified(verification);
                 c.commit();
             } catch (SQLException | RuntimeException e) {
                 rollbackQuietly(c);
@@ -152,36 +158,53 @@ public final class SiteSync {
             for (int i = plan.removals.size() - 1; i >= 0; i--) {
                 records.remove(plan.removals.get(i).table(), plan.removals.get(i).key());
             }
-            plan.bases.forEach((t, byKey) -> byKey.forEach((k, b) -> ledger.putBase(t, k, b)));
+            plan.bases.forEach(ledger::putBases);
             plan.droppedBases.forEach((t, keys) -> keys.forEach(k -> ledger.removeBase(t, k)));
             for (NewConflict nc : plan.conflicts) {
                 ledger.conflict(nc.table(), nc.key(), nc.field(), nc.mine(), nc.theirs(), nc.theirsBy(), now);
             }
             // entries this sync wrote came from the server: nothing of them is left to push
-            ledger.synced(server.login().displayUrl(), siteName, lastEntryId(workbook, head), now);
+            ledger.synced(server.login().displayUrl(), siteName,
+                    workbook.audit().head().map(AuditEntry::id).orElse(0L), now);
         });
         List<SyncLedger.Conflict> open = ledger.conflicts().stream().filter(SyncLedger.Conflict::open).toList();
         return new Outcome(plan.pushed, plan.pulled, plan.changedThere, plan.changedHere, open, serverHead);
     }
 
-    private static long lastEntryId(Workbook workbook, AuditEntry before) {
-        long after = before == null ? 0 : before.id();
-        while (true) {
-            List<AuditEntry> more = workbook.audit().entries(after, 1000);
-            if (more.isEmpty()) {
-                return after;
-            }
-            after = more.get(more.size() - 1).id();
+    private void requireVerified(CompletableFuture<AuditReport> verification) {
+        AuditReport report;
+        try {
+            report = verification.join();
+        } catch (CompletionException e) {
+            throw e.getCause() instanceof RuntimeException r ? r : e;
+        }
+        if (!report.intact()) {
+            throw new SyncRefusedException("the workbook " + workbook.file() + " fails `audit verify` ("
+                    + report.chainBreak().map(f -> "chain broken").orElse(report.unrecordedChanges().size()
+                    + " change(s) made outside Strandbook") + "); the server takes only a verifiable workbook");
         }
     }
 
     private long openSite(Connection c) throws SQLException {
-        long siteId;
+        long siteId = siteId(c, siteName);
+        try (PreparedStatement ps = c.prepareStatement("SELECT pg_advisory_xact_lock(?, ?)")) {
+            ps.setInt(1, SYNC_LOCK_CLASS);
+            ps.setInt(2, (int) siteId);
+            ps.execute();
+        }
+        return siteId;
+    }
+
+    /**
+     * The server's id of the named site, created with the caller as its first member if new; a
+     * site the caller is not a member of is refused by the server.
+     */
+    static long siteId(Connection c, String siteName) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement("SELECT open_site(?)")) {
             ps.setString(1, siteName);
             try (ResultSet rs = ps.executeQuery()) {
                 rs.next();
-                siteId = rs.getLong(1);
+                return rs.getLong(1);
             }
         } catch (SQLException e) {
             if ("42501".equals(e.getSQLState())) {
@@ -189,12 +212,6 @@ public final class SiteSync {
             }
             throw e;
         }
-        try (PreparedStatement ps = c.prepareStatement("SELECT pg_advisory_xact_lock(?, ?)")) {
-            ps.setInt(1, SYNC_LOCK_CLASS);
-            ps.setInt(2, (int) siteId);
-            ps.execute();
-        }
-        return siteId;
     }
 
     private void mergeEditable(Connection c, long siteId, PortableTable t, Map<String, Map<String, Object>> mine,
@@ -371,22 +388,42 @@ public final class SiteSync {
                     + (scan ? ", spectrum" : "") + ") VALUES (?, ?, ?::jsonb" + (scan ? ", ?" : "") + ")"
                     + " ON CONFLICT DO NOTHING";
             try (PreparedStatement ps = c.prepareStatement(sql)) {
-                int n = 0;
-                for (String key : toPush) {
+                int[] n = {0};
+                WorkbookRecords.SpectrumSink add = (key, spectrum) -> {
                     ps.setLong(1, siteId);
                     ps.setString(2, key);
                     ps.setString(3, PortableFields.json(mine.get(key)));
                     if (scan) {
-                        ps.setBytes(4, records.spectrum(key));
+                        ps.setBytes(4, spectrum);
                     }
                     ps.addBatch();
-                    if (++n % PUSH_BATCH == 0) {
+                    if (++n[0] % PUSH_BATCH == 0) {
                         ps.executeBatch();
-                        progress.done(n, toPush.size());
+                        progress.done(n[0], toPush.size());
+                    }
+                };
+                if (scan) {
+                    try {
+                        records.spectra(new HashSet<>(toPush), add);
+                    } catch (WorkbookRecords.SinkFailure f) {
+                        if (f.getCause() instanceof SQLException serverFailure) {
+                            throw serverFailure;
+                        }
+                        throw f.getCause() instanceof RuntimeException r ? r : f;
+                    }
+                } else {
+                    for (String key : toPush) {
+                        try {
+                            add.accept(key, null);
+                        } catch (SQLException | RuntimeException e) {
+                            throw e;
+                        } catch (Exception e) {
+                            throw new IllegalStateException(e);
+                        }
                     }
                 }
                 ps.executeBatch();
-                progress.done(n, toPush.size());
+                progress.done(n[0], toPush.size());
             }
             plan.pushed += toPush.size();
         }

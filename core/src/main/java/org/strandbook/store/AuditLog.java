@@ -65,6 +65,16 @@ public final class AuditLog {
         });
     }
 
+    /** The newest row of the trail, if any. */
+    public Optional<AuditEntry> head() {
+        return session.read(() -> {
+            try (ResultSet rs = session.prepared("SELECT id, at, user_name, action, table_name, row_key, old_values,"
+                    + " new_values, row_sha256, prev_hash, hash FROM audit_entry ORDER BY id DESC LIMIT 1").executeQuery()) {
+                return rs.next() ? Optional.of(entry(rs)) : Optional.<AuditEntry>empty();
+            }
+        });
+    }
+
     static AuditEntry entry(ResultSet rs) throws SQLException {
         return new AuditEntry(rs.getLong("id"), StoredTime.parse(rs.getString("at")), rs.getString("user_name"),
                 rs.getString("action"), rs.getString("table_name"), rs.getString("row_key"),

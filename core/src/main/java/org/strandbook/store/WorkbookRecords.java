@@ -91,6 +91,45 @@ public final class WorkbookRecords {
         });
     }
 
+    /** What to do with each scan's spectrum as {@link #spectra} reads them. */
+    @FunctionalInterface
+    public interface SpectrumSink {
+        void accept(String scanSha256, byte[] spectrum) throws Exception;
+    }
+
+    /** A failure of a {@link SpectrumSink}, carried out of the workbook's read untouched. */
+    public static final class SinkFailure extends RuntimeException {
+        SinkFailure(Exception cause) {
+            super(cause);
+        }
+    }
+
+    /**
+     * Hands {@code sink} the spectrum BLOB of every scan whose SHA-256 is in {@code wanted}, in one
+     * read of the workbook: a first sync of tens of thousands of scans must not open a read for each.
+     */
+    public void spectra(java.util.Set<String> wanted, SpectrumSink sink) {
+        session.read(() -> {
+            try (Statement st = session.connection().createStatement();
+                 ResultSet rs = st.executeQuery("SELECT s.sha256, d.data FROM scan s JOIN scan_spectrum d"
+                         + " ON d.scan_id = s.id ORDER BY s.id")) {
+                while (rs.next()) {
+                    String sha = rs.getString(1);
+                    if (wanted.contains(sha)) {
+                        byte[] data = rs.getBytes(2);
+                        try {
+                            sink.accept(sha, data);
+                        } catch (Exception e) {
+                            // the sink's failure is its own (the server's), not the workbook's
+                            throw new SinkFailure(e);
+                        }
+                    }
+                }
+            }
+            return null;
+        });
+    }
+
     /**
      * Adds or changes one record, audited; call inside {@code Workbook.inTransaction}, parents
      * first. {@code spectrum} only for a new scan.

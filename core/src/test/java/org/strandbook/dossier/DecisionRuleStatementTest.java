@@ -2,7 +2,13 @@ package org.strandbook.dossier;
 
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.EnumMap;
 import java.util.List;
+import java.util.Map;
+
+import org.apache.poi.ss.usermodel.Cell;
+import org.apache.poi.ss.usermodel.Row;
+import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 
 import org.junit.jupiter.api.Test;
 import org.strandbook.site.DecisionRule;
@@ -29,6 +35,30 @@ class DecisionRuleStatementTest {
         for (String must : List.of("ILAC-G8:09/2019", "JCGM 106:2012", "acceptance zone", "guard band w = 0.30 dB",
                 "rejection zone", "99 % coverage interval", "JCGM 101:2008", "expanded uncertainty", "20 nm")) {
             assertTrue(text.contains(must), must + " in: " + text);
+        }
+    }
+
+    @Test
+    void theMethodSheetRowGrowsToShowTheWholeRule() throws Exception {
+        // design choice: a filled paragraph longer than its cell is wide gets the lines it needs
+        try (XSSFWorkbook wb = DossierTemplateBuilder.build()) {
+            Map<Placeholder, String> values = new EnumMap<>(Placeholder.class);
+            for (Placeholder p : Placeholder.values()) {
+                values.put(p, "x");
+            }
+            values.put(Placeholder.DECISION_RULE, DossierText.decisionRule(DecisionRule.interval(), 1.0));
+            DossierStyles styles = new DossierStyles(wb);
+            Placeholders.fill(wb, values, styles);
+            for (Row row : wb.getSheet(DossierSheet.CAUTIONS.title())) {
+                for (Cell cell : row) {
+                    if (cell.toString().startsWith("The rules above are those of the fixed tolerance")) {
+                        float oneLine = styles.lineHeightPoints(cell.getCellStyle());
+                        assertTrue(row.getHeightInPoints() >= 5 * oneLine, "row height " + row.getHeightInPoints());
+                        return;
+                    }
+                }
+            }
+            throw new AssertionError("no decision-rule paragraph on the method sheet");
         }
     }
 }

@@ -86,7 +86,7 @@ class DossierRoundTripTest {
         file.workbook().forEach(s -> names.add(s.getSheetName()));
         // the layout as documented on the cover's contents list
         assertEquals(List.of("Cover", "Cautions and method", "Acceptance", "Findings and actions", "Point register",
-                "Cable schedule", "Loss budget", "Measured vs predicted", "Trend", "Spectra", "Trend history",
+                "Cable schedule", "Loss budget", "Uncertainty", "Measured vs predicted", "Trend", "Spectra", "Trend history",
                 "Audit log"), names);
         for (DossierSheet s : DossierSheet.values()) {
             if (s.layout() != DossierSheet.Layout.TABLE) {
@@ -285,6 +285,49 @@ class DossierRoundTripTest {
     }
 
     @Test
+    void spectraCarryThePredictionsCoverageIntervalAroundIt() {
+        // JCGM 101:2008, 7.7: a 95 % interval of a loss whose inputs spread both ways holds the estimate
+        List<Map<String, Cell>> rows = file.rowsOf("Spectra", DossierFixture.DIRTY);
+        for (Map<String, Cell> r : rows) {
+            double predicted = DossierFile.number(r, "predicted_db");
+            assertTrue(DossierFile.number(r, "predicted_low_db") < predicted
+                    && predicted < DossierFile.number(r, "predicted_high_db"), "at " + DossierFile.number(r,
+                    "wavelength_nm") + " nm");
+        }
+    }
+
+    @Test
+    void uncertaintySheetListsEveryInputOfEveryBandWithSharesMakingUpTheVariance() {
+        // JCGM 100:2008, 5.1.2: u_c²(y) = Σ (cᵢ·u(xᵢ))² for independent inputs, so contributions add in
+        // squares to the combined standard uncertainty and the shares of one band sum to 100 %.
+        PointEvaluation e = evaluation(DossierFixture.DIRTY);
+        List<Map<String, Cell>> rows = file.rowsOf("Uncertainty", DossierFixture.DIRTY);
+        for (WavelengthBand band : e.point().bands()) {
+            List<Map<String, Cell>> ofBand = rows.stream().filter(r -> DossierFile.string(r, "band").equals(band.name()))
+                    .toList();
+            List<Map<String, Cell>> inputs = ofBand.stream().filter(r -> r.containsKey("sensitivity")).toList();
+            assertFalse(inputs.isEmpty(), band.name());
+            double squares = 0;
+            double shares = 0;
+            for (Map<String, Cell> r : inputs) {
+                double contribution = DossierFile.number(r, "contribution_db");
+                assertEquals(Math.abs(DossierFile.number(r, "sensitivity")) * DossierFile.number(r, "u"), contribution,
+                        1e-9 * Math.max(1, contribution), DossierFile.string(r, "input"));
+                assertFalse(DossierFile.string(r, "basis").isBlank());
+                assertFalse(DossierFile.string(r, "unit").isBlank());
+                squares += contribution * contribution;
+                shares += DossierFile.number(r, "share_percent");
+            }
+            Map<String, Cell> combined = ofBand.stream().filter(r -> DossierFile.string(r, "input")
+                    .equals(UncertaintyRows.COMBINED)).findFirst().orElseThrow();
+            assertEquals(Math.sqrt(squares), DossierFile.number(combined, "contribution_db"), 1e-9, band.name());
+            assertEquals(100, shares, 1e-6, band.name());
+            assertTrue(ofBand.stream().anyMatch(r -> DossierFile.string(r, "input").equals(UncertaintyRows.INTERVAL)
+                    && DossierFile.string(r, "basis").contains("95 % coverage interval")));
+        }
+    }
+
+    @Test
     void eachPointHasANativeChartOfItsOwnRowsWithCachedValues() {
         List<XSSFChart> charts = file.sheet("Measured vs predicted").getDrawingPatriarch().getCharts();
         assertEquals(3, charts.size(), "one chart per evaluated point");
@@ -294,12 +337,12 @@ class DossierRoundTripTest {
         assertEquals(List.of("Wavelength (nm)", "Loss (dB)"), axes.stream().map(a -> a.getTitle().getTx().getRich()
                 .getPArray(0).getRArray(0).getT()).toList());
         XDDFChartData data = chart.getChartSeries().get(0);
-        assertEquals(3, data.getSeriesCount());
+        assertEquals(5, data.getSeriesCount());
         List<String> titles = new ArrayList<>();
         List<Map<String, Cell>> rows = file.rowsOf("Spectra", DossierFixture.DIRTY);
         Map<String, Integer> keys = file.keys("Spectra");
-        String[] columns = {"predicted_db", "measured_db", "deviation_db"};
-        for (int s = 0; s < 3; s++) {
+        String[] columns = {"predicted_db", "predicted_low_db", "predicted_high_db", "measured_db", "deviation_db"};
+        for (int s = 0; s < columns.length; s++) {
             XDDFScatterChartData.Series series = (XDDFScatterChartData.Series) data.getSeries(s);
             titles.add(series.getCTScatterSer().getTx().getV());
             String range = series.getValuesData().getDataRangeReference();
@@ -316,7 +359,8 @@ class DossierRoundTripTest {
                 assertEquals(DossierFile.number(rows.get(i), "wavelength_nm"), cachedX[i], 0.0);
             }
         }
-        assertEquals(List.of(DossierCharts.PREDICTED, DossierCharts.MEASURED, DossierCharts.DEVIATION), titles);
+        assertEquals(List.of(DossierCharts.PREDICTED, "Predicted, 95 % coverage interval, low",
+                "Predicted, 95 % coverage interval, high", DossierCharts.MEASURED, DossierCharts.DEVIATION), titles);
         assertTrue(summary.chartPoints() > 0);
     }
 

@@ -126,7 +126,7 @@ class DossierWriterTest {
         assertEquals("an earlier revision", Files.readString(out, StandardCharsets.UTF_8));
         DossierWriter.withShippedTemplate().write(content, out, true, DossierProgress.NONE);
         try (DossierFile f = new DossierFile(out)) {
-            assertEquals(12, f.workbook().getNumberOfSheets());
+            assertEquals(13, f.workbook().getNumberOfSheets());
         }
         try (var files = Files.list(dir)) {
             assertEquals(List.of(out), files.toList(), "no temporary file left beside it");

@@ -61,7 +61,7 @@ class ServerSchemaTest {
         try (Connection c = as(LocalPostgres.SUPERUSER); Statement st = c.createStatement();
              ResultSet rs = st.executeQuery("SELECT count(*) FROM flyway_schema_history WHERE success")) {
             rs.next();
-            assertEquals(1, rs.getInt(1));
+            assertEquals(PlantServer.SCHEMA_VERSION, rs.getInt(1));
         }
     }
 
@@ -88,6 +88,27 @@ class ServerSchemaTest {
             String first = rs.getString(4);
             assertTrue(rs.next());
             assertEquals(first, rs.getString(3), "the second row names the first");
+        }
+    }
+
+    @Test
+    void aMultiRowInsertLeavesOneChainedAuditRowPerRecord() throws SQLException {
+        try (Connection a = as("schema_tech_a"); Statement st = a.createStatement()) {
+            st.execute("INSERT INTO inspection (site_id, record_key, fields) SELECT id, k, '{}' FROM site,"
+                    + " (VALUES ('i1'), ('i2'), ('i3')) v(k) WHERE name = 'Site A'");
+        }
+        try (Connection a = as("schema_tech_a"); Statement st = a.createStatement();
+             ResultSet rs = st.executeQuery("SELECT table_name, prev_hash, hash, hash = audit_hash(prev_hash, id, at,"
+                     + " db_user, action, table_name, record_key, old_fields, new_fields) FROM audit_entry ORDER BY id")) {
+            String previous = "0".repeat(64);
+            int inspections = 0;
+            while (rs.next()) {
+                assertEquals(previous, rs.getString(2), "each row names the one before it");
+                assertTrue(rs.getBoolean(4), "each row's hash recomputes");
+                previous = rs.getString(3);
+                inspections += rs.getString(1).equals("inspection") ? 1 : 0;
+            }
+            assertEquals(3, inspections, "one audit row per record of the statement");
         }
     }
 

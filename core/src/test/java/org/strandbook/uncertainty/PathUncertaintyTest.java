@@ -130,11 +130,18 @@ class PathUncertaintyTest {
 
     @Test
     void chanceAgreesWithTheCoverageIntervalFromTheSameTrials() {
-        // JCGM 101:2008, 7.7.1: the probabilistically symmetric interval's upper end is the
-        // 97.5 % point of the same trials, so the chance of staying below it is 97.5 %.
+        // JCGM 101:2008, 7.7.1: the probabilistically symmetric interval's upper end is the 97.5 %
+        // point of the output's distribution; the interval comes from the adaptive run (7.9), whose
+        // ends are fixed only to its numerical tolerance δ (7.9.4), so the 97.5 % point of the
+        // chance's own trials lies within δ of it.
         LossBudget budget = LossBudget.of(loop(100, 30, 600), GRID);
         LossUncertainty u = ENGINE.at(budget, AT_2300, TWO_AIR_GAPS);
-        Chance c = ENGINE.chanceWithin(budget, AT_2300, TWO_AIR_GAPS, u.budget().interval().high());
-        assertEquals(0.975, c.probability(), 1e-4);
+        double high = u.budget().interval().high();
+        double delta = MonteCarloPropagation.numericalTolerance(u.budget().combinedStandardUncertainty(),
+                PathUncertainty.SIGNIFICANT_DIGITS);
+        Chance below = ENGINE.chanceWithin(budget, AT_2300, TWO_AIR_GAPS, high - delta);
+        Chance above = ENGINE.chanceWithin(budget, AT_2300, TWO_AIR_GAPS, high + delta);
+        assertTrue(below.probability() <= 0.975 && 0.975 <= above.probability(),
+                below.probability() + " … " + above.probability());
     }
 }

@@ -19,6 +19,7 @@ import picocli.CommandLine.Spec;
             ListingBenchCommand.class,
             EditBenchCommand.class,
             ExportBenchCommand.class,
+            SyncBenchCommand.class,
         })
 public final class BenchCommand implements Runnable {
 

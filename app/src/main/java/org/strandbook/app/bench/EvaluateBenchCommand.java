@@ -14,6 +14,7 @@ import org.strandbook.optics.WavelengthGrid;
 import org.strandbook.samplesite.DemoPlant;
 import org.strandbook.samplesite.InMemoryScans;
 import org.strandbook.samplesite.ScanGenerator;
+import org.strandbook.site.DecisionRule;
 import org.strandbook.site.ScanKind;
 import org.strandbook.site.ScanRecord;
 import org.strandbook.site.Spectrum;
@@ -36,8 +37,8 @@ import picocli.CommandLine.Spec;
 @Command(name = "evaluate",
         mixinStandardHelpOptions = true,
         description = "Points evaluated per second (diagnosis and trend included) for a synthetic site of N "
-            + "points with M visits each, against the bare budget and deviation arithmetic; last line "
-            + "'ratio: R'.")
+            + "points with M visits each, against the bare budget and deviation arithmetic (with --uncertainty: "
+            + "on the coverage interval against the fixed tolerance); last line 'ratio: R'.")
 public final class EvaluateBenchCommand implements Callable<Integer> {
 
     private static final int TRIALS = 3;
@@ -52,6 +53,12 @@ public final class EvaluateBenchCommand implements Callable<Integer> {
     @Option(names = "--scans", defaultValue = "50", paramLabel = "M",
             description = "Loop scans per point, each with its reference and dark (default: ${DEFAULT-VALUE}).")
     int scans;
+
+    @Option(names = "--uncertainty",
+            description = "Time the evaluation on the coverage-interval rule (prediction intervals by Monte Carlo, "
+                + "the measurement's own uncertainty) against today's fixed-tolerance evaluation of the same site; "
+                + "the ratio is plain time over with-interval time.")
+    boolean uncertainty;
 
     private volatile double sink;
 
@@ -73,6 +80,9 @@ public final class EvaluateBenchCommand implements Callable<Integer> {
             site.add(templates.get(i % templates.size()));
         }
         PointEvaluator evaluator = PointEvaluator.withDefaults();
+        if (uncertainty) {
+            return compareRules(site, evaluator, out);
+        }
         List<FloorPoint> floorSite = floorInputs(site, evaluator, memory);
 
         out.println("warming up both ...");
@@ -94,11 +104,41 @@ public final class EvaluateBenchCommand implements Callable<Integer> {
         return CommandLine.ExitCode.OK;
     }
 
+    /**
+     * The same site judged by the fixed tolerance and on the coverage interval, alternating, best of
+     * each; the first (cold) trial of each is printed too.
+     */
+    private int compareRules(List<PointInputs> site, PointEvaluator evaluator, PrintWriter out) {
+        DecisionRule interval = DecisionRule.interval();
+        out.println("cold trials (JIT still compiling) ...");
+        out.flush();
+        double coldPlain = timeSite(site, evaluator, DecisionRule.FIXED);
+        double coldWith = timeSite(site, evaluator, interval);
+        out.printf(Locale.ROOT, "cold:          plain %.3f s, with intervals %.3f s%n", coldPlain, coldWith);
+        double best = Double.MAX_VALUE;
+        double bestWith = Double.MAX_VALUE;
+        for (int t = 0; t < TRIALS; t++) {
+            best = Math.min(best, timeSite(site, evaluator, DecisionRule.FIXED));
+            bestWith = Math.min(bestWith, timeSite(site, evaluator, interval));
+        }
+        out.printf(Locale.ROOT, "plain:         %.3f s for the site, %.0f points per second (fixed tolerance, best of"
+                + " %d)%n", best, points / best, TRIALS);
+        out.printf(Locale.ROOT, "with interval: %.3f s for the site, %.0f points per second (95 %% coverage intervals"
+                + " by Monte Carlo, measurement uncertainty, best of %d)%n", bestWith, points / bestWith, TRIALS);
+        out.printf(Locale.ROOT, "ratio: %.3f%n", best / bestWith);
+        out.flush();
+        return CommandLine.ExitCode.OK;
+    }
+
     private double timeSite(List<PointInputs> site, PointEvaluator evaluator) {
+        return timeSite(site, evaluator, DecisionRule.FIXED);
+    }
+
+    private double timeSite(List<PointInputs> site, PointEvaluator evaluator, DecisionRule rule) {
         long start = System.nanoTime();
         double acc = 0;
         for (PointInputs in : site) {
-            PointEvaluation e = evaluator.evaluate(in);
+            PointEvaluation e = evaluator.evaluate(in, rule);
             acc += e.verdicts().size() + e.trends().size();
         }
         sink += acc;

@@ -92,7 +92,7 @@ public final class ListingBenchCommand implements Callable<Integer> {
             out.printf(Locale.ROOT, "spectra of %d points only (1 KiB each): the listing never reads spectra, and"
                     + " small ones keep the build short%n", SPECTRUM_POINTS);
             out.flush();
-            double buildSeconds = build(file, out);
+            double buildSeconds = build(file, points, weeks, out);
             out.printf(Locale.ROOT, "built in %.1f s (%.0f scans per second, audit trail included); workbook closed,"
                     + " %.1f MB%n", buildSeconds, total / buildSeconds, sizeMb(file));
             out.flush();
@@ -157,8 +157,11 @@ public final class ListingBenchCommand implements Callable<Integer> {
         }
     }
 
-    /** Builds the workbook week by week, every point scanned each week, as a site's history grows. */
-    private double build(Path file, PrintWriter out) {
+    /**
+     * Builds the workbook week by week, every point scanned each week, as a site's history grows;
+     * {@code bench sync} pushes the same workbook.
+     */
+    static double build(Path file, int points, int weeks, PrintWriter out) {
         List<Spectrum> spectra = spectra();
         ScanConditions conditions = new ScanConditions("bench", 250, 16, OptionalDouble.of(21), OptionalDouble.empty());
         long start = System.nanoTime();
@@ -225,7 +228,7 @@ public final class ListingBenchCommand implements Callable<Integer> {
         return true;
     }
 
-    private static String tag(int point) {
+    static String tag(int point) {
         return String.format(Locale.ROOT, "LP-%03d", point);
     }
 

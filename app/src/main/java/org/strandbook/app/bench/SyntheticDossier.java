@@ -5,8 +5,10 @@ import java.time.Instant;
 import java.time.ZoneOffset;
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.HashMap;
 import java.util.HexFormat;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.SplittableRandom;
@@ -17,6 +19,7 @@ import org.strandbook.dossier.AuditAppendix;
 import org.strandbook.dossier.DossierContent;
 import org.strandbook.dossier.DossierPoint;
 import org.strandbook.dossier.DossierScope;
+import org.strandbook.dossier.PointUncertainty;
 import org.strandbook.evaluation.Acceptance;
 import org.strandbook.evaluation.BandTrend;
 import org.strandbook.evaluation.BandVerdict;
@@ -31,6 +34,7 @@ import org.strandbook.optics.path.OpticsCache;
 import org.strandbook.samplesite.DemoPlant;
 import org.strandbook.site.Analyzer;
 import org.strandbook.site.Catalog;
+import org.strandbook.site.DecisionRule;
 import org.strandbook.site.MeasurementPoint;
 import org.strandbook.site.PathLeg;
 import org.strandbook.site.ScanConditions;
@@ -67,7 +71,8 @@ final class SyntheticDossier {
     }
 
     /** One template point, evaluated. */
-    private record Template(MeasurementPoint point, PathLeg send, PathLeg ret, PointEvaluation evaluation) {
+    private record Template(MeasurementPoint point, PathLeg send, PathLeg ret, PointEvaluation evaluation,
+                            PointUncertainty uncertainty) {
     }
 
     static DossierContent build(int points, int scans, int gridPoints) {
@@ -84,6 +89,7 @@ final class SyntheticDossier {
             }
         }
         List<DossierPoint> site = new ArrayList<>(points);
+        Map<String, PointUncertainty> uncertainties = new HashMap<>();
         for (int i = 0; i < points; i++) {
             Template t = templates.get(i % templates.size());
             String tag = String.format(java.util.Locale.ROOT, "BX-%04d", i + 1);
@@ -94,6 +100,8 @@ final class SyntheticDossier {
             PointEvaluation e = t.evaluation();
             PointEvaluation shared = new PointEvaluation(renamed, e.status(), e.predicted(), e.latest(), e.measured(),
                     e.verdicts(), e.diagnosis(), e.trends(), e.problems());
+            // the copies share their template's path, so its uncertainty: the Monte Carlo runs once per template
+            uncertainties.put(tag, t.uncertainty());
             site.add(new DossierPoint(renamed, List.of(new PathLeg(tag, t.send().direction(), t.send().elements()),
                     new PathLeg(tag, t.ret().direction(), t.ret().elements())), List.of(), List.of(), List.of(),
                     Optional.of(shared), List.of()));
@@ -104,7 +112,8 @@ final class SyntheticDossier {
         return new DossierContent(plant.site(), List.of(analyzer), catalog, DossierScope.everything(), site,
                 ScanPairing.withDefaults().describe(), List.of(),
                 List.of(new SignOff(SignOffRole.PREPARED, "I. Marsh", FIRST_SCAN, "", "")), audit,
-                FIRST_SCAN.plus(Duration.ofDays(7L * scans)), "strandbook bench", "synthetic.sqlite");
+                FIRST_SCAN.plus(Duration.ofDays(7L * scans)), "strandbook bench", "synthetic.sqlite", DecisionRule.FIXED,
+                uncertainties);
     }
 
     private static Template template(DemoPlant.DemoPoint dp, Analyzer analyzer, Catalog catalog, WavelengthGrid grid,
@@ -144,7 +153,8 @@ final class SyntheticDossier {
         PointEvaluation evaluation = new PointEvaluation(point, status, predicted, Optional.of(pair),
                 Optional.of(measured), verdicts, Optional.of(DeviationDiagnoser.withDefaults().diagnose(measured,
                 predicted.totalLossDb(), PathEvidence.of(point, dp.send(), dp.ret(), catalog))), trends, List.of());
-        return new Template(point, dp.send(), dp.ret(), evaluation);
+        return new Template(point, dp.send(), dp.ret(), evaluation,
+                PointUncertainty.of(evaluation, PointUncertainty.engine(DecisionRule.DEFAULT_COVERAGE)));
     }
 
     private static BandTrend trend(WavelengthBand band, BandVerdict verdict, int scans, Instant latest,

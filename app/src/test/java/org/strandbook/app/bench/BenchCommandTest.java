@@ -51,6 +51,17 @@ class BenchCommandTest {
     }
 
     @Test
+    void evaluateBenchWithUncertaintyComparesTheTwoRulesAndEndsWithTheRatioLine() {
+        // tiny run: plain and with-interval times printed, the ratio last; no speed asserted
+        CliRun run = CliRun.of("bench", "evaluate", "--uncertainty", "--points", "2", "--scans", "2");
+        assertEquals(0, run.exitCode(), run.err());
+        List<String> lines = run.out().lines().toList();
+        assertTrue(lines.stream().anyMatch(l -> l.startsWith("plain: ")), run.out());
+        assertTrue(lines.stream().anyMatch(l -> l.startsWith("with interval: ")), run.out());
+        assertTrue(lines.get(lines.size() - 1).matches("ratio: \\d+\\.\\d{3}"), run.out());
+    }
+
+    @Test
     void benchWithoutABenchmarkIsWrongUsage() {
         // a parent command needs a subcommand
         CliRun run = CliRun.of("bench");

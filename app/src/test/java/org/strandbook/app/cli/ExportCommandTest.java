@@ -48,9 +48,9 @@ class ExportCommandTest {
         CliRun run = CliRun.of("export", site.toString(), "-o", out.toString(), "--user", "k.lindqvist");
         assertEquals(0, run.exitCode(), run.err());
         assertTrue(run.out().startsWith("wrote dossier " + out + ": 2 point(s): "), run.out());
-        assertTrue(run.out().contains("12 sheets, 4 charts; revision A, audit head "), run.out());
+        assertTrue(run.out().contains("13 sheets, 4 charts; revision A, audit head "), run.out());
         try (XSSFWorkbook wb = open(out)) {
-            assertEquals(12, wb.getNumberOfSheets());
+            assertEquals(13, wb.getNumberOfSheets());
             assertEquals(POINTS, column(wb.getSheet("Point register"), 0));
             assertEquals("FINAL", wb.getProperties().getCoreProperties().getContentStatus());
             // the generator dirties AT-4102's junction-box joint J2 by 1.5 to 3 dB, over the 1 dB tolerance
@@ -86,7 +86,7 @@ class ExportCommandTest {
         CliRun replaced = CliRun.of("export", site.toString(), "-o", out.toString(), "--replace");
         assertEquals(0, replaced.exitCode(), replaced.err());
         try (XSSFWorkbook wb = open(out)) {
-            assertEquals(12, wb.getNumberOfSheets());
+            assertEquals(13, wb.getNumberOfSheets());
         }
     }
 

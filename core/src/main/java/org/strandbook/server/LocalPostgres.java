@@ -21,10 +21,11 @@ import java.util.concurrent.atomic.AtomicInteger;
 import java.util.stream.Stream;
 
 /**
- * A real PostgreSQL server for tests: the operating system's binaries ({@code initdb}, {@code pg_ctl}),
+ * A throwaway PostgreSQL server for tests and for {@code strandbook bench sync}, never for a
+ * plant's data: the operating system's binaries ({@code initdb}, {@code pg_ctl}),
  * a data folder of its own in the temporary folder, loopback only, on a free port, with trust
- * authentication (nothing listens beyond 127.0.0.1). Never a mock: the server refuses what a plant's
- * server refuses.
+ * authentication (nothing listens beyond 127.0.0.1), durability off (fsync, full-page writes: a
+ * scratch server needs none). Never a mock: the server refuses what a plant's server refuses.
  *
  * <p>{@code initdb} refuses to run as root, so as root the server runs as the {@code postgres}
  * account the OS package creates. {@code STRANDBOOK_PG_BIN} names another binary folder.

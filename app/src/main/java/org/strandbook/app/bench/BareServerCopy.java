@@ -1,0 +1,67 @@
+package org.strandbook.app.bench;
+
+import java.nio.file.Path;
+import java.sql.Connection;
+import java.sql.DriverManager;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.util.Locale;
+
+/**
+ * The floor of the sync benchmark: the same scan rows read from the workbook file with a bare
+ * SELECT and batch-inserted with a bare prepared statement, in one transaction, into a table of
+ * the server's scan shape (site, key, fields as jsonb, spectrum as bytea, the same primary key)
+ * with no trigger, no row-level security, no audit and no bookkeeping: what SQLite and PostgreSQL
+ * themselves cost for the copy.
+ */
+final class BareServerCopy {
+
+    private static final int BATCH = 200;
+
+    private BareServerCopy() {
+    }
+
+    /** Copies every scan; the seconds it took, connection set-up and table creation excluded. */
+    static double secondsToCopy(Path workbook, String serverUrl, String user, String password, String table) {
+        try (Connection from = DriverManager.getConnection("jdbc:sqlite:" + workbook);
+             Connection to = DriverManager.getConnection(serverUrl, user, password == null ? "" : password)) {
+            to.setAutoCommit(false);
+            try (Statement st = to.createStatement()) {
+                st.execute("DROP TABLE IF EXISTS " + table);
+                st.execute("CREATE TABLE " + table + " (site_id bigint NOT NULL, record_key text NOT NULL,"
+                        + " fields jsonb NOT NULL, spectrum bytea NOT NULL, PRIMARY KEY (site_id, record_key))");
+            }
+            to.commit();
+            long start = System.nanoTime();
+            try (Statement read = from.createStatement();
+                 ResultSet rs = read.executeQuery("SELECT s.sha256, s.point_id, s.kind, s.taken_at, s.operator,"
+                         + " s.integration_ms, s.co_added, s.n_points, s.min_nm, s.max_nm, s.source_file, d.data"
+                         + " FROM scan s JOIN scan_spectrum d ON d.scan_id = s.id");
+                 PreparedStatement insert = to.prepareStatement("INSERT INTO " + table
+                         + " (site_id, record_key, fields, spectrum) VALUES (1, ?, ?::jsonb, ?)")) {
+                int n = 0;
+                while (rs.next()) {
+                    insert.setString(1, rs.getString(1));
+                    insert.setString(2, String.format(Locale.ROOT, "{\"point\":%d,\"kind\":\"%s\",\"taken_at\":\"%s\","
+                                    + "\"operator\":\"%s\",\"integration_ms\":%s,\"co_added\":%d,\"n_points\":%d,"
+                                    + "\"min_nm\":%s,\"max_nm\":%s,\"source_file\":\"%s\",\"sha256\":\"%s\"}",
+                            rs.getLong(2), rs.getString(3), rs.getString(4), rs.getString(5), rs.getDouble(6),
+                            rs.getLong(7), rs.getLong(8), rs.getDouble(9), rs.getDouble(10), rs.getString(11),
+                            rs.getString(1)));
+                    insert.setBytes(3, rs.getBytes(12));
+                    insert.addBatch();
+                    if (++n % BATCH == 0) {
+                        insert.executeBatch();
+                    }
+                }
+                insert.executeBatch();
+            }
+            to.commit();
+            return (System.nanoTime() - start) * 1e-9;
+        } catch (SQLException e) {
+            throw new IllegalStateException("the bare copy failed: " + e.getMessage(), e);
+        }
+    }
+}
