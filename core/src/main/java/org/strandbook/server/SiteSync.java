@@ -158,7 +158,7 @@ public final class SiteSync {
             for (int i = plan.removals.size() - 1; i >= 0; i--) {
                 records.remove(plan.removals.get(i).table(), plan.removals.get(i).key());
             }
-            plan.bases.forEach((t, byKey) -> byKey.forEach((k, b) -> ledger.putBase(t, k, b)));
+            plan.bases.forEach(ledger::putBases);
             plan.droppedBases.forEach((t, keys) -> keys.forEach(k -> ledger.removeBase(t, k)));
             for (NewConflict nc : plan.conflicts) {
                 ledger.conflict(nc.table(), nc.key(), nc.field(), nc.mine(), nc.theirs(), nc.theirsBy(), now);
@@ -186,12 +186,25 @@ public final class SiteSync {
     }
 
     private long openSite(Connection c) throws SQLException {
-        long siteId;
+        long siteId = siteId(c, siteName);
+        try (PreparedStatement ps = c.prepareStatement("SELECT pg_advisory_xact_lock(?, ?)")) {
+            ps.setInt(1, SYNC_LOCK_CLASS);
+            ps.setInt(2, (int) siteId);
+            ps.execute();
+        }
+        return siteId;
+    }
+
+    /**
+     * The server's id of the named site, created with the caller as its first member if new; a
+     * site the caller is not a member of is refused by the server.
+     */
+    static long siteId(Connection c, String siteName) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement("SELECT open_site(?)")) {
             ps.setString(1, siteName);
             try (ResultSet rs = ps.executeQuery()) {
                 rs.next();
-                siteId = rs.getLong(1);
+                return rs.getLong(1);
             }
         } catch (SQLException e) {
             if ("42501".equals(e.getSQLState())) {
@@ -199,12 +212,6 @@ public final class SiteSync {
             }
             throw e;
         }
-        try (PreparedStatement ps = c.prepareStatement("SELECT pg_advisory_xact_lock(?, ?)")) {
-            ps.setInt(1, SYNC_LOCK_CLASS);
-            ps.setInt(2, (int) siteId);
-            ps.execute();
-        }
-        return siteId;
     }
 
     private void mergeEditable(Connection c, long siteId, PortableTable t, Map<String, Map<String, Object>> mine,

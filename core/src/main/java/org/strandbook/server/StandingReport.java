@@ -52,14 +52,7 @@ public final class StandingReport {
     public static int publish(PlantServer server, String siteName, List<PointStanding> standings) {
         try (Connection c = server.connect()) {
             try {
-                long siteId;
-                try (PreparedStatement ps = c.prepareStatement("SELECT open_site(?)")) {
-                    ps.setString(1, siteName);
-                    try (ResultSet rs = ps.executeQuery()) {
-                        rs.next();
-                        siteId = rs.getLong(1);
-                    }
-                }
+                long siteId = SiteSync.siteId(c, siteName);
                 Map<String, PointStanding> last = latest(c, siteId, siteName);
                 int sent = 0;
                 try (PreparedStatement ps = c.prepareStatement("INSERT INTO point_status (site_id, tag, status,"

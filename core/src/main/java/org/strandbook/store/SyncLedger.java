@@ -115,14 +115,21 @@ public final class SyncLedger {
     }
 
     public void putBase(PortableTable table, String key, Base base) {
+        putBases(table, Map.of(key, base));
+    }
+
+    /** Many bases at once: a first sync records one per scan, tens of thousands. */
+    public void putBases(PortableTable table, Map<String, Base> bases) {
         session.write(() -> {
             PreparedStatement ps = session.prepared(
                     "INSERT OR REPLACE INTO sync_base (table_name, record_key, fields, revision) VALUES (?, ?, ?, ?)");
-            ps.setString(1, table.name());
-            ps.setString(2, key);
-            ps.setString(3, base.fieldsJson());
-            ps.setLong(4, base.revision());
-            ps.executeUpdate();
+            for (Map.Entry<String, Base> e : bases.entrySet()) {
+                ps.setString(1, table.name());
+                ps.setString(2, e.getKey());
+                ps.setString(3, e.getValue().fieldsJson());
+                ps.setLong(4, e.getValue().revision());
+                ps.executeUpdate();
+            }
             return null;
         });
     }

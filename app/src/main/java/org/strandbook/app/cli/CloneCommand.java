@@ -38,8 +38,7 @@ final class CloneCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        String who = user != null && !user.isBlank() ? user.strip() : System.getProperty("user.name", "unknown user");
-        SiteSync.Outcome o = SiteClone.run(serverOptions.connect(), site, file, who,
+        SiteSync.Outcome o = SiteClone.run(serverOptions.connect(), site, file, WorkbookFileOptions.userOrLogin(user),
                 new ServerProgress(spec.commandLine().getErr()));
         spec.commandLine().getOut().println(String.format(Locale.ROOT, "cloned site \"%s\" into %s: %d record(s)",
                 site, file, o.pulled() + o.changedHere()));

@@ -18,10 +18,14 @@ import org.strandbook.evaluation.SiteEvaluation;
 import org.strandbook.evaluation.SiteEvaluator;
 import org.strandbook.samplesite.DemoSite;
 import org.strandbook.samplesite.ScanGenerator;
+import org.strandbook.server.PlantServer;
+import org.strandbook.server.SiteSync;
+import org.strandbook.server.StandingReport;
 import org.strandbook.store.Workbook;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
@@ -41,6 +45,10 @@ final class DemoCommand implements Callable<Integer> {
 
     @Option(names = "--seed", paramLabel = "N", description = "Generator seed (default: the demo's own).")
     Long seed;
+
+    /** With {@code --server}, the demo pushes itself to a plant server after it is built. */
+    @Mixin
+    ServerOptions serverOptions;
 
     @Spec
     CommandSpec spec;
@@ -80,10 +88,24 @@ final class DemoCommand implements Callable<Integer> {
         o.println();
         EvaluationText.summary(site, o);
         o.println();
+        if (serverOptions.given()) {
+            pushToServer(built.workbook(), site, o, err);
+        }
         o.println("Next: strandbook evaluate " + built.workbook() + " --point AT-4102   |   strandbook trend "
                 + built.workbook());
         o.flush();
         return StrandbookCommand.EXIT_OK;
+    }
+
+    private void pushToServer(Path workbook, SiteEvaluation site, PrintWriter o, PrintWriter err) {
+        PlantServer server = serverOptions.connect();
+        try (Workbook wb = Workbook.open(workbook, DemoSite.USER)) {
+            SiteSync.Outcome pushed = new SiteSync(server, wb, wb.site().get().name(), new ServerProgress(err)).run();
+            int reported = StandingReport.publish(server, wb.site().get().name(),
+                    StandingReport.of(site, wb.points().list()));
+            o.printf(java.util.Locale.ROOT, "server    %s: %d record(s) pushed, the status of %d point(s) reported%n",
+                    server.login().displayUrl(), pushed.pushed(), reported);
+        }
     }
 
     private static Path freshDefaultFolder() {

@@ -23,6 +23,11 @@ public final class ServerOptions {
             description = "Login role on the server (default: PGUSER). The password comes from PGPASSWORD or ~/.pgpass.")
     String user;
 
+    /** Whether {@code --server} was given. */
+    public boolean given() {
+        return url != null;
+    }
+
     /** The server, its schema brought up to date (a no-op read when it already is). */
     public PlantServer connect() {
         return connect(null);

@@ -34,6 +34,7 @@ import picocli.CommandLine.Command;
             InspectCommand.class,
             MaintainCommand.class,
             NoteCommand.class,
+            WithdrawCommand.class,
             SignCommand.class,
             AuditCommand.class,
             ExportCommand.class,

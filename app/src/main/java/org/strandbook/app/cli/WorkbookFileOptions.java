@@ -26,8 +26,13 @@ public final class WorkbookFileOptions {
 
     /** The {@code --user} name, else the login name of whoever runs the command. */
     public String user() {
-        if (user != null && !user.isBlank()) {
-            return user.strip();
+        return userOrLogin(user);
+    }
+
+    /** {@code given} when it names someone, else the login name of whoever runs the command. */
+    static String userOrLogin(String given) {
+        if (given != null && !given.isBlank()) {
+            return given.strip();
         }
         String login = System.getProperty("user.name");
         return login == null || login.isBlank() ? "unknown user" : login;

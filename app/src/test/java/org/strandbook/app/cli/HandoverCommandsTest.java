@@ -137,6 +137,27 @@ class HandoverCommandsTest {
     }
 
     @Test
+    void theLatestRecordIsWithdrawnAndTheTrailStillVerifies() {
+        assertEquals(0, run("maintain", site, "--point", HEALTHY, "--action", "replace-segment", "--element", "C4101-R2",
+                "--new-length-m", "31.5", "--by", "t.okonjo", "--at", afterScans.toString()).exitCode());
+
+        CliRun r = run("withdraw", site, "--point", HEALTHY, "--user", "m.okonedo");
+        assertEquals(0, r.exitCode(), r.err());
+        assertTrue(r.out().startsWith("withdrawn: replace segment C4101-R2 of "), r.out());
+        assertTrue(r.out().contains("the path and probe are as they were before it"), r.out());
+        CliRun history = run("history", site, "--point", HEALTHY);
+        assertFalse(history.out().contains("31.5 m"), history.out());
+        assertEquals(0, run("audit", "verify", site).exitCode());
+    }
+
+    @Test
+    void withdrawingWithNothingRecordedIsRejectedInOneLine() {
+        CliRun r = run("withdraw", site, "--point", HEALTHY);
+        assertEquals(1, r.exitCode());
+        assertEquals("strandbook: point AT-4101 has no inspection, maintenance action or note to withdraw\n", r.err());
+    }
+
+    @Test
     void signingWithoutANameIsWrongUsageAndAnUnevaluatedPointIsRefused() {
         assertEquals(2, run("sign", site, "--point", HEALTHY, "--role", "approved").exitCode());
         CliRun blank = run("sign", site, "--point", HEALTHY, "--role", "approved", "--name", " ");
