@@ -2,6 +2,8 @@ package org.strandbook.throughput;
 
 import java.util.Arrays;
 
+import org.strandbook.uncertainty.OrderStatistics;
+
 /**
  * The median of a {@code double[]} without sorting it.
  *
@@ -134,35 +136,6 @@ final class MedianSelection {
      * The k-th smallest of a[0..length-1] (k 0-based); afterwards a[0..k-1] ≤ a[k] ≤ a[k+1..].
      */
     private static double select(double[] a, int length, int k) {
-        int lo = 0;
-        int hi = length - 1;
-        while (lo < hi) {
-            double pivot = a[(lo + hi) >>> 1];
-            int i = lo;
-            int j = hi;
-            while (i <= j) {
-                while (a[i] < pivot) {
-                    i++;
-                }
-                while (a[j] > pivot) {
-                    j--;
-                }
-                if (i <= j) {
-                    double t = a[i];
-                    a[i] = a[j];
-                    a[j] = t;
-                    i++;
-                    j--;
-                }
-            }
-            if (k <= j) {
-                hi = j;
-            } else if (k >= i) {
-                lo = i;
-            } else {
-                return a[k];
-            }
-        }
-        return a[k];
+        return OrderStatistics.select(a, 0, length - 1, k);
     }
 }

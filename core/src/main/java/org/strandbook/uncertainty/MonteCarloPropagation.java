@@ -265,43 +265,9 @@ public final class MonteCarloPropagation {
             throw new IllegalArgumentException("too few trials (" + m + ") for a " + p + " coverage interval");
         }
         int r = Math.max((m - q) % 2 == 0 ? (m - q) / 2 : (m - q + 1) / 2, 1);
-        double low = select(values, 0, m - 1, r - 1);
-        double high = select(values, r, m - 1, r + q - 1);
+        double low = OrderStatistics.select(values, 0, m - 1, r - 1);
+        double high = OrderStatistics.select(values, r, m - 1, r + q - 1);
         return new CoverageInterval(low, high, p, CoverageInterval.Method.PROBABILISTICALLY_SYMMETRIC);
-    }
-
-    /** The k-th smallest of a[from..to] (0-based k), partially reordering that range. */
-    private static double select(double[] a, int from, int to, int k) {
-        int lo = from;
-        int hi = to;
-        while (lo < hi) {
-            double pivot = a[(lo + hi) >>> 1];
-            int i = lo;
-            int j = hi;
-            while (i <= j) {
-                while (a[i] < pivot) {
-                    i++;
-                }
-                while (a[j] > pivot) {
-                    j--;
-                }
-                if (i <= j) {
-                    double t = a[i];
-                    a[i] = a[j];
-                    a[j] = t;
-                    i++;
-                    j--;
-                }
-            }
-            if (k <= j) {
-                hi = j;
-            } else if (k >= i) {
-                lo = i;
-            } else {
-                return a[k];
-            }
-        }
-        return a[k];
     }
 
     /** JCGM 101:2008, 7.7.1 (q and the symmetric r) and 7.7.2 (the shortest r*), 1-based as printed. */

@@ -35,6 +35,7 @@ import org.strandbook.samplesite.DemoSite;
 import org.strandbook.samplesite.ScanGenerator;
 import org.strandbook.site.Analyzer;
 import org.strandbook.site.Catalog;
+import org.strandbook.site.DecisionRule;
 import org.strandbook.site.ConnectorType;
 import org.strandbook.site.FiberType;
 import org.strandbook.site.MeasurementPoint;
@@ -184,7 +185,7 @@ public final class SqliteWorkbookService implements WorkbookService {
     public synchronized PointEvaluation evaluatePoint(String pointTag) {
         Workbook wb = require();
         Catalog catalog = Catalog.of(wb.catalog().fiberTypes(), wb.catalog().connectorTypes(), wb.catalog().probeTypes());
-        return evaluator.evaluate(inputs(wb, wb.site().get(), catalog, pointTag));
+        return evaluator.evaluate(inputs(wb, wb.site().get(), catalog, pointTag), wb.site().decisionRule());
     }
 
     @Override
@@ -192,11 +193,12 @@ public final class SqliteWorkbookService implements WorkbookService {
         Workbook wb = require();
         Site site = wb.site().get();
         Catalog catalog = Catalog.of(wb.catalog().fiberTypes(), wb.catalog().connectorTypes(), wb.catalog().probeTypes());
+        DecisionRule rule = wb.site().decisionRule();
         List<PointStatus> out = new ArrayList<>();
         for (int i = 0; i < pointTags.size(); i++) {
             String tag = pointTags.get(i);
             try {
-                PointEvaluation e = evaluator.evaluate(inputs(wb, site, catalog, tag));
+                PointEvaluation e = evaluator.evaluate(inputs(wb, site, catalog, tag), rule);
                 out.add(new PointStatus(tag, Optional.of(e.status()), e.shortFinding()));
             } catch (IllegalArgumentException e) {
                 out.add(new PointStatus(tag, Optional.empty(), e.getMessage()));
@@ -221,10 +223,11 @@ public final class SqliteWorkbookService implements WorkbookService {
         List<MeasurementPoint> points = wb.points().list();
         List<PointEvaluation> evaluated = new ArrayList<>();
         Map<String, String> refused = new LinkedHashMap<>();
+        DecisionRule rule = wb.site().decisionRule();
         for (int i = 0; i < points.size(); i++) {
             String tag = points.get(i).tag();
             try {
-                evaluated.add(evaluator.evaluate(inputs(wb, site, catalog, tag)));
+                evaluated.add(evaluator.evaluate(inputs(wb, site, catalog, tag), rule));
             } catch (IllegalArgumentException e) {
                 refused.put(tag, e.getMessage());
             }

@@ -26,6 +26,7 @@ import org.strandbook.intake.ScanFileImporter;
 import org.strandbook.intake.ScheduleImporter;
 import org.strandbook.site.CableSegment;
 import org.strandbook.site.ConnectorType;
+import org.strandbook.site.DecisionRule;
 import org.strandbook.site.MeasurementPoint;
 import org.strandbook.site.PathElement;
 import org.strandbook.site.PathLeg;
@@ -153,6 +154,17 @@ class SqliteWorkbookServiceTest {
 
         assertEquals(Optional.of(file), service.file());
         assertEquals(12, service.reload(QUIET).points().size());
+    }
+
+    @Test
+    void theWindowJudgesByTheSitesDecisionRule() {
+        // the sample plant's AT-4109: 0.8 dB of dirt on a 1.5 m loop, within the fixed 1 dB, beyond the
+        // prediction's coverage interval (the rule's zones: JCGM 106:2012, clause 8)
+        assertEquals(Status.PASS, service.evaluatePoint("AT-4109").status());
+        try (Workbook wb = Workbook.open(file, USER)) {
+            wb.site().setDecisionRule(DecisionRule.interval());
+        }
+        assertEquals(Status.FAIL, service.evaluatePoint("AT-4109").status());
     }
 
     @Test
