@@ -26,10 +26,12 @@ import org.strandbook.site.Site;
  * @param connectors the connector catalog, by code
  * @param probes     the probe catalog, by code
  * @param legs       each point's send and return legs, by point tag
+ * @param syncState  the workbook's standing with its plant server, in words (never synced, when last
+ *                   synced and with what, conflicts waiting for a choice)
  */
 public record LoadedSite(Path file, Site site, List<Analyzer> analyzers, List<MeasurementPoint> points,
                          List<FiberType> fibers, List<ConnectorType> connectors, List<ProbeType> probes,
-                         Map<String, List<PathLeg>> legs) {
+                         Map<String, List<PathLeg>> legs, String syncState) {
 
     public LoadedSite {
         analyzers = List.copyOf(analyzers);

@@ -43,6 +43,7 @@ import org.strandbook.site.PathLeg;
 import org.strandbook.site.ProbeType;
 import org.strandbook.site.ScanRecord;
 import org.strandbook.site.Site;
+import org.strandbook.store.SyncLedger;
 import org.strandbook.store.Workbook;
 import org.strandbook.store.WithdrawnRecord;
 import org.strandbook.store.WorkbookException;
@@ -125,7 +126,19 @@ public final class SqliteWorkbookService implements WorkbookService {
             legs.put(tag, wb.paths().legs(tag));
         }
         return new LoadedSite(wb.file(), site, analyzers, points, wb.catalog().fiberTypes(),
-                wb.catalog().connectorTypes(), wb.catalog().probeTypes(), legs);
+                wb.catalog().connectorTypes(), wb.catalog().probeTypes(), legs, syncState(wb));
+    }
+
+    /** The workbook's standing with its plant server, as the status bar says it. */
+    static String syncState(Workbook wb) {
+        Optional<SyncLedger.State> state = wb.syncLedger().peek();
+        if (state.isEmpty() || state.get().syncedAt() == null) {
+            return "Plant server: never synced";
+        }
+        long open = wb.syncLedger().conflicts().stream().filter(SyncLedger.Conflict::open).count();
+        return "Plant server: synced " + state.get().syncedAt().truncatedTo(java.time.temporal.ChronoUnit.MINUTES)
+                + " with " + state.get().server() + (open == 0 ? "" : "; " + open
+                + " conflict(s) wait for a choice (strandbook sync --resolve)");
     }
 
     @Override

@@ -81,6 +81,7 @@ public final class WorkbookViewModel {
     private final ReadOnlyBooleanWrapper open = new ReadOnlyBooleanWrapper(this, "open", false);
     private final ReadOnlyStringWrapper selectedTag = new ReadOnlyStringWrapper(this, "selectedTag", "");
     private final ReadOnlyStringWrapper notice = new ReadOnlyStringWrapper(this, "notice", "");
+    private final ReadOnlyStringWrapper syncState = new ReadOnlyStringWrapper(this, "syncState", "");
     private final ReadOnlyStringWrapper title = new ReadOnlyStringWrapper(this, "title", "Strandbook \u2013 no workbook open");
     private final ReadOnlyObjectWrapper<List<Path>> recentFiles = new ReadOnlyObjectWrapper<>(this, "recentFiles", List.of());
     private final ReadOnlyObjectWrapper<List<String>> scheduleProblems = new ReadOnlyObjectWrapper<>(this,
@@ -210,6 +211,11 @@ public final class WorkbookViewModel {
     }
 
     /** The last failure or refusal worth telling the user about. */
+    /** The open workbook's standing with its plant server, in words; empty when none is open. */
+    public ReadOnlyStringProperty syncStateProperty() {
+        return syncState.getReadOnlyProperty();
+    }
+
     public ReadOnlyStringProperty noticeProperty() {
         return notice.getReadOnlyProperty();
     }
@@ -434,6 +440,7 @@ public final class WorkbookViewModel {
         boolean sameFile = site.file().map(f -> f.equals(loaded.file())).orElse(false);
         String keep = sameFile ? selectedTag.get() : "";
         site.load(loaded);
+        syncState.set(loaded.syncState());
         if (!sameFile) {
             measured.clear();
         }

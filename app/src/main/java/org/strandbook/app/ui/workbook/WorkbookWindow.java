@@ -642,7 +642,10 @@ public final class WorkbookWindow {
         cancel.setId("task-cancel");
         cancel.disableProperty().bind(vm.tasks().runningProperty().not());
         cancel.setOnAction(e -> vm.tasks().cancel());
-        HBox bar = new HBox(8, message, progress, cancel);
+        Label sync = new Label();
+        sync.setId("sync-state");
+        sync.textProperty().bind(vm.syncStateProperty());
+        HBox bar = new HBox(8, message, sync, progress, cancel);
         bar.setAlignment(Pos.CENTER_LEFT);
         bar.setPadding(new Insets(3, 8, 3, 8));
         bar.getStyleClass().add("status-bar");
