@@ -1,9 +1,13 @@
 package org.strandbook.evaluation;
 
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 
+import org.strandbook.diagnosis.Cause;
 import org.strandbook.diagnosis.Diagnosis;
+import org.strandbook.diagnosis.Finding;
+import org.strandbook.diagnosis.Signature;
 import org.strandbook.site.MeasurementPoint;
 import org.strandbook.throughput.ThroughputResult;
 
@@ -74,10 +78,12 @@ public record PointEvaluation(MeasurementPoint point, Status status, PredictedBu
     /** The finding in one line: the diagnosis summary, or why nothing was measured. */
     public String finding() {
         if (diagnosis.isPresent()) {
+            // a pass on the interval names the fitted size but no cause and no place to walk to: the
+            // deviation is one the recorded parts may have, so it must not send anyone into the field
             return passedOnInterval() && diagnosis.get().first().isPresent()
                     ? "every band lies inside the prediction's coverage interval widened by the measurement's own"
-                    + " uncertainty: what the fit found is within what the recorded parts may lose ("
-                    + diagnosis.get().summary() + ")"
+                    + " uncertainty: what the fit found (largest term " + size(diagnosis.get().first().get())
+                    + ") is within what the recorded parts may lose; nothing to do in the field"
                     : diagnosis.get().summary();
         }
         return problems.isEmpty() ? "not measured yet" : problems.get(0);
@@ -89,19 +95,24 @@ public record PointEvaluation(MeasurementPoint point, Status status, PredictedBu
             return problems.isEmpty() ? "not measured yet" : "not evaluated";
         }
         return diagnosis.get().first().map(f -> {
-            String size = Double.isInfinite(f.amountDb()) ? "no light"
-                    : f.signature() == org.strandbook.diagnosis.Signature.FRINGES
-                    ? String.format(java.util.Locale.ROOT, "ripple of %.2f dB peak to peak", 2 * f.amountDb())
-                    : f.cause() == org.strandbook.diagnosis.Cause.REFERENCE_OR_RECORDS
-                    ? String.format(java.util.Locale.ROOT, "≈%.1f dB under prediction", -f.amountDb())
-                    : Double.isNaN(f.atNm()) || f.signature() == org.strandbook.diagnosis.Signature.FLAT_EXCESS
-                    ? String.format(java.util.Locale.ROOT, "≈%.1f dB, wavelength-flat", f.amountDb())
-                    : String.format(java.util.Locale.ROOT, "%s%.1f dB at %.0f nm", f.atLeast() ? "≥" : "≈",
-                    f.amountDb(), f.atNm());
+            String size = size(f);
             if (passedOnInterval()) {
                 return "as predicted within its coverage interval (largest fitted term " + size + ")";
             }
             return f.cause().words() + ", " + size + (f.checkFirst().isEmpty() ? "" : "; check " + f.checkFirst());
         }).orElse("as predicted");
+    }
+
+    /** A finding's size in a few words: how much, and where or that it is wavelength-flat. */
+    private static String size(Finding f) {
+        return Double.isInfinite(f.amountDb()) ? "no light"
+                : f.signature() == Signature.FRINGES
+                ? String.format(Locale.ROOT, "ripple of %.2f dB peak to peak", 2 * f.amountDb())
+                : f.cause() == Cause.REFERENCE_OR_RECORDS
+                ? String.format(Locale.ROOT, "≈%.1f dB under prediction", -f.amountDb())
+                : Double.isNaN(f.atNm()) || f.signature() == Signature.FLAT_EXCESS
+                ? String.format(Locale.ROOT, "≈%.1f dB, wavelength-flat", f.amountDb())
+                : String.format(Locale.ROOT, "%s%.1f dB at %.0f nm", f.atLeast() ? "≥" : "≈",
+                f.amountDb(), f.atNm());
     }
 }

@@ -54,4 +54,11 @@ class DecisionRuleDemoTest {
         assertTrue(onInterval.shortFinding().startsWith("as predicted within its coverage interval"),
                 onInterval.shortFinding());
     }
+
+    @Test
+    void aPassOnTheIntervalSendsNobodyIntoTheField() {
+        // design choice: a deviation the recorded parts may have names its size, never a cable to walk
+        String finding = evaluate("AT-4203", DecisionRule.interval()).finding();
+        assertTrue(finding.endsWith("nothing to do in the field") && !finding.contains("walk"), finding);
+    }
 }
