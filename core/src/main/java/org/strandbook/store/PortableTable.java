@@ -9,12 +9,13 @@ import java.util.Map;
  * of its local id (every laptop numbers its own rows), and each reference to another row by that
  * row's natural key. The order is parent before child.
  *
- * <p>Editable records (the site, catalogs, analyzers, points, their bands and paths) may change and
+ * <p>Editable records (the site and its decision rule, catalogs, analyzers, points, their bands and paths) may change and
  * so may conflict; the others are records of something that happened (a scan, an inspection, an
  * action, a note, a signature) and never change, so they never conflict.
  */
 public enum PortableTable {
     SITE("site", "site_record", true, Map.of(), List.of()),
+    DECISION_RULE("decision_rule", "decision_rule", true, Map.of(), List.of()),
     ANALYZER("analyzer", "analyzer", true, Map.of(), List.of("tag")),
     FIBER_TYPE("fiber_type", "fiber_type", true, Map.of(), List.of("code")),
     FIBER_ATTENUATION("fiber_attenuation", "fiber_attenuation", true, Map.of("fiber_type_id", "FIBER_TYPE"),
@@ -85,8 +86,9 @@ public enum PortableTable {
 
     /** The natural key of a record with these portable fields. */
     String key(Map<String, Object> fields) {
-        if (this == SITE) {
-            return "site";
+        if (keyFields != null && keyFields.isEmpty()) {
+            // one record per site (the site itself, its decision rule): named by its table
+            return workbookTable;
         }
         if (keyFields == null) {
             return PortableFields.sha256(fields);

@@ -165,7 +165,7 @@ public final class WorkbookRecords {
 
     /** Removes one editable record, audited; call children first. */
     public void remove(PortableTable table, String key) {
-        if (!table.editable() || table == PortableTable.SITE) {
+        if (!table.editable() || table == PortableTable.SITE || table == PortableTable.DECISION_RULE) {
             throw new IllegalArgumentException(table + " records are never removed by a sync");
         }
         session.write(() -> {

@@ -17,6 +17,7 @@ import java.time.Instant;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.strandbook.site.DecisionRule;
 import org.strandbook.site.Inspection;
 import org.strandbook.site.InspectionGrade;
 import org.strandbook.site.MeasurementPoint;
@@ -78,6 +79,21 @@ class SiteSyncTest {
                 assertArrayEquals(a.records().spectrum(sha), b.records().spectrum(sha));
                 assertTrue(b.audit().verify().intact(), "the clone's own trail verifies");
                 assertEquals(a.paths().legs(DemoSite.POINT_A), b.paths().legs(DemoSite.POINT_A));
+            }
+        }
+    }
+
+    @Test
+    void theSitesDecisionRuleTravelsToAClone() {
+        // the "same meaning as the workbook": a clone must judge its points by the rule the
+        // site chose (a coverage interval at 90 %, 0.3 dB guard band), not fall back to the default
+        DecisionRule chosen = DecisionRule.interval().withCoverage(0.90).withGuardBandDb(0.3);
+        try (Workbook a = laptopA()) {
+            a.site().setDecisionRule(chosen);
+            sync(as("sync_tech_a"), a);
+            try (Workbook b = cloneAs("sync_tech_a", "b.strandbook")) {
+                assertEquals(chosen, b.site().decisionRule());
+                assertTrue(b.audit().verify().intact(), "the clone's own trail verifies");
             }
         }
     }
