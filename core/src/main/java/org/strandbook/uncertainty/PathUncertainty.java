@@ -70,6 +70,11 @@ public final class PathUncertainty {
         return new PathUncertainty(inputs, monteCarlo.withTrials(trials), coverageProbability);
     }
 
+    /** The same inputs and trials at another coverage probability (a site's decision rule). */
+    public PathUncertainty withCoverage(double probability) {
+        return probability == coverageProbability ? this : new PathUncertainty(inputs, monteCarlo, probability);
+    }
+
     public int trials() {
         return monteCarlo.trials();
     }

@@ -3,6 +3,7 @@ package org.strandbook.app.ui.uncertainty;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.function.Supplier;
 import java.util.Optional;
 
 import javafx.beans.property.ReadOnlyObjectProperty;
@@ -55,7 +56,8 @@ public final class UncertaintyViewModel {
     }
 
     private final TaskExecutor tasks;
-    private final PathUncertainty engine;
+    /** The engine at the site's coverage, asked afresh for each job (the site's rule may change). */
+    private final Supplier<PathUncertainty> engines;
     private final ObservableList<UncertaintyRow> rows = FXCollections.observableArrayList();
     private final ObservableList<UncertaintyRow> shownRows = FXCollections.unmodifiableObservableList(rows);
     private final ReadOnlyStringWrapper message = new ReadOnlyStringWrapper(this, "message", "No point selected");
@@ -67,9 +69,14 @@ public final class UncertaintyViewModel {
     private volatile long generation;
     private Shown shown;
 
-    public UncertaintyViewModel(TaskExecutor tasks, PathUncertainty engine) {
+    public UncertaintyViewModel(TaskExecutor tasks, Supplier<PathUncertainty> engines) {
         this.tasks = tasks;
-        this.engine = engine;
+        this.engines = engines;
+    }
+
+    /** One engine for every job, whatever the site. */
+    public UncertaintyViewModel(TaskExecutor tasks, PathUncertainty engine) {
+        this(tasks, () -> engine);
     }
 
     /** Per band, its uncertainty budget rows, largest contribution first. */
@@ -124,7 +131,8 @@ public final class UncertaintyViewModel {
         publish(null);
         rows.clear();
         message.set("Working out the uncertainty of " + pointTag + "'s prediction\u2026");
-        tasks.submit("Uncertainty of " + pointTag, p -> work(g, budget, bands, p), this::deliver, e -> {
+        PathUncertainty engine = engines.get();
+        tasks.submit("Uncertainty of " + pointTag, p -> work(g, engine, budget, bands, p), this::deliver, e -> {
             if (!(e instanceof Superseded) && g == generation) {
                 message.set("Cannot work out the uncertainty of " + pointTag + ": " + e.getMessage());
             }
@@ -168,6 +176,7 @@ public final class UncertaintyViewModel {
         int index = grid.nearestIndex(nm.get());
         double limitDb = allowed.get();
         answer.set("Working out the chance\u2026");
+        PathUncertainty engine = engines.get();
         tasks.submit("Chance of " + s.pointTag() + " within " + plain(limitDb) + " dB", p -> engine.chanceWithin(
                 s.budget().budget(), index, s.budget().jointSources(), limitDb), c -> {
                     if (s.generation() == generation) {
@@ -186,7 +195,8 @@ public final class UncertaintyViewModel {
     }
 
     /** Runs in the background: Monte Carlo only, from the prediction in memory. */
-    private Result work(long g, PredictedBudget budget, List<WavelengthBand> bands, JobProgress p) {
+    private Result work(long g, PathUncertainty engine, PredictedBudget budget, List<WavelengthBand> bands,
+            JobProgress p) {
         WavelengthGrid grid = budget.grid();
         List<WavelengthBand> inRange = bands.stream().filter(b -> grid.covers(b.centreNm())).toList();
         p.update(0, "coverage band over the analyzer's range");

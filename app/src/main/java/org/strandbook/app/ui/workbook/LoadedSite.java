@@ -3,10 +3,12 @@ package org.strandbook.app.ui.workbook;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
+import java.util.Objects;
 
 import org.strandbook.site.Analyzer;
 import org.strandbook.site.Catalog;
 import org.strandbook.site.ConnectorType;
+import org.strandbook.site.DecisionRule;
 import org.strandbook.site.FiberType;
 import org.strandbook.site.MeasurementPoint;
 import org.strandbook.site.PathLeg;
@@ -28,10 +30,11 @@ import org.strandbook.site.Site;
  * @param legs       each point's send and return legs, by point tag
  * @param syncState  the workbook's standing with its plant server, in words (never synced, when last
  *                   synced and with what, conflicts waiting for a choice)
+ * @param decisionRule how the site accepts a measured loss; its coverage is the window's too
  */
 public record LoadedSite(Path file, Site site, List<Analyzer> analyzers, List<MeasurementPoint> points,
                          List<FiberType> fibers, List<ConnectorType> connectors, List<ProbeType> probes,
-                         Map<String, List<PathLeg>> legs, String syncState) {
+                         Map<String, List<PathLeg>> legs, String syncState, DecisionRule decisionRule) {
 
     public LoadedSite {
         analyzers = List.copyOf(analyzers);
@@ -40,6 +43,7 @@ public record LoadedSite(Path file, Site site, List<Analyzer> analyzers, List<Me
         connectors = List.copyOf(connectors);
         probes = List.copyOf(probes);
         legs = Map.copyOf(legs);
+        Objects.requireNonNull(decisionRule, "decisionRule");
     }
 
     public Catalog catalog() {

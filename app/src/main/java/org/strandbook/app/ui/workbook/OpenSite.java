@@ -15,6 +15,7 @@ import org.strandbook.app.ui.budget.SitePrediction;
 import org.strandbook.site.Analyzer;
 import org.strandbook.site.Catalog;
 import org.strandbook.site.ConnectorType;
+import org.strandbook.site.DecisionRule;
 import org.strandbook.site.FiberType;
 import org.strandbook.site.MeasurementPoint;
 import org.strandbook.site.PathLeg;
@@ -38,6 +39,7 @@ final class OpenSite {
     private final Map<String, List<PathLeg>> legs = new HashMap<>();
     /** Cable ID in lower case → the point whose legs use it. */
     private final Map<String, String> cableOwners = new HashMap<>();
+    private double coverage = DecisionRule.DEFAULT_COVERAGE;
     private SitePrediction prediction = new SitePrediction(site, List.of(), Catalog.of(List.of(), List.of(), List.of()));
 
     void load(LoadedSite loaded) {
@@ -54,6 +56,12 @@ final class OpenSite {
         cableOwners.clear();
         loaded.legs().forEach(this::setLegs);
         prediction = new SitePrediction(site, analyzers, catalog());
+        coverage = loaded.decisionRule().coverage();
+    }
+
+    /** The coverage probability of the site's decision rule: the window's intervals use it too. */
+    double coverage() {
+        return coverage;
     }
 
     private static <T> List<T> sorted(List<T> list, java.util.function.Function<T, String> key) {

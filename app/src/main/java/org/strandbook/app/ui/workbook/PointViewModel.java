@@ -102,7 +102,8 @@ public final class PointViewModel {
         this.budgetPlot = new SpectrumPlotModel(axes);
         this.measuredPlot = new SpectrumPlotModel(axes);
         this.trendPlot = new TrendPlotModel(axes);
-        this.uncertainty = new UncertaintyViewModel(tasks, PathUncertainty.standard());
+        PathUncertainty engine = PathUncertainty.standard();
+        this.uncertainty = new UncertaintyViewModel(tasks, () -> engine.withCoverage(site.coverage()));
         uncertainty.spreadProperty().addListener((o, was, is) -> shade(is));
         this.history = new PointHistoryViewModel(service, tasks, () -> point == null ? List.of() : shownLegs(),
                 events::pathReplaced, events::recorded);

@@ -126,7 +126,8 @@ public final class SqliteWorkbookService implements WorkbookService {
             legs.put(tag, wb.paths().legs(tag));
         }
         return new LoadedSite(wb.file(), site, analyzers, points, wb.catalog().fiberTypes(),
-                wb.catalog().connectorTypes(), wb.catalog().probeTypes(), legs, syncState(wb));
+                wb.catalog().connectorTypes(), wb.catalog().probeTypes(), legs, syncState(wb),
+                wb.site().decisionRule());
     }
 
     /** The workbook's standing with its plant server, as the status bar says it. */

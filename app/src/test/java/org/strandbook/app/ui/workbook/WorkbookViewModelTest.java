@@ -27,6 +27,7 @@ import org.strandbook.app.ui.sheet.SheetModel;
 import org.strandbook.app.ui.task.DirectTaskExecutor;
 import org.strandbook.site.CableSegment;
 import org.strandbook.site.ConnectorType;
+import org.strandbook.site.DecisionRule;
 import org.strandbook.site.MeasurementPoint;
 import org.strandbook.site.PathLeg;
 import org.strandbook.store.Workbook;
@@ -84,6 +85,23 @@ class WorkbookViewModelTest {
         assertEquals(6, vm.point().segments().rowCount());
         assertEquals(6, vm.point().joints().rowCount());
         assertTrue(vm.titleProperty().get().endsWith(file.getFileName().toString()), vm.titleProperty().get());
+    }
+
+    @Test
+    void theWindowsIntervalsUseTheSitesCoverage() {
+        // design choice: one coverage for a site; a site judged at 90 % is shown at 90 %, not the default 95 %
+        service.close();
+        try (Workbook wb = Workbook.open(file, "technician B")) {
+            wb.site().setDecisionRule(DecisionRule.interval().withCoverage(0.90));
+        }
+        service = new SqliteWorkbookService("technician B");
+        vm = new WorkbookViewModel(service, new DirectTaskExecutor(), new PlotAxes(preferences),
+                new RecentFiles(preferences), dir.resolve("sample"), Optional.empty());
+        vm.setEvaluateOnOpen(false);
+        vm.open(file);
+        vm.selectPoint("AT-4102");
+        String message = vm.point().uncertainty().messageProperty().get();
+        assertTrue(message.contains("90 % coverage interval"), message);
     }
 
     @Test
