@@ -77,6 +77,8 @@ public final class PasswordFile {
             Set<PosixFilePermission> perms = Files.getPosixFilePermissions(file);
             return perms.contains(PosixFilePermission.GROUP_READ) || perms.contains(PosixFilePermission.OTHERS_READ);
         } catch (UnsupportedOperationException | IOException e) {
+            // no POSIX permissions to read (a Windows file system): nothing to hold against the
+            // file, as PostgreSQL's own client skips the check there too
             return false;
         }
     }
