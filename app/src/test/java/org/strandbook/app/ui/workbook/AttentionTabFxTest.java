@@ -24,7 +24,8 @@ import org.testfx.util.WaitForAsyncUtils;
 /**
  * The Attention tab on a copy of the sample site, headless: shown, it ranks the site; Enter or a
  * double-click opens a point in the History tab. The ranking itself is checked against the trend
- * command in {@link AttentionViewModelTest}.
+ * command in {@link AttentionViewModelTest}; what the tab does with a key or a click is the window's
+ * own behaviour (design choice).
  */
 @ExtendWith(SampleSite.Resolver.class)
 class AttentionTabFxTest {
