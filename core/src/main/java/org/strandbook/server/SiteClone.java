@@ -11,6 +11,7 @@ import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.util.Map;
 
+import org.strandbook.files.WorkInProgressFiles;
 import org.strandbook.site.Site;
 import org.strandbook.store.PortableFields;
 import org.strandbook.store.Workbook;
@@ -31,9 +32,11 @@ public final class SiteClone {
             throw new SyncRefusedException(target + " exists; a clone never overwrites a file");
         }
         Site site = siteRecord(server, siteName);
-        Path part = target.resolveSibling("." + target.getFileName() + "." + ProcessHandle.current().pid() + ".part");
+        Path part = null;
         try {
-            Files.deleteIfExists(part);
+            // named as the other writers name their part files, so a later run sweeps a killed clone's
+            part = WorkInProgressFiles.partBeside(target);
+            Files.delete(part);
             SiteSync.Outcome outcome;
             try (Workbook wb = Workbook.create(part, site, user)) {
                 outcome = new SiteSync(server, wb, siteName, progress).run();
@@ -44,7 +47,9 @@ public final class SiteClone {
             throw new UncheckedIOException("cannot write " + target + ": " + e.getMessage(), e);
         } finally {
             try {
-                Files.deleteIfExists(part);
+                if (part != null) {
+                    Files.deleteIfExists(part);
+                }
             } catch (IOException e) {
                 // a part file left behind is named as one and harmless
             }

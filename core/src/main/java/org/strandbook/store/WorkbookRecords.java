@@ -22,6 +22,8 @@ public final class WorkbookRecords {
     private final AuditLog audit;
     private final Map<PortableTable, Map<String, Long>> ids = new EnumMap<>(PortableTable.class);
     private long idsGeneration = -1;
+    /** Each table's columns, read once: the schema cannot change while the workbook is open. */
+    private final Map<PortableTable, List<String>> columns = new EnumMap<>(PortableTable.class);
 
     WorkbookRecords(Session session, AuditLog audit) {
         this.session = session;
@@ -214,7 +216,11 @@ public final class WorkbookRecords {
         Map<String, PortableTable> refs = table.references();
         Map<String, String> idColumnOf = new HashMap<>();
         refs.keySet().forEach(c -> idColumnOf.put(PortableTable.portableName(c), c));
-        List<String> known = columnNames(table.workbookTable());
+        List<String> known = columns.get(table);
+        if (known == null) {
+            known = columnNames(table.workbookTable());
+            columns.put(table, known);
+        }
         Map<String, Object> out = new LinkedHashMap<>();
         for (Map.Entry<String, Object> e : fields.entrySet()) {
             String column = idColumnOf.getOrDefault(e.getKey(), e.getKey());

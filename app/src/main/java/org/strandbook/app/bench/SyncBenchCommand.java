@@ -9,11 +9,10 @@ import java.sql.Connection;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
-import java.util.Comparator;
 import java.util.Locale;
 import java.util.concurrent.Callable;
-import java.util.stream.Stream;
 
+import org.strandbook.files.WorkInProgressFiles;
 import org.strandbook.server.LocalPostgres;
 import org.strandbook.server.PlantServer;
 import org.strandbook.server.ServerLogin;
@@ -73,7 +72,7 @@ public final class SyncBenchCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         Path dir;
         try {
-            dir = Files.createTempDirectory("strandbook-bench-sync");
+            dir = WorkInProgressFiles.scratchFolder();
         } catch (IOException e) {
             throw new UncheckedIOException("cannot make a scratch folder: " + e.getMessage(), e);
         }
@@ -142,7 +141,7 @@ public final class SyncBenchCommand implements Callable<Integer> {
         } catch (SQLException e) {
             throw new IllegalStateException("cannot measure the server: " + e.getMessage(), e);
         } finally {
-            deleteTree(dir);
+            WorkInProgressFiles.deleteTree(dir);
         }
     }
 
@@ -151,14 +150,6 @@ public final class SyncBenchCommand implements Callable<Integer> {
              ResultSet rs = st.executeQuery("SELECT pg_total_relation_size('" + table + "')")) {
             rs.next();
             return rs.getLong(1);
-        }
-    }
-
-    private static void deleteTree(Path dir) {
-        try (Stream<Path> walk = Files.walk(dir)) {
-            walk.sorted(Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
-        } catch (IOException e) {
-            // a scratch folder left behind in the temp area is harmless
         }
     }
 }

@@ -75,11 +75,10 @@ final class SyncCommand implements Callable<Integer> {
                         + resolution.keep + " for " + describe(c));
             }
             String siteName = wb.syncLedger().peek().map(SyncLedger.State::siteName)
-                    .orElse(null);
-            SiteSync.Outcome o = new SiteSync(server, wb, siteName != null ? siteName : wb.site().get().name(),
-                    new ServerProgress(spec.commandLine().getErr())).run();
-            int reported = noEvaluate ? 0 : reportStanding(server, wb, siteName != null ? siteName
-                    : wb.site().get().name());
+                    .orElseGet(() -> wb.site().get().name());
+            SiteSync.Outcome o = new SiteSync(server, wb, siteName, new ServerProgress(spec.commandLine().getErr()))
+                    .run();
+            int reported = noEvaluate ? 0 : reportStanding(server, wb, siteName);
             if (json) {
                 out.println(json(o, reported));
             } else {
