@@ -8,8 +8,6 @@ import org.strandbook.evaluation.BandUncertainty;
 import org.strandbook.evaluation.PointEvaluation;
 import org.strandbook.evaluation.PredictionSpread;
 import org.strandbook.site.WavelengthBand;
-import org.strandbook.uncertainty.BudgetInputUncertainties;
-import org.strandbook.uncertainty.MonteCarloPropagation;
 import org.strandbook.uncertainty.PathUncertainty;
 
 /**
@@ -29,9 +27,9 @@ public record PointUncertainty(Optional<PredictionSpread> spread, List<BandUncer
         bands = List.copyOf(bands);
     }
 
-    /** The engine of the intervals at {@code coverage}: the shipped input spreads, the standard Monte Carlo. */
+    /** The engine of the intervals at {@code coverage}: the one the evaluation and the window use. */
     public static PathUncertainty engine(double coverage) {
-        return new PathUncertainty(BudgetInputUncertainties.SHIPPED, MonteCarloPropagation.standard(), coverage);
+        return PathUncertainty.standard().withCoverage(coverage);
     }
 
     /**

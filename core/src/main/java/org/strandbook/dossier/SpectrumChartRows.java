@@ -62,7 +62,7 @@ final class SpectrumChartRows {
     }
 
     private static String percent(DossierContent content) {
-        return DossierText.decimal(100 * content.decisionRule().coverage(), 0) + " %";
+        return content.decisionRule().percent() + " %";
     }
 
     private static double allowedDb(DossierContent content, DossierPoint p) {

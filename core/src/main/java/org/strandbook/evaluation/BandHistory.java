@@ -107,15 +107,20 @@ final class BandHistory {
     }
 
     private double bandMean(WavelengthGrid grid, double[] lossDb) {
+        return bandMean(subBands.band(), grid, lossDb);
+    }
+
+    /** The mean loss over the measured points of {@code band}; NaN where none was measured. */
+    static double bandMean(WavelengthBand band, WavelengthGrid grid, double[] lossDb) {
         double sum = 0;
         int n = 0;
         for (int i = 0; i < grid.size(); i++) {
-            if (subBands.band().contains(grid.wavelengthNm(i)) && !Double.isNaN(lossDb[i])) {
+            if (band.contains(grid.wavelengthNm(i)) && !Double.isNaN(lossDb[i])) {
                 sum += lossDb[i];
                 n++;
             }
         }
-        return sum / n;
+        return n == 0 ? Double.NaN : sum / n;
     }
 
     /** Years until the margin is used up along the trend; +∞ when it is not shrinking or unknown. */

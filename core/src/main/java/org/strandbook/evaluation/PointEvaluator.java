@@ -36,8 +36,6 @@ import org.strandbook.throughput.ThroughputScans;
 import org.strandbook.trend.MarginForecast;
 import org.strandbook.trend.StepDetector;
 import org.strandbook.trend.TheilSenTrend;
-import org.strandbook.uncertainty.BudgetInputUncertainties;
-import org.strandbook.uncertainty.MonteCarloPropagation;
 import org.strandbook.uncertainty.PathUncertainty;
 import org.strandbook.uncertainty.PooledRepeatability;
 
@@ -61,7 +59,7 @@ public final class PointEvaluator {
     private final StepDetector steps = StepDetector.withDefaults();
     private final MarginForecast forecast = MarginForecast.withDefaults();
     private final Map<WavelengthGrid, OpticsCache> caches = new ConcurrentHashMap<>();
-    private final Map<Double, PathUncertainty> engines = new ConcurrentHashMap<>();
+    private final PathUncertainty engine = PathUncertainty.standard();
 
     public PointEvaluator(ScanPairing pairing, OneCordThroughput throughput, DeviationDiagnoser diagnoser) {
         this.pairing = pairing;
@@ -155,7 +153,7 @@ public final class PointEvaluator {
         boolean onInterval = rule.onInterval();
         if (onInterval) {
             try {
-                spreads = BandUncertainty.of(predicted, bands, uncertaintyEngine(rule.coverage()));
+                spreads = BandUncertainty.of(predicted, bands, engine.withCoverage(rule.coverage()));
             } catch (IllegalArgumentException e) {
                 onInterval = false;
                 problems.add("no coverage interval for this point's prediction (" + e.getMessage()
@@ -217,12 +215,6 @@ public final class PointEvaluator {
         }
         return new PointEvaluation(in.point(), status, predicted, Optional.of(latestPair), Optional.of(latest),
                 verdicts, diagnosis, trends, problems, intervals);
-    }
-
-    /** The engine of the prediction's interval at {@code coverage}: one per coverage, kept. */
-    private PathUncertainty uncertaintyEngine(double coverage) {
-        return engines.computeIfAbsent(coverage, p -> new PathUncertainty(BudgetInputUncertainties.SHIPPED,
-                MonteCarloPropagation.standard().withGenerator(MonteCarloPropagation.Generator.SPLITMIX64), p));
     }
 
     private ThroughputResult measure(ScanPair pair, SpectrumSource spectra, Map<ScaledScan, RawSpectrum> fetched,

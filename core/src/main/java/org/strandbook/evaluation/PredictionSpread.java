@@ -100,8 +100,8 @@ public record PredictionSpread(WavelengthGrid grid, double[] predictedLossDb, do
     public static PredictionSpread of(PredictedBudget predicted, PathUncertainty engine, Progress progress) {
         Objects.requireNonNull(predicted, "predicted");
         Objects.requireNonNull(progress, "progress");
-        PathUncertainty stationEngine = engine.trials() > STATION_TRIALS ? engine.withTrials(STATION_TRIALS) : engine;
         Objects.requireNonNull(engine, "engine");
+        PathUncertainty stationEngine = engine.trials() > STATION_TRIALS ? engine.withTrials(STATION_TRIALS) : engine;
         WavelengthGrid grid = predicted.grid();
         int n = grid.size();
         double[] y = predicted.totalLossDb();

@@ -73,7 +73,7 @@ final class ReferenceRepeats {
                 double[] loss = paired.latest().filter(p -> p.exposure().judgeable())
                         .map(p -> measure.apply(p).lossDb()).orElse(null);
                 for (int b = 0; b < bands.size(); b++) {
-                    levels.get(b)[g + 1] = loss == null ? Double.NaN : -meanOver(grid, loss, bands.get(b));
+                    levels.get(b)[g + 1] = loss == null ? Double.NaN : -BandHistory.bandMean(bands.get(b), grid, loss);
                 }
             }
             for (int b = 0; b < bands.size(); b++) {
@@ -85,17 +85,5 @@ final class ReferenceRepeats {
             out.add(PooledRepeatability.of(groups));
         }
         return out;
-    }
-
-    private static double meanOver(WavelengthGrid grid, double[] lossDb, WavelengthBand band) {
-        double sum = 0;
-        int n = 0;
-        for (int i = 0; i < grid.size(); i++) {
-            if (band.contains(grid.wavelengthNm(i)) && !Double.isNaN(lossDb[i])) {
-                sum += lossDb[i];
-                n++;
-            }
-        }
-        return n == 0 ? Double.NaN : sum / n;
     }
 }

@@ -8,6 +8,8 @@ import java.util.Optional;
 import org.strandbook.site.Analyzer;
 import org.strandbook.site.Catalog;
 import org.strandbook.site.InspectionHistory;
+import org.strandbook.site.MaintenanceAction;
+import org.strandbook.site.MaintenanceKind;
 import org.strandbook.site.MeasurementPoint;
 import org.strandbook.site.PathDirection;
 import org.strandbook.site.PathLeg;
@@ -33,14 +35,25 @@ public final class WorkbookInputs {
                                  Catalog catalog, List<ScanRecord> scans) {
         String tag = point.tag();
         InspectionHistory inspected = new InspectionHistory(workbook.inspections().list(tag));
+        List<MaintenanceAction> actions = workbook.maintenance().list(tag);
         PathTimeline history = when -> {
             PathTimeline.Legs then = legs(tag, workbook.paths().legsAt(tag, when), inspected, when);
-            return new PathTimeline.Legs(then.send(), then.ret(),
-                    Optional.of(workbook.maintenance().probeTypeAt(tag, when)));
+            return new PathTimeline.Legs(then.send(), then.ret(), Optional.of(probeTypeAt(point, actions, when)));
         };
         PathTimeline.Legs today = legs(tag, workbook.paths().legs(tag), inspected, Instant.MAX);
         return new PointInputs(site, point, analyzer, today.send(), today.ret(), catalog, scans,
-                id -> workbook.scans().spectrum(id), history, workbook.maintenance().list(tag));
+                id -> workbook.scans().spectrum(id), history, actions);
+    }
+
+    /**
+     * The probe type a scan taken at {@code when} went through, from the actions already read: the
+     * type removed by the first probe replacement after it, or the point's probe type today.
+     */
+    private static String probeTypeAt(MeasurementPoint point, List<MaintenanceAction> actions, Instant when) {
+        return actions.stream()
+                .filter(a -> a.kind() == MaintenanceKind.REPLACE_PROBE && !a.elementLabel().isEmpty()
+                        && a.performedAt().isAfter(when))
+                .findFirst().map(MaintenanceAction::elementLabel).orElse(point.probeTypeCode());
     }
 
     /** Send and return legs from a point's legs, each joint graded as inspected by {@code when}. */

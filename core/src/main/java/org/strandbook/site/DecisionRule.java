@@ -115,6 +115,11 @@ public record DecisionRule(Kind kind, double coverage, double guardBandDb) {
 
     /** The coverage as a percentage without trailing zeros: "95", "99.7". */
     public String percent() {
+        return percent(coverage);
+    }
+
+    /** A coverage probability as a percentage, without a needless decimal: 95, 99.7. */
+    public static String percent(double coverage) {
         double p = 100 * coverage;
         return p == Math.rint(p) ? Long.toString((long) p) : String.format(Locale.ROOT, "%.1f", p);
     }

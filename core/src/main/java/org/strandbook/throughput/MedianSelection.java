@@ -100,7 +100,7 @@ final class MedianSelection {
             scratch[gathered] = v;
             gathered += (b >= first ? 1 : 0) & (b <= last ? 1 : 0);
         }
-        double upper = select(scratch, gathered, upperRank - below);
+        double upper = OrderStatistics.select(scratch, 0, gathered - 1, upperRank - below);
         if (lowerRank == upperRank) {
             return upper;
         }
@@ -121,7 +121,7 @@ final class MedianSelection {
     }
 
     private static double wholeArrayMedian(double[] values, int n) {
-        double upper = select(values, n, n / 2);
+        double upper = OrderStatistics.select(values, 0, n - 1, n / 2);
         if (n % 2 == 1) {
             return upper;
         }
@@ -130,12 +130,5 @@ final class MedianSelection {
             lower = Math.max(lower, values[i]);
         }
         return lower + 0.5 * (upper - lower);
-    }
-
-    /**
-     * The k-th smallest of a[0..length-1] (k 0-based); afterwards a[0..k-1] ≤ a[k] ≤ a[k+1..].
-     */
-    private static double select(double[] a, int length, int k) {
-        return OrderStatistics.select(a, 0, length - 1, k);
     }
 }

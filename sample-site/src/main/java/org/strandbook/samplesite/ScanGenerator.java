@@ -184,7 +184,7 @@ public final class ScanGenerator {
     private InjectedFault describe(DemoPlant.DemoPoint dp, double dirtyDb, double bendRadiusMm, double highOhPpm,
                                    double[] lastFaultDb, WavelengthGrid axis) {
         return switch (dp.fault()) {
-            case NONE -> new InjectedFault(DemoPlant.Fault.NONE, "", dp.jointExcessDb() * joints(dp), Double.NaN);
+            case NONE -> new InjectedFault(DemoPlant.Fault.NONE, "", dp.jointExcessDb() * (dp.send().joints().size() + dp.ret().joints().size()), Double.NaN);
             case DIRTY_CONNECTOR -> new InjectedFault(dp.fault(), dp.faultyElement(), dirtyDb, Double.NaN);
             case TIGHT_BEND -> {
                 FiberType f = catalog.fiber(trunkFiber(dp));
@@ -203,11 +203,6 @@ public final class ScanGenerator {
             case BROKEN_FIBER -> new InjectedFault(dp.fault(), dp.faultyElement(), Double.POSITIVE_INFINITY,
                     Double.NaN);
         };
-    }
-
-    private static int joints(DemoPlant.DemoPoint dp) {
-        return (int) (dp.send().elements().stream().filter(e -> e instanceof Joint).count()
-                + dp.ret().elements().stream().filter(e -> e instanceof Joint).count());
     }
 
     private static String trunkFiber(DemoPlant.DemoPoint dp) {

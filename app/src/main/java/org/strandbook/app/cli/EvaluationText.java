@@ -221,7 +221,7 @@ final class EvaluationText {
     }
 
     private static String percent(double coverage) {
-        return DecisionRule.FIXED.withCoverage(coverage).percent();
+        return DecisionRule.percent(coverage);
     }
 
     private static String basisWord(BasisKind basis) {

@@ -3,7 +3,6 @@ package org.strandbook.app.ui.plot;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
-import java.util.Optional;
 
 import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
@@ -77,11 +76,6 @@ public final class SpectrumPlotModel extends PlotModel<SpectrumPlotModel.PlotLin
     /** The shaded bands drawn behind the lines (none, or the prediction's coverage interval). */
     public ReadOnlyObjectProperty<List<PlotBand>> bandsProperty() {
         return bands.getReadOnlyProperty();
-    }
-
-    /** The band shown now, if any. */
-    public Optional<CoverageBand> band() {
-        return Optional.ofNullable(band);
     }
 
     /** Shades {@code shown} behind the curves; {@code null} removes the band. */

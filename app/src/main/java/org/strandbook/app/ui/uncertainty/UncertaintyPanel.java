@@ -1,20 +1,19 @@
 package org.strandbook.app.ui.uncertainty;
 
 import java.util.Locale;
-import java.util.function.Function;
 
-import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.geometry.Insets;
 import javafx.geometry.Pos;
 import javafx.scene.Node;
 import javafx.scene.control.Button;
 import javafx.scene.control.Label;
-import javafx.scene.control.TableColumn;
 import javafx.scene.control.TableView;
 import javafx.scene.control.TextField;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
+
+import org.strandbook.app.ui.sheet.TextColumns;
 
 /**
  * The Uncertainty tab: per band of the selected point, which inputs make its prediction uncertain
@@ -34,17 +33,17 @@ public final class UncertaintyPanel {
         table.setId("uncertainty-table");
         table.setItems(vm.rows());
         table.setPlaceholder(new Label("No uncertainty budget: select a point with a prediction"));
-        table.getColumns().add(column("uncertainty-band", "Band", 130, UncertaintyRow::band));
-        table.getColumns().add(column("uncertainty-at", "At (nm)", 60, r -> f("%.0f", r.atNm())));
-        table.getColumns().add(column("uncertainty-input", "Input", 210, UncertaintyRow::input));
-        table.getColumns().add(column("uncertainty-u", "Std. uncertainty", 110,
+        table.getColumns().add(TextColumns.of("uncertainty-band", "Band", 130, UncertaintyRow::band));
+        table.getColumns().add(TextColumns.of("uncertainty-at", "At (nm)", 60, r -> f("%.0f", r.atNm())));
+        table.getColumns().add(TextColumns.of("uncertainty-input", "Input", 210, UncertaintyRow::input));
+        table.getColumns().add(TextColumns.of("uncertainty-u", "Std. uncertainty", 110,
                 r -> f("%.3g", r.standardUncertainty()) + " " + r.unit()));
-        table.getColumns().add(column("uncertainty-sensitivity", "Sensitivity", 100,
+        table.getColumns().add(TextColumns.of("uncertainty-sensitivity", "Sensitivity", 100,
                 r -> f("%.3g", r.sensitivity()) + " " + r.sensitivityUnit()));
-        table.getColumns().add(column("uncertainty-contribution", "Contribution (dB)", 125,
+        table.getColumns().add(TextColumns.of("uncertainty-contribution", "Contribution (dB)", 125,
                 r -> f("%.3f", r.contributionDb())));
-        table.getColumns().add(column("uncertainty-share", "Share (%)", 70, r -> f("%.1f", 100 * r.share())));
-        table.getColumns().add(column("uncertainty-basis", "Basis", 420, UncertaintyRow::basis));
+        table.getColumns().add(TextColumns.of("uncertainty-share", "Share (%)", 70, r -> f("%.1f", 100 * r.share())));
+        table.getColumns().add(TextColumns.of("uncertainty-basis", "Basis", 420, UncertaintyRow::basis));
 
         TextField allowed = field("uncertainty-allowed-db", 60);
         allowed.textProperty().bindBidirectional(vm.allowedLossTextProperty());
@@ -82,15 +81,5 @@ public final class UncertaintyPanel {
 
     private static String f(String format, double v) {
         return String.format(Locale.ROOT, format, v);
-    }
-
-    private static TableColumn<UncertaintyRow, String> column(String id, String title, double width,
-            Function<UncertaintyRow, String> value) {
-        TableColumn<UncertaintyRow, String> c = new TableColumn<>(title);
-        c.setId(id);
-        c.setPrefWidth(width);
-        c.setSortable(false);
-        c.setCellValueFactory(cell -> new ReadOnlyStringWrapper(value.apply(cell.getValue())).getReadOnlyProperty());
-        return c;
     }
 }

@@ -74,10 +74,6 @@ public final class UncertaintyViewModel {
         this.engines = engines;
     }
 
-    /** One engine for every job, whatever the site. */
-    public UncertaintyViewModel(TaskExecutor tasks, PathUncertainty engine) {
-        this(tasks, () -> engine);
-    }
 
     /** Per band, its uncertainty budget rows, largest contribution first. */
     public ObservableList<UncertaintyRow> rows() {

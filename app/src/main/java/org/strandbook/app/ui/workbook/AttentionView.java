@@ -16,6 +16,8 @@ import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
 
+import org.strandbook.app.ui.sheet.TextColumns;
+
 /**
  * The site's attention view: above, the failing and review points with their findings and
  * follow-ups; below, every point by how soon its margin runs out. Double-click or Enter opens a

@@ -15,6 +15,7 @@ import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 
 import org.strandbook.app.ui.task.TaskExecutor;
+import org.strandbook.evaluation.Status;
 
 /**
  * The site's attention view: the failing and review points with their findings and follow-ups,
@@ -86,7 +87,7 @@ public final class AttentionViewModel {
             ranking.setAll(rows);
             needing.setAll(rows.stream().filter(AttentionRow::needsAttention).toList());
             stale.set(false);
-            long failing = rows.stream().filter(r -> r.statusText().endsWith("FAIL")).count();
+            long failing = rows.stream().filter(r -> r.status().filter(st -> st == Status.FAIL).isPresent()).count();
             summary.set(String.format(Locale.ROOT, "%d points: %d need attention (%d failing); most urgent: %s",
                     rows.size(), needing.size(), failing, rows.isEmpty() ? "none" : rows.get(0).pointTag()));
         }, e -> {

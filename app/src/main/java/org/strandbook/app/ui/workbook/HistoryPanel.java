@@ -18,6 +18,7 @@ import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
 import javafx.stage.Window;
 
+import org.strandbook.app.ui.sheet.TextColumns;
 import org.strandbook.handover.PointEvent;
 
 /**
