@@ -41,7 +41,7 @@ public record BandUncertainty(WavelengthBand band, LossUncertainty atCentre) {
         List<BandUncertainty> out = new ArrayList<>(bands.size());
         for (WavelengthBand band : bands) {
             out.add(new BandUncertainty(band, engine.at(predicted.budget(), grid.nearestIndex(band.centreNm()),
-                    predicted.jointSources())));
+                    predicted.allowances())));
         }
         return out;
     }

@@ -17,10 +17,12 @@ import org.strandbook.site.Bend;
 import org.strandbook.site.CableSegment;
 import org.strandbook.site.Catalog;
 import org.strandbook.site.Joint;
-import org.strandbook.site.LossBasis;
 import org.strandbook.site.MeasurementPoint;
 import org.strandbook.site.PathLeg;
-import org.strandbook.uncertainty.JointSource;
+import org.strandbook.site.ProbeType;
+import org.strandbook.uncertainty.BudgetInputUncertainties;
+import org.strandbook.uncertainty.ElementAllowances;
+import org.strandbook.uncertainty.PathAllowances;
 
 /**
  * Builds a point's predicted loop budget from what the workbook records.
@@ -36,25 +38,29 @@ import org.strandbook.uncertainty.JointSource;
 public final class PointBudgetBuilder {
 
     private final Catalog catalog;
+    private final SpreadResolver spreads;
 
     public PointBudgetBuilder(Catalog catalog) {
         this.catalog = catalog;
+        this.spreads = new SpreadResolver(catalog, BudgetInputUncertainties.SHIPPED);
     }
 
     /** The predicted budget of the point's loop on the cache's grid. */
     public PredictedBudget build(MeasurementPoint point, PathLeg send, PathLeg ret, OpticsCache cache) {
         List<String> notes = new ArrayList<>();
         List<PathElement> elements = new ArrayList<>();
-        List<JointSource> jointSources = new ArrayList<>();
-        addLeg(send, elements, jointSources, notes);
-        elements.add(OpticsMapping.probe(catalog.probe(point.probeTypeCode())));
-        addLeg(ret, elements, jointSources, notes);
+        List<ElementAllowances> allowances = new ArrayList<>();
+        addLeg(send, elements, allowances, notes);
+        ProbeType probe = catalog.probe(point.probeTypeCode());
+        elements.add(OpticsMapping.probe(probe));
+        allowances.add(spreads.probe(probe));
+        addLeg(ret, elements, allowances, notes);
         LossBudget budget = LossBudget.of(new LightPath(point.tag(), elements), cache);
         notes.addAll(budget.notes());
-        return new PredictedBudget(point.tag(), budget, notes, jointSources);
+        return new PredictedBudget(point.tag(), budget, notes, new PathAllowances(allowances));
     }
 
-    private void addLeg(PathLeg leg, List<PathElement> out, List<JointSource> jointSources, List<String> notes) {
+    private void addLeg(PathLeg leg, List<PathElement> out, List<ElementAllowances> allowances, List<String> notes) {
         List<org.strandbook.site.PathElement> items = leg.elements();
         if (leg.segments().isEmpty()) {
             throw new IllegalArgumentException("point " + leg.pointTag() + ": the " + leg.direction().name()
@@ -63,13 +69,15 @@ public final class PointBudgetBuilder {
         for (int i = 0; i < items.size(); i++) {
             org.strandbook.site.PathElement item = items.get(i);
             if (item instanceof CableSegment segment) {
-                out.add(fiberSegment(segment, notes));
+                FiberSegment fiber = fiberSegment(segment, notes);
+                out.add(fiber);
+                allowances.add(spreads.segment(segment, fiber.bendRadiusMm().orElse(0)));
             } else if (item instanceof Joint joint) {
                 FiberSpec from = fiberNear(items, i, -1);
                 FiberSpec to = fiberNear(items, i, +1);
                 out.add(new JointElement(joint.label(), from == null ? to : from, to == null ? from : to,
                         OpticsMapping.allowance(joint, catalog)));
-                jointSources.add(jointSource(joint));
+                allowances.add(spreads.joint(joint));
             }
         }
     }
@@ -87,16 +95,6 @@ public final class PointBudgetBuilder {
         }
         return new FiberSegment(segment.label(), spec, segment.lengthM(), OptionalDouble.of(tightest.radiusMm()),
                 recorded);
-    }
-
-    /** A measured loss carries its reading's uncertainty; an assumed one its connector type's range. */
-    private JointSource jointSource(Joint joint) {
-        if (joint.lossDb().isPresent() && joint.lossBasis() == LossBasis.MEASURED) {
-            return JointSource.MEASURED;
-        }
-        boolean airGap = catalog.connector(joint.connectorTypeA()).airGap()
-                || catalog.connector(joint.connectorTypeB()).airGap();
-        return airGap ? JointSource.ASSUMED_AIR_GAP : JointSource.ASSUMED_CONTACT;
     }
 
     /** The fiber of the nearest cable segment before (step −1) or after (+1) position {@code i}. */

@@ -1,11 +1,12 @@
 package org.strandbook.evaluation;
 
 import java.util.List;
+import java.util.Objects;
 
 import org.strandbook.optics.WavelengthGrid;
 import org.strandbook.optics.path.Contribution;
 import org.strandbook.optics.path.LossBudget;
-import org.strandbook.uncertainty.JointSource;
+import org.strandbook.uncertainty.PathAllowances;
 
 /**
  * The predicted loss of one measurement point's loop (send leg, probe, return leg) on the
@@ -14,14 +15,14 @@ import org.strandbook.uncertainty.JointSource;
  * @param pointTag the point
  * @param budget   the optics engine's budget of the loop
  * @param notes    what the prediction assumed or flagged (bend radii, missing data), in words
- * @param jointSources what each joint's loss rests on (type, air gap, measured), in path order,
- *        for the prediction's uncertainty
+ * @param allowances every element's input allowances (its own, its catalog row's or the shipped
+ *        default), in path order, for the prediction's uncertainty
  */
-public record PredictedBudget(String pointTag, LossBudget budget, List<String> notes, List<JointSource> jointSources) {
+public record PredictedBudget(String pointTag, LossBudget budget, List<String> notes, PathAllowances allowances) {
 
     public PredictedBudget {
         notes = List.copyOf(notes);
-        jointSources = List.copyOf(jointSources);
+        Objects.requireNonNull(allowances, "allowances");
     }
 
     public WavelengthGrid grid() {

@@ -108,7 +108,7 @@ public record PredictionSpread(WavelengthGrid grid, double[] predictedLossDb, do
         double[] uc = new double[n];
         double[][] shares = new double[n][];
         for (int i = 0; i < n; i++) {
-            double[] contributions = engine.contributionsDb(predicted.budget(), i, predicted.jointSources());
+            double[] contributions = engine.contributionsDb(predicted.budget(), i, predicted.allowances());
             double variance = 0;
             for (double c : contributions) {
                 variance += c * c;
@@ -126,7 +126,7 @@ public record PredictionSpread(WavelengthGrid grid, double[] predictedLossDb, do
         double[] stationLow = new double[at.length];
         double[] stationHigh = new double[at.length];
         for (int s = 0; s < at.length; s++) {
-            LossUncertainty u = stationEngine.at(predicted.budget(), at[s], predicted.jointSources());
+            LossUncertainty u = stationEngine.at(predicted.budget(), at[s], predicted.allowances());
             stationNm[s] = grid.wavelengthNm(at[s]);
             stationLow[s] = u.budget().interval().low();
             stationHigh[s] = u.budget().interval().high();

@@ -2,6 +2,7 @@ package org.strandbook.site;
 
 import java.util.Comparator;
 import java.util.List;
+import java.util.Set;
 
 /**
  * A catalog fiber type (multimode step index).
@@ -16,10 +17,11 @@ import java.util.List;
  * @param ohGrade       low-OH or high-OH grade
  * @param ohPpm         OH content, ppm by weight
  * @param datasheet     datasheet attenuation points, ascending wavelength; empty uses the model alone
+ * @param spreads       OH content and attenuation spreads, if the site states them
  */
 public record FiberType(String code, String description, double coreUm, double claddingUm, double bufferUm,
                         double na, String coreMaterial, OhGrade ohGrade, double ohPpm,
-                        List<AttenuationPoint> datasheet) {
+                        List<AttenuationPoint> datasheet, StatedSpreads spreads) {
 
     public FiberType {
         code = Require.text(code, "fiber type code");
@@ -38,5 +40,29 @@ public record FiberType(String code, String description, double coreUm, double c
         ohGrade = ohGrade == null ? OhGrade.LOW_OH : ohGrade;
         Require.nonNegative(ohPpm, "fiber " + code + ": OH content (ppm)");
         datasheet = datasheet.stream().sorted(Comparator.comparingDouble(AttenuationPoint::wavelengthNm)).toList();
+        spreads = spreads == null ? StatedSpreads.NONE : spreads.requireOnly(
+                Set.of(SpreadInput.OH_CONTENT, SpreadInput.ATTENUATION), "fiber type " + code);
+        StatedSpread oh = spreads.of(SpreadInput.OH_CONTENT).orElse(null);
+        if (oh != null && oh.form() == StatedSpread.Form.RANGE && !(oh.low() <= ohPpm && ohPpm <= oh.high())) {
+            throw new IllegalArgumentException("fiber " + code + ": OH content " + ohPpm + " ppm lies outside its"
+                    + " stated range " + oh);
+        }
+    }
+
+    /** A fiber type with no stated spread: its OH content and attenuation take the shipped defaults. */
+    public FiberType(String code, String description, double coreUm, double claddingUm, double bufferUm, double na,
+                     String coreMaterial, OhGrade ohGrade, double ohPpm, List<AttenuationPoint> datasheet) {
+        this(code, description, coreUm, claddingUm, bufferUm, na, coreMaterial, ohGrade, ohPpm, datasheet,
+                StatedSpreads.NONE);
+    }
+
+    public FiberType withSpreads(StatedSpreads stated) {
+        return new FiberType(code, description, coreUm, claddingUm, bufferUm, na, coreMaterial, ohGrade, ohPpm,
+                datasheet, stated);
+    }
+
+    public FiberType withDatasheet(List<AttenuationPoint> points) {
+        return new FiberType(code, description, coreUm, claddingUm, bufferUm, na, coreMaterial, ohGrade, ohPpm,
+                points, spreads);
     }
 }

@@ -41,7 +41,7 @@ public final class InspectionHistory {
             if (e instanceof Joint j) {
                 Optional<Inspection> last = latest(j.label(), at);
                 out.add(last.isEmpty() ? j : new Joint(j.label(), j.connectorTypeA(), j.connectorTypeB(),
-                        last.get().grade(), j.lossDb(), j.lossBasis()));
+                        last.get().grade(), j.lossDb(), j.lossBasis(), j.spreads()));
             } else {
                 out.add(e);
             }

@@ -14,6 +14,7 @@ import org.strandbook.site.FiberType;
 import org.strandbook.site.OhGrade;
 import org.strandbook.site.ProbeKind;
 import org.strandbook.site.ProbeType;
+import org.strandbook.site.SpreadInput;
 
 /**
  * The workbook's catalogs of fiber types (with their datasheet attenuation points), connector types
@@ -22,12 +23,17 @@ import org.strandbook.site.ProbeType;
  */
 public final class CatalogRepository {
 
+    private static final SpreadInput[] FIBER_SPREADS = {SpreadInput.OH_CONTENT, SpreadInput.ATTENUATION};
+    private static final SpreadInput[] CONNECTOR_SPREADS = {SpreadInput.CONNECTOR_LOSS};
+    private static final SpreadInput[] PROBE_SPREADS = {SpreadInput.PROBE_FIXED_LOSS};
+
     private static final String SELECT_FIBER = "SELECT id, code, description, core_um, cladding_um, buffer_um, na, "
-            + "core_material, oh_grade, oh_ppm FROM fiber_type";
+            + "core_material, oh_grade, oh_ppm" + SpreadColumns.list(FIBER_SPREADS) + " FROM fiber_type";
     private static final String SELECT_CONNECTOR =
-            "SELECT code, description, family, typical_loss_db, air_gap FROM connector_type";
+            "SELECT code, description, family, typical_loss_db, air_gap" + SpreadColumns.list(CONNECTOR_SPREADS)
+                    + " FROM connector_type";
     private static final String SELECT_PROBE = "SELECT code, description, kind, window_material, window_faces, "
-            + "optical_path_mm, fixed_loss_db FROM probe_type";
+            + "optical_path_mm, fixed_loss_db" + SpreadColumns.list(PROBE_SPREADS) + " FROM probe_type";
 
     private final Session session;
     private final AuditLog audit;
@@ -61,9 +67,8 @@ public final class CatalogRepository {
             RowImage before = audit.capture(AuditedTable.FIBER_TYPE, id).orElseThrow();
             try (PreparedStatement ps = session.connection().prepareStatement("UPDATE fiber_type SET code = ?, "
                     + "description = ?, core_um = ?, cladding_um = ?, buffer_um = ?, na = ?, core_material = ?, "
-                    + "oh_grade = ?, oh_ppm = ? WHERE id = ?")) {
-                bindFiber(ps, fiber);
-                ps.setLong(10, id);
+                    + "oh_grade = ?, oh_ppm = ?" + SpreadColumns.assignments(FIBER_SPREADS) + " WHERE id = ?")) {
+                ps.setLong(bindFiber(ps, fiber), id);
                 ps.executeUpdate();
             }
             audit.updated(AuditedTable.FIBER_TYPE, id, before);
@@ -80,8 +85,8 @@ public final class CatalogRepository {
 
     private long insertFiberRow(FiberType fiber) throws SQLException {
         try (PreparedStatement ps = session.connection().prepareStatement("INSERT INTO fiber_type (code, description, "
-                + "core_um, cladding_um, buffer_um, na, core_material, oh_grade, oh_ppm) "
-                + "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?) RETURNING id")) {
+                + "core_um, cladding_um, buffer_um, na, core_material, oh_grade, oh_ppm"
+                + SpreadColumns.list(FIBER_SPREADS) + ") VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?) RETURNING id")) {
             bindFiber(ps, fiber);
             long id = Columns.insertReturningId(ps);
             audit.inserted(AuditedTable.FIBER_TYPE, id);
@@ -89,7 +94,8 @@ public final class CatalogRepository {
         }
     }
 
-    private static void bindFiber(PreparedStatement ps, FiberType f) throws SQLException {
+    /** @return the next parameter index */
+    private static int bindFiber(PreparedStatement ps, FiberType f) throws SQLException {
         ps.setString(1, f.code());
         ps.setString(2, f.description());
         ps.setDouble(3, f.coreUm());
@@ -99,6 +105,7 @@ public final class CatalogRepository {
         ps.setString(7, f.coreMaterial());
         ps.setString(8, f.ohGrade().name());
         ps.setDouble(9, f.ohPpm());
+        return SpreadColumns.bind(ps, 10, f.spreads(), FIBER_SPREADS);
     }
 
     private void insertDatasheet(long fiberId, List<AttenuationPoint> points) throws SQLException {
@@ -157,7 +164,7 @@ public final class CatalogRepository {
         return new FiberType(rs.getString("code"), rs.getString("description"), rs.getDouble("core_um"),
                 rs.getDouble("cladding_um"), rs.getDouble("buffer_um"), rs.getDouble("na"),
                 rs.getString("core_material"), OhGrade.valueOf(rs.getString("oh_grade")), rs.getDouble("oh_ppm"),
-                datasheet(rs.getLong("id")));
+                datasheet(rs.getLong("id")), SpreadColumns.read(rs, FIBER_SPREADS));
     }
 
     /** @throws DuplicateEntryException when the code is taken */
@@ -181,9 +188,9 @@ public final class CatalogRepository {
             }
             RowImage before = audit.capture(AuditedTable.CONNECTOR_TYPE, id.getAsLong()).orElseThrow();
             try (PreparedStatement ps = session.connection().prepareStatement("UPDATE connector_type SET code = ?, "
-                    + "description = ?, family = ?, typical_loss_db = ?, air_gap = ? WHERE id = ?")) {
-                bindConnector(ps, connector);
-                ps.setLong(6, id.getAsLong());
+                    + "description = ?, family = ?, typical_loss_db = ?, air_gap = ?"
+                    + SpreadColumns.assignments(CONNECTOR_SPREADS) + " WHERE id = ?")) {
+                ps.setLong(bindConnector(ps, connector), id.getAsLong());
                 ps.executeUpdate();
             }
             audit.updated(AuditedTable.CONNECTOR_TYPE, id.getAsLong(), before);
@@ -193,18 +200,21 @@ public final class CatalogRepository {
 
     private void insertConnector(ConnectorType connector) throws SQLException {
         try (PreparedStatement ps = session.connection().prepareStatement("INSERT INTO connector_type (code, "
-                + "description, family, typical_loss_db, air_gap) VALUES (?, ?, ?, ?, ?) RETURNING id")) {
+                + "description, family, typical_loss_db, air_gap" + SpreadColumns.list(CONNECTOR_SPREADS)
+                + ") VALUES (?, ?, ?, ?, ?, ?, ?) RETURNING id")) {
             bindConnector(ps, connector);
             audit.inserted(AuditedTable.CONNECTOR_TYPE, Columns.insertReturningId(ps));
         }
     }
 
-    private static void bindConnector(PreparedStatement ps, ConnectorType c) throws SQLException {
+    /** @return the next parameter index */
+    private static int bindConnector(PreparedStatement ps, ConnectorType c) throws SQLException {
         ps.setString(1, c.code());
         ps.setString(2, c.description());
         ps.setString(3, c.family());
         ps.setDouble(4, c.typicalLossDb());
         Columns.setFlag(ps, 5, c.airGap());
+        return SpreadColumns.bind(ps, 6, c.spreads(), CONNECTOR_SPREADS);
     }
 
     public List<ConnectorType> connectorTypes() {
@@ -233,7 +243,7 @@ public final class CatalogRepository {
 
     private static ConnectorType connector(ResultSet rs) throws SQLException {
         return new ConnectorType(rs.getString("code"), rs.getString("description"), rs.getString("family"),
-                rs.getDouble("typical_loss_db"), Columns.flag(rs, "air_gap"));
+                rs.getDouble("typical_loss_db"), Columns.flag(rs, "air_gap"), SpreadColumns.read(rs, CONNECTOR_SPREADS));
     }
 
     /** @throws DuplicateEntryException when the code is taken */
@@ -258,9 +268,8 @@ public final class CatalogRepository {
             RowImage before = audit.capture(AuditedTable.PROBE_TYPE, id.getAsLong()).orElseThrow();
             try (PreparedStatement ps = session.connection().prepareStatement("UPDATE probe_type SET code = ?, "
                     + "description = ?, kind = ?, window_material = ?, window_faces = ?, optical_path_mm = ?, "
-                    + "fixed_loss_db = ? WHERE id = ?")) {
-                bindProbe(ps, probe);
-                ps.setLong(8, id.getAsLong());
+                    + "fixed_loss_db = ?" + SpreadColumns.assignments(PROBE_SPREADS) + " WHERE id = ?")) {
+                ps.setLong(bindProbe(ps, probe), id.getAsLong());
                 ps.executeUpdate();
             }
             audit.updated(AuditedTable.PROBE_TYPE, id.getAsLong(), before);
@@ -270,14 +279,15 @@ public final class CatalogRepository {
 
     private void insertProbe(ProbeType probe) throws SQLException {
         try (PreparedStatement ps = session.connection().prepareStatement("INSERT INTO probe_type (code, description, "
-                + "kind, window_material, window_faces, optical_path_mm, fixed_loss_db) "
-                + "VALUES (?, ?, ?, ?, ?, ?, ?) RETURNING id")) {
+                + "kind, window_material, window_faces, optical_path_mm, fixed_loss_db"
+                + SpreadColumns.list(PROBE_SPREADS) + ") VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?) RETURNING id")) {
             bindProbe(ps, probe);
             audit.inserted(AuditedTable.PROBE_TYPE, Columns.insertReturningId(ps));
         }
     }
 
-    private static void bindProbe(PreparedStatement ps, ProbeType p) throws SQLException {
+    /** @return the next parameter index */
+    private static int bindProbe(PreparedStatement ps, ProbeType p) throws SQLException {
         ps.setString(1, p.code());
         ps.setString(2, p.description());
         ps.setString(3, p.kind().name());
@@ -285,6 +295,7 @@ public final class CatalogRepository {
         ps.setInt(5, p.windowFaces());
         ps.setDouble(6, p.opticalPathMm());
         ps.setDouble(7, p.fixedLossDb());
+        return SpreadColumns.bind(ps, 8, p.spreads(), PROBE_SPREADS);
     }
 
     public List<ProbeType> probeTypes() {
@@ -314,7 +325,7 @@ public final class CatalogRepository {
     private static ProbeType probe(ResultSet rs) throws SQLException {
         return new ProbeType(rs.getString("code"), rs.getString("description"), ProbeKind.valueOf(rs.getString("kind")),
                 rs.getString("window_material"), rs.getInt("window_faces"), rs.getDouble("optical_path_mm"),
-                rs.getDouble("fixed_loss_db"));
+                rs.getDouble("fixed_loss_db"), SpreadColumns.read(rs, PROBE_SPREADS));
     }
 
     private static DuplicateEntryException duplicate(String what, String code) {

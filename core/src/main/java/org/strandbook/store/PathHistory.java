@@ -20,6 +20,7 @@ import org.strandbook.site.LossBasis;
 import org.strandbook.site.PathDirection;
 import org.strandbook.site.PathElement;
 import org.strandbook.site.PathLeg;
+import org.strandbook.site.SpreadInput;
 
 /**
  * A point's light path through time. {@code path_element} holds the path as it is now; before a
@@ -35,11 +36,13 @@ final class PathHistory {
     private static final String LATEST_CHANGE = "SELECT max(a.performed_at) FROM maintenance_action a "
             + "WHERE a.point_id = ? AND EXISTS (SELECT 1 FROM retired_path_element r WHERE r.action_id = a.id)";
     private static final String RETIRED = "SELECT direction, kind, label, fiber_code, length_m, bends, connector_a, "
-            + "connector_b, grade, loss_db, loss_basis FROM retired_path_element WHERE action_id = ? "
+            + "connector_b, grade, loss_db, loss_basis, loss_spread, length_spread, bend_spread, spread_basis "
+            + "FROM retired_path_element WHERE action_id = ? "
             + "ORDER BY direction = 'RETURN', position";
     private static final String RETIRE = "INSERT INTO retired_path_element (action_id, direction, position, kind, "
-            + "label, fiber_code, length_m, bends, connector_a, connector_b, grade, loss_db, loss_basis) "
-            + "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?) RETURNING id";
+            + "label, fiber_code, length_m, bends, connector_a, connector_b, grade, loss_db, loss_basis"
+            + SpreadColumns.list(PathRepository.ELEMENT_SPREADS)
+            + ") VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?) RETURNING id";
     private static final String ELEMENT_NOW = "SELECT 1 FROM path_element WHERE point_id = ? AND label = ? AND kind = ?";
     private static final String ELEMENT_BEFORE = "SELECT 1 FROM retired_path_element r JOIN maintenance_action a "
             + "ON a.id = r.action_id WHERE a.point_id = ? AND r.label = ? COLLATE NOCASE AND r.kind = ?";
@@ -85,10 +88,12 @@ final class PathHistory {
 
     private static PathElement retiredElement(ResultSet rs) throws SQLException {
         if ("SEGMENT".equals(rs.getString(2))) {
-            return new CableSegment(rs.getString(3), rs.getString(4), rs.getDouble(5), parseBends(rs.getString(6)));
+            return new CableSegment(rs.getString(3), rs.getString(4), rs.getDouble(5), parseBends(rs.getString(6)),
+                    SpreadColumns.read(rs, SpreadInput.LENGTH, SpreadInput.BEND_RADIUS));
         }
         return new Joint(rs.getString(3), rs.getString(7), rs.getString(8), InspectionGrade.valueOf(rs.getString(9)),
-                Columns.optionalDouble(rs, "loss_db"), LossBasis.valueOf(rs.getString(11)));
+                Columns.optionalDouble(rs, "loss_db"), LossBasis.valueOf(rs.getString(11)),
+                SpreadColumns.read(rs, SpreadInput.JOINT_LOSS));
     }
 
     /** Copies the legs under an action, each row audited. */
@@ -111,6 +116,7 @@ final class PathHistory {
                     }
                     ps.setNull(12, Types.REAL);
                     ps.setNull(13, Types.VARCHAR);
+                    SpreadColumns.bind(ps, 14, s.spreads(), PathRepository.ELEMENT_SPREADS);
                 } else if (e instanceof Joint j) {
                     ps.setString(4, "JOINT");
                     ps.setNull(6, Types.VARCHAR);
@@ -121,6 +127,7 @@ final class PathHistory {
                     ps.setString(11, j.grade().name());
                     Columns.setOptional(ps, 12, j.lossDb());
                     ps.setString(13, j.lossBasis().name());
+                    SpreadColumns.bind(ps, 14, j.spreads(), PathRepository.ELEMENT_SPREADS);
                 }
                 audit.inserted(AuditedTable.RETIRED_PATH_ELEMENT, Columns.insertReturningId(ps));
             }

@@ -21,6 +21,7 @@ import org.strandbook.site.LossBasis;
 import org.strandbook.site.PathDirection;
 import org.strandbook.site.PathElement;
 import org.strandbook.site.PathLeg;
+import org.strandbook.site.SpreadInput;
 
 /**
  * The light path of each point: a send and a return leg, each an ordered list of cable segments
@@ -29,15 +30,19 @@ import org.strandbook.site.PathLeg;
  */
 public final class PathRepository {
 
+    /** The spread columns of a path element, in the order of {@link #INSERT_ELEMENT}. */
+    static final SpreadInput[] ELEMENT_SPREADS = {SpreadInput.JOINT_LOSS, SpreadInput.LENGTH, SpreadInput.BEND_RADIUS};
+
     private static final String SELECT_ELEMENTS = "SELECT e.id, e.direction, e.kind, e.label, f.code AS fiber_code, "
-            + "e.length_m, ca.code AS connector_a, cb.code AS connector_b, e.grade, e.loss_db, e.loss_basis "
+            + "e.length_m, ca.code AS connector_a, cb.code AS connector_b, e.grade, e.loss_db, e.loss_basis, "
+            + "e.loss_spread, e.length_spread, e.bend_spread, e.spread_basis "
             + "FROM path_element e LEFT JOIN fiber_type f ON f.id = e.fiber_type_id "
             + "LEFT JOIN connector_type ca ON ca.id = e.connector_type_a_id "
             + "LEFT JOIN connector_type cb ON cb.id = e.connector_type_b_id "
             + "WHERE e.point_id = ? ORDER BY e.direction = 'RETURN', e.position";
     private static final String INSERT_ELEMENT = "INSERT INTO path_element (point_id, direction, position, kind, "
-            + "label, fiber_type_id, length_m, connector_type_a_id, connector_type_b_id, grade, loss_db, loss_basis) "
-            + "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?) RETURNING id";
+            + "label, fiber_type_id, length_m, connector_type_a_id, connector_type_b_id, grade, loss_db, loss_basis"
+            + SpreadColumns.list(ELEMENT_SPREADS) + ") VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?) RETURNING id";
     private static final String CABLE_OWNER = "SELECT p.tag, e.direction FROM path_element e "
             + "JOIN point p ON p.id = e.point_id WHERE e.kind = 'SEGMENT' AND e.label = ?";
 
@@ -109,6 +114,7 @@ public final class PathRepository {
                 ps.setNull(10, Types.VARCHAR);
                 ps.setNull(11, Types.REAL);
                 ps.setNull(12, Types.VARCHAR);
+                SpreadColumns.bind(ps, 13, s.spreads(), ELEMENT_SPREADS);
             } else if (element instanceof Joint j) {
                 ps.setString(4, "JOINT");
                 ps.setNull(6, Types.INTEGER);
@@ -118,6 +124,7 @@ public final class PathRepository {
                 ps.setString(10, j.grade().name());
                 Columns.setOptional(ps, 11, j.lossDb());
                 ps.setString(12, j.lossBasis().name());
+                SpreadColumns.bind(ps, 13, j.spreads(), ELEMENT_SPREADS);
             }
             long elementId = Columns.insertReturningId(ps);
             audit.inserted(AuditedTable.PATH_ELEMENT, elementId);
@@ -232,11 +239,12 @@ public final class PathRepository {
             long fiberId = RowKeys.fiberType(session, s.fiberTypeCode()).orElseThrow(() -> new UnknownEntryException(
                     where + " uses unknown fiber type '" + s.fiberTypeCode() + "'"));
             try (PreparedStatement ps = session.connection().prepareStatement(
-                    "UPDATE path_element SET label = ?, fiber_type_id = ?, length_m = ? WHERE id = ?")) {
+                    "UPDATE path_element SET label = ?, fiber_type_id = ?, length_m = ?"
+                            + SpreadColumns.assignments(ELEMENT_SPREADS) + " WHERE id = ?")) {
                 ps.setString(1, s.label());
                 ps.setLong(2, fiberId);
                 ps.setDouble(3, s.lengthM());
-                ps.setLong(4, elementId);
+                ps.setLong(SpreadColumns.bind(ps, 4, s.spreads(), ELEMENT_SPREADS), elementId);
                 ps.executeUpdate();
             }
             for (long bendId : RowKeys.children(session, "SELECT id FROM segment_bend WHERE element_id = ?", elementId)) {
@@ -245,15 +253,15 @@ public final class PathRepository {
             insertBends(elementId, s.bends());
         } else if (replacement instanceof Joint j) {
             try (PreparedStatement ps = session.connection().prepareStatement("UPDATE path_element SET label = ?, "
-                    + "connector_type_a_id = ?, connector_type_b_id = ?, grade = ?, loss_db = ?, loss_basis = ? "
-                    + "WHERE id = ?")) {
+                    + "connector_type_a_id = ?, connector_type_b_id = ?, grade = ?, loss_db = ?, loss_basis = ?"
+                    + SpreadColumns.assignments(ELEMENT_SPREADS) + " WHERE id = ?")) {
                 ps.setString(1, j.label());
                 ps.setLong(2, connectorId(where, j, j.connectorTypeA()));
                 ps.setLong(3, connectorId(where, j, j.connectorTypeB()));
                 ps.setString(4, j.grade().name());
                 Columns.setOptional(ps, 5, j.lossDb());
                 ps.setString(6, j.lossBasis().name());
-                ps.setLong(7, elementId);
+                ps.setLong(SpreadColumns.bind(ps, 7, j.spreads(), ELEMENT_SPREADS), elementId);
                 ps.executeUpdate();
             }
         }
@@ -278,11 +286,11 @@ public final class PathRepository {
     private PathElement element(ResultSet rs) throws SQLException {
         if ("SEGMENT".equals(rs.getString("kind"))) {
             return new CableSegment(rs.getString("label"), rs.getString("fiber_code"), rs.getDouble("length_m"),
-                    bends(rs.getLong("id")));
+                    bends(rs.getLong("id")), SpreadColumns.read(rs, SpreadInput.LENGTH, SpreadInput.BEND_RADIUS));
         }
         return new Joint(rs.getString("label"), rs.getString("connector_a"), rs.getString("connector_b"),
                 InspectionGrade.valueOf(rs.getString("grade")), Columns.optionalDouble(rs, "loss_db"),
-                LossBasis.valueOf(rs.getString("loss_basis")));
+                LossBasis.valueOf(rs.getString("loss_basis")), SpreadColumns.read(rs, SpreadInput.JOINT_LOSS));
     }
 
     private List<Bend> bends(long elementId) throws SQLException {

@@ -11,5 +11,7 @@ public enum BasisKind {
     /** A value recalled without a source at hand. */
     FROM_MEMORY,
     /** A default of our own. */
-    DESIGN_CHOICE
+    DESIGN_CHOICE,
+    /** Stated in the workbook by the site (a catalog row or one element), with its basis in its words. */
+    STATED
 }

@@ -1,7 +1,6 @@
 package org.strandbook.uncertainty;
 
 import java.util.ArrayList;
-import java.util.Iterator;
 import java.util.List;
 import java.util.Objects;
 import java.util.function.DoubleUnaryOperator;
@@ -45,13 +44,10 @@ public final class PathUncertainty {
     /** Relative step of the central difference for the bend slope: design choice. */
     private static final double BEND_STEP = 0.01;
 
-    private final BudgetInputUncertainties inputs;
     private final MonteCarloPropagation monteCarlo;
     private final double coverageProbability;
 
-    public PathUncertainty(BudgetInputUncertainties inputs, MonteCarloPropagation monteCarlo,
-            double coverageProbability) {
-        this.inputs = Objects.requireNonNull(inputs, "inputs");
+    public PathUncertainty(MonteCarloPropagation monteCarlo, double coverageProbability) {
         this.monteCarlo = Objects.requireNonNull(monteCarlo, "monteCarlo");
         if (!(coverageProbability > 0 && coverageProbability < 1)) {
             throw new IllegalArgumentException("coverage probability must lie in (0, 1), was " + coverageProbability);
@@ -59,20 +55,20 @@ public final class PathUncertainty {
         this.coverageProbability = coverageProbability;
     }
 
-    /** Shipped defaults, 95 % coverage, the standard Monte Carlo settings. */
+    /** 95 % coverage, the standard Monte Carlo settings. */
     public static PathUncertainty standard() {
-        return new PathUncertainty(BudgetInputUncertainties.SHIPPED, MonteCarloPropagation.standard()
+        return new PathUncertainty(MonteCarloPropagation.standard()
                 .withGenerator(MonteCarloPropagation.Generator.SPLITMIX64), 0.95);
     }
 
     /** The same inputs and coverage with {@code trials} Monte Carlo trials per run. */
     public PathUncertainty withTrials(int trials) {
-        return new PathUncertainty(inputs, monteCarlo.withTrials(trials), coverageProbability);
+        return new PathUncertainty(monteCarlo.withTrials(trials), coverageProbability);
     }
 
     /** The same inputs and trials at another coverage probability (a site's decision rule). */
     public PathUncertainty withCoverage(double probability) {
-        return probability == coverageProbability ? this : new PathUncertainty(inputs, monteCarlo, probability);
+        return probability == coverageProbability ? this : new PathUncertainty(monteCarlo, probability);
     }
 
     public int trials() {
@@ -86,10 +82,10 @@ public final class PathUncertainty {
     /**
      * @param budget the prediction's budget
      * @param gridIndex where on its grid
-     * @param jointSources what each joint of the path rests on, in path order (one per joint)
+     * @param allowances every element's input allowances, in path order
      */
-    public LossUncertainty at(LossBudget budget, int gridIndex, List<JointSource> jointSources) {
-        Terms terms = terms(budget, gridIndex, jointSources);
+    public LossUncertainty at(LossBudget budget, int gridIndex, PathAllowances allowances) {
+        Terms terms = terms(budget, gridIndex, allowances);
         List<SensitivityTerm> rows = terms.list().stream().map(Term::row).toList();
         UncertaintyBudget framework = LinearPropagation.propagate(terms.predictedDb(), rows, coverageProbability);
         MonteCarloResult mc = monteCarlo.propagateAdaptive(terms.distributions(), terms.model(), coverageProbability,
@@ -103,8 +99,8 @@ public final class PathUncertainty {
      * law of propagation alone (JCGM 100:2008, 5.1.3) with no Monte Carlo run: cheap enough for
      * every point of an evaluation grid. Their root sum of squares is u_c(y).
      */
-    public double[] contributionsDb(LossBudget budget, int gridIndex, List<JointSource> jointSources) {
-        return terms(budget, gridIndex, jointSources).list().stream().mapToDouble(t -> t.row().contribution())
+    public double[] contributionsDb(LossBudget budget, int gridIndex, PathAllowances allowances) {
+        return terms(budget, gridIndex, allowances).list().stream().mapToDouble(t -> t.row().contribution())
                 .toArray();
     }
 
@@ -115,58 +111,67 @@ public final class PathUncertainty {
      *
      * @param allowedLossDb the loss the loop may have there (dB)
      */
-    public Chance chanceWithin(LossBudget budget, int gridIndex, List<JointSource> jointSources,
-            double allowedLossDb) {
+    public Chance chanceWithin(LossBudget budget, int gridIndex, PathAllowances allowances, double allowedLossDb) {
         if (!Double.isFinite(allowedLossDb)) {
             throw new IllegalArgumentException("the allowed loss must be a finite number of dB, was " + allowedLossDb);
         }
-        Terms terms = terms(budget, gridIndex, jointSources);
+        Terms terms = terms(budget, gridIndex, allowances);
         return monteCarlo.chanceAtMost(terms.distributions(), terms.model(), allowedLossDb);
     }
 
-    private Terms terms(LossBudget budget, int gridIndex, List<JointSource> jointSources) {
+    private static Terms terms(LossBudget budget, int gridIndex, PathAllowances allowances) {
         double wavelengthNm = budget.grid().wavelengthNm(gridIndex);
         List<Term> terms = new ArrayList<>();
-        Iterator<JointSource> joints = jointSources.iterator();
         List<PathElement> elements = budget.path().elements();
+        if (allowances.elements().size() != elements.size()) {
+            throw new IllegalArgumentException("path '" + budget.path().name() + "' has " + elements.size()
+                    + " elements but " + allowances.elements().size() + " sets of allowances");
+        }
         for (int e = 0; e < elements.size(); e++) {
             PathElement element = elements.get(e);
+            ElementAllowances allowed = allowances.elements().get(e);
             if (element instanceof FiberSegment f) {
-                fiberTerms(f, wavelengthNm, terms);
+                fiberTerms(f, wavelengthNm, kind(allowed, ElementAllowances.Fiber.class, f), terms);
             } else if (element instanceof JointElement j) {
-                if (!joints.hasNext()) {
-                    throw new IllegalArgumentException("joint '" + j.label() + "': no source given for it");
-                }
                 double nominal = j.mechanics() instanceof ConnectorAllowance a ? a.lossDb()
                         : budget.contributions().get(e).lossDbAt(gridIndex);
-                terms.add(Term.linear(inputs.joint(joints.next()).input(j.label(), nominal, nominal), 1));
+                Allowance loss = kind(allowed, ElementAllowances.Lumped.class, j).loss();
+                terms.add(Term.linear(loss.input(j.label(), nominal, nominal), 1));
             } else if (element instanceof ProbeElement p) {
-                terms.add(Term.linear(inputs.probeFixedLoss().input(p.label(), p.fixedLossDb(), p.fixedLossDb()), 1));
+                Allowance loss = kind(allowed, ElementAllowances.Lumped.class, p).loss();
+                terms.add(Term.linear(loss.input(p.label(), p.fixedLossDb(), p.fixedLossDb()), 1));
             }
-        }
-        if (joints.hasNext()) {
-            throw new IllegalArgumentException("more joint sources than joints on path '" + budget.path().name() + "'");
         }
         return new Terms(wavelengthNm, budget.totalLossDbAt(gridIndex), terms);
     }
 
-    private void fiberTerms(FiberSegment f, double wavelengthNm, List<Term> out) {
+    private static <T extends ElementAllowances> T kind(ElementAllowances given, Class<T> expected,
+            PathElement element) {
+        if (!expected.isInstance(given)) {
+            throw new IllegalArgumentException("element '" + element.label() + "' needs " + expected.getSimpleName()
+                    .toLowerCase(java.util.Locale.ROOT) + " allowances, was given " + given);
+        }
+        return expected.cast(given);
+    }
+
+    private static void fiberTerms(FiberSegment f, double wavelengthNm, ElementAllowances.Fiber inputs,
+            List<Term> out) {
         AttenuationModel model = f.fiber().attenuation();
         double attDbPerKm = model.attenuationDbPerKm(wavelengthNm);
         double ohDbPerKm = model instanceof SilicaAttenuation s && s.ohPpm() > 0
                 ? attDbPerKm - s.withOhPpm(0).attenuationDbPerKm(wavelengthNm) : 0;
         double lengthKm = f.lengthM() * 1e-3;
-        out.add(Term.linear(inputs.fiberLength().input(f.label(), f.lengthM(), f.lengthM()), attDbPerKm * 1e-3));
+        out.add(Term.linear(inputs.length().input(f.label(), f.lengthM(), f.lengthM()), attDbPerKm * 1e-3));
         out.add(Term.linear(inputs.attenuation().input(f.label(), 1, 1), (attDbPerKm - ohDbPerKm) * lengthKm));
         if (ohDbPerKm > 0) {
             out.add(Term.linear(inputs.ohContent().input(f.label(), 1, 1), ohDbPerKm * lengthKm));
         }
         if (f.chargedBends() > 0) {
-            out.add(bendTerm(f, wavelengthNm));
+            out.add(bendTerm(f, wavelengthNm, inputs.bendRadius()));
         }
     }
 
-    private Term bendTerm(FiberSegment f, double wavelengthNm) {
+    private static Term bendTerm(FiberSegment f, double wavelengthNm, Allowance bendRadius) {
         FiberSpec fiber = f.fiber();
         double radiusMm = f.bendRadiusMm().getAsDouble();
         double n1 = fiber.coreMaterial().refractiveIndex(wavelengthNm);
@@ -175,7 +180,7 @@ public final class PathUncertainty {
                 * GlogeBend.lossPerBend(fiber.coreUm(), fiber.na(), n1, radiusMm * (1 + d), wavelengthNm).lossDb();
         double nominal = lossAt.applyAsDouble(0);
         double slope = (lossAt.applyAsDouble(BEND_STEP) - lossAt.applyAsDouble(-BEND_STEP)) / (2 * BEND_STEP);
-        UncertainInput input = inputs.bendRadius().input(f.label(), 1, 0.9);
+        UncertainInput input = bendRadius.input(f.label(), 1, 0.9);
         return new Term(new SensitivityTerm(input, slope), d -> lossAt.applyAsDouble(d) - nominal);
     }
 

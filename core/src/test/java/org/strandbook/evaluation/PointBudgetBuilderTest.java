@@ -27,7 +27,8 @@ import org.strandbook.site.PathLeg;
 import org.strandbook.site.ProbeKind;
 import org.strandbook.site.ProbeType;
 import org.strandbook.site.WavelengthBand;
-import org.strandbook.uncertainty.JointSource;
+import org.strandbook.uncertainty.BudgetInputUncertainties;
+import org.strandbook.uncertainty.ElementAllowances;
 import org.strandbook.uncertainty.PathUncertainty;
 
 /** A point's predicted budget is the sum of its parts, each from its published law. */
@@ -75,7 +76,11 @@ class PointBudgetBuilderTest {
         // Design choice: a measured reading carries its own uncertainty; a joint without a reading
         // carries its connector type's range (air gap here), whatever basis the row names.
         PredictedBudget b = measuredAndTypicalJointLoop();
-        assertEquals(List.of(JointSource.MEASURED, JointSource.ASSUMED_AIR_GAP), b.jointSources());
+        // path order: S1, J1, S2, probe, J2, R1
+        assertEquals(new ElementAllowances.Lumped(BudgetInputUncertainties.SHIPPED.measuredJoint()),
+                b.allowances().elements().get(1));
+        assertEquals(new ElementAllowances.Lumped(BudgetInputUncertainties.SHIPPED.airGapConnectorPair()),
+                b.allowances().elements().get(4));
         List<BandUncertainty> bands = BandUncertainty.of(b, POINT.bands(), PathUncertainty.standard());
         assertEquals(1, bands.size());
         assertEquals(1550, bands.get(0).atCentre().wavelengthNm(), 1e-9);

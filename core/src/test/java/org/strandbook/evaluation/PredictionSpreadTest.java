@@ -19,6 +19,7 @@ import org.strandbook.optics.path.LightPath;
 import org.strandbook.optics.path.LossBudget;
 import org.strandbook.optics.path.ProbeElement;
 import org.strandbook.uncertainty.JointSource;
+import org.strandbook.uncertainty.PathAllowances;
 import org.strandbook.uncertainty.LossUncertainty;
 import org.strandbook.uncertainty.PathUncertainty;
 
@@ -40,7 +41,7 @@ class PredictionSpreadTest {
                 new JointElement("J2", fiber, fiber, ConnectorAllowance.SMA_905_TYPICAL),
                 FiberSegment.straight("return", fiber, 30));
         return new PredictedBudget("AT-4101", LossBudget.of(path, GRID), List.of(),
-                List.of(JointSource.ASSUMED_AIR_GAP, JointSource.ASSUMED_AIR_GAP));
+                PathAllowances.shipped(path, List.of(JointSource.ASSUMED_AIR_GAP, JointSource.ASSUMED_AIR_GAP)));
     }
 
     @Test
@@ -49,7 +50,7 @@ class PredictionSpreadTest {
         // the stations' smaller trial count.
         int first = GRID.nearestIndex(1000 + 1500.0 / (PredictionSpread.EVEN_STATIONS - 1));
         LossUncertainty direct = ENGINE.withTrials(PredictionSpread.STATION_TRIALS).at(LOOP.budget(), first,
-                LOOP.jointSources());
+                LOOP.allowances());
         assertEquals(direct.budget().interval().low(), SPREAD.lowDb()[first], 1e-12);
         assertEquals(direct.budget().interval().high(), SPREAD.highDb()[first], 1e-12);
     }
@@ -62,7 +63,7 @@ class PredictionSpreadTest {
         // the interpolated ends within 5 % of the interval's width.
         for (double nm : new double[] {1240, 1383, 1420, 1700, 2150, 2210, 2300}) {
             int i = GRID.nearestIndex(nm);
-            LossUncertainty direct = ENGINE.at(LOOP.budget(), i, LOOP.jointSources());
+            LossUncertainty direct = ENGINE.at(LOOP.budget(), i, LOOP.allowances());
             double width = direct.budget().interval().width();
             assertEquals(direct.budget().interval().low(), SPREAD.lowDb()[i], 0.05 * width, nm + " nm low");
             assertEquals(direct.budget().interval().high(), SPREAD.highDb()[i], 0.05 * width, nm + " nm high");

@@ -54,7 +54,7 @@ class PathUncertaintyTest {
     void sensitivitiesAreTheSlopesOfThePredictionItself() {
         // JCGM 100:2008, 5.1.3 and its note 2: cᵢ = ∂f/∂xᵢ, which may be found numerically by
         // re-evaluating the model; here the optics engine rebuilt with the input changed.
-        LossUncertainty u = ENGINE.at(LossBudget.of(loop(100, 30, 600), GRID), AT_1380, TWO_AIR_GAPS);
+        LossUncertainty u = ENGINE.at(LossBudget.of(loop(100, 30, 600), GRID), AT_1380, shipped(loop(100, 30, 600), TWO_AIR_GAPS));
         double base = LossBudget.of(loop(100, 30, 600), GRID).totalLossDbAt(AT_1380);
         double longer = LossBudget.of(loop(101, 30, 600), GRID).totalLossDbAt(AT_1380)
                 - LossBudget.of(loop(100, 30, 600), GRID).totalLossDbAt(AT_1380);
@@ -75,7 +75,7 @@ class PathUncertaintyTest {
         // the law-of-propagation interval ±1.96·√(2·0.5²/3) = ±0.800 dB is wider (JCGM 101:2008, 9.2.3).
         LightPath shortLoop = LightPath.of("short", FiberSegment.straight("send", FIBER, 0.5), airGap("J1"),
                 airGap("J2"), FiberSegment.straight("return", FIBER, 0.5));
-        LossUncertainty u = ENGINE.at(LossBudget.of(shortLoop, GRID), AT_1050, TWO_AIR_GAPS);
+        LossUncertainty u = ENGINE.at(LossBudget.of(shortLoop, GRID), AT_1050, shipped(shortLoop, TWO_AIR_GAPS));
         double exact = new SumOfRectangles(0.5, 0.5).quantile(0.975);
         assertEquals(1 - Math.sqrt(0.05), exact, 1e-9);
         assertEquals(exact, u.highOffsetDb(), 0.01);
@@ -90,7 +90,7 @@ class PathUncertaintyTest {
         // equal spread of radius moves the loss more up than down; the Monte Carlo interval carries
         // that, the symmetric framework interval cannot. No OH in the fiber, so no other input is
         // one-sided.
-        LossUncertainty u = ENGINE.at(LossBudget.of(loop(2, 35, 0), GRID), AT_2300, TWO_AIR_GAPS);
+        LossUncertainty u = ENGINE.at(LossBudget.of(loop(2, 35, 0), GRID), AT_2300, shipped(loop(2, 35, 0), TWO_AIR_GAPS));
         assertTrue(u.budget().rows().stream().noneMatch(r -> r.input().contains("OH")));
         assertTrue(u.highOffsetDb() > -u.lowOffsetDb() + 0.05, u.lowOffsetDb() + " … " + u.highOffsetDb());
     }
@@ -99,8 +99,9 @@ class PathUncertaintyTest {
     void aMeasuredJointNarrowsTheInterval() {
         // Design choice: a joint measured on site carries its reading's 0.1 dB, not the type's range.
         LossBudget budget = LossBudget.of(loop(50, 100, 600), GRID);
-        LossUncertainty assumed = ENGINE.at(budget, AT_1050, TWO_AIR_GAPS);
-        LossUncertainty measured = ENGINE.at(budget, AT_1050, List.of(JointSource.MEASURED, JointSource.MEASURED));
+        LossUncertainty assumed = ENGINE.at(budget, AT_1050, shipped(budget.path(), TWO_AIR_GAPS));
+        LossUncertainty measured = ENGINE.at(budget, AT_1050,
+                shipped(budget.path(), List.of(JointSource.MEASURED, JointSource.MEASURED)));
         assertTrue(measured.budget().interval().width() < assumed.budget().interval().width() - 0.2);
     }
 
@@ -109,8 +110,8 @@ class PathUncertaintyTest {
         // Design choice: a missing or extra source is a wiring error, never a silent default.
         LossBudget budget = LossBudget.of(loop(50, 100, 600), GRID);
         assertThrows(IllegalArgumentException.class,
-                () -> ENGINE.at(budget, AT_2300, List.of(JointSource.MEASURED)));
-        assertThrows(IllegalArgumentException.class, () -> ENGINE.at(budget, AT_2300,
+                () -> shipped(budget.path(), List.of(JointSource.MEASURED)));
+        assertThrows(IllegalArgumentException.class, () -> shipped(budget.path(),
                 List.of(JointSource.MEASURED, JointSource.MEASURED, JointSource.MEASURED)));
     }
 
@@ -122,10 +123,10 @@ class PathUncertaintyTest {
                 airGap("J2"), FiberSegment.straight("return", FIBER, 0.5));
         LossBudget budget = LossBudget.of(shortLoop, GRID);
         double predicted = budget.totalLossDbAt(AT_1050);
-        Chance c = ENGINE.chanceWithin(budget, AT_1050, TWO_AIR_GAPS, predicted - 0.5);
+        Chance c = ENGINE.chanceWithin(budget, AT_1050, shipped(budget.path(), TWO_AIR_GAPS), predicted - 0.5);
         assertEquals(new SumOfRectangles(0.5, 0.5).cumulative(-0.5), c.probability(), 0.01);
         assertEquals(0.125, c.probability(), 0.01);
-        assertEquals(1.0, ENGINE.chanceWithin(budget, AT_1050, TWO_AIR_GAPS, predicted + 1.1).probability());
+        assertEquals(1.0, ENGINE.chanceWithin(budget, AT_1050, shipped(budget.path(), TWO_AIR_GAPS), predicted + 1.1).probability());
     }
 
     @Test
@@ -135,13 +136,17 @@ class PathUncertaintyTest {
         // ends are fixed only to its numerical tolerance δ (7.9.4), so the 97.5 % point of the
         // chance's own trials lies within δ of it.
         LossBudget budget = LossBudget.of(loop(100, 30, 600), GRID);
-        LossUncertainty u = ENGINE.at(budget, AT_2300, TWO_AIR_GAPS);
+        LossUncertainty u = ENGINE.at(budget, AT_2300, shipped(budget.path(), TWO_AIR_GAPS));
         double high = u.budget().interval().high();
         double delta = MonteCarloPropagation.numericalTolerance(u.budget().combinedStandardUncertainty(),
                 PathUncertainty.SIGNIFICANT_DIGITS);
-        Chance below = ENGINE.chanceWithin(budget, AT_2300, TWO_AIR_GAPS, high - delta);
-        Chance above = ENGINE.chanceWithin(budget, AT_2300, TWO_AIR_GAPS, high + delta);
+        Chance below = ENGINE.chanceWithin(budget, AT_2300, shipped(budget.path(), TWO_AIR_GAPS), high - delta);
+        Chance above = ENGINE.chanceWithin(budget, AT_2300, shipped(budget.path(), TWO_AIR_GAPS), high + delta);
         assertTrue(below.probability() <= 0.975 && 0.975 <= above.probability(),
                 below.probability() + " … " + above.probability());
+    }
+
+    private static PathAllowances shipped(LightPath path, List<JointSource> joints) {
+        return PathAllowances.shipped(path, joints);
     }
 }

@@ -28,6 +28,7 @@ import org.strandbook.optics.path.SpectralWindow;
 import org.strandbook.uncertainty.Allowance;
 import org.strandbook.uncertainty.BudgetInputUncertainties;
 import org.strandbook.uncertainty.Chance;
+import org.strandbook.uncertainty.PathAllowances;
 import org.strandbook.uncertainty.PathUncertainty;
 
 import picocli.CommandLine.ArgGroup;
@@ -253,7 +254,8 @@ public final class FiberCommand implements Callable<Integer> {
             throw new UsageProblem("--chance-at-nm: " + e.getMessage());
         }
         LossBudget budget = LossBudget.of(onePass(fiber), WavelengthGrid.ofNm(atNm));
-        Chance chance = PathUncertainty.standard().chanceWithin(budget, 0, List.of(), chanceWithinDb);
+        Chance chance = PathUncertainty.standard().chanceWithin(budget, 0,
+                PathAllowances.shipped(budget.path(), List.of()), chanceWithinDb);
         return new WithinChance(chanceWithinDb, atNm, budget.totalLossDbAt(0), chance);
     }
 

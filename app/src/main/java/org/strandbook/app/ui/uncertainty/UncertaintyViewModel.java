@@ -174,7 +174,7 @@ public final class UncertaintyViewModel {
         answer.set("Working out the chance\u2026");
         PathUncertainty engine = engines.get();
         tasks.submit("Chance of " + s.pointTag() + " within " + plain(limitDb) + " dB", p -> engine.chanceWithin(
-                s.budget().budget(), index, s.budget().jointSources(), limitDb), c -> {
+                s.budget().budget(), index, s.budget().allowances(), limitDb), c -> {
                     if (s.generation() == generation) {
                         answer.set(chanceText(limitDb, grid.wavelengthNm(index),
                                 s.budget().budget().totalLossDbAt(index), c));
