@@ -15,6 +15,7 @@ import org.strandbook.site.Inspection;
 import org.strandbook.site.Joint;
 import org.strandbook.site.PathElement;
 import org.strandbook.site.PathLeg;
+import org.strandbook.site.StatedSpreads;
 
 /**
  * The cable schedule as installed: every element of every leg in the order light meets it, with
@@ -37,8 +38,10 @@ final class CableScheduleRows {
                     t.number(r, DossierColumn.CABLE_POSITION, i + 1);
                     if (elements.get(i) instanceof CableSegment s) {
                         segment(t, r, s, content.catalog().findFiber(s.fiberTypeCode()));
+                        spreads(t, r, s.spreads());
                     } else if (elements.get(i) instanceof Joint j) {
                         joint(t, r, j, latest(p.inspections(), j.label()));
+                        spreads(t, r, j.spreads());
                     }
                 }
             }
@@ -89,6 +92,17 @@ final class CableScheduleRows {
         j.lossDb().ifPresent(loss -> t.number(r, DossierColumn.CABLE_LOSS_DB, loss));
         t.text(r, DossierColumn.CABLE_LOSS_BASIS, j.lossDb().isPresent() ? j.lossBasis().name()
                 : "typical of type");
+    }
+
+    /** The element's own spreads, "length ±0.5 m; bend radius ±20 %"; blank when it states none. */
+    private static void spreads(TableSheet t, Row r, StatedSpreads spreads) {
+        if (spreads.byInput().isEmpty()) {
+            return;
+        }
+        t.text(r, DossierColumn.CABLE_SPREAD, spreads.byInput().entrySet().stream()
+                .sorted(java.util.Map.Entry.comparingByKey())
+                .map(e -> e.getKey().words() + " " + e.getValue()).collect(Collectors.joining("; ")));
+        t.text(r, DossierColumn.CABLE_SPREAD_BASIS, spreads.basis());
     }
 
     /** The latest inspection of a joint, by its label. */

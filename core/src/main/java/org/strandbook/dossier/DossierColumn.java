@@ -83,6 +83,8 @@ public enum DossierColumn {
     CABLE_INSPECTED_GRADE(DossierSheet.CABLES, "inspected_grade", "Grade at last inspection", 12, Format.TEXT),
     CABLE_LOSS_DB(DossierSheet.CABLES, "loss_db", "Joint loss entered (dB)", 9, Format.DECIMAL_2),
     CABLE_LOSS_BASIS(DossierSheet.CABLES, "loss_basis", "Loss basis", 11, Format.TEXT),
+    CABLE_SPREAD(DossierSheet.CABLES, "spread", "Stated spread (±m, ±mm, ±% or ±dB, u dB)", 16, Format.WRAP),
+    CABLE_SPREAD_BASIS(DossierSheet.CABLES, "spread_basis", "Spread basis", 20, Format.WRAP),
 
     BUDGET_TAG(DossierSheet.BUDGET, "tag", "Point tag", 12, Format.TEXT),
     BUDGET_NUMBER(DossierSheet.BUDGET, "number", "Element (no.)", 9, Format.WHOLE),

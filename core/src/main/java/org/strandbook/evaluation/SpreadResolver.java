@@ -75,6 +75,24 @@ final class SpreadResolver {
                 defaults.probeFixedLoss(), probe.fixedLossDb(), "probe type " + probe.code() + ": "));
     }
 
+    /**
+     * A basis that opens with the project's own labels ("from memory", "common practice", "design
+     * choice") is counted as that kind, so a shipped or site row can say how firm its figure is.
+     */
+    static BasisKind kindOf(String basis) {
+        String b = basis.toLowerCase(java.util.Locale.ROOT);
+        if (b.startsWith("from memory")) {
+            return BasisKind.FROM_MEMORY;
+        }
+        if (b.startsWith("common practice")) {
+            return BasisKind.COMMON_PRACTICE;
+        }
+        if (b.startsWith("design choice")) {
+            return BasisKind.DESIGN_CHOICE;
+        }
+        return BasisKind.STATED;
+    }
+
     private static Allowance pick(StatedSpreads spreads, SpreadInput input, Allowance shipped, double nominal,
             String where) {
         return spreads.of(input).map(s -> stated(s, shipped, nominal, BasisKind.STATED, where + s, spreads))
@@ -87,8 +105,9 @@ final class SpreadResolver {
      * @param nominal the entered value in the spread's own unit (ppm, mm, dB), for a range or for a
      *        spread in that unit of an input the budget treats as relative
      */
-    static Allowance stated(StatedSpread spread, Allowance like, double nominal, BasisKind kind, String text,
+    static Allowance stated(StatedSpread spread, Allowance like, double nominal, BasisKind given, String text,
             StatedSpreads owner) {
+        BasisKind kind = given == BasisKind.STATED ? kindOf(owner.basis()) : given;
         String basis = text + (owner.basis().isEmpty() ? " (no basis given)" : ", " + owner.basis());
         boolean relativeInput = like.unit().equals("relative");
         double below;

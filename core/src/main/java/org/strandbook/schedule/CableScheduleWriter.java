@@ -17,6 +17,7 @@ import org.apache.poi.ss.usermodel.Sheet;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 import org.strandbook.files.FileReplacement;
 import org.strandbook.files.WorkInProgressFiles;
+import org.strandbook.site.StatedSpreads;
 import org.strandbook.site.Analyzer;
 import org.strandbook.site.AttenuationPoint;
 import org.strandbook.site.Bend;
@@ -139,6 +140,7 @@ public final class CableScheduleWriter {
                     text(r, ScheduleColumn.SEGMENT_CABLE_ID, s.label());
                     text(r, ScheduleColumn.SEGMENT_FIBER_TYPE, s.fiberTypeCode());
                     number(r, ScheduleColumn.SEGMENT_LENGTH_M, s.lengthM());
+                    spreads(r, ScheduleSheet.SEGMENTS, s.spreads());
                     for (Bend b : s.bends()) {
                         Row br = newRow(ScheduleSheet.BENDS);
                         text(br, ScheduleColumn.BEND_CABLE_ID, s.label());
@@ -156,6 +158,7 @@ public final class CableScheduleWriter {
                     text(r, ScheduleColumn.JOINT_GRADE, j.grade().name());
                     number(r, ScheduleColumn.JOINT_LOSS_DB, j.lossDb());
                     text(r, ScheduleColumn.JOINT_LOSS_BASIS, j.lossBasis().name());
+                    spreads(r, ScheduleSheet.JOINTS, j.spreads());
                 }
             }
         }
@@ -172,6 +175,7 @@ public final class CableScheduleWriter {
                 text(r, ScheduleColumn.FIBER_CORE_MATERIAL, f.coreMaterial());
                 text(r, ScheduleColumn.FIBER_OH_GRADE, f.ohGrade().name());
                 number(r, ScheduleColumn.FIBER_OH_PPM, f.ohPpm());
+                spreads(r, ScheduleSheet.FIBER_TYPES, f.spreads());
                 for (AttenuationPoint a : f.datasheet()) {
                     Row ar = newRow(ScheduleSheet.FIBER_ATTENUATION);
                     text(ar, ScheduleColumn.ATTENUATION_FIBER, f.code());
@@ -186,6 +190,7 @@ public final class CableScheduleWriter {
                 text(r, ScheduleColumn.CONNECTOR_FAMILY, c.family());
                 number(r, ScheduleColumn.CONNECTOR_TYPICAL_LOSS_DB, c.typicalLossDb());
                 text(r, ScheduleColumn.CONNECTOR_AIR_GAP, yesNo(c.airGap()));
+                spreads(r, ScheduleSheet.CONNECTOR_TYPES, c.spreads());
             }
             for (ProbeType p : added.probeTypes()) {
                 Row r = newRow(ScheduleSheet.PROBE_TYPES);
@@ -196,6 +201,18 @@ public final class CableScheduleWriter {
                 number(r, ScheduleColumn.PROBE_WINDOW_FACES, p.windowFaces());
                 number(r, ScheduleColumn.PROBE_OPTICAL_PATH_MM, p.opticalPathMm());
                 number(r, ScheduleColumn.PROBE_FIXED_LOSS_DB, p.fixedLossDb());
+                spreads(r, ScheduleSheet.PROBE_TYPES, p.spreads());
+            }
+        }
+
+        /** The sheet's spread columns and spread basis, as the row's owner states them. */
+        private void spreads(Row row, ScheduleSheet sheet, StatedSpreads spreads) {
+            for (ScheduleColumn column : sheet.columns()) {
+                if (column.spreadBasis()) {
+                    text(row, column, spreads.basis());
+                } else if (column.spread() != null) {
+                    spreads.of(column.spread()).ifPresent(s -> text(row, column, s.toString()));
+                }
             }
         }
 

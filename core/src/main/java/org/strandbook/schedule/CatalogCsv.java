@@ -6,7 +6,9 @@ import java.io.InputStreamReader;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
+import java.util.EnumMap;
 import java.util.List;
+import java.util.Map;
 import java.util.function.Function;
 
 import org.strandbook.site.ConnectorType;
@@ -14,6 +16,9 @@ import org.strandbook.site.FiberType;
 import org.strandbook.site.OhGrade;
 import org.strandbook.site.ProbeKind;
 import org.strandbook.site.ProbeType;
+import org.strandbook.site.SpreadInput;
+import org.strandbook.site.StatedSpread;
+import org.strandbook.site.StatedSpreads;
 import org.strandbook.templates.Templates;
 
 /**
@@ -38,15 +43,27 @@ final class CatalogCsv {
 
     private static FiberType fiberType(String[] f) {
         return new FiberType(f[0], f[1], num(f[2]), num(f[3]), num(f[4]), num(f[5]), f[6], OhGrade.valueOf(f[7]),
-                num(f[8]), List.of());
+                num(f[8]), List.of(), spreads(f, 9, SpreadInput.OH_CONTENT, SpreadInput.ATTENUATION));
     }
 
     private static ConnectorType connectorType(String[] f) {
-        return new ConnectorType(f[0], f[1], f[2], num(f[3]), yes(f[4]));
+        return new ConnectorType(f[0], f[1], f[2], num(f[3]), yes(f[4]), spreads(f, 5, SpreadInput.CONNECTOR_LOSS));
     }
 
     private static ProbeType probeType(String[] f) {
-        return new ProbeType(f[0], f[1], ProbeKind.valueOf(f[2]), f[3], Integer.parseInt(f[4]), num(f[5]), num(f[6]));
+        return new ProbeType(f[0], f[1], ProbeKind.valueOf(f[2]), f[3], Integer.parseInt(f[4]), num(f[5]), num(f[6]),
+                spreads(f, 7, SpreadInput.PROBE_FIXED_LOSS));
+    }
+
+    /** The spread fields from {@code first} on, one per input, then the spread basis; blank is "not stated". */
+    private static StatedSpreads spreads(String[] f, int first, SpreadInput... inputs) {
+        Map<SpreadInput, StatedSpread> stated = new EnumMap<>(SpreadInput.class);
+        for (int i = 0; i < inputs.length; i++) {
+            if (!f[first + i].isEmpty()) {
+                stated.put(inputs[i], StatedSpread.parse(f[first + i], inputs[i]));
+            }
+        }
+        return new StatedSpreads(stated, f[first + inputs.length]);
     }
 
     private static <T> List<T> read(String resource, ScheduleSheet sheet, Function<String[], T> rowReader) {

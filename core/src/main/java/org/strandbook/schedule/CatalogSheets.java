@@ -14,6 +14,7 @@ import org.strandbook.site.FiberType;
 import org.strandbook.site.OhGrade;
 import org.strandbook.site.ProbeKind;
 import org.strandbook.site.ProbeType;
+import org.strandbook.site.StatedSpreads;
 
 /**
  * The four catalog sheets, where a contractor adds fiber, connector and probe types of their own.
@@ -72,8 +73,7 @@ final class CatalogSheets {
         List<FiberType> fiberList = new ArrayList<>();
         for (FiberType f : fibers.values()) {
             List<AttenuationPoint> points = datasheets.getOrDefault(f.code(), List.of());
-            fiberList.add(new FiberType(f.code(), f.description(), f.coreUm(), f.claddingUm(), f.bufferUm(), f.na(),
-                    f.coreMaterial(), f.ohGrade(), f.ohPpm(), points));
+            fiberList.add(f.withDatasheet(points));
         }
         List<ConnectorType> connectors = connectorTypes(connectorCodes);
         List<ProbeType> probes = probeTypes(probeCodes);
@@ -102,9 +102,10 @@ final class CatalogSheets {
             String coreMaterial = row.text(ScheduleColumn.FIBER_CORE_MATERIAL);
             OhGrade ohGrade = row.choice(ScheduleColumn.FIBER_OH_GRADE, OhGrade.class, null, "OH grade");
             double ohPpm = row.number(ScheduleColumn.FIBER_OH_PPM, OH_PPM);
+            StatedSpreads spreads = row.spreads();
             if (!row.faulty()) {
-                FiberType fiber = row.guard(ScheduleColumn.FIBER_CODE, () -> new FiberType(code, description, coreUm,
-                        claddingUm, bufferUm, na, coreMaterial, ohGrade, ohPpm, List.of()));
+                FiberType fiber = row.guard(ScheduleColumn.FIBER_CODE, () -> new FiberType(code, description,
+                        coreUm, claddingUm, bufferUm, na, coreMaterial, ohGrade, ohPpm, List.of(), spreads));
                 if (fiber != null) {
                     fibers.put(code, fiber);
                 }
@@ -168,9 +169,10 @@ final class CatalogSheets {
             String family = row.requiredText(ScheduleColumn.CONNECTOR_FAMILY, "mating family");
             double lossDb = row.number(ScheduleColumn.CONNECTOR_TYPICAL_LOSS_DB, TYPICAL_LOSS_DB);
             Boolean airGap = row.yesNo(ScheduleColumn.CONNECTOR_AIR_GAP, "air gap");
+            StatedSpreads spreads = row.spreads();
             if (!row.faulty()) {
                 ConnectorType connector = row.guard(ScheduleColumn.CONNECTOR_CODE,
-                        () -> new ConnectorType(code, description, family, lossDb, airGap));
+                        () -> new ConnectorType(code, description, family, lossDb, airGap, spreads));
                 if (connector != null) {
                     connectors.add(connector);
                 }
@@ -194,9 +196,10 @@ final class CatalogSheets {
             int faces = row.whole(ScheduleColumn.PROBE_WINDOW_FACES, WINDOW_FACES);
             double pathMm = row.number(ScheduleColumn.PROBE_OPTICAL_PATH_MM, OPTICAL_PATH_MM);
             double fixedLossDb = row.number(ScheduleColumn.PROBE_FIXED_LOSS_DB, FIXED_LOSS_DB);
+            StatedSpreads spreads = row.spreads();
             if (!row.faulty()) {
                 ProbeType probe = row.guard(ScheduleColumn.PROBE_CODE,
-                        () -> new ProbeType(code, description, kind, window, faces, pathMm, fixedLossDb));
+                        () -> new ProbeType(code, description, kind, window, faces, pathMm, fixedLossDb, spreads));
                 if (probe != null) {
                     probes.add(probe);
                 }

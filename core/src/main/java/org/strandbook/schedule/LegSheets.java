@@ -19,6 +19,7 @@ import org.strandbook.site.LossBasis;
 import org.strandbook.site.PathDirection;
 import org.strandbook.site.PathElement;
 import org.strandbook.site.PathLeg;
+import org.strandbook.site.StatedSpreads;
 
 /**
  * The sheets that describe the light paths: cable segments, their bends, and joints, placed in
@@ -51,7 +52,8 @@ final class LegSheets {
     }
 
     /** A segment as entered; becomes a {@link CableSegment} once its bends are known. */
-    private record SegmentDraft(String cableId, String fiberTypeCode, double lengthM) implements Draft {
+    private record SegmentDraft(String cableId, String fiberTypeCode, double lengthM, StatedSpreads spreads)
+            implements Draft {
     }
 
     private record JointDraft(Joint joint) implements Draft {
@@ -103,7 +105,7 @@ final class LegSheets {
             for (Entry e : ordered) {
                 if (e.draft() instanceof SegmentDraft s) {
                     elements.add(new CableSegment(s.cableId(), s.fiberTypeCode(), s.lengthM(),
-                            bends.getOrDefault(s.cableId(), List.of())));
+                            bends.getOrDefault(s.cableId(), List.of()), s.spreads()));
                 } else if (e.draft() instanceof JointDraft j) {
                     elements.add(j.joint());
                 }
@@ -137,7 +139,8 @@ final class LegSheets {
             String fiber = row.reference(ScheduleColumn.SEGMENT_FIBER_TYPE, catalog.fiberCodes(),
                     "fiber type", "in the catalog nor on sheet 'Fiber types'");
             double lengthM = row.number(ScheduleColumn.SEGMENT_LENGTH_M, LENGTH_M);
-            Draft draft = row.faulty() ? null : new SegmentDraft(cableId, fiber, lengthM);
+            StatedSpreads spreads = row.spreads();
+            Draft draft = row.faulty() ? null : new SegmentDraft(cableId, fiber, lengthM, spreads);
             place(key, position, row.place(ScheduleColumn.SEGMENT_POSITION), true, draft);
         }
         return true;
@@ -196,8 +199,9 @@ final class LegSheets {
             if (basis == LossBasis.MEASURED && lossDb.isEmpty() && !row.faulty()) {
                 row.problem(ScheduleColumn.JOINT_LOSS_DB, "loss basis MEASURED needs the measured loss in dB");
             }
+            StatedSpreads spreads = row.spreads();
             Joint joint = row.faulty() ? null : row.guard(ScheduleColumn.JOINT_LABEL,
-                    () -> new Joint(label, upstream, downstream, grade, lossDb, basis));
+                    () -> new Joint(label, upstream, downstream, grade, lossDb, basis, spreads));
             place(key, position, row.place(ScheduleColumn.JOINT_POSITION), false,
                     joint == null ? null : new JointDraft(joint));
         }

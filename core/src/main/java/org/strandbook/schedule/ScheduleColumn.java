@@ -10,6 +10,7 @@ import org.strandbook.site.LossBasis;
 import org.strandbook.site.OhGrade;
 import org.strandbook.site.PathDirection;
 import org.strandbook.site.ProbeKind;
+import org.strandbook.site.SpreadInput;
 
 /**
  * Every column of every schedule sheet: its header (with the unit in brackets), what a contractor
@@ -74,6 +75,11 @@ public enum ScheduleColumn {
             "Fiber type code: a shipped one or one on sheet 'Fiber types'."),
     SEGMENT_LENGTH_M(ScheduleSheet.SEGMENTS, "Length (m)", Kind.NUMBER,
             "Fiber length in metres, more than 0."),
+    SEGMENT_LENGTH_SPREAD(ScheduleSheet.SEGMENTS, "Length tolerance (±m or ±%)", SpreadInput.LENGTH,
+            "Tolerance of this run's length, e.g. ±0.5 m or ±2 %; blank uses the shipped default."),
+    SEGMENT_BEND_SPREAD(ScheduleSheet.SEGMENTS, "Bend radius spread (±mm or ±%)", SpreadInput.BEND_RADIUS,
+            "Spread of the recorded bend radius, e.g. ±5 mm or ±20 %; blank uses the shipped default."),
+    SEGMENT_SPREAD_BASIS(ScheduleSheet.SEGMENTS, "Spread basis", "Where the spreads on this row come from, in your words (datasheet, certificate); optional."),
 
     BEND_CABLE_ID(ScheduleSheet.BENDS, "Cable ID", Kind.TEXT,
             "Cable ID from sheet 'Segments'."),
@@ -100,6 +106,10 @@ public enum ScheduleColumn {
             "Loss of the joint in dB, zero or more; blank uses the connector type's typical loss."),
     JOINT_LOSS_BASIS(ScheduleSheet.JOINTS, "Loss basis (ASSUMED/MEASURED)", names(LossBasis.values()),
             "MEASURED when the loss was measured on site (then a loss is required); blank means ASSUMED."),
+    JOINT_LOSS_SPREAD(ScheduleSheet.JOINTS, "Loss spread (±dB or u dB)", SpreadInput.JOINT_LOSS,
+            "This joint's loss spread: ±0.3 dB (range) or u 0.05 dB (a reading's standard uncertainty);"
+                    + " blank uses the connector type's or the shipped default."),
+    JOINT_SPREAD_BASIS(ScheduleSheet.JOINTS, "Spread basis", "Where the spreads on this row come from, in your words (datasheet, certificate); optional."),
 
     FIBER_CODE(ScheduleSheet.FIBER_TYPES, "Fiber type code", Kind.TEXT,
             "A code of your own, not one of the shipped codes."),
@@ -119,6 +129,11 @@ public enum ScheduleColumn {
             "LOW_OH (dry) for the near infrared, HIGH_OH (wet) for the UV and visible."),
     FIBER_OH_PPM(ScheduleSheet.FIBER_TYPES, "OH content (ppm)", Kind.NUMBER,
             "OH content in ppm by weight, from the datasheet."),
+    FIBER_OH_SPREAD(ScheduleSheet.FIBER_TYPES, "OH spread (ppm range or ±%)", SpreadInput.OH_CONTENT,
+            "Range of the OH content, e.g. 400..1000 ppm, or ±50 %; blank uses the shipped default."),
+    FIBER_ATTENUATION_SPREAD(ScheduleSheet.FIBER_TYPES, "Attenuation spread (±%)", SpreadInput.ATTENUATION,
+            "Spread of the attenuation curve, e.g. ±10 %; blank uses the shipped default."),
+    FIBER_SPREAD_BASIS(ScheduleSheet.FIBER_TYPES, "Spread basis", "Where the spreads on this row come from, in your words (datasheet, certificate); optional."),
 
     ATTENUATION_FIBER(ScheduleSheet.FIBER_ATTENUATION, "Fiber type code", Kind.TEXT,
             "Code of a fiber type on sheet 'Fiber types'."),
@@ -137,6 +152,10 @@ public enum ScheduleColumn {
             "Loss of a clean mated pair in dB, zero or more."),
     CONNECTOR_AIR_GAP(ScheduleSheet.CONNECTOR_TYPES, "Air gap (YES/NO)", List.of("YES", "NO"),
             "YES when the mated faces meet across an air gap."),
+    CONNECTOR_LOSS_SPREAD(ScheduleSheet.CONNECTOR_TYPES, "Loss spread (±dB or u dB)", SpreadInput.CONNECTOR_LOSS,
+            "Spread of a mated pair's loss: ±0.3 dB (range) or u 0.1 dB (standard uncertainty);"
+                    + " blank uses the shipped default."),
+    CONNECTOR_SPREAD_BASIS(ScheduleSheet.CONNECTOR_TYPES, "Spread basis", "Where the spreads on this row come from, in your words (datasheet, certificate); optional."),
 
     PROBE_CODE(ScheduleSheet.PROBE_TYPES, "Probe type code", Kind.TEXT,
             "A code of your own, not one of the shipped codes."),
@@ -151,7 +170,10 @@ public enum ScheduleColumn {
     PROBE_OPTICAL_PATH_MM(ScheduleSheet.PROBE_TYPES, "Optical path (mm)", Kind.NUMBER,
             "Optical path through the process medium in mm; 0 for none."),
     PROBE_FIXED_LOSS_DB(ScheduleSheet.PROBE_TYPES, "Fixed loss (dB)", Kind.NUMBER,
-            "Lumped loss of the probe's own optics in dB, zero or more.");
+            "Lumped loss of the probe's own optics in dB, zero or more."),
+    PROBE_FIXED_LOSS_SPREAD(ScheduleSheet.PROBE_TYPES, "Fixed loss spread (±dB or ±%)", SpreadInput.PROBE_FIXED_LOSS,
+            "Spread of the fixed loss, e.g. ±0.2 dB or ±20 %; blank uses the shipped default."),
+    PROBE_SPREAD_BASIS(ScheduleSheet.PROBE_TYPES, "Spread basis", "Where the spreads on this row come from, in your words (datasheet, certificate); optional.");
 
     /** What a column holds. */
     public enum Kind {
@@ -179,6 +201,8 @@ public enum ScheduleColumn {
     private final Kind kind;
     private final List<String> choices;
     private final String hint;
+    private final boolean optional;
+    private final SpreadInput spread;
 
     ScheduleColumn(ScheduleSheet sheet, String header, Kind kind, String hint) {
         this.sheet = sheet;
@@ -186,6 +210,27 @@ public enum ScheduleColumn {
         this.kind = kind;
         this.choices = List.of();
         this.hint = hint;
+        this.optional = false;
+        this.spread = null;
+    }
+
+    /** The optional spread basis column of a sheet with spread columns (schema 8). */
+    ScheduleColumn(ScheduleSheet sheet, String header, String hint) {
+        this(sheet, header, (SpreadInput) null, hint);
+    }
+
+    /**
+     * An optional column of schema 8 at the end of its sheet: a spread of {@code spread}, or the row's
+     * spread basis when that is null. A schedule written before it has no such column and still reads.
+     */
+    ScheduleColumn(ScheduleSheet sheet, String header, SpreadInput spread, String hint) {
+        this.sheet = sheet;
+        this.header = header;
+        this.kind = Kind.TEXT;
+        this.choices = List.of();
+        this.hint = hint;
+        this.optional = true;
+        this.spread = spread;
     }
 
     ScheduleColumn(ScheduleSheet sheet, String header, List<String> choices, String hint) {
@@ -194,6 +239,23 @@ public enum ScheduleColumn {
         this.kind = Kind.CHOICE;
         this.choices = List.copyOf(choices);
         this.hint = hint;
+        this.optional = false;
+        this.spread = null;
+    }
+
+    /** True for a column an older schedule may lack: its header may be absent and its cells blank. */
+    public boolean optional() {
+        return optional;
+    }
+
+    /** The input whose spread the column holds; null for other columns (the spread basis included). */
+    public SpreadInput spread() {
+        return spread;
+    }
+
+    /** True for the column that says where a row's spreads come from. */
+    public boolean spreadBasis() {
+        return optional && spread == null;
     }
 
     public ScheduleSheet sheet() {
@@ -233,7 +295,8 @@ public enum ScheduleColumn {
     public int widthChars() {
         int room = switch (this) {
             case ANALYZER_DESCRIPTION, POINT_SERVICE, POINT_LOCATION, FIBER_DESCRIPTION, CONNECTOR_DESCRIPTION,
-                    PROBE_DESCRIPTION -> 40;
+                    PROBE_DESCRIPTION, SEGMENT_SPREAD_BASIS, JOINT_SPREAD_BASIS, FIBER_SPREAD_BASIS,
+                    CONNECTOR_SPREAD_BASIS, PROBE_SPREAD_BASIS -> 40;
             default -> 12;
         };
         return Math.max(room, header.length() + 3);

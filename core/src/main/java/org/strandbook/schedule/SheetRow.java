@@ -1,6 +1,8 @@
 package org.strandbook.schedule;
 
+import java.util.EnumMap;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.function.Supplier;
@@ -14,6 +16,9 @@ import org.apache.poi.ss.usermodel.FormulaError;
 import org.apache.poi.ss.usermodel.FormulaEvaluator;
 import org.apache.poi.ss.usermodel.Row;
 import org.apache.poi.xssf.usermodel.XSSFCell;
+import org.strandbook.site.SpreadInput;
+import org.strandbook.site.StatedSpread;
+import org.strandbook.site.StatedSpreads;
 
 /**
  * One data row of a schedule sheet with typed access to its cells. Every problem a cell has is
@@ -33,6 +38,8 @@ final class SheetRow {
 
     /** Tags, IDs, labels and codes longer than this are a paste mistake, not an identifier. */
     static final int MAX_IDENTIFIER_CHARS = 64;
+    /** The workbook keeps a spread basis of at most this many characters (schema 8). */
+    static final int MAX_SPREAD_BASIS_CHARS = 500;
 
     private sealed interface Content permits Blank, Text, Number, Flag, Failure, Unreadable {
     }
@@ -184,6 +191,35 @@ final class SheetRow {
             return null;
         }
         return "";
+    }
+
+    /**
+     * The spreads the row states in its sheet's spread columns, with the row's spread basis; an
+     * unreadable spread is a problem of its cell (what was expected, with an example).
+     */
+    StatedSpreads spreads() {
+        Map<SpreadInput, StatedSpread> stated = new EnumMap<>(SpreadInput.class);
+        String basis = "";
+        for (ScheduleColumn column : sheet.columns()) {
+            if (column.spreadBasis()) {
+                basis = text(column);
+                if (basis.length() > MAX_SPREAD_BASIS_CHARS) {
+                    problem(column, "spread basis must be at most " + MAX_SPREAD_BASIS_CHARS + " characters, was "
+                            + basis.length());
+                    basis = "";
+                }
+            } else if (column.spread() != null) {
+                String text = text(column);
+                if (!text.isEmpty()) {
+                    try {
+                        stated.put(column.spread(), StatedSpread.parse(text, column.spread()));
+                    } catch (IllegalArgumentException e) {
+                        problem(column, e.getMessage());
+                    }
+                }
+            }
+        }
+        return new StatedSpreads(stated, basis);
     }
 
     /** A required tag, ID, label or code; null (and a problem) when blank or too long. */

@@ -61,6 +61,9 @@ final class SheetTable {
             if (header != null && header.getCell(column.index()) != null) {
                 found = SheetRow.trim(header.getCell(column.index()).toString());
             }
+            if (found.isEmpty() && column.optional()) {
+                continue;
+            }
             if (!normalized(found).equals(normalized(column.header()))) {
                 String was = found.isEmpty() ? ", the cell is empty" : ", was '" + found + "'";
                 log.add(new ScheduleCell(column, 1).problem("expected header '" + column.header() + "'" + was));

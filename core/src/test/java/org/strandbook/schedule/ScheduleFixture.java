@@ -15,6 +15,9 @@ import org.apache.poi.ss.usermodel.Row;
 import org.apache.poi.ss.usermodel.Sheet;
 import org.apache.poi.ss.util.CellReference;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
+import org.strandbook.site.SpreadInput;
+import org.strandbook.site.StatedSpread;
+import org.strandbook.site.StatedSpreads;
 import org.strandbook.site.AttenuationPoint;
 import org.strandbook.site.Analyzer;
 import org.strandbook.site.Bend;
@@ -76,9 +79,11 @@ final class ScheduleFixture {
         List<PathLeg> legs = List.of(
                 leg("P-101", PathDirection.SEND,
                         joint("J1", "SMA905-AIR"),
-                        new CableSegment("C-101S-1", "SI400-LOH", 12.5, List.of(new Bend(80, 2), new Bend(120, 1))),
+                        new CableSegment("C-101S-1", "SI400-LOH", 12.5, List.of(new Bend(80, 2), new Bend(120, 1)),
+                                spreads("tape measure on the drum", SpreadInput.LENGTH, "±0.5 m")),
                         new Joint("J2", "SMA905-AIR", "SMA905-GEL", InspectionGrade.CLEAN, OptionalDouble.of(0.8),
-                                LossBasis.MEASURED),
+                                LossBasis.MEASURED, spreads("meter certificate 0412", SpreadInput.JOINT_LOSS,
+                                "u 0.05 dB")),
                         new CableSegment("C-101S-2", "SI400-LOH", 35, List.of()),
                         joint("J3", "SMA905-AIR")),
                 leg("P-101", PathDirection.RETURN,
@@ -107,11 +112,19 @@ final class ScheduleFixture {
                 List.of(new FiberType("SI300-HOH-T", "Step index 300/330 high-OH, test type", 300, 330, 0, 0.22,
                         "FUSED_SILICA", OhGrade.HIGH_OH, 900,
                         List.of(new AttenuationPoint(450, 60), new AttenuationPoint(550, 25),
-                                new AttenuationPoint(650, 12)))),
-                List.of(new ConnectorType("FC-PC-MM-T", "FC physical contact, test type", "FC", 0.6, false)),
+                                new AttenuationPoint(650, 12)),
+                        spreads("grade sheet", SpreadInput.OH_CONTENT, "600..1200 ppm"))),
+                List.of(new ConnectorType("FC-PC-MM-T", "FC physical contact, test type", "FC", 0.6, false,
+                        spreads("", SpreadInput.CONNECTOR_LOSS, "±0.2 dB"))),
                 List.of(new ProbeType("TX-FS-10-T", "Transmission probe, fused silica windows, 10 mm gap",
-                        ProbeKind.TRANSMISSION, "FUSED_SILICA", 4, 10, 3.5)));
+                        ProbeKind.TRANSMISSION, "FUSED_SILICA", 4, 10, 3.5,
+                        spreads("maker's test sheet", SpreadInput.PROBE_FIXED_LOSS, "±10 %"))));
         return new CableSchedule(analyzers, points, legs, added);
+    }
+
+    /** One stated spread and its basis, in the invented plant's words. */
+    static StatedSpreads spreads(String basis, SpreadInput input, String text) {
+        return new StatedSpreads(java.util.Map.of(input, StatedSpread.parse(text, input)), basis);
     }
 
     static Path write(CableSchedule schedule, Path folder) throws IOException {

@@ -40,18 +40,21 @@ class TemplatesTest {
                 "Process temperature (°C)"));
         SCHEDULE_SHEETS.put("Bands", List.of("Point tag", "Band name", "From (nm)", "To (nm)"));
         SCHEDULE_SHEETS.put("Segments", List.of("Point tag", "Direction (SEND/RETURN)", "Position (no.)", "Cable ID",
-                "Fiber type code", "Length (m)"));
+                "Fiber type code", "Length (m)", "Length tolerance (±m or ±%)", "Bend radius spread (±mm or ±%)",
+                "Spread basis"));
         SCHEDULE_SHEETS.put("Bends", List.of("Cable ID", "Bend radius (mm)", "Bends (count)"));
         SCHEDULE_SHEETS.put("Joints", List.of("Point tag", "Direction (SEND/RETURN)", "Position (no.)", "Joint label",
                 "Upstream connector (code)", "Downstream connector (code)", "Inspection grade (list)", "Loss (dB)",
-                "Loss basis (ASSUMED/MEASURED)"));
+                "Loss basis (ASSUMED/MEASURED)", "Loss spread (±dB or u dB)", "Spread basis"));
         SCHEDULE_SHEETS.put("Fiber types", List.of("Fiber type code", "Description", "Core (µm)", "Cladding (µm)",
-                "Buffer (µm)", "NA (0 to 1)", "Core material", "OH grade (list)", "OH content (ppm)"));
+                "Buffer (µm)", "NA (0 to 1)", "Core material", "OH grade (list)", "OH content (ppm)",
+                "OH spread (ppm range or ±%)", "Attenuation spread (±%)", "Spread basis"));
         SCHEDULE_SHEETS.put("Fiber attenuation", List.of("Fiber type code", "Wavelength (nm)", "Attenuation (dB/km)"));
         SCHEDULE_SHEETS.put("Connector types", List.of("Connector type code", "Description", "Mating family",
-                "Typical loss (dB)", "Air gap (YES/NO)"));
+                "Typical loss (dB)", "Air gap (YES/NO)", "Loss spread (±dB or u dB)", "Spread basis"));
         SCHEDULE_SHEETS.put("Probe types", List.of("Probe type code", "Description", "Probe kind (list)",
-                "Window material", "Window faces (count)", "Optical path (mm)", "Fixed loss (dB)"));
+                "Window material", "Window faces (count)", "Optical path (mm)", "Fixed loss (dB)",
+                "Fixed loss spread (±dB or ±%)", "Spread basis"));
     }
 
     @Test
