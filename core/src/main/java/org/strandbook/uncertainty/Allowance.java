@@ -64,6 +64,28 @@ public record Allowance(String what, String unit, double belowFraction, double a
                 basisText);
     }
 
+    /** The allowance as a person writes it: "±0.5 dB", "±2 % or ±0.1 m", "−50 %/+100 %", "u 0.1 dB". */
+    public String inWords() {
+        boolean relative = unit.equals("relative");
+        String prefix = normal ? "u " : "±";
+        java.util.List<String> parts = new java.util.ArrayList<>();
+        if (belowFraction > 0 || aboveFraction > 0 || relative && (belowAbsolute > 0 || aboveAbsolute > 0)) {
+            double below = 100 * (relative ? Math.max(belowFraction, belowAbsolute) : belowFraction);
+            double above = 100 * (relative ? Math.max(aboveFraction, aboveAbsolute) : aboveFraction);
+            parts.add(below == above ? prefix + plain(above) + " %" : "−" + plain(below) + " %/+" + plain(above) + " %");
+        }
+        if (!relative && (belowAbsolute > 0 || aboveAbsolute > 0)) {
+            parts.add(belowAbsolute == aboveAbsolute ? prefix + plain(aboveAbsolute) + " " + unit
+                    : "−" + plain(belowAbsolute) + "/+" + plain(aboveAbsolute) + " " + unit);
+        }
+        return parts.isEmpty() ? "exact" : String.join(" or ", parts);
+    }
+
+    private static String plain(double v) {
+        return java.math.BigDecimal.valueOf(v).round(new java.math.MathContext(6)).stripTrailingZeros()
+                .toPlainString();
+    }
+
     @Override
     public String toString() {
         return String.format(Locale.ROOT, "%s: -%s/+%s %s or -%.0f/+%.0f %%", what, belowAbsolute, aboveAbsolute, unit,

@@ -10,6 +10,8 @@ import org.strandbook.app.ui.sheet.SheetColumn;
 import org.strandbook.app.ui.sheet.SheetModel;
 import org.strandbook.site.FiberType;
 import org.strandbook.site.OhGrade;
+import org.strandbook.site.SpreadInput;
+import org.strandbook.uncertainty.BudgetInputUncertainties;
 
 /** The fiber-type catalog as a sheet (codes are keys and stay read-only; the datasheet comes from the schedule). */
 public final class FiberSheet {
@@ -47,12 +49,19 @@ public final class FiberSheet {
                         f.datasheet().isEmpty() ? "none: model only" : String.format(Locale.ROOT, "%d points, %s\u2013%s nm",
                                 f.datasheet().size(), CellFormats.plain(f.datasheet().get(0).wavelengthNm()),
                                 CellFormats.plain(f.datasheet().get(f.datasheet().size() - 1).wavelengthNm())))))
+                .column(SpreadColumns.spread("ohSpread", "OH spread (ppm range or \u00B1%)", SpreadInput.OH_CONTENT,
+                        FiberType::spreads, f -> BudgetInputUncertainties.SHIPPED.ohContent().inWords(),
+                        FiberType::withSpreads))
+                .column(SpreadColumns.spread("attenuationSpread", "Attenuation spread (\u00B1%)", SpreadInput.ATTENUATION,
+                        FiberType::spreads, f -> BudgetInputUncertainties.SHIPPED.attenuation().inWords(),
+                        FiberType::withSpreads))
+                .column(SpreadColumns.basis(FiberType::spreads, FiberType::withSpreads))
                 .build();
     }
 
     private static FiberType with(FiberType f, String description, double coreUm, double claddingUm, double bufferUm,
                                   double na, OhGrade oh, double ohPpm) {
         return new FiberType(f.code(), description, coreUm, claddingUm, bufferUm, na, f.coreMaterial(), oh, ohPpm,
-                f.datasheet());
+                f.datasheet(), f.spreads());
     }
 }

@@ -11,6 +11,8 @@ import org.strandbook.app.ui.sheet.SheetColumn;
 import org.strandbook.app.ui.sheet.SheetModel;
 import org.strandbook.site.ProbeKind;
 import org.strandbook.site.ProbeType;
+import org.strandbook.site.SpreadInput;
+import org.strandbook.uncertainty.BudgetInputUncertainties;
 
 /** The probe-type catalog as a sheet (codes are keys and stay read-only). */
 public final class ProbeSheet {
@@ -43,11 +45,15 @@ public final class ProbeSheet {
                 .column(SheetColumn.number("fixed", "Fixed optics loss (dB)", ProbeType::fixedLossDb, 2,
                         DecimalParser.in("dB").atLeast(0).atMost(40).withDecimalComma(),
                         (p, v) -> with(p, p.description(), p.kind(), p.windowMaterial(), p.windowFaces(), p.opticalPathMm(), v)))
+                .column(SpreadColumns.spread("fixedSpread", "Fixed loss spread (\u00B1dB or \u00B1%)",
+                        SpreadInput.PROBE_FIXED_LOSS, ProbeType::spreads,
+                        p -> BudgetInputUncertainties.SHIPPED.probeFixedLoss().inWords(), ProbeType::withSpreads))
+                .column(SpreadColumns.basis(ProbeType::spreads, ProbeType::withSpreads))
                 .build();
     }
 
     private static ProbeType with(ProbeType p, String description, ProbeKind kind, String window, int faces,
                                   double pathMm, double fixedDb) {
-        return new ProbeType(p.code(), description, kind, window, faces, pathMm, fixedDb);
+        return new ProbeType(p.code(), description, kind, window, faces, pathMm, fixedDb, p.spreads());
     }
 }

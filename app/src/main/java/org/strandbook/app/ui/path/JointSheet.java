@@ -16,6 +16,9 @@ import org.strandbook.app.ui.sheet.SheetModel;
 import org.strandbook.site.InspectionGrade;
 import org.strandbook.site.Joint;
 import org.strandbook.site.LossBasis;
+import org.strandbook.site.SpreadInput;
+import org.strandbook.uncertainty.BudgetInputUncertainties;
+import org.strandbook.app.ui.catalog.SpreadColumns;
 
 /**
  * The "Joints" sheet of one point: both legs, each joint with the elements it connects and the
@@ -63,6 +66,11 @@ public final class JointSheet {
                         (j, v) -> with(j, j.joint().label(), j.joint().connectorTypeA(), j.joint().connectorTypeB(),
                                 j.joint().grade(), j.joint().lossDb(), v)))
                 .column(SheetColumn.computed(LOSS, "Loss at 1st band centre (dB)", true))
+                .column(SpreadColumns.spread("lossSpread", "Loss spread (\u00B1dB or u dB)", SpreadInput.JOINT_LOSS,
+                        (LegJoint j) -> j.joint().spreads(), j -> j.joint().lossBasis() == LossBasis.MEASURED
+                                ? BudgetInputUncertainties.SHIPPED.measuredJoint().inWords() : "of its connector type",
+                        (j, v) -> j.with(j.joint().withSpreads(v))))
+                .column(SpreadColumns.basis((LegJoint j) -> j.joint().spreads(), (j, v) -> j.with(j.joint().withSpreads(v))))
                 .uniqueKey("label", j -> j.direction() + "/" + j.joint().label())
                 .newRowsFrom((above, all) -> new LegJoint(above.direction(),
                         LegRows.placeAfter(above.position(), all.stream().filter(j -> j.direction() == above.direction())
@@ -77,6 +85,6 @@ public final class JointSheet {
 
     private static LegJoint with(LegJoint j, String label, String a, String b, InspectionGrade grade,
                                  OptionalDouble lossDb, LossBasis basis) {
-        return j.with(new Joint(label, a, b, grade, lossDb, basis));
+        return j.with(new Joint(label, a, b, grade, lossDb, basis, j.joint().spreads()));
     }
 }

@@ -22,6 +22,9 @@ import org.strandbook.app.ui.sheet.SheetColumn;
 import org.strandbook.app.ui.sheet.SheetModel;
 import org.strandbook.site.Bend;
 import org.strandbook.site.CableSegment;
+import org.strandbook.site.SpreadInput;
+import org.strandbook.uncertainty.BudgetInputUncertainties;
+import org.strandbook.app.ui.catalog.SpreadColumns;
 
 /**
  * The "Cable segments" sheet of one point: both legs, each segment with the loss it contributes
@@ -64,6 +67,16 @@ public final class SegmentSheet {
                         (s, v) -> with(s, s.segment().label(), s.segment().fiberTypeCode(), s.segment().lengthM(), v)))
                 .column(SheetColumn.computed(LOSS, "Loss at 1st band centre (dB)", true))
                 .column(SheetColumn.computed(SHARE, "Share of loop loss (%)", true))
+                .column(SpreadColumns.spread("lengthSpread", "Length tolerance (\u00B1m or \u00B1%)", SpreadInput.LENGTH,
+                        (LegSegment s) -> s.segment().spreads(),
+                        s -> BudgetInputUncertainties.SHIPPED.fiberLength().inWords(),
+                        (s, v) -> s.with(s.segment().withSpreads(v))))
+                .column(SpreadColumns.spread("bendSpread", "Bend radius spread (\u00B1mm or \u00B1%)", SpreadInput.BEND_RADIUS,
+                        (LegSegment s) -> s.segment().spreads(),
+                        s -> BudgetInputUncertainties.SHIPPED.bendRadius().inWords(),
+                        (s, v) -> s.with(s.segment().withSpreads(v))))
+                .column(SpreadColumns.basis((LegSegment s) -> s.segment().spreads(),
+                        (s, v) -> s.with(s.segment().withSpreads(v))))
                 .uniqueKey("label", s -> s.segment().label())
                 .newRowsFrom((above, all) -> new LegSegment(above.direction(),
                         LegRows.placeAfter(above.position(), all.stream().filter(s -> s.direction() == above.direction())
@@ -118,6 +131,6 @@ public final class SegmentSheet {
     }
 
     private static LegSegment with(LegSegment s, String label, String fiber, double lengthM, List<Bend> bends) {
-        return s.with(new CableSegment(label, fiber, lengthM, bends));
+        return s.with(new CableSegment(label, fiber, lengthM, bends, s.segment().spreads()));
     }
 }

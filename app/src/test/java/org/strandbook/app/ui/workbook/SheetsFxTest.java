@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Optional;
 import java.util.OptionalDouble;
 
 import javafx.scene.control.Label;
@@ -27,6 +28,8 @@ import org.strandbook.site.ConnectorType;
 import org.strandbook.site.FiberType;
 import org.strandbook.site.MeasurementPoint;
 import org.strandbook.site.ProbeType;
+import org.strandbook.site.SpreadInput;
+import org.strandbook.site.StatedSpread;
 import org.strandbook.store.Workbook;
 import org.testfx.api.FxRobot;
 import org.testfx.api.FxToolkit;
@@ -206,6 +209,34 @@ class SheetsFxTest {
         type(connectors, row, "airGap", "maybe");
         assertTrue(connectors.model().records().get(row).airGap());
         assertTrue(status("connectors-sheet").contains("maybe"), status("connectors-sheet"));
+    }
+
+    @Test
+    void aConnectorsLossSpreadIsSavedAndOneInMetresIsRefused() {
+        // design choice: a mated pair's spread is stated in dB, as ± a range or u a standard uncertainty
+        showTab("tab-connectors");
+        SheetView<ConnectorType> connectors = window.connectorsView();
+        int row = rowOf(connectors.model().records().stream().map(ConnectorType::code).toList(), "FC-X");
+        type(connectors, row, "lossSpread", "+/-0,2 dB");
+        StatedSpread typed = StatedSpread.plusMinus(0.2, "dB");
+        try (Workbook wb = stored()) {
+            assertEquals(Optional.of(typed), wb.catalog().connectorType("FC-X").orElseThrow().spreads()
+                    .of(SpreadInput.CONNECTOR_LOSS));
+        }
+        type(connectors, row, "lossSpread", "+/-3 m");
+        assertTrue(status("connectors-sheet").contains("unit 'm'"), status("connectors-sheet"));
+        assertEquals(Optional.of(typed), connectors.model().records().get(row).spreads().of(SpreadInput.CONNECTOR_LOSS));
+    }
+
+    @Test
+    void aJointsOwnLossSpreadIsSaved() {
+        // JCGM 100:2008, 4.3.3: a reading's stated standard uncertainty is taken as it is
+        showTab("tab-joints");
+        type(window.jointsView(), 0, "lossSpread", "u 0,05 dB");
+        try (Workbook wb = stored()) {
+            assertEquals(Optional.of(StatedSpread.standardUncertainty(0.05, "dB")),
+                    wb.paths().legs(POINT).get(0).joints().get(0).spreads().of(SpreadInput.JOINT_LOSS));
+        }
     }
 
     @Test
