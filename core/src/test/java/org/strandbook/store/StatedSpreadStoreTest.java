@@ -5,6 +5,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import java.util.Map;
+import java.time.Instant;
+import java.util.Optional;
 import java.util.OptionalDouble;
 
 import org.junit.jupiter.api.Test;
@@ -14,6 +16,9 @@ import org.strandbook.site.FiberType;
 import org.strandbook.site.InspectionGrade;
 import org.strandbook.site.Joint;
 import org.strandbook.site.LossBasis;
+import org.strandbook.site.MaintenanceAction;
+import org.strandbook.site.MaintenanceKind;
+import org.strandbook.site.PathElement;
 import org.strandbook.site.OhGrade;
 import org.strandbook.site.PathDirection;
 import org.strandbook.site.PathLeg;
@@ -76,6 +81,25 @@ class StatedSpreadStoreTest extends PopulatedWorkbookTest {
                 new CableSegment("C101-T", DemoSite.FIBER, 10.0, List.of())));
         wb.paths().replaceLegs(DemoSite.POINT_A, List.of(send));
         assertEquals(List.of(send), wb.paths().legs(DemoSite.POINT_A));
+        assertTrue(wb.audit().verify().intact(), () -> wb.audit().verify().toString());
+    }
+
+    @Test
+    void aReplacedJointsOwnSpreadStaysWithThePathItWasJudgedBy() {
+        // design choice: the new part starts without the old element's spread; earlier scans keep it
+        Instant day1 = Instant.parse("2025-03-04T09:00:00Z");
+        Instant day2 = Instant.parse("2025-06-10T14:30:00Z");
+        StatedSpreads reading = spreads("meter cert 17", SpreadInput.JOINT_LOSS, "u 0.04 dB");
+        List<PathLeg> legs = wb.paths().legs(DemoSite.POINT_A).stream().map(l -> new PathLeg(l.pointTag(),
+                l.direction(), l.elements().stream().map(e -> e instanceof Joint j && j.label().equals("J2")
+                        ? (PathElement) j.withSpreads(reading) : e).toList())).toList();
+        wb.paths().replaceLegs(DemoSite.POINT_A, legs);
+        Joint fresh = new Joint("J2", DemoSite.CONNECTOR, null, InspectionGrade.CLEAN, OptionalDouble.of(0.4),
+                LossBasis.MEASURED);
+        wb.maintenance().add(new MaintenanceAction(DemoSite.POINT_A, MaintenanceKind.REPLACE_CONNECTOR, "J2", day2,
+                "k.ashdown", "", "ferrule chipped", Optional.of(fresh)));
+        assertEquals(StatedSpreads.NONE, wb.paths().legs(DemoSite.POINT_A).get(1).joints().get(0).spreads());
+        assertEquals(reading, wb.paths().legsAt(DemoSite.POINT_A, day1).get(1).joints().get(0).spreads());
         assertTrue(wb.audit().verify().intact(), () -> wb.audit().verify().toString());
     }
 }
