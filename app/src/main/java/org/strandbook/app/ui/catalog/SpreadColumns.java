@@ -17,33 +17,21 @@ import org.strandbook.site.StatedSpreads;
  */
 public final class SpreadColumns {
 
-    /** The word a blank spread cell starts with; typing it (or nothing) clears the spread. */
+    /** The word a blank spread cell's hint starts with; typing it (or nothing) clears the spread. */
     static final String DEFAULT = "default";
-
-    /**
-     * What a spread cell shows: the stated spread, or (when none) the default it falls back to.
-     *
-     * @param stated   the row's own spread, or null
-     * @param fallback the default in words, e.g. "±0.5 dB"
-     */
-    public record SpreadCell(StatedSpread stated, String fallback) {
-
-        String text() {
-            return stated != null ? stated.toString() : DEFAULT + " " + fallback;
-        }
-    }
 
     private SpreadColumns() {
     }
 
     /**
-     * @param fallback the default this row falls back to, in words (for the hint)
+     * @param fallback the default this row falls back to, in words, shown greyed in a blank cell
      */
-    public static <R> InputColumn<R, SpreadCell> spread(String key, String header, SpreadInput input,
+    public static <R> InputColumn<R, StatedSpread> spread(String key, String header, SpreadInput input,
             Function<R, StatedSpreads> spreads, Function<R, String> fallback, BiFunction<R, StatedSpreads, R> with) {
-        return SheetColumn.input(key, header,
-                (R r) -> new SpreadCell(spreads.apply(r).of(input).orElse(null), fallback.apply(r)),
-                SpreadCell::text, parser(input), (r, cell) -> with.apply(r, spreads.apply(r).with(input, cell.stated())));
+        return SheetColumn.input(key, header, (R r) -> spreads.apply(r).of(input).orElse(null),
+                (StatedSpread s) -> s == null ? "" : s.toString(), parser(input),
+                (R r, StatedSpread s) -> with.apply(r, spreads.apply(r).with(input, s)))
+                .withHint(r -> DEFAULT + " " + fallback.apply(r));
     }
 
     /** The row's spread basis, free text in the site's words. */
@@ -56,14 +44,14 @@ public final class SpreadColumns {
     }
 
     /** Blank or "default …" clears the spread; anything else must be a spread of {@code input}. */
-    static CellParser<SpreadCell> parser(SpreadInput input) {
+    static CellParser<StatedSpread> parser(SpreadInput input) {
         return t -> {
             String s = t == null ? "" : t.strip();
             if (s.isEmpty() || s.toLowerCase(java.util.Locale.ROOT).startsWith(DEFAULT)) {
-                return ParseResult.accepted(new SpreadCell(null, ""));
+                return ParseResult.accepted(null);
             }
             try {
-                return ParseResult.accepted(new SpreadCell(StatedSpread.parse(s, input), ""));
+                return ParseResult.accepted(StatedSpread.parse(s, input));
             } catch (IllegalArgumentException e) {
                 return ParseResult.rejected(e.getMessage());
             }

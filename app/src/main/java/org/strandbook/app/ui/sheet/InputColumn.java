@@ -18,9 +18,15 @@ public final class InputColumn<R, V> implements SheetColumn<R> {
     private final Function<V, String> format;
     private final CellParser<V> parser;
     private final BiFunction<R, V, R> setter;
+    private final Function<R, String> hint;
 
     InputColumn(String key, String header, boolean numeric, Function<R, V> getter, Function<V, String> format,
                 CellParser<V> parser, BiFunction<R, V, R> setter) {
+        this(key, header, numeric, getter, format, parser, setter, r -> "");
+    }
+
+    private InputColumn(String key, String header, boolean numeric, Function<R, V> getter, Function<V, String> format,
+                CellParser<V> parser, BiFunction<R, V, R> setter, Function<R, String> hint) {
         this.key = key;
         this.header = header;
         this.numeric = numeric;
@@ -28,6 +34,20 @@ public final class InputColumn<R, V> implements SheetColumn<R> {
         this.format = format;
         this.parser = parser;
         this.setter = setter;
+        this.hint = hint;
+    }
+
+    /**
+     * The same column showing {@code hint} (greyed) in a cell whose text is blank, e.g. the default a
+     * blank falls back to; the hint is never the cell's value (copy takes the blank).
+     */
+    public InputColumn<R, V> withHint(Function<R, String> blankHint) {
+        return new InputColumn<>(key, header, numeric, getter, format, parser, setter, blankHint);
+    }
+
+    /** What a blank cell of {@code row} shows instead; empty for none. */
+    public String hint(R row) {
+        return hint.apply(row);
     }
 
     @Override

@@ -15,6 +15,7 @@ final class SheetCell<R> extends TableCell<SheetRow<R>, CellContent> {
     private static final PseudoClass PASS = PseudoClass.getPseudoClass("pass");
     private static final PseudoClass REVIEW = PseudoClass.getPseudoClass("review");
     private static final PseudoClass FAIL = PseudoClass.getPseudoClass("fail");
+    private static final PseudoClass HINT = PseudoClass.getPseudoClass("hint");
 
     private final SheetView<R> view;
     private final int modelColumn;
@@ -63,9 +64,12 @@ final class SheetCell<R> extends TableCell<SheetRow<R>, CellContent> {
             setText(null);
             setTooltip(null);
             setStates(null, false);
+            pseudoClassStateChanged(HINT, false);
             return;
         }
-        setText(item.hasProblem() ? "\u26A0 " + item.text() : item.text());
+        String shown = item.showsHint() ? item.hint() : item.text();
+        setText(item.hasProblem() ? "\u26A0 " + shown : shown);
+        pseudoClassStateChanged(HINT, item.showsHint());
         setTooltip(item.hasProblem() ? new Tooltip(item.problem()) : null);
         setStates(item.verdict(), item.hasProblem());
     }

@@ -510,7 +510,7 @@ public final class SheetModel<R> {
         String problem = problems.get(new CellAddress(r, c));
         SheetColumn<R> column = columns.get(c);
         if (column instanceof InputColumn<R, ?> input) {
-            return new CellContent(input.text(record), null, problem);
+            return new CellContent(input.text(record), null, problem, input.hint(record));
         }
         ComputedColumn<R> computed = (ComputedColumn<R>) column;
         Figure figure = computed.fromRow() != null ? computed.fromRow().apply(record) : figures.get(r).figure(column.key());
