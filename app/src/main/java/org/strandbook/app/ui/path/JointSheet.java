@@ -68,7 +68,7 @@ public final class JointSheet {
                 .column(SheetColumn.computed(LOSS, "Loss at 1st band centre (dB)", true))
                 .column(SpreadColumns.spread("lossSpread", "Loss spread (\u00B1dB or u dB)", SpreadInput.JOINT_LOSS,
                         (LegJoint j) -> j.joint().spreads(), j -> j.joint().lossBasis() == LossBasis.MEASURED
-                                ? BudgetInputUncertainties.SHIPPED.measuredJoint().inWords() : "of its connector type",
+                                ? BudgetInputUncertainties.SHIPPED.measuredJoint().inWords() : "from its connector type",
                         (j, v) -> j.with(j.joint().withSpreads(v))))
                 .column(SpreadColumns.basis((LegJoint j) -> j.joint().spreads(), (j, v) -> j.with(j.joint().withSpreads(v))))
                 .uniqueKey("label", j -> j.direction() + "/" + j.joint().label())
