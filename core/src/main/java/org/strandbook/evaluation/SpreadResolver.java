@@ -24,7 +24,7 @@ import org.strandbook.uncertainty.JointSource;
  * informed one: a joint's own reading knows more than its connector type's datasheet). Each
  * allowance says in its basis text which of the three it came from.
  */
-final class SpreadResolver {
+public final class SpreadResolver {
 
     private final Catalog catalog;
     private final BudgetInputUncertainties defaults;
@@ -105,7 +105,7 @@ final class SpreadResolver {
      * @param nominal the entered value in the spread's own unit (ppm, mm, dB), for a range or for a
      *        spread in that unit of an input the budget treats as relative
      */
-    static Allowance stated(StatedSpread spread, Allowance like, double nominal, BasisKind given, String text,
+    public static Allowance stated(StatedSpread spread, Allowance like, double nominal, BasisKind given, String text,
             StatedSpreads owner) {
         BasisKind kind = given == BasisKind.STATED ? kindOf(owner.basis()) : given;
         String basis = text + (owner.basis().isEmpty() ? " (no basis given)" : ", " + owner.basis());

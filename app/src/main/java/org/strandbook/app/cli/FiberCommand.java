@@ -28,6 +28,12 @@ import org.strandbook.optics.path.SpectralWindow;
 import org.strandbook.uncertainty.Allowance;
 import org.strandbook.uncertainty.BudgetInputUncertainties;
 import org.strandbook.uncertainty.Chance;
+import org.strandbook.evaluation.SpreadResolver;
+import org.strandbook.site.SpreadInput;
+import org.strandbook.site.StatedSpread;
+import org.strandbook.site.StatedSpreads;
+import org.strandbook.uncertainty.BasisKind;
+import org.strandbook.uncertainty.ElementAllowances;
 import org.strandbook.uncertainty.PathAllowances;
 import org.strandbook.uncertainty.PathUncertainty;
 
@@ -122,6 +128,15 @@ public final class FiberCommand implements Callable<Integer> {
                     + "OH bands make the spread largest in the usual NIR range).")
     Double chanceAtNm;
 
+    @Option(names = "--length-spread", paramLabel = "SPREAD",
+            description = "Length tolerance for --chance-within-db, e.g. ±0.5m or ±2% (+/- for ±; u 0.2m for a "
+                    + "standard uncertainty); default: the shipped ±2 % or ±0.1 m.")
+    String lengthSpread;
+
+    @Option(names = "--attenuation-spread", paramLabel = "SPREAD",
+            description = "Attenuation spread for --chance-within-db, e.g. ±10%; default: the shipped ±15 %.")
+    String attenuationSpread;
+
     @Option(names = "--json", description = "Print {\"points\":[...]} as JSON instead of a table.")
     boolean json;
 
@@ -131,7 +146,8 @@ public final class FiberCommand implements Callable<Integer> {
     }
 
     /** The design question's answer: how likely the fiber stays within an allowed loss. */
-    record WithinChance(double allowedLossDb, double wavelengthNm, double predictedLossDb, Chance chance) {
+    record WithinChance(double allowedLossDb, double wavelengthNm, double predictedLossDb, Chance chance,
+                        ElementAllowances.Fiber spreads) {
     }
 
     /** Default wavelength of the design question: design choice (the usual NIR range's lossy end). */
@@ -231,6 +247,9 @@ public final class FiberCommand implements Callable<Integer> {
                 throw new UsageProblem("--chance-within-db must not be negative, was " + chanceWithinDb);
             }
         }
+        if (chanceWithinDb == null && (lengthSpread != null || attenuationSpread != null)) {
+            throw new UsageProblem("--length-spread and --attenuation-spread need --chance-within-db");
+        }
         if (chanceAtNm != null) {
             requireFinite(chanceAtNm, "--chance-at-nm");
             if (chanceWithinDb == null) {
@@ -254,9 +273,34 @@ public final class FiberCommand implements Callable<Integer> {
             throw new UsageProblem("--chance-at-nm: " + e.getMessage());
         }
         LossBudget budget = LossBudget.of(onePass(fiber), WavelengthGrid.ofNm(atNm));
-        Chance chance = PathUncertainty.standard().chanceWithin(budget, 0,
-                PathAllowances.shipped(budget.path(), List.of()), chanceWithinDb);
-        return new WithinChance(chanceWithinDb, atNm, budget.totalLossDbAt(0), chance);
+        ElementAllowances.Fiber spreads = spreads();
+        PathAllowances allowances = new PathAllowances(budget.path().elements().stream()
+                .map(e -> e instanceof FiberSegment ? (ElementAllowances) spreads : new ElementAllowances.Exact())
+                .toList());
+        Chance chance = PathUncertainty.standard().chanceWithin(budget, 0, allowances, chanceWithinDb);
+        return new WithinChance(chanceWithinDb, atNm, budget.totalLossDbAt(0), chance, spreads);
+    }
+
+    /** The fiber's spreads: those given on the command line, else the shipped defaults. */
+    private ElementAllowances.Fiber spreads() {
+        BudgetInputUncertainties shipped = BudgetInputUncertainties.SHIPPED;
+        return new ElementAllowances.Fiber(
+                given(lengthSpread, "--length-spread", SpreadInput.LENGTH, shipped.fiberLength(), lengthM),
+                given(attenuationSpread, "--attenuation-spread", SpreadInput.ATTENUATION, shipped.attenuation(), 1),
+                shipped.ohContent(), shipped.bendRadius());
+    }
+
+    private static Allowance given(String text, String option, SpreadInput input, Allowance shipped, double nominal) {
+        if (text == null) {
+            return shipped;
+        }
+        try {
+            StatedSpread spread = StatedSpread.parse(text, input);
+            return SpreadResolver.stated(spread, shipped, nominal, BasisKind.STATED, option + " " + spread,
+                    StatedSpreads.NONE.withBasis("given on the command line"));
+        } catch (IllegalArgumentException e) {
+            throw new UsageProblem(option + ": " + e.getMessage());
+        }
     }
 
     private LightPath onePass(FiberSpec fiber) {
@@ -330,8 +374,8 @@ public final class FiberCommand implements Callable<Integer> {
         out.println(String.format(Locale.ROOT, "  predicted %.3f dB there; Monte Carlo, %d trials (JCGM 101:2008),"
                 + " statistical scatter ±%.1f %%; faces taken as exact. Spreads:", c.predictedLossDb(),
                 c.chance().trials(), 100 * c.chance().standardError()));
-        BudgetInputUncertainties spreads = BudgetInputUncertainties.SHIPPED;
-        for (Allowance a : List.of(spreads.fiberLength(), spreads.attenuation(), spreads.ohContent(),
+        ElementAllowances.Fiber spreads = c.spreads();
+        for (Allowance a : List.of(spreads.length(), spreads.attenuation(), spreads.ohContent(),
                 spreads.bendRadius())) {
             out.println("  - " + a.what() + ": " + a.basisText() + " (" + a.basis().name().toLowerCase(Locale.ROOT)
                     .replace('_', ' ') + ")");

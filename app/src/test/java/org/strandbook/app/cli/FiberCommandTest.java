@@ -185,6 +185,33 @@ class FiberCommandTest {
     }
 
     @Test
+    void aStatedAttenuationSpreadReplacesTheShippedOne() {
+        // As above with a = 0.05·L_f from --attenuation-spread ±5%, b = 0.02·L_f still; at s = a (above
+        // a − b) the trapezoid gives F = 1 − b/(8a) (Bradley & Gupta, Ann. Inst. Statist. Math. 54 (2002)
+        // 689–700, n = 2).
+        CliRun plain = CliRun.of(STRAIGHT_DRY);
+        double total = values(plain.out(), "total_loss_db").get(0);
+        double fiber = values(plain.out(), "fiber_loss_db").get(0);
+        double a = 0.05 * fiber;
+        double b = 0.02 * fiber;
+        List<String> args = new ArrayList<>(List.of(STRAIGHT_DRY));
+        args.addAll(List.of("--attenuation-spread", "+/-5%", "--chance-within-db", Double.toString(total + a)));
+        CliRun run = CliRun.of(args.toArray(String[]::new));
+        assertEquals(0, run.exitCode(), run.err());
+        // Design choice: 0.005, over four binomial standard errors at M = 2·10⁵.
+        assertEquals(1 - b / (8 * a), values(run.out(), "probability").get(0), 0.005);
+    }
+
+    @Test
+    void aLengthSpreadInDecibelsIsWrongUsage() {
+        CliRun run = CliRun.of("fiber", "--core-um", "200", "--clad-um", "220", "--na", "0.22", "--length-m", "2",
+                "--wavelengths-nm", "1000", "--chance-within-db", "5", "--length-spread", "+/-1dB");
+        assertEquals(2, run.exitCode());
+        assertTrue(run.err().contains("--length-spread: length spread '+/-1dB': unit 'dB' is not one of m, %"),
+                run.err());
+    }
+
+    @Test
     void chanceIsPrintedAsAPercentageAtTheStatedWavelength() {
         // the output contract of the design question in the table form
         CliRun run = CliRun.of("fiber", "--core-um", "200", "--clad-um", "220", "--na", "0.22", "--length-m", "2",
