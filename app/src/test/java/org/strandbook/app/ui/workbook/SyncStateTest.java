@@ -40,7 +40,7 @@ class SyncStateTest {
                 new SiteSync(server, a, a.site().get().name(), SyncProgress.SILENT).run();
                 new SiteSync(server, b, b.site().get().name(), SyncProgress.SILENT).run();
                 assertTrue(SqliteWorkbookService.syncState(b).endsWith("; 1 conflict(s) wait for a choice"
-                        + " (strandbook sync --resolve)"), SqliteWorkbookService.syncState(b));
+                        + " (Site \u25B8 Edits to settle)"), SqliteWorkbookService.syncState(b));
             }
         }
     }
