@@ -1,6 +1,6 @@
 package org.strandbook.app.ui.workbook;
 
-import java.time.ZoneId;
+import java.time.ZoneOffset;
 import java.time.format.DateTimeFormatter;
 import java.util.Locale;
 
@@ -17,6 +17,7 @@ import javafx.scene.control.TableColumn;
 import javafx.scene.control.TableView;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 
 import org.strandbook.app.ui.sheet.TextColumns;
@@ -30,7 +31,7 @@ import org.strandbook.app.ui.sheet.TextColumns;
 final class ConflictsView {
 
     private static final DateTimeFormatter FOUND = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm", Locale.ROOT)
-            .withZone(ZoneId.systemDefault());
+            .withZone(ZoneOffset.UTC);
 
     private final VBox root = new VBox(4);
     private final ObservableList<ConflictRow> rows = FXCollections.observableArrayList();
@@ -39,12 +40,12 @@ final class ConflictsView {
         TableView<ConflictRow> table = new TableView<>(rows);
         table.setId("conflicts-table");
         table.setPlaceholder(new Label("Nothing to settle: no field was edited both here and on the plant server"));
-        table.getColumns().add(TextColumns.of("conflict-record", "Record", 150, ConflictRow::record));
-        table.getColumns().add(TextColumns.of("conflict-field", "Field", 130, ConflictRow::field));
-        table.getColumns().add(TextColumns.of("conflict-mine", "This workbook", 170, ConflictRow::mine));
-        table.getColumns().add(TextColumns.of("conflict-theirs", "Plant server", 170, ConflictRow::theirs));
-        table.getColumns().add(TextColumns.of("conflict-by", "Changed there by", 130, ConflictRow::theirsBy));
-        table.getColumns().add(TextColumns.of("conflict-found", "Found", 130, r -> FOUND.format(r.foundAt())));
+        table.getColumns().add(TextColumns.of("conflict-record", "Record", 120, ConflictRow::record));
+        table.getColumns().add(TextColumns.of("conflict-field", "Field", 100, ConflictRow::field));
+        table.getColumns().add(TextColumns.of("conflict-mine", "This workbook", 230, ConflictRow::mine));
+        table.getColumns().add(TextColumns.of("conflict-theirs", "Plant server", 230, ConflictRow::theirs));
+        table.getColumns().add(TextColumns.of("conflict-by", "Changed there by", 140, ConflictRow::theirsBy));
+        table.getColumns().add(TextColumns.of("conflict-found", "Found (UTC)", 125, r -> FOUND.format(r.foundAt())));
         table.getColumns().add(choiceColumn(vm));
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
         vm.conflictsProperty().addListener((o, was, is) -> rows.setAll(is));
@@ -60,6 +61,18 @@ final class ConflictsView {
                   + " this workbook's value (sent with the next sync) or take the server's; each choice is recorded"
                   + " in the audit trail.", vm.openConflictsProperty()));
         heading.setWrapText(true);
+        heading.setMinHeight(Region.USE_PREF_SIZE);
+        // a value too long for its column is read whole here
+        Label chosen = new Label();
+        chosen.setId("conflict-detail");
+        chosen.setWrapText(true);
+        chosen.setMinHeight(Region.USE_PREF_SIZE);
+        chosen.textProperty().bind(Bindings.createStringBinding(() -> {
+            ConflictRow r = table.getSelectionModel().getSelectedItem();
+            return r == null ? "Select a row to read both values whole." : r.record() + ", " + r.field()
+                    + ": this workbook \u201C" + r.mine() + "\u201D; plant server \u201C" + r.theirs() + "\u201D"
+                    + (r.theirsBy().isEmpty() ? "" : " (changed there by " + r.theirsBy() + ")");
+        }, table.getSelectionModel().selectedItemProperty()));
         Button syncNow = new Button("Sync with plant server");
         syncNow.setId("conflicts-sync");
         syncNow.disableProperty().bind(vm.serverProperty().isEmpty());
@@ -70,7 +83,7 @@ final class ConflictsView {
         HBox bar = new HBox(8, syncNow, server);
         bar.setAlignment(Pos.CENTER_LEFT);
         root.setPadding(new Insets(4));
-        root.getChildren().addAll(heading, bar, table);
+        root.getChildren().addAll(heading, bar, table, chosen);
         VBox.setVgrow(table, Priority.ALWAYS);
     }
 

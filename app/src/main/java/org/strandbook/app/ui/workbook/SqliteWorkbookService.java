@@ -3,6 +3,8 @@ package org.strandbook.app.ui.workbook;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.ZoneOffset;
+import java.time.format.DateTimeFormatter;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
@@ -59,6 +61,8 @@ import org.strandbook.store.WorkbookException;
  */
 public final class SqliteWorkbookService implements WorkbookService {
 
+    private static final DateTimeFormatter SYNCED_AT = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm", Locale.ROOT)
+            .withZone(ZoneOffset.UTC);
     private static final Pattern COUNT = Pattern.compile("(\\d+) of (\\d+)");
 
     private final String user;
@@ -141,9 +145,8 @@ public final class SqliteWorkbookService implements WorkbookService {
             return "Plant server: never synced";
         }
         long open = wb.syncLedger().conflicts().stream().filter(SyncLedger.Conflict::open).count();
-        return "Plant server: synced " + state.get().syncedAt().truncatedTo(java.time.temporal.ChronoUnit.MINUTES)
-                + " with " + state.get().server() + (open == 0 ? "" : "; " + open
-                + " conflict(s) wait for a choice (Site \u25B8 Edits to settle)");
+        return "Plant server: synced " + SYNCED_AT.format(state.get().syncedAt()) + " UTC with " + state.get().server()
+                + (open == 0 ? "" : "; " + open + " conflict(s) wait in Edits to settle");
     }
 
     @Override

@@ -685,9 +685,17 @@ public final class WorkbookWindow {
         cancel.setId("task-cancel");
         cancel.disableProperty().bind(vm.tasks().runningProperty().not());
         cancel.setOnAction(e -> vm.tasks().cancel());
+        cancel.setMinWidth(Region.USE_PREF_SIZE);
+        message.setMinWidth(220);
         Label sync = new Label();
         sync.setId("sync-state");
         sync.textProperty().bind(vm.syncStateProperty());
+        // the server's address can be long: the line gives way to the task message, the tooltip keeps it whole
+        sync.setMinWidth(0);
+        sync.setMaxWidth(560);
+        Tooltip whole = new Tooltip();
+        whole.textProperty().bind(vm.syncStateProperty());
+        sync.setTooltip(whole);
         HBox bar = new HBox(8, message, sync, progress, cancel);
         bar.setAlignment(Pos.CENTER_LEFT);
         bar.setPadding(new Insets(3, 8, 3, 8));

@@ -171,7 +171,7 @@ class PlantServerWindowFxTest {
             assertEquals("feed one", row.theirs());
             assertEquals(TECH, row.theirsBy());
             assertEquals("Edits to settle (1)", tab("tab-conflicts").getText());
-            assertTrue(label("#sync-state").getText().contains("1 conflict(s) wait for a choice"),
+            assertTrue(label("#sync-state").getText().contains("1 conflict(s) wait in Edits to settle"),
                     label("#sync-state").getText());
 
             robot.interact(() -> robot.lookup(".keep-theirs").queryAs(Button.class).fire());
