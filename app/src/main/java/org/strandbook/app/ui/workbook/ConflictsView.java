@@ -45,7 +45,7 @@ final class ConflictsView {
         table.getColumns().add(TextColumns.of("conflict-mine", "This workbook", 230, ConflictRow::mine));
         table.getColumns().add(TextColumns.of("conflict-theirs", "Plant server", 230, ConflictRow::theirs));
         table.getColumns().add(TextColumns.of("conflict-by", "Changed there by", 140, ConflictRow::theirsBy));
-        table.getColumns().add(TextColumns.of("conflict-found", "Found (UTC)", 125, r -> FOUND.format(r.foundAt())));
+        table.getColumns().add(TextColumns.of("conflict-found", "Found (UTC)", 135, r -> FOUND.format(r.foundAt())));
         table.getColumns().add(choiceColumn(vm));
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
         vm.conflictsProperty().addListener((o, was, is) -> rows.setAll(is));
@@ -79,8 +79,11 @@ final class ConflictsView {
         syncNow.setOnAction(e -> sync.run());
         Label server = new Label();
         server.textProperty().bind(Bindings.createStringBinding(() -> vm.serverProperty().get().isEmpty()
-                ? "never synced" : "syncs with " + vm.serverProperty().get(), vm.serverProperty()));
-        HBox bar = new HBox(8, syncNow, server);
+                ? "never synced" : "syncs with " + vm.serverProperty().get() + ".", vm.serverProperty()));
+        Label last = new Label();
+        last.setId("conflicts-last-sync");
+        last.textProperty().bind(vm.lastSyncProperty());
+        HBox bar = new HBox(8, syncNow, server, last);
         bar.setAlignment(Pos.CENTER_LEFT);
         root.setPadding(new Insets(4));
         root.getChildren().addAll(heading, bar, table, chosen);
@@ -95,7 +98,7 @@ final class ConflictsView {
         TableColumn<ConflictRow, ConflictRow> c = new TableColumn<>("Choose");
         c.setId("conflict-choose");
         c.setSortable(false);
-        c.setPrefWidth(220);
+        c.setPrefWidth(200);
         c.setCellValueFactory(f -> new javafx.beans.property.ReadOnlyObjectWrapper<>(f.getValue()));
         c.setCellFactory(col -> new TableCell<>() {
             private final Button mine = new Button("Keep mine");

@@ -66,6 +66,8 @@ public final class PlantServerDialog {
             }
         });
         Button choose = new Button("Choose\u2026");
+        choose.setMinWidth(Region.USE_PREF_SIZE);
+        list.setMinWidth(Region.USE_PREF_SIZE);
         choose.setOnAction(e -> {
             FileChooser chooser = new FileChooser();
             chooser.setTitle("The new workbook");

@@ -48,11 +48,13 @@ public final class PlantServerViewModel {
             List.of());
     private final ReadOnlyIntegerWrapper openConflicts = new ReadOnlyIntegerWrapper(this, "openConflicts", 0);
     private final ReadOnlyStringWrapper server = new ReadOnlyStringWrapper(this, "server", "");
+    private final ReadOnlyStringWrapper lastSync = new ReadOnlyStringWrapper(this, "lastSync", "");
     private final ReadOnlyStringWrapper cloneProblem = new ReadOnlyStringWrapper(this, "cloneProblem", "");
     private final ReadOnlyObjectWrapper<Path> cloned = new ReadOnlyObjectWrapper<>(this, "cloned");
     /** The last address used, with its parameters (sslmode...), which the workbook does not keep. */
     private String lastUrl = "";
     private String lastUser;
+    private Path shownFile;
 
     /**
      * @param env    the environment the password and the default user come from
@@ -93,6 +95,11 @@ public final class PlantServerViewModel {
     /** The server the open workbook syncs with; empty when it never synced. */
     public ReadOnlyStringProperty serverProperty() {
         return server.getReadOnlyProperty();
+    }
+
+    /** What the last sync from this window did, or why it was refused; kept after the status line moves on. */
+    public ReadOnlyStringProperty lastSyncProperty() {
+        return lastSync.getReadOnlyProperty();
     }
 
     /** Why the last clone failed, in one line; empty while none has failed. */
@@ -217,11 +224,15 @@ public final class PlantServerViewModel {
             remember(url, user);
             loaded.accept(synced.loaded());
             SiteSync.Outcome o = synced.outcome();
-            notice.accept(String.format(Locale.ROOT, "Synced with %s: %d record(s) sent, %d received, %d changed on the"
+            lastSync.set(String.format(Locale.ROOT, "Synced with %s: %d record(s) sent, %d received, %d changed on the"
                             + " server, %d changed here%s", displayUrl(url), o.pushed(), o.pulled(), o.changedThere(),
                     o.changedHere(), o.openConflicts().isEmpty() ? ""
                             : "; " + o.openConflicts().size() + " edit(s) to settle"));
-        }, e -> notice.accept("Not synced: " + message(e)));
+            notice.accept(lastSync.get());
+        }, e -> {
+            lastSync.set("Not synced: " + message(e));
+            notice.accept(lastSync.get());
+        });
     }
 
     /**
@@ -239,7 +250,12 @@ public final class PlantServerViewModel {
     }
 
     /** Reads the open workbook's server and conflicts again; the window calls it after each load. */
-    void workbookLoaded() {
+    void workbookLoaded(Path file) {
+        if (!file.equals(shownFile)) {
+            // what the last sync did belongs to the workbook it was done in
+            lastSync.set("");
+            shownFile = file;
+        }
         tasks.submit("Reading the sync state", p -> new SyncStanding(service.syncedServer().orElse(""),
                 service.openConflicts().stream().map(ConflictRow::of).toList()), standing -> {
                     server.set(standing.server());
@@ -250,6 +266,8 @@ public final class PlantServerViewModel {
 
     void workbookClosed() {
         server.set("");
+        lastSync.set("");
+        shownFile = null;
         conflicts.set(List.of());
         openConflicts.set(0);
     }

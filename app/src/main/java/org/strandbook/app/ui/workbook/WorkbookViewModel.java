@@ -450,7 +450,7 @@ public final class WorkbookViewModel {
         String keep = sameFile ? selectedTag.get() : "";
         site.load(loaded);
         syncState.set(loaded.syncState());
-        plantServer.workbookLoaded();
+        plantServer.workbookLoaded(loaded.file());
         if (!sameFile) {
             measured.clear();
         }

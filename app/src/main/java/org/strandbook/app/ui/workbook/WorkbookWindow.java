@@ -202,7 +202,7 @@ public final class WorkbookWindow {
         MenuItem newItem = item("New workbook\u2026", "Shortcut+N", this::newWorkbook);
         MenuItem open = item("Open\u2026", "Shortcut+O", this::openWorkbook);
         MenuItem sample = item("Open the sample site", null, () -> vm.openSample(vm.sampleFolder()));
-        MenuItem fromServer = item("Open from plant server\u2026", null, this::openFromServer);
+        MenuItem fromServer = item("Open from plant server\u2026", "Shortcut+Shift+O", this::openFromServer);
         fromServer.setId("menu-open-from-server");
         MenuItem saveAs = item("Save As\u2026", "Shortcut+Shift+S", this::saveAs);
         saveAs.disableProperty().bind(vm.openProperty().not());

@@ -66,7 +66,7 @@ class PlantServerViewModelTest {
         // as the window does: every workbook read after an action refreshes the conflicts
         vm[0] = new PlantServerViewModel(service, tasks, Map.of(), dir, site -> {
             loaded.add(site);
-            vm[0].workbookLoaded();
+            vm[0].workbookLoaded(site.file());
         }, notices::add);
         return vm[0];
     }
@@ -169,10 +169,11 @@ class PlantServerViewModelTest {
                         + DemoSite.POINT_A + "'");
             }
             service.open(laptop, new DirectJob());
-            vm.workbookLoaded();
+            vm.workbookLoaded(laptop);
             vm.sync();
             String last = notices.get(notices.size() - 1);
             assertTrue(last.startsWith("Not synced: the workbook ") && last.contains("fails `audit verify`"), last);
+            assertEquals(last, vm.lastSyncProperty().get(), "the refusal stays in view after the status line moves on");
         }
     }
 

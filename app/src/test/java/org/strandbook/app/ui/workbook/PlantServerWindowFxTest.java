@@ -171,6 +171,8 @@ class PlantServerWindowFxTest {
             assertEquals("feed one", row.theirs());
             assertEquals(TECH, row.theirsBy());
             assertEquals("Edits to settle (1)", tab("tab-conflicts").getText());
+            assertTrue(label("#conflicts-last-sync").getText().endsWith("; 1 edit(s) to settle"),
+                    label("#conflicts-last-sync").getText());
             assertTrue(label("#sync-state").getText().contains("1 conflict(s) wait in Edits to settle"),
                     label("#sync-state").getText());
 
