@@ -83,10 +83,13 @@ final class ConflictsView {
         Label last = new Label();
         last.setId("conflicts-last-sync");
         last.textProperty().bind(vm.lastSyncProperty());
-        HBox bar = new HBox(8, syncNow, server, last);
+        last.setWrapText(true);
+        last.setMinHeight(Region.USE_PREF_SIZE);
+        syncNow.setMinWidth(Region.USE_PREF_SIZE);
+        HBox bar = new HBox(8, syncNow, server);
         bar.setAlignment(Pos.CENTER_LEFT);
         root.setPadding(new Insets(4));
-        root.getChildren().addAll(heading, bar, table, chosen);
+        root.getChildren().addAll(heading, bar, last, table, chosen);
         VBox.setVgrow(table, Priority.ALWAYS);
     }
 

@@ -39,6 +39,7 @@ public final class PlantServerDialog {
     /** Opens "Open from plant server" over {@code owner} and returns at once; it closes once the clone is open. */
     public static Stage openSite(Window owner, PlantServerViewModel vm, TaskExecutor tasks, String stylesheet) {
         Stage stage = stage(owner, "Open a site from the plant server", stylesheet);
+        vm.forgetSites();
         TextField url = field("server-url", vm.suggestedUrl(), "jdbc:postgresql://HOST:PORT/DATABASE");
         TextField user = field("server-user", vm.suggestedUser(), "login role");
         ComboBox<String> site = new ComboBox<>();
@@ -57,6 +58,7 @@ public final class PlantServerDialog {
         list.setOnAction(e -> vm.listSites(url.getText(), user.getText()));
         Label sites = note("");
         sites.setId("server-sites-message");
+        sites.setMinHeight(18);
         sites.textProperty().bind(vm.sitesMessageProperty());
         TextField target = field("server-target", "", "the new workbook (.strandbook)");
         site.valueProperty().addListener((o, was, is) -> {
@@ -154,10 +156,13 @@ public final class PlantServerDialog {
         ProgressBar bar = new ProgressBar();
         bar.setId("server-progress");
         bar.setMaxWidth(Double.MAX_VALUE);
+        bar.setMinHeight(Region.USE_PREF_SIZE);
         bar.progressProperty().bind(tasks.progressProperty());
         bar.visibleProperty().bind(tasks.runningProperty());
         Label message = note("");
         message.setId("server-task-message");
+        // room for two lines from the start: the dialog is sized once, before any message arrives
+        message.setMinHeight(36);
         message.textProperty().bind(Bindings.when(tasks.runningProperty()).then(tasks.messageProperty()).otherwise(""));
         Button cancel = new Button("Cancel");
         cancel.setId("server-cancel");

@@ -162,6 +162,12 @@ public final class PlantServerViewModel {
         return Optional.empty();
     }
 
+    /** Forgets the last listing: a dialog opened now starts without another server's sites. */
+    public void forgetSites() {
+        sites.set(List.of());
+        sitesMessage.set("");
+    }
+
     /** Lists the sites the server lets {@code user} open; the answer lands in {@link #sitesProperty()}. */
     public void listSites(String url, String user) {
         Optional<String> bad = checkServer(url, user);
@@ -169,6 +175,8 @@ public final class PlantServerViewModel {
             sitesMessage.set(bad.get());
             return;
         }
+        // emptied first, so that the same sites listed again reach a dialog opened since
+        sites.set(List.of());
         sitesMessage.set("asking the server\u2026");
         tasks.submit("Listing the sites on the plant server", p -> service.serverSites(login(url, user)), names -> {
             sites.set(List.copyOf(names));

@@ -103,9 +103,13 @@ class PlantServerWindowFxTest {
     void aSiteOpenedFromTheServerThroughTheDialogIsANewWorkbookThatKnowsItsServer() {
         try (Workbook a = firstLaptop()) {
             Path target = dir.resolve("laptop.strandbook");
+            Stage first = openDialog(null, null);
+            robot.interact(() -> button("#server-list-sites").fire());
+            robot.interact(first::close);
             Stage dialog = openDialog(null, null);
             robot.interact(() -> button("#server-list-sites").fire());
-            assertEquals(DemoSite.site().name(), combo().getValue(), "the server offers the one site " + TECH + " has");
+            assertEquals(DemoSite.site().name(), combo().getValue(),
+                    "the server offers the one site " + TECH + " has, each time it is asked");
             robot.interact(() -> text("#server-target").setText(target.toString()));
             robot.interact(() -> button("#server-open").fire());
             WaitForAsyncUtils.waitForFxEvents();
