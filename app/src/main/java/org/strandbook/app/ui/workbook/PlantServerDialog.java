@@ -211,6 +211,7 @@ public final class PlantServerDialog {
         return f;
     }
 
+    /** A label that wraps and never shrinks below its lines. */
     private static Label heading(String text) {
         Label l = new Label(text);
         l.setWrapText(true);
@@ -219,19 +220,15 @@ public final class PlantServerDialog {
     }
 
     private static Label note(String text) {
-        Label l = new Label(text);
+        Label l = heading(text);
         l.getStyleClass().add("welcome-note");
-        l.setWrapText(true);
-        l.setMinHeight(Region.USE_PREF_SIZE);
         return l;
     }
 
     private static Label problem() {
-        Label l = new Label();
+        Label l = heading("");
         l.setId("server-problem");
         l.getStyleClass().add("server-problem");
-        l.setWrapText(true);
-        l.setMinHeight(Region.USE_PREF_SIZE);
         return l;
     }
 

@@ -24,10 +24,7 @@ import org.strandbook.app.ui.task.DirectTaskExecutor;
 import org.strandbook.app.ui.task.JobProgress;
 import org.strandbook.app.ui.task.TaskExecutor;
 import org.strandbook.server.LocalPostgres;
-import org.strandbook.server.PlantServer;
 import org.strandbook.server.ServerLogin;
-import org.strandbook.server.SiteSync;
-import org.strandbook.server.SyncProgress;
 import org.strandbook.site.MeasurementPoint;
 import org.strandbook.store.DemoSite;
 import org.strandbook.store.Workbook;
@@ -72,15 +69,11 @@ class PlantServerViewModelTest {
     }
 
     private Workbook firstLaptop() {
-        Workbook a = Workbook.create(dir.resolve("first.strandbook"), DemoSite.site(), "k.ashdown");
-        DemoSite.populate(a);
-        sync(a);
-        return a;
+        return new PlantServerFixture(url, TECH).firstLaptop(dir);
     }
 
     private void sync(Workbook wb) {
-        new SiteSync(new PlantServer(new ServerLogin(url, TECH, null)), wb, wb.site().get().name(),
-                SyncProgress.SILENT).run();
+        new PlantServerFixture(url, TECH).sync(wb);
     }
 
     private List<String> filesNamedLike(String part) throws Exception {
@@ -178,17 +171,12 @@ class PlantServerViewModelTest {
     }
 
     private static MeasurementPoint renamed(LoadedSite site, String service) {
-        MeasurementPoint p = site.points().stream().filter(x -> x.tag().equals(DemoSite.POINT_A)).findFirst()
-                .orElseThrow();
-        return new MeasurementPoint(p.tag(), service, p.location(), p.analyzerTag(), p.channel(), p.probeTypeCode(),
-                p.bands(), p.toleranceDb(), p.hazardousArea(), p.hydrogenService(), p.processTemperatureC());
+        return PlantServerFixture.renamed(site.points().stream().filter(x -> x.tag().equals(DemoSite.POINT_A))
+                .findFirst().orElseThrow(), service);
     }
 
     private static void rename(Workbook wb, String service) {
-        MeasurementPoint p = wb.points().get(DemoSite.POINT_A).orElseThrow();
-        wb.points().save(new MeasurementPoint(p.tag(), service, p.location(), p.analyzerTag(), p.channel(),
-                p.probeTypeCode(), p.bands(), p.toleranceDb(), p.hazardousArea(), p.hydrogenService(),
-                p.processTemperatureC()));
+        PlantServerFixture.rename(wb, service);
     }
 
     /** A job's progress nobody watches or cancels. */

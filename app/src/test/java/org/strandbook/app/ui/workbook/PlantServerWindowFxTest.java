@@ -24,10 +24,6 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.strandbook.app.ui.sheet.CellAddress;
 import org.strandbook.server.LocalPostgres;
-import org.strandbook.server.PlantServer;
-import org.strandbook.server.ServerLogin;
-import org.strandbook.server.SiteSync;
-import org.strandbook.server.SyncProgress;
 import org.strandbook.site.MeasurementPoint;
 import org.strandbook.store.DemoSite;
 import org.strandbook.store.Workbook;
@@ -72,17 +68,12 @@ class PlantServerWindowFxTest {
         FxToolkit.hideStage();
     }
 
-    /** A laptop that starts the site on the server: the site, a point pair and their paths. */
     private Workbook firstLaptop() {
-        Workbook a = Workbook.create(dir.resolve("first.strandbook"), DemoSite.site(), "k.ashdown");
-        DemoSite.populate(a);
-        sync(a);
-        return a;
+        return new PlantServerFixture(url, TECH).firstLaptop(dir);
     }
 
     private void sync(Workbook wb) {
-        new SiteSync(new PlantServer(new ServerLogin(url, TECH, null)), wb, wb.site().get().name(),
-                SyncProgress.SILENT).run();
+        new PlantServerFixture(url, TECH).sync(wb);
     }
 
     private Stage openDialog(String site, Path target) {
@@ -203,10 +194,7 @@ class PlantServerWindowFxTest {
     }
 
     private static void rename(Workbook wb, String service) {
-        MeasurementPoint p = wb.points().get(DemoSite.POINT_A).orElseThrow();
-        wb.points().save(new MeasurementPoint(p.tag(), service, p.location(), p.analyzerTag(), p.channel(),
-                p.probeTypeCode(), p.bands(), p.toleranceDb(), p.hazardousArea(), p.hydrogenService(),
-                p.processTemperatureC()));
+        PlantServerFixture.rename(wb, service);
     }
 
     private TextField text(String id) {
