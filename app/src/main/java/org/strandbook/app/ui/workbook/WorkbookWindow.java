@@ -309,8 +309,9 @@ public final class WorkbookWindow {
         }
     }
 
-    private void syncWithServerAs() {
-        PlantServerDialog.syncAs(stage, vm.plantServer(), stylesheet);
+    /** Opens the dialog that gives a sync its server and user: the first sync, another user, TLS parameters. */
+    Stage syncWithServerAs() {
+        return PlantServerDialog.syncAs(stage, vm.plantServer(), stylesheet);
     }
 
     private void saveAs() {

@@ -189,6 +189,36 @@ class PlantServerWindowFxTest {
         }
     }
 
+    @Test
+    void aWorkbookThatNeverSyncedIsGivenItsServerOnceAndThenSyncsWithIt() {
+        Path file = dir.resolve("never.strandbook");
+        Workbook.create(file, DemoSite.site(), "k.ashdown").close();
+        robot.interact(() -> shown.vm().open(file));
+        assertEquals("Plant server: never synced", label("#sync-state").getText());
+        assertTrue(button("#conflicts-sync").isDisabled(), "no server to sync with yet");
+
+        Stage[] dialog = new Stage[1];
+        robot.interact(() -> {
+            dialog[0] = shown.window().syncWithServerAs();
+            text("#server-url").setText("postgresql://no-jdbc-prefix/plant");
+            text("#server-user").setText(TECH);
+            button("#server-sync").fire();
+        });
+        assertTrue(dialog[0].isShowing(), "an address the driver cannot take is refused before anything is reached");
+        assertTrue(label("#server-problem").getText().contains("is not a PostgreSQL address"),
+                label("#server-problem").getText());
+        robot.interact(() -> {
+            text("#server-url").setText(url);
+            button("#server-sync").fire();
+        });
+        WaitForAsyncUtils.waitForFxEvents();
+        assertFalse(dialog[0].isShowing());
+        assertTrue(label("#sync-state").getText().endsWith(" with " + url), label("#sync-state").getText());
+        assertTrue(label("#conflicts-last-sync").getText().startsWith("Synced with " + url + ": "),
+                label("#conflicts-last-sync").getText());
+        assertFalse(button("#conflicts-sync").isDisabled(), "from now on one click syncs");
+    }
+
     private static String service(java.util.List<MeasurementPoint> points) {
         return points.stream().filter(p -> p.tag().equals(DemoSite.POINT_A)).findFirst().orElseThrow().service();
     }
