@@ -254,7 +254,11 @@ public final class PlantServerViewModel {
                     notice.accept(row.record() + " " + row.field() + ": " + (keepMine
                             ? "kept " + row.mine() + "; the next sync sends it to the server"
                             : "took the server's " + row.theirs()));
-                }, e -> notice.accept("Not settled: " + message(e)));
+                }, e -> {
+                    notice.accept("Not settled: " + message(e));
+                    // the row may have been settled meanwhile (by `sync --resolve`): show what is open now
+                    refreshConflicts();
+                });
     }
 
     /** Reads the open workbook's server and conflicts again; the window calls it after each load. */
@@ -264,6 +268,10 @@ public final class PlantServerViewModel {
             lastSync.set("");
             shownFile = file;
         }
+        refreshConflicts();
+    }
+
+    private void refreshConflicts() {
         tasks.submit("Reading the sync state", p -> new SyncStanding(service.syncedServer().orElse(""),
                 service.openConflicts().stream().map(ConflictRow::of).toList()), standing -> {
                     server.set(standing.server());

@@ -25,6 +25,7 @@ import org.strandbook.app.ui.task.JobProgress;
 import org.strandbook.app.ui.task.TaskExecutor;
 import org.strandbook.server.LocalPostgres;
 import org.strandbook.server.ServerLogin;
+import org.strandbook.server.SiteSync;
 import org.strandbook.site.MeasurementPoint;
 import org.strandbook.store.DemoSite;
 import org.strandbook.store.Workbook;
@@ -146,6 +147,28 @@ class PlantServerViewModelTest {
             assertEquals("feed two", a.points().get(DemoSite.POINT_A).orElseThrow().service(),
                     "the other laptop takes the value kept here");
             assertTrue(a.audit().verify().intact());
+        }
+    }
+
+    @Test
+    void aRowSettledElsewhereMeanwhileIsRefusedAndTheListShowsWhatIsStillOpen() {
+        try (Workbook a = firstLaptop()) {
+            PlantServerViewModel vm = vm(new DirectTaskExecutor());
+            Path laptop = dir.resolve("laptop.strandbook");
+            vm.cloneSite(url, TECH, DemoSite.site().name(), laptop);
+            rename(a, "feed one");
+            sync(a);
+            service.savePoints(List.of(renamed(loaded.get(0), "feed two")));
+            vm.sync();
+            ConflictRow stale = vm.conflictsProperty().get().get(0);
+            // the same workbook settled from the command line while the window still lists the row
+            try (Workbook other = Workbook.open(laptop, "laptop user")) {
+                SiteSync.resolve(other, stale.id(), false, "laptop user");
+            }
+            vm.settle(stale, true);
+            String last = notices.get(notices.size() - 1);
+            assertTrue(last.startsWith("Not settled: no open conflict " + stale.id()), last);
+            assertEquals(List.of(), vm.conflictsProperty().get());
         }
     }
 
