@@ -119,6 +119,19 @@ class PlantServerViewModelTest {
     }
 
     @Test
+    void aSyncCancelledAtOnceSendsNothing() {
+        try (Workbook a = firstLaptop()) {
+            vm(new DirectTaskExecutor()).cloneSite(url, TECH, DemoSite.site().name(), dir.resolve("laptop.strandbook"));
+            String before = a.points().get(DemoSite.POINT_A).orElseThrow().service();
+            service.savePoints(List.of(renamed(loaded.get(0), "feed two")));
+            vm(new CancellingTaskExecutor()).sync(url, TECH);
+            sync(a);
+            assertEquals(before, a.points().get(DemoSite.POINT_A).orElseThrow().service(),
+                    "the other laptop sees nothing of a cancelled sync");
+        }
+    }
+
+    @Test
     void anUnreachableServerIsSaidInOneLine() {
         PlantServerViewModel vm = vm(new DirectTaskExecutor());
         // port 1 on loopback: nothing listens there on these machines (design choice of the test)
