@@ -5,6 +5,8 @@ import java.sql.DriverManager;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Properties;
 import java.util.logging.Level;
 import java.util.logging.Logger;
@@ -77,6 +79,24 @@ public final class PlantServer {
             }
         } catch (SQLException e) {
             return 0;
+        }
+    }
+
+    /**
+     * The names of the sites this login may open, by name: a technician sees the sites it is a
+     * member of (the server's row-level security decides, not this query), the owner every site.
+     */
+    public List<String> siteNames() {
+        try (Connection c = connect(); Statement st = c.createStatement();
+             ResultSet rs = st.executeQuery("SELECT name FROM site ORDER BY name")) {
+            List<String> names = new ArrayList<>();
+            while (rs.next()) {
+                names.add(rs.getString(1));
+            }
+            return names;
+        } catch (SQLException e) {
+            throw new ServerException("cannot list the sites on " + login.displayUrl() + ": "
+                    + ServerException.firstLine(e), e);
         }
     }
 

@@ -3,6 +3,8 @@ package org.strandbook.app.ui.workbook;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.ZoneOffset;
+import java.time.format.DateTimeFormatter;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
@@ -43,6 +45,10 @@ import org.strandbook.site.PathLeg;
 import org.strandbook.site.ProbeType;
 import org.strandbook.site.ScanRecord;
 import org.strandbook.site.Site;
+import org.strandbook.server.PlantServer;
+import org.strandbook.server.ServerLogin;
+import org.strandbook.server.SiteClone;
+import org.strandbook.server.SiteSync;
 import org.strandbook.store.SyncLedger;
 import org.strandbook.store.Workbook;
 import org.strandbook.store.WithdrawnRecord;
@@ -55,6 +61,8 @@ import org.strandbook.store.WorkbookException;
  */
 public final class SqliteWorkbookService implements WorkbookService {
 
+    private static final DateTimeFormatter SYNCED_AT = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm", Locale.ROOT)
+            .withZone(ZoneOffset.UTC);
     private static final Pattern COUNT = Pattern.compile("(\\d+) of (\\d+)");
 
     private final String user;
@@ -137,9 +145,8 @@ public final class SqliteWorkbookService implements WorkbookService {
             return "Plant server: never synced";
         }
         long open = wb.syncLedger().conflicts().stream().filter(SyncLedger.Conflict::open).count();
-        return "Plant server: synced " + state.get().syncedAt().truncatedTo(java.time.temporal.ChronoUnit.MINUTES)
-                + " with " + state.get().server() + (open == 0 ? "" : "; " + open
-                + " conflict(s) wait for a choice (strandbook sync --resolve)");
+        return "Plant server: synced " + SYNCED_AT.format(state.get().syncedAt()) + " UTC with " + state.get().server()
+                + (open == 0 ? "" : "; " + open + " conflict(s) wait in Edits to settle");
     }
 
     @Override
@@ -308,6 +315,55 @@ public final class SqliteWorkbookService implements WorkbookService {
     @Override
     public synchronized void exportDossier(DossierExport export, Path target, JobProgress progress) throws Exception {
         export.export(require(), target, progress);
+    }
+
+    @Override
+    public List<String> serverSites(ServerLogin login) {
+        PlantServer server = new PlantServer(login);
+        server.migrate();
+        return server.siteNames();
+    }
+
+    @Override
+    public synchronized LoadedSite cloneFromServer(ServerLogin login, String siteName, Path target,
+                                                   JobProgress progress) {
+        if (Files.exists(target)) {
+            throw new WorkbookProblem(target + " exists; a clone never overwrites a file: choose a new name");
+        }
+        progress.update(-1, "reaching " + login.displayUrl());
+        PlantServer server = new PlantServer(login);
+        server.migrate();
+        SiteClone.run(server, siteName, target, user, new ServerJobProgress(progress));
+        return switchTo(Workbook.open(target, user), progress);
+    }
+
+    @Override
+    public synchronized SyncedSite sync(ServerLogin login, JobProgress progress) {
+        Workbook wb = require();
+        progress.update(-1, "reaching " + login.displayUrl());
+        PlantServer server = new PlantServer(login);
+        server.migrate();
+        String siteName = wb.syncLedger().peek().map(SyncLedger.State::siteName)
+                .orElseGet(() -> wb.site().get().name());
+        SiteSync.Outcome outcome = new SiteSync(server, wb, siteName, new ServerJobProgress(progress)).run();
+        return new SyncedSite(read(wb, progress), outcome);
+    }
+
+    @Override
+    public synchronized Optional<String> syncedServer() {
+        return require().syncLedger().peek().map(SyncLedger.State::server).filter(s -> !s.isBlank());
+    }
+
+    @Override
+    public synchronized List<SyncLedger.Conflict> openConflicts() {
+        return require().syncLedger().conflicts().stream().filter(SyncLedger.Conflict::open).toList();
+    }
+
+    @Override
+    public synchronized LoadedSite settleConflict(long conflictId, boolean keepMine, JobProgress progress) {
+        Workbook wb = require();
+        SiteSync.resolve(wb, conflictId, keepMine, user);
+        return read(wb, progress);
     }
 
     @Override

@@ -21,6 +21,8 @@ import org.strandbook.site.PathLeg;
 import org.strandbook.site.ProbeType;
 import org.strandbook.site.ScanRecord;
 import org.strandbook.site.Site;
+import org.strandbook.server.ServerLogin;
+import org.strandbook.store.SyncLedger;
 import org.strandbook.store.WithdrawnRecord;
 
 /**
@@ -118,6 +120,35 @@ public interface WorkbookService extends AutoCloseable {
 
     /** Signs a point (only once it has been evaluated) or the site record. */
     void signOff(SignOff signOff);
+
+    // ---- plant server
+
+    /** The names of the sites {@code login} may open on its server. */
+    List<String> serverSites(ServerLogin login);
+
+    /**
+     * Starts a workbook at {@code target} (which must not exist) holding one site from the plant
+     * server, and opens it. A clone cut off (Cancel, a lost server) leaves no file at {@code target}.
+     */
+    LoadedSite cloneFromServer(ServerLogin login, String siteName, Path target, JobProgress progress);
+
+    /**
+     * Pushes what is new in the open workbook to its site on the server and pulls what others
+     * recorded; refused (nothing changed) when the workbook fails its audit check.
+     */
+    SyncedSite sync(ServerLogin login, JobProgress progress);
+
+    /** The server the open workbook last synced with, without parameters; empty if it never did. */
+    Optional<String> syncedServer();
+
+    /** The open workbook's conflicts that wait for a choice, in the order they were found. */
+    List<SyncLedger.Conflict> openConflicts();
+
+    /**
+     * Keeps this workbook's value ({@code keepMine}) or the server's for one open conflict, as an
+     * audited change; the workbook read again, since keeping theirs changes a record.
+     */
+    LoadedSite settleConflict(long conflictId, boolean keepMine, JobProgress progress);
 
     /** Closes the workbook file. */
     @Override

@@ -75,6 +75,7 @@ public final class WorkbookViewModel {
     private final SheetModel<ProbeType> probes = ProbeSheet.create();
     private final PointViewModel point;
     private final AttentionViewModel attention;
+    private final PlantServerViewModel plantServer;
 
     private final ReadOnlyObjectWrapper<SiteOutline> outline = new ReadOnlyObjectWrapper<>(this, "outline",
             new SiteOutline(site.site(), List.of(), List.of()));
@@ -142,6 +143,8 @@ public final class WorkbookViewModel {
             }
         });
         this.attention = new AttentionViewModel(service, tasks, this::selectPoint);
+        this.plantServer = new PlantServerViewModel(service, tasks, System.getenv(),
+                Path.of(System.getProperty("user.home")), this::onLoaded, notice::set);
         points.addChangeListener(this::pointsEdited);
         fibers.addChangeListener(rows -> catalogEdited(rows, site.connectors(), site.probes()));
         connectors.addChangeListener(rows -> catalogEdited(site.fibers(), rows, site.probes()));
@@ -170,6 +173,11 @@ public final class WorkbookViewModel {
     /** The site's attention view: what needs a crew, most urgent first. */
     public AttentionViewModel attention() {
         return attention;
+    }
+
+    /** Opening a site from the plant server, syncing with it, and the conflicts waiting for a choice. */
+    public PlantServerViewModel plantServer() {
+        return plantServer;
     }
 
     /** The selected point's sheets and plots. */
@@ -392,6 +400,7 @@ public final class WorkbookViewModel {
     public void close() {
         siteRun++;
         attention.clear();
+        plantServer.workbookClosed();
         tasks.submit("Closing the workbook", p -> {
             service.close();
             return Boolean.TRUE;
@@ -441,6 +450,7 @@ public final class WorkbookViewModel {
         String keep = sameFile ? selectedTag.get() : "";
         site.load(loaded);
         syncState.set(loaded.syncState());
+        plantServer.workbookLoaded(loaded.file());
         if (!sameFile) {
             measured.clear();
         }

@@ -202,6 +202,8 @@ public final class WorkbookWindow {
         MenuItem newItem = item("New workbook\u2026", "Shortcut+N", this::newWorkbook);
         MenuItem open = item("Open\u2026", "Shortcut+O", this::openWorkbook);
         MenuItem sample = item("Open the sample site", null, () -> vm.openSample(vm.sampleFolder()));
+        MenuItem fromServer = item("Open from plant server\u2026", "Shortcut+Shift+O", this::openFromServer);
+        fromServer.setId("menu-open-from-server");
         MenuItem saveAs = item("Save As\u2026", "Shortcut+Shift+S", this::saveAs);
         saveAs.disableProperty().bind(vm.openProperty().not());
         MenuItem schedule = item("Import cable schedule\u2026", null, this::importSchedule);
@@ -211,11 +213,18 @@ public final class WorkbookWindow {
         MenuItem quit = item("Quit", "Shortcut+Q", stage::close);
         vm.recentFilesProperty().addListener((o, was, is) -> fillRecent(is));
         fillRecent(vm.recentFilesProperty().get());
-        Menu file = new Menu("File", null, newItem, open, recentMenu, sample, saveAs, new SeparatorMenuItem(), schedule,
+        Menu file = new Menu("File", null, newItem, open, recentMenu, fromServer, sample, saveAs, new SeparatorMenuItem(), schedule,
                 record, dossierItem(), new SeparatorMenuItem(), quit);
         MenuItem evaluate = item("Evaluate every point against its scans", "F5", vm::evaluateSite);
         evaluate.disableProperty().bind(vm.openProperty().not());
-        Menu site = new Menu("Site", null, evaluate);
+        MenuItem sync = item("Sync with plant server", "Shortcut+Shift+Y", this::syncWithServer);
+        sync.setId("menu-sync");
+        sync.disableProperty().bind(vm.openProperty().not());
+        MenuItem syncAs = item("Sync with plant server as\u2026", null, this::syncWithServerAs);
+        syncAs.disableProperty().bind(vm.openProperty().not());
+        MenuItem settle = item("Edits to settle", null, () -> tabs.getSelectionModel().select(tabById("tab-conflicts")));
+        settle.disableProperty().bind(vm.openProperty().not());
+        Menu site = new Menu("Site", null, evaluate, new SeparatorMenuItem(), sync, syncAs, settle);
         MenuItem safety = item(SafetyCaution.TITLE + "\u2026", null, () -> SafetyCautionDialog.show(stage));
         safety.setId("menu-safety");
         MenuItem about = item("About Strandbook", null, this::about);
@@ -284,6 +293,25 @@ public final class WorkbookWindow {
         name.setHeaderText("One workbook holds one site. Name the site as the plant names it.");
         name.setContentText("Site name:");
         name.showAndWait().filter(n -> !n.isBlank()).ifPresent(n -> vm.createWorkbook(file.get(), n));
+    }
+
+    /** Opens the dialog that clones a site from the plant server into a new workbook. */
+    public Stage openFromServer() {
+        return PlantServerDialog.openSite(stage, vm.plantServer(), vm.tasks(), stylesheet);
+    }
+
+    /** Syncs with the workbook's server; a workbook that never synced asks for the address first. */
+    private void syncWithServer() {
+        if (vm.plantServer().serverProperty().get().isEmpty()) {
+            syncWithServerAs();
+        } else {
+            vm.plantServer().sync();
+        }
+    }
+
+    /** Opens the dialog that gives a sync its server and user: the first sync, another user, TLS parameters. */
+    Stage syncWithServerAs() {
+        return PlantServerDialog.syncAs(stage, vm.plantServer(), stylesheet);
     }
 
     private void saveAs() {
@@ -378,7 +406,11 @@ public final class WorkbookWindow {
         open.setOnAction(e -> openWorkbook());
         Button create = new Button("New workbook\u2026");
         create.setOnAction(e -> newWorkbook());
-        VBox box = new VBox(12, heading, text, new VBox(2, sample, where), elsewhere, new HBox(8, open, create));
+        Button fromServer = new Button("Open from plant server\u2026");
+        fromServer.setId("welcome-from-server");
+        fromServer.setOnAction(e -> openFromServer());
+        VBox box = new VBox(12, heading, text, new VBox(2, sample, where), elsewhere,
+                new HBox(8, open, create, fromServer));
         box.setAlignment(Pos.CENTER_LEFT);
         box.setMaxWidth(660);
         box.setPadding(new Insets(24));
@@ -466,6 +498,7 @@ public final class WorkbookWindow {
                 historyTab(point),
                 uncertaintyTab(point),
                 attentionTab(),
+                conflictsTab(),
                 catalogTab);
 
         Label summary = verdictLabel("budget-summary", point.summaryProperty(), point.summaryVerdictProperty());
@@ -578,6 +611,17 @@ public final class WorkbookWindow {
         return t;
     }
 
+    /** The conflicts with the plant server, titled with how many wait for a choice. */
+    private Tab conflictsTab() {
+        PlantServerViewModel server = vm.plantServer();
+        Tab t = new Tab("", new ConflictsView(server, this::syncWithServer).node());
+        t.setId("tab-conflicts");
+        t.textProperty().bind(Bindings.createStringBinding(() -> server.openConflictsProperty().get() == 0
+                ? "Edits to settle" : "Edits to settle (" + server.openConflictsProperty().get() + ")",
+                server.openConflictsProperty()));
+        return t;
+    }
+
     private Tab tabById(String id) {
         return tabs.getTabs().stream().filter(t -> id.equals(t.getId())).findFirst().orElseThrow();
     }
@@ -642,9 +686,17 @@ public final class WorkbookWindow {
         cancel.setId("task-cancel");
         cancel.disableProperty().bind(vm.tasks().runningProperty().not());
         cancel.setOnAction(e -> vm.tasks().cancel());
+        cancel.setMinWidth(Region.USE_PREF_SIZE);
+        message.setMinWidth(220);
         Label sync = new Label();
         sync.setId("sync-state");
         sync.textProperty().bind(vm.syncStateProperty());
+        // the server's address can be long: the line gives way to the task message, the tooltip keeps it whole
+        sync.setMinWidth(0);
+        sync.setMaxWidth(560);
+        Tooltip whole = new Tooltip();
+        whole.textProperty().bind(vm.syncStateProperty());
+        sync.setTooltip(whole);
         HBox bar = new HBox(8, message, sync, progress, cancel);
         bar.setAlignment(Pos.CENTER_LEFT);
         bar.setPadding(new Insets(3, 8, 3, 8));

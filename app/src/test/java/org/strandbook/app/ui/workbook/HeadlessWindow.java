@@ -1,5 +1,6 @@
 package org.strandbook.app.ui.workbook;
 
+import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
 
@@ -19,13 +20,18 @@ import org.testfx.api.FxToolkit;
 record HeadlessWindow(Stage stage, WorkbookViewModel vm, WorkbookWindow window) {
 
     static HeadlessWindow show(SampleSite built, String user) throws Exception {
+        return show(built.folder().resolveSibling("unused"), user);
+    }
+
+    /** The window with no sample site at hand; {@code sampleFolder} is only shown, never built. */
+    static HeadlessWindow show(Path sampleFolder, String user) throws Exception {
         Stage stage = FxToolkit.registerPrimaryStage();
         WorkbookViewModel[] vm = new WorkbookViewModel[1];
         WorkbookWindow[] window = new WorkbookWindow[1];
         FxToolkit.setupStage(s -> {
             MemoryPreferences preferences = new MemoryPreferences();
             vm[0] = new WorkbookViewModel(new SqliteWorkbookService(user), new DirectTaskExecutor(),
-                    new PlotAxes(preferences), new RecentFiles(preferences), built.folder().resolveSibling("unused"),
+                    new PlotAxes(preferences), new RecentFiles(preferences), sampleFolder,
                     Optional.empty());
             vm[0].setEvaluateOnOpen(false);
             window[0] = new WorkbookWindow(s, vm[0]);

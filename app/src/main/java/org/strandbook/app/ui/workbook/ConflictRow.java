@@ -1,0 +1,42 @@
+package org.strandbook.app.ui.workbook;
+
+import java.time.Instant;
+
+import org.strandbook.server.SiteSync;
+import org.strandbook.store.PortableFields;
+import org.strandbook.store.SyncLedger;
+
+/**
+ * One open conflict as the window lists it: a field of a record edited here and on the server to
+ * different values since the last sync. Values read as a person reads them: text without its JSON
+ * quotes, a record removed on one side as "(removed)".
+ *
+ * @param id       the workbook's number of the conflict (the one {@code sync --resolve} takes)
+ * @param record   the record, as table and key ({@code point AT-4101})
+ * @param field    the field, or "whole record" when one side removed the record
+ * @param mine     this workbook's value
+ * @param theirs   the server's value
+ * @param theirsBy the login that changed the server's value, empty when the server does not know
+ * @param foundAt  when the sync found it
+ */
+public record ConflictRow(long id, String record, String field, String mine, String theirs, String theirsBy,
+                          Instant foundAt) {
+
+    static ConflictRow of(SyncLedger.Conflict c) {
+        boolean whole = SiteSync.RECORD.equals(c.field());
+        return new ConflictRow(c.id(), c.table().workbookTable() + " " + c.key(), whole ? "whole record" : c.field(),
+                readable(c.mine(), whole), readable(c.theirs(), whole), c.theirsBy() == null ? "" : c.theirsBy(),
+                c.foundAt());
+    }
+
+    private static String readable(String json, boolean whole) {
+        if (json == null || json.equals("null")) {
+            return whole ? "(removed)" : "(empty)";
+        }
+        if (whole) {
+            return json;
+        }
+        Object v = PortableFields.parseValue(json);
+        return v == null ? "(empty)" : v.toString();
+    }
+}
