@@ -46,7 +46,7 @@ public final class SiteSync {
     /** Records fetched from the server per query when pulling. */
     private static final int PULL_CHUNK = 500;
     /** Immutable records per batch when pushing. */
-    private static final int PUSH_BATCH = 200;
+    private static final int PUSH_BATCH = 256;
     /** The lock class of a site's sync (pg_advisory_xact_lock's first key), our own number. */
     private static final int SYNC_LOCK_CLASS = 0x5342;
 
@@ -387,43 +387,24 @@ public final class SiteSync {
             String sql = "INSERT INTO " + t.serverTable() + " (site_id, record_key, fields"
                     + (scan ? ", spectrum" : "") + ") VALUES (?, ?, ?::jsonb" + (scan ? ", ?" : "") + ")"
                     + " ON CONFLICT DO NOTHING";
-            try (PreparedStatement ps = c.prepareStatement(sql)) {
-                int[] n = {0};
-                WorkbookRecords.SpectrumSink add = (key, spectrum) -> {
+            try (PreparedStatement ps = c.prepareStatement(sql);
+                 OutgoingRecords outgoing = new OutgoingRecords(records, t, mine, toPush)) {
+                int n = 0;
+                for (OutgoingRecords.Row row = outgoing.next(); row != null; row = outgoing.next()) {
                     ps.setLong(1, siteId);
-                    ps.setString(2, key);
-                    ps.setString(3, PortableFields.json(mine.get(key)));
+                    ps.setString(2, row.key());
+                    ps.setString(3, row.fieldsJson());
                     if (scan) {
-                        ps.setBytes(4, spectrum);
+                        ps.setBytes(4, row.spectrum());
                     }
                     ps.addBatch();
-                    if (++n[0] % PUSH_BATCH == 0) {
+                    if (++n % PUSH_BATCH == 0) {
                         ps.executeBatch();
-                        progress.done(n[0], toPush.size());
-                    }
-                };
-                if (scan) {
-                    try {
-                        records.spectra(new HashSet<>(toPush), add);
-                    } catch (WorkbookRecords.SinkFailure f) {
-                        if (f.getCause() instanceof SQLException serverFailure) {
-                            throw serverFailure;
-                        }
-                        throw f.getCause() instanceof RuntimeException r ? r : f;
-                    }
-                } else {
-                    for (String key : toPush) {
-                        try {
-                            add.accept(key, null);
-                        } catch (SQLException | RuntimeException e) {
-                            throw e;
-                        } catch (Exception e) {
-                            throw new IllegalStateException(e);
-                        }
+                        progress.done(n, toPush.size());
                     }
                 }
                 ps.executeBatch();
-                progress.done(n[0], toPush.size());
+                progress.done(n, toPush.size());
             }
             plan.pushed += toPush.size();
         }

@@ -49,11 +49,16 @@ public final class WorkbookRecords {
         try (Statement st = session.connection().createStatement();
              ResultSet rs = st.executeQuery("SELECT * FROM " + table.workbookTable() + " ORDER BY id")) {
             ResultSetMetaData meta = rs.getMetaData();
+            // named once: the driver asks the native library for a column's name on every call
+            String[] names = new String[meta.getColumnCount() + 1];
+            for (int c = 1; c < names.length; c++) {
+                names[c] = meta.getColumnName(c);
+            }
             while (rs.next()) {
                 Map<String, Object> fields = new LinkedHashMap<>();
                 long id = 0;
-                for (int c = 1; c <= meta.getColumnCount(); c++) {
-                    String name = meta.getColumnName(c);
+                for (int c = 1; c < names.length; c++) {
+                    String name = names[c];
                     Object v = rs.getObject(c);
                     if (v instanceof Integer k) {
                         v = k.longValue();
