@@ -45,8 +45,11 @@ public final class SiteSync {
 
     /** Records fetched from the server per query when pulling. */
     private static final int PULL_CHUNK = 500;
-    /** Immutable records per batch when pushing. */
-    private static final int PUSH_BATCH = 256;
+    /**
+     * Immutable records per INSERT when pushing: the server audits each statement once, and a
+     * scan batch (~2 kB a row) stays well inside one message (design choice).
+     */
+    private static final int PUSH_BATCH = 500;
     /** The lock class of a site's sync (pg_advisory_xact_lock's first key), our own number. */
     private static final int SYNC_LOCK_CLASS = 0x5342;
 
@@ -384,26 +387,32 @@ public final class SiteSync {
         if (!toPush.isEmpty()) {
             progress.step("pushing " + toPush.size() + " " + t.workbookTable() + " record(s)");
             boolean scan = t == PortableTable.SCAN;
-            String sql = "INSERT INTO " + t.serverTable() + " (site_id, record_key, fields"
-                    + (scan ? ", spectrum" : "") + ") VALUES (?, ?, ?::jsonb" + (scan ? ", ?" : "") + ")"
-                    + " ON CONFLICT DO NOTHING";
-            try (PreparedStatement ps = c.prepareStatement(sql);
+            String row = scan ? "(?, ?, ?::jsonb, ?)" : "(?, ?, ?::jsonb)";
+            String insert = "INSERT INTO " + t.serverTable() + " (site_id, record_key, fields" + (scan ? ", spectrum" : "")
+                    + ") VALUES ";
+            List<OutgoingRecords.Row> batch = new ArrayList<>(PUSH_BATCH);
+            // one multi-row statement per batch: the server plans and audits a statement once. No ON
+            // CONFLICT clause: the keys the server holds were read under the site's lock, so none of
+            // these is there, and a duplicate all the same would fail the whole transaction, not half of it
+            try (PreparedStatement full = c.prepareStatement(insert + (row + ", ").repeat(PUSH_BATCH - 1) + row);
                  OutgoingRecords outgoing = new OutgoingRecords(records, t, mine, toPush)) {
                 int n = 0;
-                for (OutgoingRecords.Row row = outgoing.next(); row != null; row = outgoing.next()) {
-                    ps.setLong(1, siteId);
-                    ps.setString(2, row.key());
-                    ps.setString(3, row.fieldsJson());
-                    if (scan) {
-                        ps.setBytes(4, row.spectrum());
-                    }
-                    ps.addBatch();
-                    if (++n % PUSH_BATCH == 0) {
-                        ps.executeBatch();
+                for (OutgoingRecords.Row r = outgoing.next(); r != null; r = outgoing.next()) {
+                    batch.add(r);
+                    if (batch.size() == PUSH_BATCH) {
+                        insertRows(full, siteId, batch, scan);
+                        n += batch.size();
+                        batch.clear();
                         progress.done(n, toPush.size());
                     }
                 }
-                ps.executeBatch();
+                if (!batch.isEmpty()) {
+                    try (PreparedStatement tail = c.prepareStatement(insert + (row + ", ").repeat(batch.size() - 1)
+                            + row)) {
+                        insertRows(tail, siteId, batch, scan);
+                    }
+                    n += batch.size();
+                }
                 progress.done(n, toPush.size());
             }
             plan.pushed += toPush.size();
@@ -422,6 +431,20 @@ public final class SiteSync {
         for (String key : toPull) {
             plan.base(t, key, seen);
         }
+    }
+
+    private static void insertRows(PreparedStatement ps, long siteId, List<OutgoingRecords.Row> rows, boolean scan)
+            throws SQLException {
+        int p = 0;
+        for (OutgoingRecords.Row r : rows) {
+            ps.setLong(++p, siteId);
+            ps.setString(++p, r.key());
+            ps.setString(++p, r.fieldsJson());
+            if (scan) {
+                ps.setBytes(++p, r.spectrum());
+            }
+        }
+        ps.executeUpdate();
     }
 
     private void pullImmutable(Connection c, long siteId, PortableTable t, List<String> keys, Plan plan)
