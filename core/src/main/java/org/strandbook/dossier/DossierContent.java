@@ -40,7 +40,16 @@ public record DossierContent(Site site, List<Analyzer> analyzers, Catalog catalo
                              List<DossierPoint> points, String pairingRule, List<Note> siteNotes,
                              List<SignOff> siteSignOffs, AuditAppendix audit, Instant issuedAt, String software,
                              String workbookName, DecisionRule decisionRule,
-                             Map<String, PointUncertainty> uncertainties) {
+                             Map<String, PointUncertainty> uncertainties, List<String> earlierRevisions) {
+
+    /** The content of a dossier with no signed revision before it. */
+    public DossierContent(Site site, List<Analyzer> analyzers, Catalog catalog, DossierScope scope,
+                          List<DossierPoint> points, String pairingRule, List<Note> siteNotes,
+                          List<SignOff> siteSignOffs, AuditAppendix audit, Instant issuedAt, String software,
+                          String workbookName, DecisionRule decisionRule, Map<String, PointUncertainty> uncertainties) {
+        this(site, analyzers, catalog, scope, points, pairingRule, siteNotes, siteSignOffs, audit, issuedAt, software,
+                workbookName, decisionRule, uncertainties, List.of());
+    }
 
     /** The content of a dossier whose predictions carry no worked-out uncertainty. */
     public DossierContent(Site site, List<Analyzer> analyzers, Catalog catalog, DossierScope scope,
@@ -70,6 +79,7 @@ public record DossierContent(Site site, List<Analyzer> analyzers, Catalog catalo
         points = List.copyOf(points);
         siteNotes = List.copyOf(siteNotes);
         siteSignOffs = List.copyOf(siteSignOffs);
+        earlierRevisions = List.copyOf(earlierRevisions);
         pairingRule = pairingRule == null ? "" : pairingRule;
         software = software == null || software.isBlank() ? "Strandbook" : software.strip();
         workbookName = workbookName == null ? "" : workbookName;

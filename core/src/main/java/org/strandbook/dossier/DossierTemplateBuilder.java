@@ -266,6 +266,7 @@ public final class DossierTemplateBuilder {
             {"Plant area", Placeholder.PLANT_AREA.token()},
             {"Analyzers", Placeholder.ANALYZERS.token()},
             {"Dossier revision", Placeholder.REVISION.token()},
+            {"Earlier revisions", Placeholder.EARLIER_REVISIONS.token()},
             {"Issued (UTC)", Placeholder.ISSUED.token()},
             {"Points in scope", Placeholder.SCOPE_POINTS.token()},
             {"Scans in scope", Placeholder.SCOPE_DATES.token()},

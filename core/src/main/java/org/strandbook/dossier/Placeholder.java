@@ -10,6 +10,7 @@ public enum Placeholder {
     PLANT_AREA("plant_area", "the plant area or unit"),
     ANALYZERS("analyzers", "the analyzers in scope, with their ranges and allowed losses"),
     REVISION("revision", "the dossier revision (the workbook's revision label)"),
+    EARLIER_REVISIONS("earlier_revisions", "site signatures of earlier revisions, each with its standing"),
     ISSUED("issued", "date and time of issue, UTC"),
     DOCUMENT_STATUS("document_status", "FINAL: the dossier is a complete export, never a draft"),
     RESULT("result", "whether every point in scope passed, as symbol and words"),

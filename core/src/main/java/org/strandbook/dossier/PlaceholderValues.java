@@ -32,6 +32,8 @@ final class PlaceholderValues {
                         + " nm, allowed loop loss " + DossierText.decimal(a.allowedLossDb(), 2) + " dB")
                 .collect(Collectors.joining("\n")));
         v.put(Placeholder.REVISION, c.site().revision());
+        v.put(Placeholder.EARLIER_REVISIONS, c.earlierRevisions().isEmpty() ? "—"
+                : String.join("\n", c.earlierRevisions()));
         v.put(Placeholder.ISSUED, DossierText.time(c.issuedAt()));
         v.put(Placeholder.DOCUMENT_STATUS, FINAL);
         v.put(Placeholder.RESULT, result(c));

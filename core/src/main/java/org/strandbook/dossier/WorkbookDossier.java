@@ -102,7 +102,28 @@ public final class WorkbookDossier {
                 catalog, scope, points, evaluator.pairing().describe(),
                 notes.stream().filter(n -> n.pointTag().isEmpty()).toList(),
                 signOffs.stream().filter(s -> s.pointTag().isEmpty()).toList(), audit, issuedAt, software,
-                workbook.file().getFileName().toString(), rule, uncertainties);
+                workbook.file().getFileName().toString(), rule, uncertainties, earlierRevisions(workbook, revision));
+    }
+
+    /**
+     * The site signatures the cover no longer carries, so that a handover reader sees that an earlier
+     * revision was signed and why this one follows: "APPROVED by … on …, site record, revision A —
+     * SUPERSEDED: point AT-4104 changed after it was signed".
+     */
+    private static List<String> earlierRevisions(Workbook workbook, String revision) {
+        return workbook.signOffs().states().stream()
+                .filter(state -> state.signOff().onSite() && !onCover(state, revision))
+                .map(state -> state.describe() + (state.standing() == SignatureState.Standing.CURRENT ? ""
+                        : " \u2014 " + state.standing().name().replace('_', ' ') + ": " + state.why()))
+                .toList();
+    }
+
+    /** A site signature the cover of {@code revision} carries: still standing, and of that revision. */
+    private static boolean onCover(SignatureState state, String revision) {
+        SignOff s = state.signOff();
+        boolean current = state.standing() == SignatureState.Standing.CURRENT
+                || state.standing() == SignatureState.Standing.NO_DIGEST;
+        return current && (s.revision().isEmpty() || s.revision().equalsIgnoreCase(revision));
     }
 
     /**
@@ -117,7 +138,7 @@ public final class WorkbookDossier {
             boolean current = state.standing() == SignatureState.Standing.CURRENT
                     || state.standing() == SignatureState.Standing.NO_DIGEST;
             if (s.onSite()) {
-                if (current && (s.revision().isEmpty() || s.revision().equalsIgnoreCase(revision))) {
+                if (onCover(state, revision)) {
                     out.add(s);
                 }
             } else {

@@ -135,28 +135,6 @@ public final class MaintenanceRepository {
         }
     }
 
-    /**
-     * The probe type a scan taken at {@code at} went through: the type removed by the first probe
-     * change after it, or the point's probe type today when none came after.
-     */
-    public String probeTypeAt(String pointTag, Instant at) {
-        return session.read(() -> {
-            long pointId = RowKeys.requirePoint(session, pointTag);
-            try (PreparedStatement ps = session.connection().prepareStatement("SELECT element_label FROM "
-                    + "maintenance_action WHERE point_id = ? AND kind = 'REPLACE_PROBE' AND element_label <> '' "
-                    + "AND performed_at > ? ORDER BY performed_at, id LIMIT 1")) {
-                ps.setLong(1, pointId);
-                ps.setString(2, StoredTime.format(at));
-                try (ResultSet rs = ps.executeQuery()) {
-                    if (rs.next()) {
-                        return rs.getString(1);
-                    }
-                }
-            }
-            return probeTypeNow(pointId);
-        });
-    }
-
     private static String probeDescribed(MaintenanceAction action, String removed) {
         String change = "before: probe " + removed + "; after: probe " + action.newProbeTypeCode();
         return action.what().isEmpty() ? change : action.what() + " (" + change + ")";

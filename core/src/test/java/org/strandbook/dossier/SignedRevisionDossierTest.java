@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.time.Instant;
+import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
@@ -22,7 +23,7 @@ import org.strandbook.store.Workbook;
 /**
  * What the dossier says of signatures: the cover carries the signatures of the revision it shows,
  * a change after signing makes it the next, unsigned revision, and a superseded point signature
- * says so. That a signed record changed later needs a new revision is common practice for
+ * says so, and the cover lists the signatures it no longer carries. That a signed record changed later needs a new revision is common practice for
  * controlled documents (design choice of the letters: A, B, ...).
  */
 class SignedRevisionDossierTest {
@@ -53,6 +54,7 @@ class SignedRevisionDossierTest {
         DossierContent c = DossierFixture.content(wb, DossierScope.everything());
         assertEquals("B", c.site().revision());
         assertEquals("R. Fairbairn", c.signOff(SignOffRole.APPROVED).orElseThrow().name());
+        assertEquals(List.of(), c.earlierRevisions());
     }
 
     @Test
@@ -62,6 +64,9 @@ class SignedRevisionDossierTest {
         DossierContent c = DossierFixture.content(wb, DossierScope.everything());
         assertEquals("C", c.site().revision());
         assertTrue(c.signOff(SignOffRole.APPROVED).isEmpty());
+        assertEquals(2, c.earlierRevisions().size(), c.earlierRevisions()::toString);
+        assertTrue(c.earlierRevisions().stream().allMatch(line -> line.contains("SUPERSEDED")),
+                c.earlierRevisions()::toString);
         DossierPoint good = c.points().stream().filter(p -> p.tag().equals(DossierFixture.GOOD)).findFirst()
                 .orElseThrow();
         assertEquals(1, good.actions().size());
