@@ -417,7 +417,9 @@ public final class SiteSync {
             }
             plan.pushed += toPush.size();
         }
-        List<String> toPull = theirs.stream().filter(k -> !mine.containsKey(k) && !base.containsKey(k)).sorted().toList();
+        Set<String> removed = t == PortableTable.SCAN ? exchangeRemovals(c, siteId, mine, base, theirs, plan) : Set.of();
+        List<String> toPull = theirs.stream().filter(k -> !mine.containsKey(k) && !base.containsKey(k)
+                && !removed.contains(k)).sorted().toList();
         if (!toPull.isEmpty()) {
             progress.step("pulling " + toPull.size() + " " + t.workbookTable() + " record(s)");
             pullImmutable(c, siteId, t, toPull, plan);
@@ -431,6 +433,53 @@ public final class SiteSync {
         for (String key : toPull) {
             plan.base(t, key, seen);
         }
+    }
+
+    /**
+     * Scans removed from a workbook (a wrong import) stay on the server, immutable, and a removal
+     * record names each: one removed here since the last sync (agreed on before, gone now) is
+     * recorded on the server; one another workbook removed is removed here too (audited). A removal is
+     * final for that SHA-256: the same file imported again is removed again at the next sync.
+     *
+     * @return every scan the site has removed, which no workbook pulls again
+     */
+    private Set<String> exchangeRemovals(Connection c, long siteId, Map<String, Map<String, Object>> mine,
+                                         Map<String, SyncLedger.Base> base, Set<String> theirs, Plan plan)
+            throws SQLException {
+        Set<String> removed = new HashSet<>();
+        try (PreparedStatement ps = c.prepareStatement("SELECT record_key FROM scan_removal WHERE site_id = ?")) {
+            ps.setLong(1, siteId);
+            ps.setFetchSize(10_000);
+            try (ResultSet rs = ps.executeQuery()) {
+                while (rs.next()) {
+                    removed.add(rs.getString(1));
+                }
+            }
+        }
+        List<String> removedHere = base.keySet().stream()
+                .filter(k -> !mine.containsKey(k) && theirs.contains(k) && !removed.contains(k)).sorted().toList();
+        if (!removedHere.isEmpty()) {
+            progress.step("recording " + removedHere.size() + " scan removal(s) on the server");
+            String fields = PortableFields.json(Map.of("removed_by", workbook.user()));
+            try (PreparedStatement ps = c.prepareStatement("INSERT INTO scan_removal (site_id, record_key, fields)"
+                    + " SELECT ?, k, ?::jsonb FROM unnest(?::text[]) k")) {
+                ps.setLong(1, siteId);
+                ps.setString(2, fields);
+                ps.setArray(3, c.createArrayOf("text", removedHere.toArray()));
+                ps.executeUpdate();
+            }
+            removed.addAll(removedHere);
+            plan.droppedBases.computeIfAbsent(PortableTable.SCAN, x -> new HashSet<>()).addAll(removedHere);
+            plan.changedThere += removedHere.size();
+        }
+        for (String key : mine.keySet()) {
+            if (removed.contains(key)) {
+                plan.removals.add(new LocalChange(PortableTable.SCAN, key, null, null));
+                plan.droppedBases.computeIfAbsent(PortableTable.SCAN, x -> new HashSet<>()).add(key);
+                plan.changedHere++;
+            }
+        }
+        return removed;
     }
 
     private static void insertRows(PreparedStatement ps, long siteId, List<OutgoingRecords.Row> rows, boolean scan)

@@ -170,14 +170,23 @@ public final class WorkbookRecords {
         });
     }
 
-    /** Removes one editable record, audited; call children first. */
+    /**
+     * Removes one editable record, or a scan another workbook removed, audited; call children first.
+     */
     public void remove(PortableTable table, String key) {
-        if (!table.editable() || table == PortableTable.SITE || table == PortableTable.DECISION_RULE) {
+        if (!table.editable() && table != PortableTable.SCAN || table == PortableTable.SITE
+                || table == PortableTable.DECISION_RULE) {
             throw new IllegalArgumentException(table + " records are never removed by a sync");
         }
         session.write(() -> {
             Long id = localId(table, key);
             if (id != null) {
+                if (table == PortableTable.SCAN) {
+                    // the spectrum goes with its scan, as when a scan is removed here
+                    PreparedStatement ps = session.prepared("DELETE FROM scan_spectrum WHERE scan_id = ?");
+                    ps.setLong(1, id);
+                    ps.executeUpdate();
+                }
                 audit.deleteRow(AuditedTable.valueOf(table.name()), id);
                 ids.get(table).remove(key);
             }
