@@ -63,26 +63,20 @@ END
 $$;
 REVOKE ALL ON FUNCTION records_added_in_batch() FROM PUBLIC;
 
-DROP TRIGGER scan_audited ON scan;
-CREATE TRIGGER scan_audited AFTER INSERT ON scan REFERENCING NEW TABLE AS added
-    FOR EACH STATEMENT EXECUTE FUNCTION records_added_in_batch();
-DROP TRIGGER inspection_audited ON inspection;
-CREATE TRIGGER inspection_audited AFTER INSERT ON inspection REFERENCING NEW TABLE AS added
-    FOR EACH STATEMENT EXECUTE FUNCTION records_added_in_batch();
-DROP TRIGGER maintenance_action_audited ON maintenance_action;
-CREATE TRIGGER maintenance_action_audited AFTER INSERT ON maintenance_action REFERENCING NEW TABLE AS added
-    FOR EACH STATEMENT EXECUTE FUNCTION records_added_in_batch();
-DROP TRIGGER note_audited ON note;
-CREATE TRIGGER note_audited AFTER INSERT ON note REFERENCING NEW TABLE AS added
-    FOR EACH STATEMENT EXECUTE FUNCTION records_added_in_batch();
-DROP TRIGGER sign_off_audited ON sign_off;
-CREATE TRIGGER sign_off_audited AFTER INSERT ON sign_off REFERENCING NEW TABLE AS added
-    FOR EACH STATEMENT EXECUTE FUNCTION records_added_in_batch();
-DROP TRIGGER retired_path_element_audited ON retired_path_element;
-CREATE TRIGGER retired_path_element_audited AFTER INSERT ON retired_path_element REFERENCING NEW TABLE AS added
-    FOR EACH STATEMENT EXECUTE FUNCTION records_added_in_batch();
+DO $$
+DECLARE
+    t text;
+BEGIN
+    FOREACH t IN ARRAY ARRAY['scan', 'inspection', 'maintenance_action', 'note', 'sign_off', 'retired_path_element'] LOOP
+        EXECUTE format('DROP TRIGGER %I ON %I', t || '_audited', t);
+        EXECUTE format('CREATE TRIGGER %I AFTER INSERT ON %I REFERENCING NEW TABLE AS added'
+            || ' FOR EACH STATEMENT EXECUTE FUNCTION records_added_in_batch()', t || '_audited', t);
+    END LOOP;
+END
+$$;
 
--- A scan removed from a workbook: keyed by the scan's SHA-256; fields say when, by whom and why.
+-- A scan removed from a workbook: keyed by the scan's SHA-256; fields name the workbook user who removed
+-- it, added_at and added_by when and through which login the removal reached the server.
 CREATE TABLE scan_removal (
     site_id    bigint NOT NULL REFERENCES site (id),
     record_key text NOT NULL CHECK (record_key <> ''),
