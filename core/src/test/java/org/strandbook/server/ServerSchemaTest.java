@@ -151,6 +151,28 @@ class ServerSchemaTest {
     }
 
     @Test
+    void aScanRemovalIsAnAuditedRecordThatNobodyTakesBackAndOnlyTheSitesMembersWrite() throws SQLException {
+        try (Connection a = as("schema_tech_a"); Statement st = a.createStatement()) {
+            st.execute("INSERT INTO scan_removal (site_id, record_key, fields) SELECT id, 'removed-scan',"
+                    + " '{\"removed_by\":\"k.ashdown\"}' FROM site WHERE name = 'Site A'");
+            try (ResultSet rs = st.executeQuery("SELECT count(*) FROM audit_entry WHERE table_name = 'scan_removal'"
+                    + " AND record_key = 'removed-scan'")) {
+                rs.next();
+                assertEquals(1, rs.getInt(1), "the removal left its audit row");
+            }
+            assertEquals("42501", refused(a, "DELETE FROM scan_removal").getSQLState());
+            assertEquals("42501", refused(a, "UPDATE scan_removal SET fields = '{}'").getSQLState());
+        }
+        try (Connection b = as("schema_tech_b");
+             PreparedStatement ps = b.prepareStatement("INSERT INTO scan_removal (site_id, record_key, fields)"
+                     + " VALUES (?, 'another', '{}')")) {
+            ps.setLong(1, siteId("Site A"));
+            SQLException e = assertThrows(SQLException.class, ps::executeUpdate);
+            assertTrue(e.getMessage().contains("row-level security"), e.getMessage());
+        }
+    }
+
+    @Test
     void anotherSitesTechnicianNeitherSeesNorWritesIt() throws SQLException {
         try (Connection b = as("schema_tech_b"); Statement st = b.createStatement()) {
             try (ResultSet rs = st.executeQuery("SELECT count(*) FROM point")) {
