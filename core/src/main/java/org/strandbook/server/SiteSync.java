@@ -45,8 +45,11 @@ public final class SiteSync {
 
     /** Records fetched from the server per query when pulling. */
     private static final int PULL_CHUNK = 500;
-    /** Immutable records per batch when pushing. */
-    private static final int PUSH_BATCH = 200;
+    /**
+     * Immutable records per INSERT when pushing: the server audits each statement once, and a
+     * scan batch (~2 kB a row) stays well inside one message (design choice).
+     */
+    private static final int PUSH_BATCH = 500;
     /** The lock class of a site's sync (pg_advisory_xact_lock's first key), our own number. */
     private static final int SYNC_LOCK_CLASS = 0x5342;
 
@@ -384,50 +387,39 @@ public final class SiteSync {
         if (!toPush.isEmpty()) {
             progress.step("pushing " + toPush.size() + " " + t.workbookTable() + " record(s)");
             boolean scan = t == PortableTable.SCAN;
-            String sql = "INSERT INTO " + t.serverTable() + " (site_id, record_key, fields"
-                    + (scan ? ", spectrum" : "") + ") VALUES (?, ?, ?::jsonb" + (scan ? ", ?" : "") + ")"
-                    + " ON CONFLICT DO NOTHING";
-            try (PreparedStatement ps = c.prepareStatement(sql)) {
-                int[] n = {0};
-                WorkbookRecords.SpectrumSink add = (key, spectrum) -> {
-                    ps.setLong(1, siteId);
-                    ps.setString(2, key);
-                    ps.setString(3, PortableFields.json(mine.get(key)));
-                    if (scan) {
-                        ps.setBytes(4, spectrum);
-                    }
-                    ps.addBatch();
-                    if (++n[0] % PUSH_BATCH == 0) {
-                        ps.executeBatch();
-                        progress.done(n[0], toPush.size());
-                    }
-                };
-                if (scan) {
-                    try {
-                        records.spectra(new HashSet<>(toPush), add);
-                    } catch (WorkbookRecords.SinkFailure f) {
-                        if (f.getCause() instanceof SQLException serverFailure) {
-                            throw serverFailure;
-                        }
-                        throw f.getCause() instanceof RuntimeException r ? r : f;
-                    }
-                } else {
-                    for (String key : toPush) {
-                        try {
-                            add.accept(key, null);
-                        } catch (SQLException | RuntimeException e) {
-                            throw e;
-                        } catch (Exception e) {
-                            throw new IllegalStateException(e);
-                        }
+            String row = scan ? "(?, ?, ?::jsonb, ?)" : "(?, ?, ?::jsonb)";
+            String insert = "INSERT INTO " + t.serverTable() + " (site_id, record_key, fields" + (scan ? ", spectrum" : "")
+                    + ") VALUES ";
+            List<OutgoingRecords.Row> batch = new ArrayList<>(PUSH_BATCH);
+            // one multi-row statement per batch: the server plans and audits a statement once. No ON
+            // CONFLICT clause: the keys the server holds were read under the site's lock, so none of
+            // these is there, and a duplicate all the same would fail the whole transaction, not half of it
+            try (PreparedStatement full = c.prepareStatement(insert + (row + ", ").repeat(PUSH_BATCH - 1) + row);
+                 OutgoingRecords outgoing = new OutgoingRecords(records, t, mine, toPush)) {
+                int n = 0;
+                for (OutgoingRecords.Row r = outgoing.next(); r != null; r = outgoing.next()) {
+                    batch.add(r);
+                    if (batch.size() == PUSH_BATCH) {
+                        insertRows(full, siteId, batch, scan);
+                        n += batch.size();
+                        batch.clear();
+                        progress.done(n, toPush.size());
                     }
                 }
-                ps.executeBatch();
-                progress.done(n[0], toPush.size());
+                if (!batch.isEmpty()) {
+                    try (PreparedStatement tail = c.prepareStatement(insert + (row + ", ").repeat(batch.size() - 1)
+                            + row)) {
+                        insertRows(tail, siteId, batch, scan);
+                    }
+                    n += batch.size();
+                }
+                progress.done(n, toPush.size());
             }
             plan.pushed += toPush.size();
         }
-        List<String> toPull = theirs.stream().filter(k -> !mine.containsKey(k) && !base.containsKey(k)).sorted().toList();
+        Set<String> removed = t == PortableTable.SCAN ? exchangeRemovals(c, siteId, mine, base, theirs, plan) : Set.of();
+        List<String> toPull = theirs.stream().filter(k -> !mine.containsKey(k) && !base.containsKey(k)
+                && !removed.contains(k)).sorted().toList();
         if (!toPull.isEmpty()) {
             progress.step("pulling " + toPull.size() + " " + t.workbookTable() + " record(s)");
             pullImmutable(c, siteId, t, toPull, plan);
@@ -441,6 +433,67 @@ public final class SiteSync {
         for (String key : toPull) {
             plan.base(t, key, seen);
         }
+    }
+
+    /**
+     * Scans removed from a workbook (a wrong import) stay on the server, immutable, and a removal
+     * record names each: one removed here since the last sync (agreed on before, gone now) is
+     * recorded on the server; one another workbook removed is removed here too (audited). A removal is
+     * final for that SHA-256: the same file imported again is removed again at the next sync.
+     *
+     * @return every scan the site has removed, which no workbook pulls again
+     */
+    private Set<String> exchangeRemovals(Connection c, long siteId, Map<String, Map<String, Object>> mine,
+                                         Map<String, SyncLedger.Base> base, Set<String> theirs, Plan plan)
+            throws SQLException {
+        Set<String> removed = new HashSet<>();
+        try (PreparedStatement ps = c.prepareStatement("SELECT record_key FROM scan_removal WHERE site_id = ?")) {
+            ps.setLong(1, siteId);
+            ps.setFetchSize(10_000);
+            try (ResultSet rs = ps.executeQuery()) {
+                while (rs.next()) {
+                    removed.add(rs.getString(1));
+                }
+            }
+        }
+        List<String> removedHere = base.keySet().stream()
+                .filter(k -> !mine.containsKey(k) && theirs.contains(k) && !removed.contains(k)).sorted().toList();
+        if (!removedHere.isEmpty()) {
+            progress.step("recording " + removedHere.size() + " scan removal(s) on the server");
+            String fields = PortableFields.json(Map.of("removed_by", workbook.user()));
+            try (PreparedStatement ps = c.prepareStatement("INSERT INTO scan_removal (site_id, record_key, fields)"
+                    + " SELECT ?, k, ?::jsonb FROM unnest(?::text[]) k")) {
+                ps.setLong(1, siteId);
+                ps.setString(2, fields);
+                ps.setArray(3, c.createArrayOf("text", removedHere.toArray()));
+                ps.executeUpdate();
+            }
+            removed.addAll(removedHere);
+            plan.droppedBases.computeIfAbsent(PortableTable.SCAN, x -> new HashSet<>()).addAll(removedHere);
+            plan.changedThere += removedHere.size();
+        }
+        for (String key : mine.keySet()) {
+            if (removed.contains(key)) {
+                plan.removals.add(new LocalChange(PortableTable.SCAN, key, null, null));
+                plan.droppedBases.computeIfAbsent(PortableTable.SCAN, x -> new HashSet<>()).add(key);
+                plan.changedHere++;
+            }
+        }
+        return removed;
+    }
+
+    private static void insertRows(PreparedStatement ps, long siteId, List<OutgoingRecords.Row> rows, boolean scan)
+            throws SQLException {
+        int p = 0;
+        for (OutgoingRecords.Row r : rows) {
+            ps.setLong(++p, siteId);
+            ps.setString(++p, r.key());
+            ps.setString(++p, r.fieldsJson());
+            if (scan) {
+                ps.setBytes(++p, r.spectrum());
+            }
+        }
+        ps.executeUpdate();
     }
 
     private void pullImmutable(Connection c, long siteId, PortableTable t, List<String> keys, Plan plan)

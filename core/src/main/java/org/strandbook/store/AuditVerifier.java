@@ -100,6 +100,7 @@ final class AuditVerifier {
         for (AuditedTable table : AuditedTable.values()) {
             try (PreparedStatement ps = session.connection().prepareStatement(table.selectAllSql());
                  ResultSet rs = ps.executeQuery()) {
+                String[] columns = RowImage.columnNames(rs);
                 while (rs.next()) {
                     String key = Long.toString(rs.getLong(1));
                     String name = table.tableName() + " row " + key;
@@ -109,7 +110,7 @@ final class AuditVerifier {
                     } else if (recorded.rowSha256() == null) {
                         findings.add(new AuditFinding(recorded.auditRowId(), name + " was deleted by audit row "
                                 + recorded.auditRowId() + " but is present: it was restored without Strandbook"));
-                    } else if (!recorded.rowSha256().equals(RowImage.of(rs).sha256())) {
+                    } else if (!recorded.rowSha256().equals(RowImage.of(rs, columns).sha256())) {
                         findings.add(new AuditFinding(recorded.auditRowId(), name + " differs from audit row "
                                 + recorded.auditRowId() + ": it was changed without Strandbook"));
                     }

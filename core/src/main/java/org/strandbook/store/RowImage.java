@@ -35,8 +35,26 @@ final class RowImage {
 
     /** The image of the result set's current row. */
     static RowImage of(ResultSet rs) throws SQLException {
+        return of(rs, columnNames(rs));
+    }
+
+    /**
+     * The result set's column names, to read once for many rows with {@link #of(ResultSet, String[])}:
+     * the driver asks the native library for a name on every call, which a check of every row of a
+     * workbook of tens of thousands of scans felt.
+     */
+    static String[] columnNames(ResultSet rs) throws SQLException {
         ResultSetMetaData meta = rs.getMetaData();
-        int n = meta.getColumnCount();
+        String[] names = new String[meta.getColumnCount()];
+        for (int i = 0; i < names.length; i++) {
+            names[i] = meta.getColumnName(i + 1);
+        }
+        return names;
+    }
+
+    /** The image of the result set's current row, its columns named by {@link #columnNames}. */
+    static RowImage of(ResultSet rs, String[] names) throws SQLException {
+        int n = names.length;
         List<Column> columns = new ArrayList<>(n);
         for (int i = 1; i <= n; i++) {
             Object v = rs.getObject(i);
@@ -47,7 +65,7 @@ final class RowImage {
             } else if (v instanceof Float f) {
                 v = f.doubleValue();
             }
-            columns.add(new Column(meta.getColumnName(i), v));
+            columns.add(new Column(names[i - 1], v));
         }
         return new RowImage(List.copyOf(columns));
     }

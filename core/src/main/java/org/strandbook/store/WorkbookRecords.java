@@ -49,11 +49,16 @@ public final class WorkbookRecords {
         try (Statement st = session.connection().createStatement();
              ResultSet rs = st.executeQuery("SELECT * FROM " + table.workbookTable() + " ORDER BY id")) {
             ResultSetMetaData meta = rs.getMetaData();
+            // named once: the driver asks the native library for a column's name on every call
+            String[] names = new String[meta.getColumnCount() + 1];
+            for (int c = 1; c < names.length; c++) {
+                names[c] = meta.getColumnName(c);
+            }
             while (rs.next()) {
                 Map<String, Object> fields = new LinkedHashMap<>();
                 long id = 0;
-                for (int c = 1; c <= meta.getColumnCount(); c++) {
-                    String name = meta.getColumnName(c);
+                for (int c = 1; c < names.length; c++) {
+                    String name = names[c];
                     Object v = rs.getObject(c);
                     if (v instanceof Integer k) {
                         v = k.longValue();
@@ -165,14 +170,23 @@ public final class WorkbookRecords {
         });
     }
 
-    /** Removes one editable record, audited; call children first. */
+    /**
+     * Removes one editable record, or a scan another workbook removed, audited; call children first.
+     */
     public void remove(PortableTable table, String key) {
-        if (!table.editable() || table == PortableTable.SITE || table == PortableTable.DECISION_RULE) {
+        if (!table.editable() && table != PortableTable.SCAN || table == PortableTable.SITE
+                || table == PortableTable.DECISION_RULE) {
             throw new IllegalArgumentException(table + " records are never removed by a sync");
         }
         session.write(() -> {
             Long id = localId(table, key);
             if (id != null) {
+                if (table == PortableTable.SCAN) {
+                    // the spectrum goes with its scan, as when a scan is removed here
+                    PreparedStatement ps = session.prepared("DELETE FROM scan_spectrum WHERE scan_id = ?");
+                    ps.setLong(1, id);
+                    ps.executeUpdate();
+                }
                 audit.deleteRow(AuditedTable.valueOf(table.name()), id);
                 ids.get(table).remove(key);
             }

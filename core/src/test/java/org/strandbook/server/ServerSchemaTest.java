@@ -92,23 +92,32 @@ class ServerSchemaTest {
     }
 
     @Test
-    void aMultiRowInsertLeavesOneChainedAuditRowPerRecord() throws SQLException {
+    void aMultiRowInsertLeavesOneChainedAuditRowThatNamesAndHashesItsRecords() throws SQLException {
         try (Connection a = as("schema_tech_a"); Statement st = a.createStatement()) {
             st.execute("INSERT INTO inspection (site_id, record_key, fields) SELECT id, k, '{}' FROM site,"
-                    + " (VALUES ('i1'), ('i2'), ('i3')) v(k) WHERE name = 'Site A'");
+                    + " (VALUES ('i2'), ('i1'), ('i3')) v(k) WHERE name = 'Site A'");
         }
         try (Connection a = as("schema_tech_a"); Statement st = a.createStatement();
              ResultSet rs = st.executeQuery("SELECT table_name, prev_hash, hash, hash = audit_hash(prev_hash, id, at,"
-                     + " db_user, action, table_name, record_key, old_fields, new_fields) FROM audit_entry ORDER BY id")) {
+                     + " db_user, action, table_name, record_key, old_fields, new_fields), new_fields::text,"
+                     + " new_fields ->> 'sha256' = records_digest(table_name, site_id,"
+                     + " ARRAY(SELECT jsonb_array_elements_text(new_fields -> 'keys')))"
+                     + " FROM audit_entry ORDER BY id")) {
             String previous = "0".repeat(64);
-            int inspections = 0;
+            int batches = 0;
             while (rs.next()) {
                 assertEquals(previous, rs.getString(2), "each row names the one before it");
                 assertTrue(rs.getBoolean(4), "each row's hash recomputes");
                 previous = rs.getString(3);
-                inspections += rs.getString(1).equals("inspection") ? 1 : 0;
+                if (rs.getString(1).equals("inspection")) {
+                    batches++;
+                    assertTrue(rs.getString(5).contains("\"keys\": [\"i1\", \"i2\", \"i3\"]"), rs.getString(5));
+                    assertTrue(rs.getString(5).contains("\"records\": 3"), rs.getString(5));
+                    assertTrue(rs.getBoolean(6), "the records' digest recomputes from the rows as stored");
+                }
             }
-            assertEquals(3, inspections, "one audit row per record of the statement");
+            assertEquals(1, batches, "one audit row for the statement's three records (design choice: a first sync"
+                    + " of tens of thousands of scans would otherwise pay a chained row per scan)");
         }
     }
 
@@ -138,6 +147,28 @@ class ServerSchemaTest {
             assertEquals("42501", refused(a, "UPDATE note SET fields = '{}'").getSQLState());
             assertEquals("42501", refused(a, "DELETE FROM note").getSQLState());
             assertEquals("42501", refused(a, "DELETE FROM point").getSQLState());
+        }
+    }
+
+    @Test
+    void aScanRemovalIsAnAuditedRecordThatNobodyTakesBackAndOnlyTheSitesMembersWrite() throws SQLException {
+        try (Connection a = as("schema_tech_a"); Statement st = a.createStatement()) {
+            st.execute("INSERT INTO scan_removal (site_id, record_key, fields) SELECT id, 'removed-scan',"
+                    + " '{\"removed_by\":\"k.ashdown\"}' FROM site WHERE name = 'Site A'");
+            try (ResultSet rs = st.executeQuery("SELECT count(*) FROM audit_entry WHERE table_name = 'scan_removal'"
+                    + " AND record_key = 'removed-scan'")) {
+                rs.next();
+                assertEquals(1, rs.getInt(1), "the removal left its audit row");
+            }
+            assertEquals("42501", refused(a, "DELETE FROM scan_removal").getSQLState());
+            assertEquals("42501", refused(a, "UPDATE scan_removal SET fields = '{}'").getSQLState());
+        }
+        try (Connection b = as("schema_tech_b");
+             PreparedStatement ps = b.prepareStatement("INSERT INTO scan_removal (site_id, record_key, fields)"
+                     + " VALUES (?, 'another', '{}')")) {
+            ps.setLong(1, siteId("Site A"));
+            SQLException e = assertThrows(SQLException.class, ps::executeUpdate);
+            assertTrue(e.getMessage().contains("row-level security"), e.getMessage());
         }
     }
 

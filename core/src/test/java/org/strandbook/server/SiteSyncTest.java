@@ -117,6 +117,60 @@ class SiteSyncTest {
     }
 
     @Test
+    void aScanRemovedFromOneWorkbookIsRemovedFromTheOthersAndFromClonesWhileTheServerKeepsIt() throws SQLException {
+        // the issue: immutable records are never changed or deleted on the server, yet a wrong import
+        // removed on one laptop must not come back; the removal travels as a record of its own
+        String wrong = DemoSite.sha256Of(DemoSite.POINT_A + "/1");
+        try (Workbook a = laptopA()) {
+            sync(as("sync_tech_a"), a);
+            try (Workbook b = cloneAs("sync_tech_a", "b.strandbook")) {
+                long id = a.scans().list(DemoSite.POINT_A).stream().filter(r -> r.sha256().equals(wrong))
+                        .findFirst().orElseThrow().id();
+                a.scans().delete(id);
+                SiteSync.Outcome removal = sync(as("sync_tech_a"), a);
+                assertEquals(1, removal.changedThere(), "the removal was recorded on the server");
+                assertEquals(1, count("SELECT count(*) FROM scan WHERE record_key = '" + wrong + "'"),
+                        "the scan itself stays on the server, immutable");
+                assertEquals(1, count("SELECT count(*) FROM audit_entry WHERE table_name = 'scan_removal'"
+                        + " AND record_key = '" + wrong + "'"), "the removal is audited on the server");
+
+                SiteSync.Outcome there = sync(as("sync_tech_a"), b);
+                assertEquals(1, there.changedHere());
+                assertTrue(b.scans().list(DemoSite.POINT_A).stream().noneMatch(r -> r.sha256().equals(wrong)));
+                assertTrue(b.audit().verify().intact(), "the removal is an audited change of the other workbook");
+                assertEquals(a.records().readAll(), b.records().readAll());
+                try (Workbook c = cloneAs("sync_tech_a", "c.strandbook")) {
+                    assertEquals(a.records().readAll(), c.records().readAll(), "a clone leaves the removed scan out");
+                }
+                SiteSync.Outcome again = sync(as("sync_tech_a"), a);
+                assertEquals(0, again.pushed() + again.pulled() + again.changedHere() + again.changedThere(),
+                        "the removed scan does not come back, and the removal is not recorded twice");
+            }
+        }
+    }
+
+    @Test
+    void aPointRenamedBeforeItsFirstSyncTravelsUnderItsNewTagAndASyncedPointKeepsItsTag() throws SQLException {
+        // design choice: on the server every workbook knows a point by its tag, so a synced point's
+        // tag change is refused with what to do instead, rather than reaching the others as a new point
+        try (Workbook a = laptopA()) {
+            a.points().rename(DemoSite.POINT_B, "AT-4299");
+            assertTrue(a.audit().verify().intact(), "the rename is an audited update of the point row");
+            sync(as("sync_tech_a"), a);
+            assertEquals(1, count("SELECT count(*) FROM point WHERE record_key = 'AT-4299'"));
+            assertEquals(0, count("SELECT count(*) FROM point WHERE record_key = '" + DemoSite.POINT_B + "'"));
+
+            long pointsBefore = count("SELECT count(*) FROM point");
+            org.strandbook.store.WorkbookException refused = assertThrows(org.strandbook.store.WorkbookException.class,
+                    () -> a.points().rename(DemoSite.POINT_A, "AT-4298"));
+            assertTrue(refused.getMessage().contains("has synced with a plant server"), refused.getMessage());
+            assertTrue(a.points().get(DemoSite.POINT_A).isPresent(), "the point keeps its tag");
+            sync(as("sync_tech_a"), a);
+            assertEquals(pointsBefore, count("SELECT count(*) FROM point"), "no new point reached the server");
+        }
+    }
+
+    @Test
     void twoEditsOfOneFieldAreAConflictThatAPersonResolves() throws SQLException {
         try (Workbook a = laptopA()) {
             sync(as("sync_tech_a"), a);

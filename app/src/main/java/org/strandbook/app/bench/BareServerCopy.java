@@ -1,24 +1,26 @@
 package org.strandbook.app.bench;
 
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.sql.Connection;
 import java.sql.DriverManager;
-import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
+import java.util.HexFormat;
 import java.util.Locale;
+
+import org.postgresql.PGConnection;
+import org.postgresql.copy.CopyIn;
 
 /**
  * The floor of the sync benchmark: the same scan rows read from the workbook file with a bare
- * SELECT and batch-inserted with a bare prepared statement, in one transaction, into a table of
- * the server's scan shape (site, key, fields as jsonb, spectrum as bytea, the same primary key)
- * with no trigger, no row-level security, no audit and no bookkeeping: what SQLite and PostgreSQL
- * themselves cost for the copy.
+ * SELECT and loaded by PostgreSQL's COPY (the fastest bare way in; faster here than a batch of
+ * INSERTs, rewritten or not), in one transaction, into a table of the server's scan shape (site,
+ * key, fields as jsonb, spectrum as bytea, the same primary key) with no trigger, no row-level
+ * security, no audit and no bookkeeping: what SQLite and PostgreSQL themselves cost for the copy.
  */
 final class BareServerCopy {
-
-    private static final int BATCH = 200;
 
     private BareServerCopy() {
     }
@@ -35,28 +37,33 @@ final class BareServerCopy {
             }
             to.commit();
             long start = System.nanoTime();
+            CopyIn copy = to.unwrap(PGConnection.class).getCopyAPI()
+                    .copyIn("COPY " + table + " (site_id, record_key, fields, spectrum) FROM STDIN");
+            HexFormat hex = HexFormat.of();
+            StringBuilder line = new StringBuilder();
             try (Statement read = from.createStatement();
                  ResultSet rs = read.executeQuery("SELECT s.sha256, s.point_id, s.kind, s.taken_at, s.operator,"
                          + " s.integration_ms, s.co_added, s.n_points, s.min_nm, s.max_nm, s.source_file, d.data"
-                         + " FROM scan s JOIN scan_spectrum d ON d.scan_id = s.id");
-                 PreparedStatement insert = to.prepareStatement("INSERT INTO " + table
-                         + " (site_id, record_key, fields, spectrum) VALUES (1, ?, ?::jsonb, ?)")) {
-                int n = 0;
+                         + " FROM scan s JOIN scan_spectrum d ON d.scan_id = s.id")) {
                 while (rs.next()) {
-                    insert.setString(1, rs.getString(1));
-                    insert.setString(2, String.format(Locale.ROOT, "{\"point\":%d,\"kind\":\"%s\",\"taken_at\":\"%s\","
-                                    + "\"operator\":\"%s\",\"integration_ms\":%s,\"co_added\":%d,\"n_points\":%d,"
-                                    + "\"min_nm\":%s,\"max_nm\":%s,\"source_file\":\"%s\",\"sha256\":\"%s\"}",
+                    line.setLength(0);
+                    // COPY's text format: tab-separated, bytea as \x hex (its backslash doubled)
+                    line.append("1\t").append(rs.getString(1)).append('\t').append(String.format(Locale.ROOT,
+                            "{\"point\":%d,\"kind\":\"%s\",\"taken_at\":\"%s\",\"operator\":\"%s\","
+                                    + "\"integration_ms\":%s,\"co_added\":%d,\"n_points\":%d,\"min_nm\":%s,"
+                                    + "\"max_nm\":%s,\"source_file\":\"%s\",\"sha256\":\"%s\"}",
                             rs.getLong(2), rs.getString(3), rs.getString(4), rs.getString(5), rs.getDouble(6),
                             rs.getLong(7), rs.getLong(8), rs.getDouble(9), rs.getDouble(10), rs.getString(11),
                             rs.getString(1)));
-                    insert.setBytes(3, rs.getBytes(12));
-                    insert.addBatch();
-                    if (++n % BATCH == 0) {
-                        insert.executeBatch();
-                    }
+                    line.append("\t\\\\x").append(hex.formatHex(rs.getBytes(12))).append('\n');
+                    byte[] bytes = line.toString().getBytes(StandardCharsets.UTF_8);
+                    copy.writeToCopy(bytes, 0, bytes.length);
                 }
-                insert.executeBatch();
+                copy.endCopy();
+            } finally {
+                if (copy.isActive()) {
+                    copy.cancelCopy();
+                }
             }
             to.commit();
             return (System.nanoTime() - start) * 1e-9;

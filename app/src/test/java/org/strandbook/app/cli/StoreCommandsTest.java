@@ -185,6 +185,20 @@ class StoreCommandsTest {
     }
 
     @Test
+    void aWrongImportIsRemovedByItsIdAndTheRemovalIsInTheAuditTrail() throws Exception {
+        Path file = siteWithScans();
+        Run r = run("scans", file.toString(), "--remove", "2");
+        assertEquals(0, r.exit(), r.err());
+        assertTrue(r.out().contains("removed the loop scan of AT-101"), r.out());
+        assertEquals(1, run("scans", file.toString(), "--json").out().lines().filter(l -> l.contains("\"id\"")).count());
+        Run verify = run("audit", "verify", file.toString());
+        assertEquals(0, verify.exit(), "an audited deletion keeps the trail intact: " + verify.err());
+        Run again = run("scans", file.toString(), "--remove", "2");
+        assertEquals(1, again.exit());
+        assertTrue(again.err().contains("no scan with id 2"), again.err());
+    }
+
+    @Test
     void scansAsTextAreAnAlignedTableWithUnitsInTheHeaders() throws Exception {
         Path file = siteWithScans();
         Run r = run("scans", file.toString(), "--point", "at-101");
