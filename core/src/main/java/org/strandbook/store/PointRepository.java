@@ -155,47 +155,6 @@ public final class PointRepository {
         });
     }
 
-    /**
-     * Gives a point a new tag, audited as an update of its row: its bands, legs and records follow,
-     * as they refer to the point and not to its tag.
-     *
-     * <p>Refused once the point has synced with a plant server: there every workbook knows a point by
-     * its tag, so a new tag would reach the others as a new point, with the scans and notes of the old
-     * one left under the old tag. (Making a rename travel as a rename is not built yet.)
-     *
-     * @throws UnknownEntryException   when no point has the tag {@code from}
-     * @throws DuplicateEntryException when {@code to} is taken
-     * @throws WorkbookException       when the point has synced
-     */
-    public void rename(String from, String to) {
-        session.write(() -> {
-            long id = RowKeys.requirePoint(session, from);
-            OptionalLong taken = RowKeys.point(session, to);
-            if (taken.isPresent() && taken.getAsLong() != id) {
-                throw new DuplicateEntryException("point tag '" + to + "' is already used in this workbook");
-            }
-            PreparedStatement synced = session.prepared(
-                    "SELECT 1 FROM sync_base WHERE table_name = 'POINT' AND record_key = ?");
-            synced.setString(1, from);
-            try (ResultSet rs = synced.executeQuery()) {
-                if (rs.next()) {
-                    throw new WorkbookException("point " + from + " has synced with a plant server, where every"
-                            + " workbook knows it by its tag: renaming it to " + to + " would reach the others as a"
-                            + " new point and leave its records under " + from + ". Keep the tag and say what changed"
-                            + " in the point's service or location, or add " + to + " as a new point for new work");
-                }
-            }
-            RowImage before = audit.capture(AuditedTable.POINT, id).orElseThrow();
-            try (PreparedStatement ps = session.connection().prepareStatement("UPDATE point SET tag = ? WHERE id = ?")) {
-                ps.setString(1, to);
-                ps.setLong(2, id);
-                ps.executeUpdate();
-            }
-            audit.updated(AuditedTable.POINT, id, before);
-            return null;
-        });
-    }
-
     /** The point with the given tag (compared without case). */
     public Optional<MeasurementPoint> get(String tag) {
         return session.read(() -> {

@@ -150,27 +150,6 @@ class SiteSyncTest {
     }
 
     @Test
-    void aPointRenamedBeforeItsFirstSyncTravelsUnderItsNewTagAndASyncedPointKeepsItsTag() throws SQLException {
-        // design choice: on the server every workbook knows a point by its tag, so a synced point's
-        // tag change is refused with what to do instead, rather than reaching the others as a new point
-        try (Workbook a = laptopA()) {
-            a.points().rename(DemoSite.POINT_B, "AT-4299");
-            assertTrue(a.audit().verify().intact(), "the rename is an audited update of the point row");
-            sync(as("sync_tech_a"), a);
-            assertEquals(1, count("SELECT count(*) FROM point WHERE record_key = 'AT-4299'"));
-            assertEquals(0, count("SELECT count(*) FROM point WHERE record_key = '" + DemoSite.POINT_B + "'"));
-
-            long pointsBefore = count("SELECT count(*) FROM point");
-            org.strandbook.store.WorkbookException refused = assertThrows(org.strandbook.store.WorkbookException.class,
-                    () -> a.points().rename(DemoSite.POINT_A, "AT-4298"));
-            assertTrue(refused.getMessage().contains("has synced with a plant server"), refused.getMessage());
-            assertTrue(a.points().get(DemoSite.POINT_A).isPresent(), "the point keeps its tag");
-            sync(as("sync_tech_a"), a);
-            assertEquals(pointsBefore, count("SELECT count(*) FROM point"), "no new point reached the server");
-        }
-    }
-
-    @Test
     void twoEditsOfOneFieldAreAConflictThatAPersonResolves() throws SQLException {
         try (Workbook a = laptopA()) {
             sync(as("sync_tech_a"), a);

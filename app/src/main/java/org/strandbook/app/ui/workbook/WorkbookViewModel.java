@@ -218,12 +218,12 @@ public final class WorkbookViewModel {
         return selectedTag.getReadOnlyProperty();
     }
 
-    /** The last failure or refusal worth telling the user about. */
     /** The open workbook's standing with its plant server, in words; empty when none is open. */
     public ReadOnlyStringProperty syncStateProperty() {
         return syncState.getReadOnlyProperty();
     }
 
+    /** The last failure or refusal worth telling the user about. */
     public ReadOnlyStringProperty noticeProperty() {
         return notice.getReadOnlyProperty();
     }
