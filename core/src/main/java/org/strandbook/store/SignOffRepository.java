@@ -6,6 +6,8 @@ import java.sql.SQLException;
 import java.sql.Types;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
+import java.util.OptionalLong;
 
 import org.strandbook.site.RevisionLetter;
 import org.strandbook.site.Site;
@@ -186,19 +188,58 @@ public final class SignOffRepository {
         ps.setLong(1, s.auditHeadId());
         try (ResultSet rs = ps.executeQuery()) {
             if (!rs.next() || !rs.getString(1).equals(signOff.contentSha256())) {
+                OptionalLong arrived = arrivalThroughServer(s.id());
+                if (arrived.isPresent()) {
+                    return changedSince(s, arrived.getAsLong(), SignatureState.Standing.SIGNED_ELSEWHERE,
+                            "signed in another copy of the site and brought by the plant server: that copy's audit"
+                                    + " trail holds what it covered");
+                }
                 return new SignatureState(s.id(), signOff, SignatureState.Standing.TAMPERED, "the audit trail's row "
                         + s.auditHeadId() + " no longer has the hash the signature recorded");
             }
         }
+        return changedSince(s, s.auditHeadId(), SignatureState.Standing.CURRENT, "");
+    }
+
+    /** Superseded when anything a site signature covers was recorded after audit row {@code headId}. */
+    private SignatureState changedSince(Stored s, long headId, SignatureState.Standing otherwise, String why)
+            throws SQLException {
         PreparedStatement changed = session.prepared(CHANGED_SINCE);
-        changed.setLong(1, s.auditHeadId());
+        changed.setLong(1, headId);
         try (ResultSet rs = changed.executeQuery()) {
             if (rs.next()) {
-                return new SignatureState(s.id(), signOff, SignatureState.Standing.SUPERSEDED, "the workbook changed "
-                        + "after it was signed (first: " + rs.getString(2) + " row " + rs.getString(3)
+                return new SignatureState(s.id(), s.signOff(), SignatureState.Standing.SUPERSEDED, "the workbook "
+                        + "changed after it was signed (first: " + rs.getString(2) + " row " + rs.getString(3)
                         + ", audit row " + rs.getLong(1) + ")");
             }
         }
-        return new SignatureState(s.id(), signOff, SignatureState.Standing.CURRENT, "");
+        return new SignatureState(s.id(), s.signOff(), otherwise, why);
+    }
+
+    /**
+     * The audit row that brought site signature {@code id} into this copy, when it came from the plant
+     * server: the server holds it as agreed (the sync ledger has its key) and this trail recorded its
+     * arrival. A signature changed here would travel under another key, so it is never taken for one.
+     */
+    private OptionalLong arrivalThroughServer(long id) throws SQLException {
+        Optional<String> key = WorkbookRecords.keyOfUnreferencedRow(session, PortableTable.SIGN_OFF, id);
+        if (key.isEmpty()) {
+            return OptionalLong.empty();
+        }
+        PreparedStatement base = session.prepared(
+                "SELECT 1 FROM sync_base WHERE table_name = ? AND record_key = ?");
+        base.setString(1, PortableTable.SIGN_OFF.name());
+        base.setString(2, key.get());
+        try (ResultSet rs = base.executeQuery()) {
+            if (!rs.next()) {
+                return OptionalLong.empty();
+            }
+        }
+        PreparedStatement inserted = session.prepared("SELECT id FROM audit_entry WHERE table_name = 'sign_off' "
+                + "AND action = 'INSERT' AND row_key = ? ORDER BY id DESC LIMIT 1");
+        inserted.setString(1, Long.toString(id));
+        try (ResultSet rs = inserted.executeQuery()) {
+            return rs.next() ? OptionalLong.of(rs.getLong(1)) : OptionalLong.empty();
+        }
     }
 }

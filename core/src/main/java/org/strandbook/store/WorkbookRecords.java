@@ -59,12 +59,7 @@ public final class WorkbookRecords {
                 long id = 0;
                 for (int c = 1; c < names.length; c++) {
                     String name = names[c];
-                    Object v = rs.getObject(c);
-                    if (v instanceof Integer k) {
-                        v = k.longValue();
-                    } else if (v instanceof Float f) {
-                        v = f.doubleValue();
-                    }
+                    Object v = portableValue(rs.getObject(c));
                     if (name.equals("id")) {
                         id = (Long) v;
                     } else if (refs.containsKey(name)) {
@@ -81,6 +76,51 @@ public final class WorkbookRecords {
         }
         keys.byTable.put(table, idToKey);
         return out;
+    }
+
+    /** A column's value as it travels: whole numbers as long, reals as double. */
+    private static Object portableValue(Object v) {
+        if (v instanceof Integer k) {
+            return k.longValue();
+        }
+        return v instanceof Float f ? f.doubleValue() : v;
+    }
+
+    /**
+     * The key a row that refers to no other row travels under (a site signature: its point is
+     * null), read without the rest of the workbook; empty when the row is missing.
+     *
+     * @throws WorkbookException when the row refers to another row (its key needs that row's key)
+     */
+    static java.util.Optional<String> keyOfUnreferencedRow(Session session, PortableTable table, long id)
+            throws SQLException {
+        try (PreparedStatement ps = session.connection().prepareStatement(
+                "SELECT * FROM " + table.workbookTable() + " WHERE id = ?")) {
+            ps.setLong(1, id);
+            try (ResultSet rs = ps.executeQuery()) {
+                if (!rs.next()) {
+                    return java.util.Optional.empty();
+                }
+                ResultSetMetaData meta = rs.getMetaData();
+                Map<String, Object> fields = new LinkedHashMap<>();
+                for (int c = 1; c <= meta.getColumnCount(); c++) {
+                    String name = meta.getColumnName(c);
+                    Object v = portableValue(rs.getObject(c));
+                    if (name.equals("id")) {
+                        continue;
+                    }
+                    if (table.references().containsKey(name)) {
+                        if (v != null) {
+                            throw new WorkbookException(table.workbookTable() + " row " + id + " refers to another row");
+                        }
+                        fields.put(PortableTable.portableName(name), null);
+                    } else {
+                        fields.put(name, v);
+                    }
+                }
+                return java.util.Optional.of(table.key(fields));
+            }
+        }
     }
 
     /** The spectrum BLOB of the scan with this SHA-256, as stored. */
