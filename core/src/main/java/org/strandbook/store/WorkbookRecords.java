@@ -11,6 +11,7 @@ import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 
 /**
  * The workbook's records in portable form ({@link PortableTable}): read all at once for a sync, and
@@ -87,40 +88,40 @@ public final class WorkbookRecords {
     }
 
     /**
-     * The key a row that refers to no other row travels under (a site signature: its point is
-     * null), read without the rest of the workbook; empty when the row is missing.
-     *
-     * @throws WorkbookException when the row refers to another row (its key needs that row's key)
+     * The key one row travels under, read without the rest of the workbook (a row it refers to is
+     * read for its own key); empty when the row is missing.
      */
-    static java.util.Optional<String> keyOfUnreferencedRow(Session session, PortableTable table, long id)
-            throws SQLException {
+    static Optional<String> keyOfRow(Session session, PortableTable table, long id) throws SQLException {
+        Map<String, Object> fields = new LinkedHashMap<>();
+        Map<String, PortableTable> refs = table.references();
         try (PreparedStatement ps = session.connection().prepareStatement(
                 "SELECT * FROM " + table.workbookTable() + " WHERE id = ?")) {
             ps.setLong(1, id);
             try (ResultSet rs = ps.executeQuery()) {
                 if (!rs.next()) {
-                    return java.util.Optional.empty();
+                    return Optional.empty();
                 }
                 ResultSetMetaData meta = rs.getMetaData();
-                Map<String, Object> fields = new LinkedHashMap<>();
                 for (int c = 1; c <= meta.getColumnCount(); c++) {
                     String name = meta.getColumnName(c);
-                    Object v = portableValue(rs.getObject(c));
-                    if (name.equals("id")) {
-                        continue;
-                    }
-                    if (table.references().containsKey(name)) {
-                        if (v != null) {
-                            throw new WorkbookException(table.workbookTable() + " row " + id + " refers to another row");
-                        }
-                        fields.put(PortableTable.portableName(name), null);
-                    } else {
-                        fields.put(name, v);
+                    if (!name.equals("id")) {
+                        fields.put(name, portableValue(rs.getObject(c)));
                     }
                 }
-                return java.util.Optional.of(table.key(fields));
             }
         }
+        Map<String, Object> portable = new LinkedHashMap<>();
+        for (Map.Entry<String, Object> f : fields.entrySet()) {
+            PortableTable referred = refs.get(f.getKey());
+            if (referred == null) {
+                portable.put(f.getKey(), f.getValue());
+            } else {
+                portable.put(PortableTable.portableName(f.getKey()), f.getValue() == null ? null
+                        : keyOfRow(session, referred, (Long) f.getValue()).orElseThrow(() -> new WorkbookException(
+                                table.workbookTable() + " row " + id + " refers to a missing " + referred.workbookTable())));
+            }
+        }
+        return Optional.of(table.key(portable));
     }
 
     /** The spectrum BLOB of the scan with this SHA-256, as stored. */
