@@ -90,7 +90,7 @@ public final class FleetSpreadsheet {
                 Row row = changes.createRow(r++);
                 cells.text(row, 0, ch.site());
                 cells.text(row, 1, ch.tag());
-                cells.text(row, 2, ch.before());
+                cells.text(row, 2, ch.before() == null ? "(first report)" : ch.before());
                 cells.text(row, 3, ch.after());
                 cells.time(row, 4, LocalDateTime.ofInstant(ch.at(), ZoneOffset.UTC));
             }

@@ -66,7 +66,17 @@ class FleetCommandTest {
         assertEquals(4, json.split("\"evaluated_at\"").length - 1, json);
         assertTrue(json.contains("\"ranking\":[{\"site\":\"Saltmarsh Ridge Works\",\"point\":\"AT-4103\","
                 + "\"status\":\"FAIL\""), json);
-        assertTrue(json.contains("\"before\":\"NONE\""), "every point is new since 2000: " + json);
+        assertTrue(json.contains("\"before\":null"), "no point had a status in 2000: " + json);
+    }
+
+    @Test
+    void aDateAloneAfterSinceMeansFromTheStartOfThatDayInUtc() {
+        // design choice: "changed since 2000-01-01" includes the whole of that day, unlike a record's
+        // date alone, which is noon so that it falls on the same day in every time zone
+        CliRun run = CliRun.of("fleet", "--server", url, "--server-user", TECH, "--since", "2000-01-01");
+        assertEquals(0, run.exitCode(), run.err());
+        assertTrue(run.out().contains("status changed since 2000-01-01T00:00:00Z: 4 point(s)"), run.out());
+        assertTrue(run.out().contains(": first reported FAIL ("), run.out());
     }
 
     @Test
