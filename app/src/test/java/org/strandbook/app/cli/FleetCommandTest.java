@@ -92,6 +92,11 @@ class FleetCommandTest {
             assertEquals("Margin (dB)", ranking.getRow(0).getCell(5).getStringCellValue());
             assertEquals(4, ranking.getLastRowNum());
             assertEquals(1.0, ranking.getRow(1).getCell(0).getNumericCellValue());
+            // printed as the dossier is (design choice): a ranking row is never cut over two pages
+            for (Sheet s : wb) {
+                assertTrue(s.getPrintSetup().getLandscape() && s.getFitToPage(), s.getSheetName());
+                assertEquals(1, s.getPrintSetup().getFitWidth(), s.getSheetName());
+            }
         }
         CliRun onWorkbook = CliRun.of("fleet", "export", "--server", url, "--server-user", TECH, "-o",
                 dir.resolve("saltmarsh.strandbook").toString(), "--replace");
