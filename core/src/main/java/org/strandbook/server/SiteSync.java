@@ -25,6 +25,7 @@ import org.strandbook.store.PortableFields;
 import org.strandbook.store.PortableTable;
 import org.strandbook.store.SyncLedger;
 import org.strandbook.store.Workbook;
+import org.strandbook.store.WorkbookException;
 import org.strandbook.store.WorkbookRecords;
 
 /**
@@ -43,6 +44,9 @@ import org.strandbook.store.WorkbookRecords;
  */
 public final class SiteSync {
 
+    /** What a refused sync tells the technician to do. */
+    private static final String UNTANGLE = "agree with the colleague whose change it was which record stands,"
+            + " make this workbook match it (or undo the change there and sync that), then sync again";
     /** Records fetched from the server per query when pulling. */
     private static final int PULL_CHUNK = 500;
     /**
@@ -142,7 +146,19 @@ public final class SiteSync {
                 }
                 serverHead = auditHead(c, siteId);
                 requireVerified(verification);
-                c.commit();
+                progress.step("writing what others recorded into the workbook");
+                // the workbook takes the server's side before the server commits, and commits after it:
+                // what the workbook cannot take leaves nothing on either side, instead of a server that
+                // holds this push and a workbook that can never write what it pulled
+                workbook.inTransaction(() -> {
+                    applyHere(plan, records, ledger);
+                    try {
+                        c.commit();
+                    } catch (SQLException e) {
+                        throw new ServerException("the sync with " + server.login().displayUrl()
+                                + " failed and changed nothing there: " + ServerException.firstLine(e), e);
+                    }
+                });
             } catch (SQLException | RuntimeException e) {
                 rollbackQuietly(c);
                 throw e instanceof SQLException sql ? new ServerException("the sync with "
@@ -152,26 +168,48 @@ public final class SiteSync {
         } catch (SQLException e) {
             throw new ServerException("cannot close the connection to " + server.login().displayUrl(), e);
         }
-        progress.step("writing what others recorded into the workbook");
-        Instant now = Instant.now();
-        workbook.inTransaction(() -> {
-            for (LocalChange ch : plan.puts) {
-                records.put(ch.table(), ch.key(), ch.fields(), ch.spectrum());
-            }
-            for (int i = plan.removals.size() - 1; i >= 0; i--) {
-                records.remove(plan.removals.get(i).table(), plan.removals.get(i).key());
-            }
-            plan.bases.forEach(ledger::putBases);
-            plan.droppedBases.forEach((t, keys) -> keys.forEach(k -> ledger.removeBase(t, k)));
-            for (NewConflict nc : plan.conflicts) {
-                ledger.conflict(nc.table(), nc.key(), nc.field(), nc.mine(), nc.theirs(), nc.theirsBy(), now);
-            }
-            // entries this sync wrote came from the server: nothing of them is left to push
-            ledger.synced(server.login().displayUrl(), siteName,
-                    workbook.audit().head().map(AuditEntry::id).orElse(0L), now);
-        });
         List<SyncLedger.Conflict> open = ledger.conflicts().stream().filter(SyncLedger.Conflict::open).toList();
         return new Outcome(plan.pushed, plan.pulled, plan.changedThere, plan.changedHere, open, serverHead);
+    }
+
+    /**
+     * Writes the server's side into the workbook, inside the caller's transaction: removals first
+     * (children before parents), then new and changed records (parents first), references checked
+     * once all is written. A record the workbook's rules refuse stops the sync with its name.
+     */
+    private void applyHere(Plan plan, WorkbookRecords records, SyncLedger ledger) {
+        records.deferReferenceChecks();
+        for (int i = plan.removals.size() - 1; i >= 0; i--) {
+            records.remove(plan.removals.get(i).table(), plan.removals.get(i).key());
+        }
+        for (LocalChange ch : plan.puts) {
+            try {
+                records.put(ch.table(), ch.key(), ch.fields(), ch.spectrum());
+            } catch (WorkbookException e) {
+                throw new SyncRefusedException("the server's " + ch.table().workbookTable() + " record " + ch.key()
+                        + " cannot be written into this workbook (" + e.getMessage() + "): another workbook changed"
+                        + " it in a way this one cannot take as it stands. Nothing was changed on the server or"
+                        + " here; " + UNTANGLE);
+            }
+        }
+        Map<String, String> dangling = records.danglingReferences();
+        if (!dangling.isEmpty()) {
+            Map.Entry<String, String> first = dangling.entrySet().iterator().next();
+            List<String> removed = plan.removals.stream()
+                    .filter(r -> r.table().workbookTable().equals(first.getValue())).map(LocalChange::key).toList();
+            throw new SyncRefusedException("this workbook's " + first.getKey() + " records name a "
+                    + first.getValue() + (removed.isEmpty() ? " that is missing" : " that another workbook removed ("
+                    + String.join(", ", removed) + ")") + ". Nothing was changed on the server or here; " + UNTANGLE);
+        }
+        plan.bases.forEach(ledger::putBases);
+        plan.droppedBases.forEach((t, keys) -> keys.forEach(k -> ledger.removeBase(t, k)));
+        Instant now = Instant.now();
+        for (NewConflict nc : plan.conflicts) {
+            ledger.conflict(nc.table(), nc.key(), nc.field(), nc.mine(), nc.theirs(), nc.theirsBy(), now);
+        }
+        // entries this sync wrote came from the server: nothing of them is left to push
+        ledger.synced(server.login().displayUrl(), siteName, workbook.audit().head().map(AuditEntry::id).orElse(0L),
+                now);
     }
 
     private void requireVerified(CompletableFuture<AuditReport> verification) {
@@ -323,8 +361,9 @@ public final class SiteSync {
                                     ServerRow row, Map<String, Object> th, Map<String, Object> bf, Plan plan)
             throws SQLException {
         String theirsBy = row == null ? "" : row.changedBy();
-        if (m == null || th == null) {
-            // removed on one side, changed on the other: the whole record is the question
+        if (m == null || th == null || t.identityFields().stream().anyMatch(f -> !Objects.equals(m.get(f), th.get(f)))) {
+            // removed on one side, changed on the other, or two different things under one key: the
+            // whole record is the question
             plan.conflicts.add(new NewConflict(t, key, RECORD, m == null ? "null" : PortableFields.json(m),
                     th == null ? "null" : PortableFields.json(th), theirsBy));
             return;

@@ -84,6 +84,15 @@ public enum PortableTable {
         return idColumn.substring(0, idColumn.length() - "_id".length());
     }
 
+    /**
+     * The fields that say which thing a record is: two workbooks whose records under one key differ
+     * in them hold two different things (a joint here, a segment there, after a leg was renumbered),
+     * which a sync never merges field by field.
+     */
+    public List<String> identityFields() {
+        return this == PATH_ELEMENT ? List.of("kind", "label") : List.of();
+    }
+
     /** The natural key of a record with these portable fields. */
     String key(Map<String, Object> fields) {
         if (keyFields != null && keyFields.isEmpty()) {

@@ -73,6 +73,7 @@ public final class RecordWithdrawal {
             }
             String what = describe(table, rowId);
             refuseIfSigned(pointId, pointTag, entryId, what);
+            refuseIfOnServer(table, rowId, what);
             boolean restored = switch (table) {
                 case "inspection" -> {
                     audit.deleteRow(AuditedTable.INSPECTION, rowId);
@@ -99,6 +100,27 @@ public final class RecordWithdrawal {
                             + (rs.getBoolean(4) ? "site record" : "point " + pointTag) + ", "
                             + StoredTime.parse(rs.getString(3)) + "); a signed record is not withdrawn: "
                             + "record a correcting entry instead");
+                }
+            }
+        }
+    }
+
+    /**
+     * A record the plant server already holds stays: the server keeps records of what happened
+     * unchanged, so a withdrawal here would not travel and the other workbooks would keep it.
+     */
+    private void refuseIfOnServer(String table, long rowId, String what) throws SQLException {
+        PortableTable portable = PortableTable.valueOf(table.toUpperCase(Locale.ROOT));
+        String key = WorkbookRecords.keyOfRow(session, portable, rowId).orElseThrow();
+        try (PreparedStatement ps = session.connection().prepareStatement(
+                "SELECT 1 FROM sync_base WHERE table_name = ? AND record_key = ?")) {
+            ps.setString(1, portable.name());
+            ps.setString(2, key);
+            try (ResultSet rs = ps.executeQuery()) {
+                if (rs.next()) {
+                    throw new WorkbookException("the " + what + " is on the plant server already, which keeps such"
+                            + " records as they were made and would bring it back to every workbook; a record that"
+                            + " travelled is not withdrawn: record a correcting entry instead");
                 }
             }
         }

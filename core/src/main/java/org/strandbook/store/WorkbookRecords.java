@@ -212,6 +212,35 @@ public final class WorkbookRecords {
     }
 
     /**
+     * Lets references dangle until this transaction ends, so that a sync can take what another
+     * workbook removed before what it changed (a leg shortened there frees positions and cable IDs
+     * that its moved elements take here); {@link #danglingReferences()} then says what still dangles.
+     * Call inside the transaction; SQLite resets it at the transaction's end.
+     */
+    public void deferReferenceChecks() {
+        session.write(() -> {
+            try (Statement st = session.connection().createStatement()) {
+                st.execute("PRAGMA defer_foreign_keys = ON");
+            }
+            return null;
+        });
+    }
+
+    /** Each table that holds a row naming a missing row, with the table that row should be in; empty when none. */
+    public Map<String, String> danglingReferences() {
+        return session.read(() -> {
+            Map<String, String> out = new LinkedHashMap<>();
+            try (Statement st = session.connection().createStatement();
+                 ResultSet rs = st.executeQuery("PRAGMA foreign_key_check")) {
+                while (rs.next()) {
+                    out.putIfAbsent(rs.getString(1), rs.getString(3));
+                }
+            }
+            return out;
+        });
+    }
+
+    /**
      * Removes one editable record, or a scan another workbook removed, audited; call children first.
      */
     public void remove(PortableTable table, String key) {
