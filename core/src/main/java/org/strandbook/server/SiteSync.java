@@ -5,6 +5,7 @@ import java.sql.Connection;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
+import java.sql.Statement;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.EnumMap;
@@ -50,6 +51,8 @@ public final class SiteSync {
      * one audit row names a batch's keys, so a batch stays a readable size (design choice).
      */
     private static final int PUSH_BATCH = 500;
+    /** Server memory for a push's staging table (design choice: a first sync of ~50,000 scans fits). */
+    private static final String STAGING_MEMORY = "128MB";
     /** The lock class of a site's sync (pg_advisory_xact_lock's first key), our own number. */
     private static final int SYNC_LOCK_CLASS = 0x5342;
 
@@ -103,19 +106,27 @@ public final class SiteSync {
 
     public Outcome run() {
         progress.step("checking the workbook's audit trail");
-        // checked on a connection of its own while the exchange runs, which commits only once the
-        // check has passed: a refused workbook leaves nothing on the server, and a sound one does not
-        // wait for the check before its records start moving
+        // the file's structural check and the audit trail's are made on a connection of their own
+        // while the workbook is read and the exchange runs, which commits only once both have
+        // passed: a refused workbook leaves nothing on the server, and a sound one does not wait for
+        // the checks before its records start moving
+        CompletableFuture<Void> fileChecked = new CompletableFuture<>();
         CompletableFuture<AuditReport> verification = CompletableFuture.supplyAsync(() -> {
             try (Workbook reader = Workbook.openForReading(workbook.file(), workbook.user())) {
+                reader.checkIntegrity();
+                workbook.acceptIntegrityCheck(reader);
+                fileChecked.complete(null);
                 return reader.audit().verify();
+            } catch (RuntimeException e) {
+                fileChecked.completeExceptionally(e);
+                throw e;
             }
         });
         SyncLedger ledger = workbook.syncLedger();
-        SyncLedger.State state = workbook.inTransaction(ledger::state);
-        if (state.siteName() != null && !state.siteName().equals(siteName)) {
+        String syncedSite = ledger.peek().map(SyncLedger.State::siteName).orElse(null);
+        if (syncedSite != null && !syncedSite.equals(siteName)) {
             verification.cancel(false);
-            throw new SyncRefusedException("this workbook syncs with site \"" + state.siteName() + "\", not \""
+            throw new SyncRefusedException("this workbook syncs with site \"" + syncedSite + "\", not \""
                     + siteName + "\"");
         }
         AuditEntry head = workbook.audit().head().orElse(null);
@@ -123,6 +134,9 @@ public final class SiteSync {
         WorkbookRecords records = workbook.records();
         Map<PortableTable, Map<String, Map<String, Object>>> local = records.readAll();
         Map<PortableTable, Map<String, SyncLedger.Base>> bases = ledger.bases();
+        // the workbook's first write (its identity for the server, made once) waits for the file check
+        joined(fileChecked);
+        SyncLedger.State state = workbook.inTransaction(ledger::state);
 
         Plan plan = new Plan();
         long serverHead;
@@ -175,12 +189,7 @@ public final class SiteSync {
     }
 
     private void requireVerified(CompletableFuture<AuditReport> verification) {
-        AuditReport report;
-        try {
-            report = verification.join();
-        } catch (CompletionException e) {
-            throw e.getCause() instanceof RuntimeException r ? r : e;
-        }
+        AuditReport report = joined(verification);
         if (!report.intact()) {
             throw new SyncRefusedException("the workbook " + workbook.file() + " fails `audit verify` ("
                     + report.chainBreak().map(f -> "chain broken").orElse(report.unrecordedChanges().size()
@@ -188,7 +197,23 @@ public final class SiteSync {
         }
     }
 
+    /** The future's value, or what it failed with, thrown as it was. */
+    private static <T> T joined(CompletableFuture<T> future) {
+        try {
+            return future.join();
+        } catch (CompletionException e) {
+            throw e.getCause() instanceof RuntimeException r ? r : e;
+        }
+    }
+
     private long openSite(Connection c) throws SQLException {
+        try (Statement st = c.createStatement()) {
+            // a push stages its records in a temporary table: memory enough to hold a first sync's
+            // scans spares the server writing them out and reading them back; the setting costs only
+            // a few bytes per buffer unless used (PostgreSQL documentation, "temp_buffers"), and
+            // must be made before the session's first temporary table
+            st.execute("SET LOCAL temp_buffers = '" + STAGING_MEMORY + "'");
+        }
         long siteId = siteId(c, siteName);
         try (PreparedStatement ps = c.prepareStatement("SELECT pg_advisory_xact_lock(?, ?)")) {
             ps.setInt(1, SYNC_LOCK_CLASS);

@@ -22,10 +22,12 @@ import org.strandbook.site.Inspection;
 import org.strandbook.site.InspectionGrade;
 import org.strandbook.site.MeasurementPoint;
 import org.strandbook.site.Note;
+import org.strandbook.store.DamagedWorkbookException;
 import org.strandbook.store.DemoSite;
 import org.strandbook.store.PortableTable;
 import org.strandbook.store.SyncLedger;
 import org.strandbook.store.Workbook;
+import org.strandbook.store.WorkbookDamage;
 
 /**
  * Two laptops and a real PostgreSQL plant server (the checks are the sync's contract as the issue
@@ -232,6 +234,24 @@ class SiteSyncTest {
         try (Workbook a = Workbook.open(file, "k.ashdown")) {
             SyncRefusedException e = assertThrows(SyncRefusedException.class, () -> sync(as("sync_tech_a"), a));
             assertTrue(e.getMessage().contains("audit verify"), e.getMessage());
+        }
+        assertEquals(0, count("SELECT count(*) FROM site"), "nothing reached the server");
+    }
+
+    @Test
+    void aDamagedWorkbookIsRefusedAndNothingReachesTheServer() throws Exception {
+        Path file = dir.resolve("a.strandbook");
+        try (Workbook wb = laptopA()) {
+            for (int s = 0; s < 60; s++) {
+                DemoSite.insertScan(wb, DemoSite.POINT_B, 100 + s, T0.plusSeconds(60L * s));
+            }
+        }
+        // SQLite's quick check (sqlite.org/pragma.html#pragma_quick_check) is made on the connection
+        // that verifies the trail, alongside the exchange: its failure must still stop the sync
+        WorkbookDamage.smashOldestLeafOf(file, "audit_entry");
+        try (Workbook a = Workbook.open(file, "k.ashdown")) {
+            assertThrows(DamagedWorkbookException.class, () -> sync(as("sync_tech_a"), a));
+            assertTrue(a.syncLedger().peek().isEmpty(), "nothing was written to the damaged workbook");
         }
         assertEquals(0, count("SELECT count(*) FROM site"), "nothing reached the server");
     }
