@@ -5,7 +5,6 @@ import java.sql.Connection;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
-import java.sql.Statement;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.EnumMap;
@@ -51,8 +50,6 @@ public final class SiteSync {
      * one audit row names a batch's keys, so a batch stays a readable size (design choice).
      */
     private static final int PUSH_BATCH = 500;
-    /** Server memory for a push's staging table (design choice: a first sync of ~50,000 scans fits). */
-    private static final String STAGING_MEMORY = "128MB";
     /** The lock class of a site's sync (pg_advisory_xact_lock's first key), our own number. */
     private static final int SYNC_LOCK_CLASS = 0x5342;
 
@@ -207,13 +204,6 @@ public final class SiteSync {
     }
 
     private long openSite(Connection c) throws SQLException {
-        try (Statement st = c.createStatement()) {
-            // a push stages its records in a temporary table: memory enough to hold a first sync's
-            // scans spares the server writing them out and reading them back; the setting costs only
-            // a few bytes per buffer unless used (PostgreSQL documentation, "temp_buffers"), and
-            // must be made before the session's first temporary table
-            st.execute("SET LOCAL temp_buffers = '" + STAGING_MEMORY + "'");
-        }
         long siteId = siteId(c, siteName);
         try (PreparedStatement ps = c.prepareStatement("SELECT pg_advisory_xact_lock(?, ?)")) {
             ps.setInt(1, SYNC_LOCK_CLASS);
@@ -410,7 +400,7 @@ public final class SiteSync {
         }
         List<String> toPush = mine.keySet().stream().filter(k -> !theirs.contains(k)).toList();
         if (!toPush.isEmpty()) {
-            progress.step("sending " + toPush.size() + " " + t.workbookTable() + " record(s)");
+            progress.step("pushing " + toPush.size() + " " + t.workbookTable() + " record(s)");
             // no ON CONFLICT clause: the keys the server holds were read under the site's lock, so none
             // of these is there, and a duplicate all the same fails the whole transaction, not half of it
             try (OutgoingRecords outgoing = new OutgoingRecords(records, t, mine, toPush)) {

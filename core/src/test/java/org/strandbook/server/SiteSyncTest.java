@@ -239,6 +239,29 @@ class SiteSyncTest {
     }
 
     @Test
+    void aPushOfSeveralChunksFilesEveryScanOnceInAuditedBatchesWhoseDigestsRecompute() throws SQLException {
+        int scans = 2345;
+        try (Workbook a = laptopA()) {
+            a.inTransaction(() -> {
+                for (int s = 0; s < scans; s++) {
+                    DemoSite.insertScan(a, DemoSite.POINT_B, 1000 + s, T0.plusSeconds(60L * s));
+                }
+            });
+            assertEquals(scans + 3, sync(as("sync_tech_a"), a).pushed(), "every scan and the inspection");
+        }
+        assertEquals(scans + 2, count("SELECT count(*) FROM scan"));
+        // the server's own records_digest recomputes what each audit row says of the rows it covers
+        assertEquals(scans + 2, count("SELECT sum((new_fields ->> 'records')::int) FROM audit_entry"
+                + " WHERE table_name = 'scan'"), "each scan is named by exactly one audit row");
+        assertEquals(0, count("SELECT count(*) FROM audit_entry WHERE table_name = 'scan' AND ("
+                + " (new_fields ->> 'records')::int > 500 OR new_fields ->> 'sha256' IS DISTINCT FROM"
+                + " records_digest('scan', site_id, ARRAY(SELECT jsonb_array_elements_text(new_fields -> 'keys'))))"),
+                "batches of at most 500 whose digests recompute");
+        assertEquals(0, count("SELECT count(*) FROM (SELECT k FROM audit_entry, jsonb_array_elements_text(new_fields"
+                + " -> 'keys') k WHERE table_name = 'scan' GROUP BY k HAVING count(*) > 1) twice"));
+    }
+
+    @Test
     void aDamagedWorkbookIsRefusedAndNothingReachesTheServer() throws Exception {
         Path file = dir.resolve("a.strandbook");
         try (Workbook wb = laptopA()) {
