@@ -15,6 +15,7 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
+import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CompletionException;
@@ -120,7 +121,8 @@ public final class SiteSync {
             }
         });
         SyncLedger ledger = workbook.syncLedger();
-        String syncedSite = ledger.peek().map(SyncLedger.State::siteName).orElse(null);
+        Optional<SyncLedger.State> known = ledger.peek();
+        String syncedSite = known.map(SyncLedger.State::siteName).orElse(null);
         if (syncedSite != null && !syncedSite.equals(siteName)) {
             verification.cancel(false);
             throw new SyncRefusedException("this workbook syncs with site \"" + syncedSite + "\", not \""
@@ -131,9 +133,11 @@ public final class SiteSync {
         WorkbookRecords records = workbook.records();
         Map<PortableTable, Map<String, Map<String, Object>>> local = records.readAll();
         Map<PortableTable, Map<String, SyncLedger.Base>> bases = ledger.bases();
-        // the workbook's first write (its identity for the server, made once) waits for the file check
-        joined(fileChecked);
-        SyncLedger.State state = workbook.inTransaction(ledger::state);
+        SyncLedger.State state = known.orElseGet(() -> {
+            // the workbook's first write (its identity for the server, made once) waits for the file check
+            joined(fileChecked);
+            return workbook.inTransaction(ledger::state);
+        });
 
         Plan plan = new Plan();
         long serverHead;
