@@ -10,9 +10,12 @@ import java.util.List;
 
 import org.apache.poi.ss.usermodel.Cell;
 import org.apache.poi.ss.usermodel.CellStyle;
+import org.apache.poi.ss.usermodel.CellType;
 import org.apache.poi.ss.usermodel.Font;
+import org.apache.poi.ss.usermodel.PrintSetup;
 import org.apache.poi.ss.usermodel.Row;
 import org.apache.poi.ss.usermodel.Sheet;
+import org.apache.poi.ss.util.CellRangeAddress;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 import org.strandbook.files.FileReplacement;
 import org.strandbook.files.WorkInProgressFiles;
@@ -90,18 +93,55 @@ public final class FleetSpreadsheet {
                 Row row = changes.createRow(r++);
                 cells.text(row, 0, ch.site());
                 cells.text(row, 1, ch.tag());
-                cells.text(row, 2, ch.before());
+                cells.text(row, 2, ch.before() == null ? "(first report)" : ch.before());
                 cells.text(row, 3, ch.after());
                 cells.time(row, 4, LocalDateTime.ofInstant(ch.at(), ZoneOffset.UTC));
             }
             for (Sheet s : List.of(sites, ranking, changes)) {
-                for (int c = 0; c < 8; c++) {
-                    s.setColumnWidth(c, 22 * 256);
-                }
+                fitColumns(s);
                 s.createFreezePane(0, 1);
+                printable(s);
             }
             wb.write(out);
         }
+    }
+
+    /**
+     * Each column as wide as its longest text (a number or time counts as 16 characters), so that a
+     * sheet printed one page wide keeps a readable type size.
+     */
+    private static void fitColumns(Sheet sheet) {
+        int[] chars = new int[16];
+        for (Row row : sheet) {
+            for (Cell cell : row) {
+                int c = cell.getColumnIndex();
+                if (c < chars.length) {
+                    int length = cell.getCellType() == CellType.STRING ? cell.getStringCellValue().length() : 16;
+                    chars[c] = Math.max(chars[c], length);
+                }
+            }
+        }
+        for (int c = 0; c < chars.length; c++) {
+            if (chars[c] > 0) {
+                sheet.setColumnWidth(c, Math.min(60, chars[c] + 2) * 256);
+            }
+        }
+    }
+
+    /**
+     * As the dossier prints: landscape A4, one page wide (a row is never split over two pages), the
+     * header row on every page, the sheet and page number in the footer.
+     */
+    private static void printable(Sheet sheet) {
+        sheet.setFitToPage(true);
+        PrintSetup print = sheet.getPrintSetup();
+        print.setLandscape(true);
+        print.setPaperSize(PrintSetup.A4_PAPERSIZE);
+        print.setFitWidth((short) 1);
+        print.setFitHeight((short) 0);
+        sheet.setRepeatingRows(new CellRangeAddress(0, 0, -1, -1));
+        sheet.getFooter().setLeft("Fleet view, " + sheet.getSheetName());
+        sheet.getFooter().setRight("Page &P of &N");
     }
 
     /** The cell styles of one workbook, made once. */

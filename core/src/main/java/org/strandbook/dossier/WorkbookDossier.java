@@ -122,7 +122,8 @@ public final class WorkbookDossier {
     private static boolean onCover(SignatureState state, String revision) {
         SignOff s = state.signOff();
         boolean current = state.standing() == SignatureState.Standing.CURRENT
-                || state.standing() == SignatureState.Standing.NO_DIGEST;
+                || state.standing() == SignatureState.Standing.NO_DIGEST
+                || state.standing() == SignatureState.Standing.SIGNED_ELSEWHERE;
         return current && (s.revision().isEmpty() || s.revision().equalsIgnoreCase(revision));
     }
 
@@ -139,7 +140,10 @@ public final class WorkbookDossier {
                     || state.standing() == SignatureState.Standing.NO_DIGEST;
             if (s.onSite()) {
                 if (onCover(state, revision)) {
-                    out.add(s);
+                    // a signature given in another copy says so on the cover: that copy's trail holds what it covered
+                    out.add(state.standing() == SignatureState.Standing.SIGNED_ELSEWHERE ? new SignOff(s.role(),
+                            s.name(), s.signedAt(), s.pointTag(), SignatureText.line(state), s.jobTitle(),
+                            s.revision(), s.contentSha256()) : s);
                 }
             } else {
                 out.add(current ? s : new SignOff(s.role(), s.name(), s.signedAt(), s.pointTag(),

@@ -23,7 +23,11 @@ public final class FleetView {
     public record SiteCounts(String site, long pass, long review, long fail, long notEvaluated, Instant lastSync) {
     }
 
-    /** A point whose status differs from the one it had at {@code since}. */
+    /**
+     * A point whose status differs from the one it had at {@code since}.
+     *
+     * @param before null when the point had no reported status then (its first report came later)
+     */
     public record StatusChange(String site, String tag, String before, String after, Instant at) {
     }
 
@@ -66,8 +70,8 @@ public final class FleetView {
                 for (PointStanding now : latest) {
                     PointStanding then = before.stream().filter(b -> b.site().equals(now.site())
                             && b.tag().equals(now.tag())).findFirst().orElse(null);
-                    String was = then == null ? "NONE" : then.status();
-                    if (!was.equals(now.status())) {
+                    String was = then == null ? null : then.status();
+                    if (!now.status().equals(was)) {
                         changes.add(new StatusChange(now.site(), now.tag(), was, now.status(), now.evaluatedAt()));
                     }
                 }

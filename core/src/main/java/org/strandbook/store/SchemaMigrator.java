@@ -31,7 +31,7 @@ final class SchemaMigrator {
             "CREATE\\s+TABLE\\s+(?:IF\\s+NOT\\s+EXISTS\\s+)?([A-Za-z_][A-Za-z0-9_]*)", Pattern.CASE_INSENSITIVE);
 
     /** Schema version this Strandbook writes. */
-    static final int LATEST = 8;
+    static final int LATEST = 9;
 
     /** The version that created the audit trail; from it on, every step is itself audited. */
     static final int AUDIT_TRAIL = 2;
@@ -54,7 +54,8 @@ final class SchemaMigrator {
             new Step(5, "V5__maintenance_and_sign_off.sql"),
             new Step(6, "V6__decision_rule.sql"),
             new Step(7, "V7__plant_server_sync.sql"),
-            new Step(8, "V8__stated_spreads.sql"));
+            new Step(8, "V8__stated_spreads.sql"),
+            new Step(9, "V9__portable_signature_digest.sql"));
 
     private SchemaMigrator() {
     }

@@ -7,7 +7,8 @@ import org.strandbook.site.SignOff;
  *
  * @param id       the sign-off's row key
  * @param signOff  the signature
- * @param standing current, superseded, tampered, or signed before signatures kept a digest
+ * @param standing current, superseded, tampered, signed before signatures kept a digest, or signed in
+ *                 another copy of the site
  * @param why      in words, for a standing other than current
  */
 public record SignatureState(long id, SignOff signOff, Standing standing, String why) {
@@ -20,7 +21,12 @@ public record SignatureState(long id, SignOff signOff, Standing standing, String
         /** The signature's own record no longer agrees with the audit trail it names. */
         TAMPERED,
         /** Signed before signatures recorded what they signed (schema 1 and 2). */
-        NO_DIGEST
+        NO_DIGEST,
+        /**
+         * A site signature given in another copy of the site and brought here by the plant server:
+         * the audit trail it names is that copy's, so this copy can only say nothing changed since it came.
+         */
+        SIGNED_ELSEWHERE
     }
 
     /** "APPROVED by R. Inglenook (commissioning lead) on 2026-05-04, point AT-101, revision A". */

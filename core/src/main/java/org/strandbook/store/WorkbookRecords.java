@@ -11,6 +11,7 @@ import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 
 /**
  * The workbook's records in portable form ({@link PortableTable}): read all at once for a sync, and
@@ -59,12 +60,7 @@ public final class WorkbookRecords {
                 long id = 0;
                 for (int c = 1; c < names.length; c++) {
                     String name = names[c];
-                    Object v = rs.getObject(c);
-                    if (v instanceof Integer k) {
-                        v = k.longValue();
-                    } else if (v instanceof Float f) {
-                        v = f.doubleValue();
-                    }
+                    Object v = portableValue(rs.getObject(c));
                     if (name.equals("id")) {
                         id = (Long) v;
                     } else if (refs.containsKey(name)) {
@@ -81,6 +77,51 @@ public final class WorkbookRecords {
         }
         keys.byTable.put(table, idToKey);
         return out;
+    }
+
+    /** A column's value as it travels: whole numbers as long, reals as double. */
+    private static Object portableValue(Object v) {
+        if (v instanceof Integer k) {
+            return k.longValue();
+        }
+        return v instanceof Float f ? f.doubleValue() : v;
+    }
+
+    /**
+     * The key one row travels under, read without the rest of the workbook (a row it refers to is
+     * read for its own key); empty when the row is missing.
+     */
+    static Optional<String> keyOfRow(Session session, PortableTable table, long id) throws SQLException {
+        Map<String, Object> fields = new LinkedHashMap<>();
+        Map<String, PortableTable> refs = table.references();
+        try (PreparedStatement ps = session.connection().prepareStatement(
+                "SELECT * FROM " + table.workbookTable() + " WHERE id = ?")) {
+            ps.setLong(1, id);
+            try (ResultSet rs = ps.executeQuery()) {
+                if (!rs.next()) {
+                    return Optional.empty();
+                }
+                ResultSetMetaData meta = rs.getMetaData();
+                for (int c = 1; c <= meta.getColumnCount(); c++) {
+                    String name = meta.getColumnName(c);
+                    if (!name.equals("id")) {
+                        fields.put(name, portableValue(rs.getObject(c)));
+                    }
+                }
+            }
+        }
+        Map<String, Object> portable = new LinkedHashMap<>();
+        for (Map.Entry<String, Object> f : fields.entrySet()) {
+            PortableTable referred = refs.get(f.getKey());
+            if (referred == null) {
+                portable.put(f.getKey(), f.getValue());
+            } else {
+                portable.put(PortableTable.portableName(f.getKey()), f.getValue() == null ? null
+                        : keyOfRow(session, referred, (Long) f.getValue()).orElseThrow(() -> new WorkbookException(
+                                table.workbookTable() + " row " + id + " refers to a missing " + referred.workbookTable())));
+            }
+        }
+        return Optional.of(table.key(portable));
     }
 
     /** The spectrum BLOB of the scan with this SHA-256, as stored. */

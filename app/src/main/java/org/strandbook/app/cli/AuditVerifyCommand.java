@@ -46,9 +46,10 @@ final class AuditVerifyCommand implements Callable<Integer> {
         List<SignatureState> tampered = signatures.stream()
                 .filter(s -> s.standing() == SignatureState.Standing.TAMPERED).toList();
         for (SignatureState s : signatures) {
-            if (s.standing() == SignatureState.Standing.SUPERSEDED || s.standing() == SignatureState.Standing.TAMPERED) {
-                out.println("signature " + s.describe() + ": " + s.standing().name().toLowerCase(java.util.Locale.ROOT)
-                        + ", " + s.why());
+            if (s.standing() == SignatureState.Standing.SUPERSEDED || s.standing() == SignatureState.Standing.TAMPERED
+                    || s.standing() == SignatureState.Standing.SIGNED_ELSEWHERE) {
+                out.println("signature " + s.describe() + ": "
+                        + s.standing().name().replace('_', ' ').toLowerCase(java.util.Locale.ROOT) + ", " + s.why());
             }
         }
         if (report.intact() && tampered.isEmpty()) {

@@ -1,6 +1,9 @@
 package org.strandbook.app.cli;
 
 import java.time.Instant;
+import java.time.LocalDate;
+import java.time.ZoneOffset;
+import java.time.format.DateTimeParseException;
 
 import org.strandbook.handover.RecordedTime;
 
@@ -8,6 +11,22 @@ import org.strandbook.handover.RecordedTime;
 final class FieldTime {
 
     private FieldTime() {
+    }
+
+    /**
+     * The start of a span asked for on the command line: a date alone is that day's first instant in
+     * UTC ("changed since 2026-05-03" includes the whole of the 3rd), not a record's noon.
+     */
+    static Instant since(String option, String text) {
+        String t = text.strip();
+        if (t.matches("\\d{4}-\\d{2}-\\d{2}")) {
+            try {
+                return LocalDate.parse(t).atStartOfDay(ZoneOffset.UTC).toInstant();
+            } catch (DateTimeParseException e) {
+                throw new UsageProblem(option + " '" + text + "' is not a date (YYYY-MM-DD)");
+            }
+        }
+        return parse(option, text);
     }
 
     static Instant parse(String option, String text) {

@@ -40,7 +40,7 @@ final class FleetCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Instant from = since == null ? null : FieldTime.parse("--since", since);
+        Instant from = since == null ? null : FieldTime.since("--since", since);
         FleetView.Fleet fleet = FleetView.read(serverOptions.connect(), from);
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
@@ -74,7 +74,8 @@ final class FleetCommand implements Callable<Integer> {
             out.println();
             out.println("status changed since " + fleet.since() + ": " + fleet.changes().size() + " point(s)");
             for (FleetView.StatusChange c : fleet.changes()) {
-                out.println("  " + c.site() + " " + c.tag() + ": " + c.before() + " -> " + c.after() + " (" + c.at() + ")");
+                out.println("  " + c.site() + " " + c.tag() + ": " + (c.before() == null ? "first reported " + c.after()
+                        : c.before() + " -> " + c.after()) + " (" + c.at() + ")");
             }
         }
     }
@@ -106,7 +107,7 @@ final class FleetCommand implements Callable<Integer> {
             FleetView.StatusChange c = fleet.changes().get(i);
             sb.append(i == 0 ? "" : ",").append("{\"site\":").append(JsonText.string(c.site()))
                     .append(",\"point\":").append(JsonText.string(c.tag()))
-                    .append(",\"before\":").append(JsonText.string(c.before()))
+                    .append(",\"before\":").append(c.before() == null ? "null" : JsonText.string(c.before()))
                     .append(",\"after\":").append(JsonText.string(c.after()))
                     .append(",\"at\":").append(JsonText.string(c.at().toString())).append('}');
         }

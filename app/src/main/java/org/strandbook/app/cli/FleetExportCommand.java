@@ -40,7 +40,7 @@ final class FleetExportCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
-        Instant from = since == null ? null : FieldTime.parse("--since", since);
+        Instant from = since == null ? null : FieldTime.since("--since", since);
         FleetView.Fleet fleet = FleetView.read(serverOptions.connect(fleetCommand.serverOptions), from);
         FleetSpreadsheet.write(fleet, output, replace);
         spec.commandLine().getOut().println("fleet written to " + output + ": " + fleet.sites().size() + " site(s), "

@@ -66,7 +66,17 @@ class FleetCommandTest {
         assertEquals(4, json.split("\"evaluated_at\"").length - 1, json);
         assertTrue(json.contains("\"ranking\":[{\"site\":\"Saltmarsh Ridge Works\",\"point\":\"AT-4103\","
                 + "\"status\":\"FAIL\""), json);
-        assertTrue(json.contains("\"before\":\"NONE\""), "every point is new since 2000: " + json);
+        assertTrue(json.contains("\"before\":null"), "no point had a status in 2000: " + json);
+    }
+
+    @Test
+    void aDateAloneAfterSinceMeansFromTheStartOfThatDayInUtc() {
+        // design choice: "changed since 2000-01-01" includes the whole of that day, unlike a record's
+        // date alone, which is noon so that it falls on the same day in every time zone
+        CliRun run = CliRun.of("fleet", "--server", url, "--server-user", TECH, "--since", "2000-01-01");
+        assertEquals(0, run.exitCode(), run.err());
+        assertTrue(run.out().contains("status changed since 2000-01-01T00:00:00Z: 4 point(s)"), run.out());
+        assertTrue(run.out().contains(": first reported FAIL ("), run.out());
     }
 
     @Test
@@ -82,6 +92,11 @@ class FleetCommandTest {
             assertEquals("Margin (dB)", ranking.getRow(0).getCell(5).getStringCellValue());
             assertEquals(4, ranking.getLastRowNum());
             assertEquals(1.0, ranking.getRow(1).getCell(0).getNumericCellValue());
+            // printed as the dossier is (design choice): a ranking row is never cut over two pages
+            for (Sheet s : wb) {
+                assertTrue(s.getPrintSetup().getLandscape() && s.getFitToPage(), s.getSheetName());
+                assertEquals(1, s.getPrintSetup().getFitWidth(), s.getSheetName());
+            }
         }
         CliRun onWorkbook = CliRun.of("fleet", "export", "--server", url, "--server-user", TECH, "-o",
                 dir.resolve("saltmarsh.strandbook").toString(), "--replace");

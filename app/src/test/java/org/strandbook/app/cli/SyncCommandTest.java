@@ -92,6 +92,22 @@ class SyncCommandTest {
     }
 
     @Test
+    void aCloneOfASignedSiteVerifiesAndItsSiteSignatureStillStands() {
+        // the issue: "each side's audit trail stays verifiable"; a site signature pins a row of the
+        // trail it was given in, which a clone does not have, and that is not tampering
+        assertEquals(0, CliRun.of("sign", laptop.toString(), "--role", "approved", "--name", "R. Fairbairn",
+                "--title", "site engineer").exitCode());
+        assertEquals(0, sync(laptop).exitCode());
+        Path second = dir.resolve("second.strandbook");
+        assertEquals(0, CliRun.of("clone", "--server", url, "--server-user", TECH, "--site", DemoSite.site().name(),
+                second.toString()).exitCode());
+        CliRun verify = CliRun.of("audit", "verify", second.toString());
+        assertEquals(0, verify.exitCode(), verify.out() + verify.err());
+        assertTrue(verify.out().startsWith("audit trail OK"), "no signature is listed as superseded or tampered: "
+                + verify.out());
+    }
+
+    @Test
     void aTamperedWorkbookIsRefusedWithExitOne() throws Exception {
         try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + laptop); Statement st = c.createStatement()) {
             st.executeUpdate("UPDATE point SET location = 'elsewhere' WHERE tag = 'AT-101'");
