@@ -47,8 +47,8 @@ public final class SiteSync {
     /** Records fetched from the server per query when pulling. */
     private static final int PULL_CHUNK = 500;
     /**
-     * Immutable records filed per INSERT when pushing: the server audits each statement once, and
-     * one audit row names a batch's keys, so a batch stays a readable size (design choice).
+     * Immutable records per INSERT when pushing: the server audits each statement once, and a
+     * scan batch (~2 kB a row) stays well inside one message (design choice).
      */
     private static final int PUSH_BATCH = 500;
     /** The lock class of a site's sync (pg_advisory_xact_lock's first key), our own number. */
@@ -405,10 +405,34 @@ public final class SiteSync {
         List<String> toPush = mine.keySet().stream().filter(k -> !theirs.contains(k)).toList();
         if (!toPush.isEmpty()) {
             progress.step("pushing " + toPush.size() + " " + t.workbookTable() + " record(s)");
-            // no ON CONFLICT clause: the keys the server holds were read under the site's lock, so none
-            // of these is there, and a duplicate all the same fails the whole transaction, not half of it
-            try (OutgoingRecords outgoing = new OutgoingRecords(records, t, mine, toPush)) {
-                new StagedPush(c, siteId, t).push(outgoing, toPush.size(), PUSH_BATCH, progress);
+            boolean scan = t == PortableTable.SCAN;
+            String row = scan ? "(?, ?, ?::jsonb, ?)" : "(?, ?, ?::jsonb)";
+            String insert = "INSERT INTO " + t.serverTable() + " (site_id, record_key, fields" + (scan ? ", spectrum" : "")
+                    + ") VALUES ";
+            List<OutgoingRecords.Row> batch = new ArrayList<>(PUSH_BATCH);
+            // one multi-row statement per batch: the server plans and audits a statement once. No ON
+            // CONFLICT clause: the keys the server holds were read under the site's lock, so none of
+            // these is there, and a duplicate all the same would fail the whole transaction, not half of it
+            try (PreparedStatement full = c.prepareStatement(insert + (row + ", ").repeat(PUSH_BATCH - 1) + row);
+                 OutgoingRecords outgoing = new OutgoingRecords(records, t, mine, toPush)) {
+                int n = 0;
+                for (OutgoingRecords.Row r = outgoing.next(); r != null; r = outgoing.next()) {
+                    batch.add(r);
+                    if (batch.size() == PUSH_BATCH) {
+                        insertRows(full, siteId, batch, scan);
+                        n += batch.size();
+                        batch.clear();
+                        progress.done(n, toPush.size());
+                    }
+                }
+                if (!batch.isEmpty()) {
+                    try (PreparedStatement tail = c.prepareStatement(insert + (row + ", ").repeat(batch.size() - 1)
+                            + row)) {
+                        insertRows(tail, siteId, batch, scan);
+                    }
+                    n += batch.size();
+                }
+                progress.done(n, toPush.size());
             }
             plan.pushed += toPush.size();
         }
@@ -475,6 +499,20 @@ public final class SiteSync {
             }
         }
         return removed;
+    }
+
+    private static void insertRows(PreparedStatement ps, long siteId, List<OutgoingRecords.Row> rows, boolean scan)
+            throws SQLException {
+        int p = 0;
+        for (OutgoingRecords.Row r : rows) {
+            ps.setLong(++p, siteId);
+            ps.setString(++p, r.key());
+            ps.setString(++p, r.fieldsJson());
+            if (scan) {
+                ps.setBytes(++p, r.spectrum());
+            }
+        }
+        ps.executeUpdate();
     }
 
     private void pullImmutable(Connection c, long siteId, PortableTable t, List<String> keys, Plan plan)

@@ -239,7 +239,7 @@ class SiteSyncTest {
     }
 
     @Test
-    void aPushOfSeveralChunksFilesEveryScanOnceInAuditedBatchesWhoseDigestsRecompute() throws SQLException {
+    void aPushOfThousandsOfScansFilesEachOnceInAuditedBatchesWhoseDigestsRecompute() throws SQLException {
         int scans = 2345;
         try (Workbook a = laptopA()) {
             a.inTransaction(() -> {
