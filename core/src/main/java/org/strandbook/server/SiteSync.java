@@ -15,6 +15,7 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
+import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CompletionException;
@@ -107,19 +108,28 @@ public final class SiteSync {
 
     public Outcome run() {
         progress.step("checking the workbook's audit trail");
-        // checked on a connection of its own while the exchange runs, which commits only once the
-        // check has passed: a refused workbook leaves nothing on the server, and a sound one does not
-        // wait for the check before its records start moving
+        // the file's structural check and the audit trail's are made on a connection of their own
+        // while the workbook is read and the exchange runs, which commits only once both have
+        // passed: a refused workbook leaves nothing on the server, and a sound one does not wait for
+        // the checks before its records start moving
+        CompletableFuture<Void> fileChecked = new CompletableFuture<>();
         CompletableFuture<AuditReport> verification = CompletableFuture.supplyAsync(() -> {
             try (Workbook reader = Workbook.openForReading(workbook.file(), workbook.user())) {
+                reader.checkIntegrity();
+                workbook.acceptIntegrityCheck(reader);
+                fileChecked.complete(null);
                 return reader.audit().verify();
+            } catch (RuntimeException e) {
+                fileChecked.completeExceptionally(e);
+                throw e;
             }
         });
         SyncLedger ledger = workbook.syncLedger();
-        SyncLedger.State state = workbook.inTransaction(ledger::state);
-        if (state.siteName() != null && !state.siteName().equals(siteName)) {
+        Optional<SyncLedger.State> known = ledger.peek();
+        String syncedSite = known.map(SyncLedger.State::siteName).orElse(null);
+        if (syncedSite != null && !syncedSite.equals(siteName)) {
             verification.cancel(false);
-            throw new SyncRefusedException("this workbook syncs with site \"" + state.siteName() + "\", not \""
+            throw new SyncRefusedException("this workbook syncs with site \"" + syncedSite + "\", not \""
                     + siteName + "\"");
         }
         AuditEntry head = workbook.audit().head().orElse(null);
@@ -127,6 +137,11 @@ public final class SiteSync {
         WorkbookRecords records = workbook.records();
         Map<PortableTable, Map<String, Map<String, Object>>> local = records.readAll();
         Map<PortableTable, Map<String, SyncLedger.Base>> bases = ledger.bases();
+        SyncLedger.State state = known.orElseGet(() -> {
+            // the workbook's first write (its identity for the server, made once) waits for the file check
+            joined(fileChecked);
+            return workbook.inTransaction(ledger::state);
+        });
 
         Plan plan = new Plan();
         long serverHead;
@@ -213,16 +228,20 @@ public final class SiteSync {
     }
 
     private void requireVerified(CompletableFuture<AuditReport> verification) {
-        AuditReport report;
-        try {
-            report = verification.join();
-        } catch (CompletionException e) {
-            throw e.getCause() instanceof RuntimeException r ? r : e;
-        }
+        AuditReport report = joined(verification);
         if (!report.intact()) {
             throw new SyncRefusedException("the workbook " + workbook.file() + " fails `audit verify` ("
                     + report.chainBreak().map(f -> "chain broken").orElse(report.unrecordedChanges().size()
                     + " change(s) made outside Strandbook") + "); the server takes only a verifiable workbook");
+        }
+    }
+
+    /** The future's value, or what it failed with, thrown as it was. */
+    private static <T> T joined(CompletableFuture<T> future) {
+        try {
+            return future.join();
+        } catch (CompletionException e) {
+            throw e.getCause() instanceof RuntimeException r ? r : e;
         }
     }
 

@@ -38,7 +38,7 @@ final class Session implements AutoCloseable {
     private final Map<String, PreparedStatement> statements = new HashMap<>();
     private int depth;
     private boolean writing;
-    private boolean checkedBeforeWriting;
+    private volatile boolean checkedBeforeWriting;
     private long writeGeneration;
 
     Session(Connection connection, Path file, String user) {
@@ -232,6 +232,16 @@ final class Session implements AutoCloseable {
         } finally {
             lock.unlock();
         }
+    }
+
+    /** Whether a quick check of the file passed on this connection. */
+    boolean integrityChecked() {
+        return checkedBeforeWriting;
+    }
+
+    /** Counts a quick check another connection to this file passed as this session's own. */
+    void integrityCheckedElsewhere() {
+        checkedBeforeWriting = true;
     }
 
     private void quickCheck() throws SQLException {

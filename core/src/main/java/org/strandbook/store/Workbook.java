@@ -207,6 +207,23 @@ public final class Workbook implements AutoCloseable {
         session.checkIntegrity();
     }
 
+    /**
+     * Counts the quick check that {@code checked}, another connection to this same file, passed as
+     * this workbook's own check before its first write: a sync checks the file on the connection
+     * that verifies its audit trail, alongside the exchange with the server rather than before it.
+     *
+     * @throws IllegalArgumentException when {@code checked} is open on another file or passed no check
+     */
+    public void acceptIntegrityCheck(Workbook checked) {
+        if (!checked.file().toAbsolutePath().normalize().equals(file().toAbsolutePath().normalize())) {
+            throw new IllegalArgumentException("a check of " + checked.file() + " says nothing of " + file());
+        }
+        if (!checked.session.integrityChecked()) {
+            throw new IllegalArgumentException("no quick check of " + file() + " has passed on that connection");
+        }
+        session.integrityCheckedElsewhere();
+    }
+
     /** The schema version this Strandbook writes. */
     public static int latestSchemaVersion() {
         return SchemaMigrator.LATEST;

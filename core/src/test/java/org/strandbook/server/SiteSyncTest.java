@@ -22,10 +22,12 @@ import org.strandbook.site.Inspection;
 import org.strandbook.site.InspectionGrade;
 import org.strandbook.site.MeasurementPoint;
 import org.strandbook.site.Note;
+import org.strandbook.store.DamagedWorkbookException;
 import org.strandbook.store.DemoSite;
 import org.strandbook.store.PortableTable;
 import org.strandbook.store.SyncLedger;
 import org.strandbook.store.Workbook;
+import org.strandbook.store.WorkbookDamage;
 
 /**
  * Two laptops and a real PostgreSQL plant server (the checks are the sync's contract as the issue
@@ -232,6 +234,47 @@ class SiteSyncTest {
         try (Workbook a = Workbook.open(file, "k.ashdown")) {
             SyncRefusedException e = assertThrows(SyncRefusedException.class, () -> sync(as("sync_tech_a"), a));
             assertTrue(e.getMessage().contains("audit verify"), e.getMessage());
+        }
+        assertEquals(0, count("SELECT count(*) FROM site"), "nothing reached the server");
+    }
+
+    @Test
+    void aPushOfThousandsOfScansFilesEachOnceInAuditedBatchesWhoseDigestsRecompute() throws SQLException {
+        int scans = 2345;
+        try (Workbook a = laptopA()) {
+            a.inTransaction(() -> {
+                for (int s = 0; s < scans; s++) {
+                    DemoSite.insertScan(a, DemoSite.POINT_B, 1000 + s, T0.plusSeconds(60L * s));
+                }
+            });
+            assertEquals(scans + 3, sync(as("sync_tech_a"), a).pushed(), "every scan and the inspection");
+        }
+        assertEquals(scans + 2, count("SELECT count(*) FROM scan"));
+        // the server's own records_digest recomputes what each audit row says of the rows it covers
+        assertEquals(scans + 2, count("SELECT sum((new_fields ->> 'records')::int) FROM audit_entry"
+                + " WHERE table_name = 'scan'"), "each scan is named by exactly one audit row");
+        assertEquals(0, count("SELECT count(*) FROM audit_entry WHERE table_name = 'scan' AND ("
+                + " (new_fields ->> 'records')::int > 500 OR new_fields ->> 'sha256' IS DISTINCT FROM"
+                + " records_digest('scan', site_id, ARRAY(SELECT jsonb_array_elements_text(new_fields -> 'keys'))))"),
+                "batches of at most 500 whose digests recompute");
+        assertEquals(0, count("SELECT count(*) FROM (SELECT k FROM audit_entry, jsonb_array_elements_text(new_fields"
+                + " -> 'keys') k WHERE table_name = 'scan' GROUP BY k HAVING count(*) > 1) twice"));
+    }
+
+    @Test
+    void aDamagedWorkbookIsRefusedAndNothingReachesTheServer() throws Exception {
+        Path file = dir.resolve("a.strandbook");
+        try (Workbook wb = laptopA()) {
+            for (int s = 0; s < 60; s++) {
+                DemoSite.insertScan(wb, DemoSite.POINT_B, 100 + s, T0.plusSeconds(60L * s));
+            }
+        }
+        // SQLite's quick check (sqlite.org/pragma.html#pragma_quick_check) is made on the connection
+        // that verifies the trail, alongside the exchange: its failure must still stop the sync
+        WorkbookDamage.smashOldestLeafOf(file, "audit_entry");
+        try (Workbook a = Workbook.open(file, "k.ashdown")) {
+            assertThrows(DamagedWorkbookException.class, () -> sync(as("sync_tech_a"), a));
+            assertTrue(a.syncLedger().peek().isEmpty(), "nothing was written to the damaged workbook");
         }
         assertEquals(0, count("SELECT count(*) FROM site"), "nothing reached the server");
     }
