@@ -10,13 +10,13 @@ import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import java.util.OptionalLong;
 
 import org.strandbook.site.Bend;
 import org.strandbook.site.CableSegment;
 import org.strandbook.site.InspectionGrade;
 import org.strandbook.site.Joint;
 import org.strandbook.site.LossBasis;
+import org.strandbook.site.MaintenanceKind;
 import org.strandbook.site.PathDirection;
 import org.strandbook.site.PathElement;
 import org.strandbook.site.PathLeg;
@@ -25,14 +25,15 @@ import org.strandbook.site.SpreadInput;
 /**
  * A point's light path through time. {@code path_element} holds the path as it is now; before a
  * maintenance action replaces an element, the whole path as it was is copied under the action
- * ({@code retired_path_element}). The path at a moment is then the copy kept by the first
- * path-changing action after it, or the path of today when none came after.
+ * ({@code retired_path_element}). {@link PathReconstruction} rebuilds the path at a moment from these
+ * copies and today's path.
  */
 final class PathHistory {
 
-    private static final String FIRST_CHANGE_AFTER = "SELECT a.id FROM maintenance_action a WHERE a.point_id = ? "
-            + "AND a.performed_at > ? AND EXISTS (SELECT 1 FROM retired_path_element r WHERE r.action_id = a.id) "
-            + "ORDER BY a.performed_at, a.id LIMIT 1";
+    private static final String CHANGES = "SELECT a.id, a.performed_at, a.kind, a.element_label "
+            + "FROM maintenance_action a WHERE a.point_id = ? "
+            + "AND EXISTS (SELECT 1 FROM retired_path_element r WHERE r.action_id = a.id) "
+            + "ORDER BY a.performed_at, a.id";
     private static final String LATEST_CHANGE = "SELECT max(a.performed_at) FROM maintenance_action a "
             + "WHERE a.point_id = ? AND EXISTS (SELECT 1 FROM retired_path_element r WHERE r.action_id = a.id)";
     private static final String RETIRED = "SELECT direction, kind, label, fiber_code, length_m, bends, connector_a, "
@@ -50,14 +51,26 @@ final class PathHistory {
     private PathHistory() {
     }
 
-    /** The action whose copy holds the path as it was at {@code at}, if the path changed since. */
-    static OptionalLong firstChangeAfter(Session session, long pointId, Instant at) throws SQLException {
-        PreparedStatement ps = session.prepared(FIRST_CHANGE_AFTER);
-        ps.setLong(1, pointId);
-        ps.setString(2, StoredTime.format(at));
-        try (ResultSet rs = ps.executeQuery()) {
-            return rs.next() ? OptionalLong.of(rs.getLong(1)) : OptionalLong.empty();
+    /** The point's path-changing actions with the path each one copied, by time (ties in the order recorded). */
+    static List<PathReconstruction.PathChange> changes(Session session, long pointId, String pointTag)
+            throws SQLException {
+        record Row(long id, Instant at, String label, boolean segment) {
         }
+        List<Row> rows = new ArrayList<>();
+        PreparedStatement ps = session.prepared(CHANGES);
+        ps.setLong(1, pointId);
+        try (ResultSet rs = ps.executeQuery()) {
+            while (rs.next()) {
+                rows.add(new Row(rs.getLong(1), StoredTime.parse(rs.getString(2)), rs.getString(4),
+                        MaintenanceKind.valueOf(rs.getString(3)).role() == MaintenanceKind.ElementRole.SEGMENT));
+            }
+        }
+        List<PathReconstruction.PathChange> out = new ArrayList<>();
+        for (Row r : rows) {
+            out.add(new PathReconstruction.PathChange(r.id(), r.at(), r.label(), r.segment(),
+                    retiredLegs(session, r.id(), pointTag)));
+        }
+        return out;
     }
 
     /** When the point's path last changed by an action, if it ever did. */

@@ -196,26 +196,43 @@ public final class PathRepository {
 
     /**
      * The point's legs as they were at {@code at}: before a maintenance action replaced an element,
-     * the path it replaced; otherwise the path of today. Joint grades are as entered with the path;
-     * {@link org.strandbook.site.InspectionHistory} gives them as inspected at that moment.
+     * the path it replaced; otherwise the path of today. Right also when actions were recorded on
+     * laptops that did not know of each other ({@link PathReconstruction}). Joint grades are as
+     * entered with the path; {@link org.strandbook.site.InspectionHistory} gives them as inspected at
+     * that moment.
      */
     public List<PathLeg> legsAt(String pointTag, java.time.Instant at) {
         return session.read(() -> {
             long pointId = RowKeys.requirePoint(session, pointTag);
-            java.util.OptionalLong action = PathHistory.firstChangeAfter(session, pointId, at);
-            if (action.isPresent()) {
-                return PathHistory.retiredLegs(session, action.getAsLong(), storedTag(pointId));
-            }
-            return legs(pointTag);
+            return PathReconstruction.at(PathHistory.changes(session, pointId, storedTag(pointId)), legs(pointTag), at);
         });
+    }
+
+    /** The point's legs just before a path-changing action, or none when the action did not change the path. */
+    List<PathLeg> legsBefore(long pointId, long actionId) throws SQLException {
+        String tag = storedTag(pointId);
+        List<PathReconstruction.PathChange> changes = PathHistory.changes(session, pointId, tag);
+        for (int k = 0; k < changes.size(); k++) {
+            if (changes.get(k).actionId() == actionId) {
+                return PathReconstruction.before(changes, k, legs(tag));
+            }
+        }
+        return List.of();
     }
 
     /**
      * Puts {@code replacement} in the place of the element labelled {@code label} (same kind), each
      * changed row audited. The caller has already copied the path into its history.
+     *
+     * <p>The row is updated where it stands: the replacement takes the same leg and position, and only
+     * an element of its own kind is looked for, so one action changes exactly one place of the path.
+     * {@link PathReconstruction} relies on that, and on the label naming one element only.
+     *
+     * @throws WorkbookException when two elements of that kind carry the label
      */
     void replaceElement(long pointId, String pointTag, String label, PathElement replacement) throws SQLException {
         String kind = replacement instanceof CableSegment ? "SEGMENT" : "JOINT";
+        String noun = kind.equals("JOINT") ? "joint" : "cable";
         long elementId;
         try (PreparedStatement ps = session.connection().prepareStatement(
                 "SELECT id FROM path_element WHERE point_id = ? AND label = ? AND kind = ?")) {
@@ -224,10 +241,14 @@ public final class PathRepository {
             ps.setString(3, kind);
             try (ResultSet rs = ps.executeQuery()) {
                 if (!rs.next()) {
-                    throw new UnknownEntryException("point " + pointTag + " has no " + (kind.equals("JOINT") ? "joint"
-                            : "cable") + " '" + label + "' on its path today");
+                    throw new UnknownEntryException("point " + pointTag + " has no " + noun + " '" + label
+                            + "' on its path today");
                 }
                 elementId = rs.getLong(1);
+                if (rs.next()) {
+                    throw new WorkbookException("point " + pointTag + " has two " + noun + "s labelled '" + label
+                            + "' on its path; give each its own label in the path first, so the record names one");
+                }
             }
         }
         String where = "point " + pointTag + ": replacement for " + label;

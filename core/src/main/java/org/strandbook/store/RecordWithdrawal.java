@@ -132,7 +132,7 @@ public final class RecordWithdrawal {
      * @return true when something was put back
      */
     private boolean withdrawAction(long pointId, String pointTag, long actionId) throws SQLException {
-        List<PathLeg> before = PathHistory.retiredLegs(session, actionId, pointTag);
+        List<PathLeg> before = paths.legsBefore(pointId, actionId);
         if (!before.isEmpty()) {
             paths.replaceLegs(pointTag, before);
             for (long retired : RowKeys.children(session,
