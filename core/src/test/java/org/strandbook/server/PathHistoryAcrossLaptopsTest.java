@@ -11,13 +11,20 @@ import java.util.OptionalDouble;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.strandbook.evaluation.PathTimeline;
+import org.strandbook.evaluation.PointBudgetBuilder;
+import org.strandbook.evaluation.WorkbookInputs;
+import org.strandbook.optics.WavelengthGrid;
+import org.strandbook.optics.path.OpticsCache;
 import org.strandbook.site.Bend;
 import org.strandbook.site.CableSegment;
+import org.strandbook.site.Catalog;
 import org.strandbook.site.InspectionGrade;
 import org.strandbook.site.Joint;
 import org.strandbook.site.LossBasis;
 import org.strandbook.site.MaintenanceAction;
 import org.strandbook.site.MaintenanceKind;
+import org.strandbook.site.MeasurementPoint;
 import org.strandbook.site.PathLeg;
 import org.strandbook.store.DemoSite;
 import org.strandbook.store.Workbook;
@@ -92,6 +99,38 @@ class PathHistoryAcrossLaptopsTest {
 
     private static Joint j2(List<PathLeg> legs) {
         return legs.get(1).joints().get(0);
+    }
+
+    /** What the evaluation predicts for the point's loop at {@code when} at 1550 nm, dB. */
+    private static double predictedLoopLossDbAt1550(Workbook wb, Instant when) {
+        Catalog catalog = Catalog.of(wb.catalog().fiberTypes(), wb.catalog().connectorTypes(),
+                wb.catalog().probeTypes());
+        MeasurementPoint point = wb.points().get(DemoSite.POINT_A).orElseThrow();
+        PathTimeline.Legs then = WorkbookInputs.of(wb, wb.site().get(), point,
+                wb.site().analyzer(DemoSite.ANALYZER).orElseThrow(), catalog, List.of()).history().at(when);
+        return new PointBudgetBuilder(catalog).build(point, then.send(), then.ret(),
+                new OpticsCache(WavelengthGrid.ofNm(1550.0))).totalLossDb()[0];
+    }
+
+    @Test
+    void theLoopLossPredictedBetweenTheTwoCountsTheLongerCableOnBothLaptops() {
+        try (Workbook a = Workbook.create(dir.resolve("a.strandbook"), DemoSite.site(), "k.ashdown")) {
+            DemoSite.populate(a);
+            sync(a);
+            try (Workbook b = cloneOf("b.strandbook")) {
+                twoOfflineReplacements(a, b);
+                for (Workbook wb : List.of(a, b)) {
+                    double grownDb = predictedLoopLossDbAt1550(wb, D1.plusSeconds(3600))
+                            - predictedLoopLossDbAt1550(wb, D1.minusSeconds(1));
+                    // TIA/EIA-455-46-A (FOTP-46), definition of spectral attenuation: for a uniform fiber
+                    // A(λ) = α(λ)·L, α independent of the length. The fiber type's datasheet row gives
+                    // α(1550 nm) = 4.5 dB/km (DemoSite's catalog), so 200 m more of it adds 0.9 dB and
+                    // nothing else between the two moments changed
+                    double expectedDb = 4.5 * (NEW_S2_M - ORIGINAL_S2_M) / 1000.0;
+                    assertEquals(expectedDb, grownDb, 1e-9 * expectedDb, wb == a ? "laptop A" : "laptop B");
+                }
+            }
+        }
     }
 
     @Test
