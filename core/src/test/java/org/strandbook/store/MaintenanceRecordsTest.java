@@ -107,6 +107,24 @@ class MaintenanceRecordsTest {
     }
 
     @Test
+    void aReplacementWhoseLabelNamesTwoJointsIsRefusedAndChangesNothing() {
+        // the path's history takes an action to change one place of the path: a label on both legs names two
+        List<PathLeg> legs = DemoSite.legs(DemoSite.POINT_B, "C102");
+        PathLeg back = new PathLeg(DemoSite.POINT_B, legs.get(1).direction(), List.of(legs.get(1).elements().get(0),
+                new Joint("J1", DemoSite.CONNECTOR, null, InspectionGrade.CLEAN, OptionalDouble.empty(),
+                        LossBasis.ASSUMED), legs.get(1).elements().get(2)));
+        wb.paths().replaceLegs(DemoSite.POINT_B, List.of(legs.get(0), back));
+        Joint fresh = new Joint("J1", DemoSite.CONNECTOR, null, InspectionGrade.CLEAN, OptionalDouble.of(0.4),
+                LossBasis.MEASURED);
+        WorkbookException e = assertThrows(WorkbookException.class, () -> wb.maintenance().add(new MaintenanceAction(
+                DemoSite.POINT_B, MaintenanceKind.REPLACE_CONNECTOR, "J1", DAY_2, "k.ashdown", "", "", Optional.of(fresh))));
+        assertEquals("point AT-102 has two joints labelled 'J1' on its path; give each its own label in the path"
+                + " first, so the record names one", e.getMessage());
+        assertEquals(List.of(), wb.maintenance().list(DemoSite.POINT_B));
+        assertEquals(List.of(legs.get(0), back), wb.paths().legs(DemoSite.POINT_B));
+    }
+
+    @Test
     void aConnectorReplacementChangesTheJointFromItsDateOn() {
         Joint fresh = new Joint("J2", DemoSite.CONNECTOR, null, InspectionGrade.CLEAN, OptionalDouble.of(0.4),
                 LossBasis.MEASURED);
