@@ -43,15 +43,13 @@ class ConcurrentPathEditsTest {
     @TempDir
     Path dir;
 
+    private PlantServerLaptops laptops;
     private String url;
 
     @BeforeEach
     void startServer() {
-        url = LocalPostgres.shared().newPlantServer(TECH);
-    }
-
-    private PlantServer server() {
-        return new PlantServer(new ServerLogin(url, TECH, null));
+        laptops = new PlantServerLaptops(dir, TECH);
+        url = laptops.url();
     }
 
     private Workbook laptopA() {
@@ -63,12 +61,11 @@ class ConcurrentPathEditsTest {
     }
 
     private Workbook cloneOf(String file) {
-        SiteClone.run(server(), DemoSite.site().name(), dir.resolve(file), "j.pell", SyncProgress.SILENT);
-        return Workbook.open(dir.resolve(file), "j.pell");
+        return laptops.cloneOf(file, "j.pell");
     }
 
     private SiteSync.Outcome sync(Workbook wb) {
-        return new SiteSync(server(), wb, wb.site().get().name(), SyncProgress.SILENT).run();
+        return laptops.sync(wb);
     }
 
     private static List<String> sendLabels(Workbook wb) {

@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 
+import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -43,7 +44,6 @@ import org.strandbook.store.Workbook;
 class PathHistoryAcrossLaptopsTest {
 
     private static final String TECH = "history_tech";
-    private static final Instant T0 = Instant.parse("2026-03-01T09:00:00Z");
     /** Laptop A replaces cable C101-S2 on this day, laptop B the return leg's joint J2 a week later. */
     private static final Instant D1 = Instant.parse("2026-04-10T10:00:00Z");
     private static final Instant D2 = Instant.parse("2026-04-17T14:00:00Z");
@@ -53,24 +53,36 @@ class PathHistoryAcrossLaptopsTest {
     @TempDir
     Path dir;
 
-    private String url;
+    private Workbook a;
+    private Workbook b;
 
+    /**
+     * Two laptops from one site, each with one offline replacement on point A, both synced (A first,
+     * then B, then A again so that each holds both).
+     */
     @BeforeEach
-    void startServer() {
-        url = LocalPostgres.shared().newPlantServer(TECH);
+    void twoOfflineReplacements() {
+        PlantServerLaptops laptops = new PlantServerLaptops(dir, TECH);
+        a = Workbook.create(dir.resolve("a.strandbook"), DemoSite.site(), "k.ashdown");
+        DemoSite.populate(a);
+        laptops.sync(a);
+        b = laptops.cloneOf("b.strandbook", "j.pell");
+        a.maintenance().add(new MaintenanceAction(DemoSite.POINT_A, MaintenanceKind.REPLACE_SEGMENT, "C101-S2", D1,
+                "k.ashdown", "re-pulled by the long route", "crushed under a grating", Optional.of(longerS2())));
+        b.maintenance().add(new MaintenanceAction(DemoSite.POINT_A, MaintenanceKind.REPLACE_CONNECTOR, "J2", D2,
+                "j.pell", "", "ferrule chipped", Optional.of(newJ2())));
+        laptops.sync(a);
+        laptops.sync(b);
+        laptops.sync(a);
     }
 
-    private PlantServer server() {
-        return new PlantServer(new ServerLogin(url, TECH, null));
-    }
-
-    private Workbook cloneOf(String file) {
-        SiteClone.run(server(), DemoSite.site().name(), dir.resolve(file), TECH, SyncProgress.SILENT);
-        return Workbook.open(dir.resolve(file), TECH);
-    }
-
-    private void sync(Workbook wb) {
-        new SiteSync(server(), wb, wb.site().get().name(), SyncProgress.SILENT).run();
+    @AfterEach
+    void close() {
+        for (Workbook wb : new Workbook[] {a, b}) {
+            if (wb != null) {
+                wb.close();
+            }
+        }
     }
 
     private static CableSegment longerS2() {
@@ -80,17 +92,6 @@ class PathHistoryAcrossLaptopsTest {
     private static Joint newJ2() {
         return new Joint("J2", DemoSite.CONNECTOR, DemoSite.CONNECTOR, InspectionGrade.CLEAN, OptionalDouble.of(0.4),
                 LossBasis.MEASURED);
-    }
-
-    /** Two laptops from one site, each with one offline replacement, both synced (A first, then B, then A). */
-    private void twoOfflineReplacements(Workbook a, Workbook b) {
-        a.maintenance().add(new MaintenanceAction(DemoSite.POINT_A, MaintenanceKind.REPLACE_SEGMENT, "C101-S2", D1,
-                "k.ashdown", "re-pulled by the long route", "crushed under a grating", Optional.of(longerS2())));
-        b.maintenance().add(new MaintenanceAction(DemoSite.POINT_A, MaintenanceKind.REPLACE_CONNECTOR, "J2", D2,
-                "j.pell", "", "ferrule chipped", Optional.of(newJ2())));
-        sync(a);
-        sync(b);
-        sync(a);
     }
 
     private static CableSegment s2(List<PathLeg> legs) {
@@ -114,46 +115,32 @@ class PathHistoryAcrossLaptopsTest {
 
     @Test
     void theLoopLossPredictedBetweenTheTwoCountsTheLongerCableOnBothLaptops() {
-        try (Workbook a = Workbook.create(dir.resolve("a.strandbook"), DemoSite.site(), "k.ashdown")) {
-            DemoSite.populate(a);
-            sync(a);
-            try (Workbook b = cloneOf("b.strandbook")) {
-                twoOfflineReplacements(a, b);
-                for (Workbook wb : List.of(a, b)) {
-                    double grownDb = predictedLoopLossDbAt1550(wb, D1.plusSeconds(3600))
-                            - predictedLoopLossDbAt1550(wb, D1.minusSeconds(1));
-                    // TIA/EIA-455-46-A (FOTP-46), definition of spectral attenuation: for a uniform fiber
-                    // A(λ) = α(λ)·L, α independent of the length. The fiber type's datasheet row gives
-                    // α(1550 nm) = 4.5 dB/km (DemoSite's catalog), so 200 m more of it adds 0.9 dB and
-                    // nothing else between the two moments changed
-                    double expectedDb = 4.5 * (NEW_S2_M - ORIGINAL_S2_M) / 1000.0;
-                    assertEquals(expectedDb, grownDb, 1e-9 * expectedDb, wb == a ? "laptop A" : "laptop B");
-                }
-            }
+        for (Workbook wb : List.of(a, b)) {
+            double grownDb = predictedLoopLossDbAt1550(wb, D1.plusSeconds(3600))
+                    - predictedLoopLossDbAt1550(wb, D1.minusSeconds(1));
+            // TIA/EIA-455-46-A (FOTP-46), definition of spectral attenuation: for a uniform fiber
+            // A(λ) = α(λ)·L, α independent of the length. The fiber type's datasheet row gives
+            // α(1550 nm) = 4.5 dB/km (DemoSite's catalog), so 200 m more of it adds 0.9 dB, and
+            // nothing else in the loop changed between the two moments
+            double expectedDb = 4.5 * (NEW_S2_M - ORIGINAL_S2_M) / 1000.0;
+            assertEquals(expectedDb, grownDb, 1e-9 * expectedDb, wb == a ? "laptop A" : "laptop B");
         }
     }
 
     @Test
     void aScanBetweenTwoOfflineReplacementsIsJudgedAgainstThePathItWentThroughOnBothLaptops() {
-        try (Workbook a = Workbook.create(dir.resolve("a.strandbook"), DemoSite.site(), "k.ashdown")) {
-            DemoSite.populate(a);
-            sync(a);
-            try (Workbook b = cloneOf("b.strandbook")) {
-                twoOfflineReplacements(a, b);
-                List<PathLeg> original = DemoSite.legs(DemoSite.POINT_A, "C101");
-                for (Workbook wb : List.of(a, b)) {
-                    String which = wb == a ? "laptop A" : "laptop B";
-                    List<PathLeg> between = wb.paths().legsAt(DemoSite.POINT_A, D1.plusSeconds(3600));
-                    assertEquals(longerS2(), s2(between), which + ": the cable replaced before the scan");
-                    assertEquals(j2(original), j2(between), which + ": the joint replaced after the scan");
+        List<PathLeg> original = DemoSite.legs(DemoSite.POINT_A, "C101");
+        for (Workbook wb : List.of(a, b)) {
+            String which = wb == a ? "laptop A" : "laptop B";
+            List<PathLeg> between = wb.paths().legsAt(DemoSite.POINT_A, D1.plusSeconds(3600));
+            assertEquals(longerS2(), s2(between), which + ": the cable replaced before the scan");
+            assertEquals(j2(original), j2(between), which + ": the joint replaced after the scan");
 
-                    assertEquals(original, wb.paths().legsAt(DemoSite.POINT_A, D1.minusSeconds(1)),
-                            which + ": before both, the path as built");
+            assertEquals(original, wb.paths().legsAt(DemoSite.POINT_A, D1.minusSeconds(1)),
+                    which + ": before both, the path as built");
 
-                    List<PathLeg> after = wb.paths().legsAt(DemoSite.POINT_A, D2);
-                    assertEquals(List.of(longerS2(), newJ2()), List.of(s2(after), j2(after)), which + ": after both");
-                }
-            }
+            List<PathLeg> after = wb.paths().legsAt(DemoSite.POINT_A, D2);
+            assertEquals(List.of(longerS2(), newJ2()), List.of(s2(after), j2(after)), which + ": after both");
         }
     }
 }

@@ -39,15 +39,13 @@ class SignatureAcrossCopiesTest {
     @TempDir
     Path dir;
 
+    private PlantServerLaptops laptops;
     private String url;
 
     @BeforeEach
     void startServer() {
-        url = LocalPostgres.shared().newPlantServer(TECH);
-    }
-
-    private PlantServer server() {
-        return new PlantServer(new ServerLogin(url, TECH, null));
+        laptops = new PlantServerLaptops(dir, TECH);
+        url = laptops.url();
     }
 
     private Workbook laptop(String file) {
@@ -59,12 +57,11 @@ class SignatureAcrossCopiesTest {
     }
 
     private Workbook cloneOf(String file) {
-        SiteClone.run(server(), DemoSite.site().name(), dir.resolve(file), TECH, SyncProgress.SILENT);
-        return Workbook.open(dir.resolve(file), TECH);
+        return laptops.cloneOf(file, TECH);
     }
 
     private void sync(Workbook wb) {
-        new SiteSync(server(), wb, wb.site().get().name(), SyncProgress.SILENT).run();
+        laptops.sync(wb);
     }
 
     private static SignOff siteApproval(Instant at) {
