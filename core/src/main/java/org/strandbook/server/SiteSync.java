@@ -64,7 +64,7 @@ public final class SiteSync {
     }
 
     /** The field name a conflict over a whole record (removed on one side, changed on the other) carries. */
-    public static final String RECORD = "(record)";
+    public static final String RECORD = SyncLedger.WHOLE_RECORD;
 
     private final PlantServer server;
     private final Workbook workbook;

@@ -43,7 +43,27 @@ public final class SyncLedger {
         public boolean open() {
             return resolvedAt == null;
         }
+
+        /**
+         * One side's value ({@link #mine} or {@link #theirs}) as a person reads it: "(removed)" for
+         * a whole record gone, "(empty)" for a field without value, a whole record as its JSON, a
+         * number with the unit its field's name carries.
+         */
+        public String shown(String side) {
+            boolean whole = field.equals(WHOLE_RECORD);
+            if (side == null || side.equals("null")) {
+                return whole ? "(removed)" : "(empty)";
+            }
+            if (whole) {
+                return side;
+            }
+            Object v = PortableFields.parseValue(side);
+            return v == null ? "(empty)" : FieldUnit.shown(field, v);
+        }
     }
+
+    /** The field a conflict over a whole record (removed on one side, changed on the other) names. */
+    public static final String WHOLE_RECORD = "(record)";
 
     private final Session session;
 
