@@ -3,7 +3,6 @@ package org.strandbook.app.ui.workbook;
 import java.time.Instant;
 
 import org.strandbook.server.SiteSync;
-import org.strandbook.store.PortableFields;
 import org.strandbook.store.SyncLedger;
 
 /**
@@ -25,18 +24,6 @@ public record ConflictRow(long id, String record, String field, String mine, Str
     static ConflictRow of(SyncLedger.Conflict c) {
         boolean whole = SiteSync.RECORD.equals(c.field());
         return new ConflictRow(c.id(), c.table().workbookTable() + " " + c.key(), whole ? "whole record" : c.field(),
-                readable(c.mine(), whole), readable(c.theirs(), whole), c.theirsBy() == null ? "" : c.theirsBy(),
-                c.foundAt());
-    }
-
-    private static String readable(String json, boolean whole) {
-        if (json == null || json.equals("null")) {
-            return whole ? "(removed)" : "(empty)";
-        }
-        if (whole) {
-            return json;
-        }
-        Object v = PortableFields.parseValue(json);
-        return v == null ? "(empty)" : v.toString();
+                c.shown(c.mine()), c.shown(c.theirs()), c.theirsBy() == null ? "" : c.theirsBy(), c.foundAt());
     }
 }
