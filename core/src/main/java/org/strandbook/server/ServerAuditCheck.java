@@ -177,7 +177,10 @@ public final class ServerAuditCheck {
         }
     }
 
-    /** Every record against the trail's last image of it; a record the trail never named is reported too. */
+    /**
+     * Every record against the trail's last image of it; a record the trail never named, and one it
+     * named that is gone (nothing leaves the server: a removal is a flag), are reported too.
+     */
     private static void reconcile(Connection c, long siteId, Map<String, LastImage> last, List<AuditFinding> findings)
             throws SQLException {
         List<String> tables = new ArrayList<>(IMMUTABLE);
@@ -195,7 +198,7 @@ public final class ServerAuditCheck {
                 ps.setFetchSize(5_000);
                 try (ResultSet rs = ps.executeQuery()) {
                     while (rs.next()) {
-                        LastImage recorded = last.get(table + '\u0000' + rs.getString(1));
+                        LastImage recorded = last.remove(table + '\u0000' + rs.getString(1));
                         String name = table + " " + rs.getString(1);
                         if (recorded == null) {
                             findings.add(new AuditFinding(0, name + " has no audit row: it was added past the"
@@ -208,6 +211,13 @@ public final class ServerAuditCheck {
                 }
             }
         }
+        // a batch's missing records are counted by its digest check; any other record the trail names must be there
+        last.forEach((name, recorded) -> {
+            if (recorded.fieldsText() != null) {
+                findings.add(new AuditFinding(recorded.auditRowId(), name.replace('\u0000', ' ') + " recorded by server"
+                        + " audit row " + recorded.auditRowId() + " is missing: it was deleted past the server's triggers"));
+            }
+        });
     }
 
     private static long siteIdFor(Connection c, String siteName) throws SQLException {

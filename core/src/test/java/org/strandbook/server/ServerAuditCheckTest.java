@@ -85,6 +85,18 @@ class ServerAuditCheckTest {
     }
 
     @Test
+    void aPointDeletedPastTheTriggersIsMissedByName() throws SQLException {
+        // nothing leaves the server (a removal is a flag): a row gone is the owner's doing
+        asOwner("ALTER TABLE point_band DISABLE TRIGGER USER", "ALTER TABLE point DISABLE TRIGGER USER",
+                "DELETE FROM point_band", "DELETE FROM point WHERE record_key = '" + DemoSite.POINT_B + "'",
+                "ALTER TABLE point ENABLE TRIGGER USER", "ALTER TABLE point_band ENABLE TRIGGER USER");
+        AuditReport report = check();
+        assertTrue(report.unrecordedChanges().stream().anyMatch(f -> f.message().startsWith("point " + DemoSite.POINT_B
+                + " recorded by server audit row") && f.message().endsWith("is missing: it was deleted past the server's"
+                + " triggers")), report.toString());
+    }
+
+    @Test
     void aSpectrumChangedPastTheTriggersFailsItsBatchDigest() throws SQLException {
         asOwner("ALTER TABLE scan DISABLE TRIGGER USER",
                 "UPDATE scan SET spectrum = spectrum || '\\x00'::bytea WHERE record_key = (SELECT min(record_key) FROM scan)",
