@@ -275,6 +275,49 @@ class PointRemovedWhileEditedTest {
         }
     }
 
+    @Test
+    void aScanTakenHereOfAPointRemovedThereWaitsWithThePointAndTravelsOnceMineIsKept() throws SQLException {
+        try (Workbook a = laptopA()) {
+            sync(a);
+            try (Workbook b = laptopB()) {
+                DemoSite.insertScan(b, P, 5, T0.plusSeconds(600));
+                SyncLedger.Conflict point = pointConflict(removedThereEditedHere(a, b));
+                // design choice: no workbook could take a scan of a point it no longer has, so it waits here
+                assertEquals(1, count("SELECT count(*) FROM scan"), "only point A's scan is on the server");
+                sync(a);
+                SyncRefusedException refused = assertThrows(SyncRefusedException.class,
+                        () -> SiteSync.resolve(b, point.id(), false, "j.pell"));
+                // nothing silently overwritten: keeping theirs would take the scan with the point
+                assertTrue(refused.getMessage().contains("which this workbook's scan record"), refused.getMessage());
+                assertTrue(holds(b));
+                SiteSync.resolve(b, point.id(), true, "j.pell");
+                sync(b);
+                sync(a);
+                assertEquals(2, count("SELECT count(*) FROM scan"), "the scan travels with its point");
+                assertEquals(a.records().readAll(), b.records().readAll(), "two laptops that agree");
+            }
+        }
+    }
+
+    @Test
+    void aScanTakenThereOfAPointRemovedHereWaitsOnTheServerUntilTheirsIsKept() {
+        try (Workbook a = laptopA()) {
+            sync(a);
+            try (Workbook b = laptopB()) {
+                DemoSite.insertScan(a, P, 5, T0.plusSeconds(600));
+                // design choice: the scan of a point in question is not pulled, so this sync completes
+                SyncLedger.Conflict point = pointConflict(removedHereEditedThere(a, b));
+                assertFalse(holds(b));
+                SiteSync.resolve(b, point.id(), false, "j.pell");
+                sync(b);
+                assertEquals(2, b.records().readAll().get(PortableTable.SCAN).size(), "the scan comes with its point");
+                sync(a);
+                assertEquals(a.records().readAll(), b.records().readAll(), "two laptops that agree");
+                assertTrue(a.audit().verify().intact() && b.audit().verify().intact());
+            }
+        }
+    }
+
     private static Set<Long> ids(SiteSync.Outcome o) {
         return o.openConflicts().stream().map(SyncLedger.Conflict::id).collect(Collectors.toSet());
     }
