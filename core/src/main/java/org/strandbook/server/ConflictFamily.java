@@ -39,6 +39,8 @@ final class ConflictFamily {
     }
 
     private final List<Member> members = new ArrayList<>();
+    /** The other open conflicts, over single fields of these records: the whole-record choice settles them too. */
+    private final List<SyncLedger.Conflict> fieldConflicts;
 
     /** The conflict and every open whole-record conflict below it, parents first. */
     ConflictFamily(SyncLedger.Conflict head, List<SyncLedger.Conflict> all) {
@@ -60,6 +62,8 @@ final class ConflictFamily {
                 in.add(new Ref(c.table(), c.key()));
             }
         }
+        fieldConflicts = all.stream().filter(c -> c.open() && !SiteSync.RECORD.equals(c.field())
+                && in.contains(new Ref(c.table(), c.key()))).toList();
     }
 
     private static Member member(SyncLedger.Conflict c) {
@@ -73,11 +77,18 @@ final class ConflictFamily {
     /** Carries out the choice inside the caller's workbook transaction; the conflicts resolved. */
     List<SyncLedger.Conflict> resolve(WorkbookRecords records, SyncLedger ledger, boolean keepMine, String by) {
         Map<PortableTable, Map<String, SyncLedger.Base>> bases = ledger.bases();
-        if (!keepMine) {
-            takeTheirs(records, records.readAll());
-        }
+        Set<Ref> removed = keepMine ? Set.of() : takeTheirs(records, records.readAll());
         Instant now = Instant.now();
         List<SyncLedger.Conflict> resolved = new ArrayList<>();
+        List<SyncLedger.Conflict> settled = new ArrayList<>(fieldConflicts);
+        if (!removed.isEmpty()) {
+            // a record removed with its owner leaves no field of it in question
+            ledger.conflicts().stream().filter(c -> c.open() && !SiteSync.RECORD.equals(c.field())
+                    && removed.contains(new Ref(c.table(), c.key())) && !settled.contains(c)).forEach(settled::add);
+        }
+        for (SyncLedger.Conflict c : settled) {
+            ledger.resolved(c.id(), keepMine ? "MINE" : "THEIRS", by, now);
+        }
         for (Member m : members) {
             SyncLedger.Base b = bases.get(m.table()).get(m.key());
             if (m.theirs() == null) {
@@ -92,7 +103,8 @@ final class ConflictFamily {
         return resolved;
     }
 
-    private void takeTheirs(WorkbookRecords records, Map<PortableTable, Map<String, Map<String, Object>>> here) {
+    /** Writes the server's side of every member here; what it removed. */
+    private Set<Ref> takeTheirs(WorkbookRecords records, Map<PortableTable, Map<String, Map<String, Object>>> here) {
         Set<Ref> putBack = new HashSet<>();
         Set<Ref> removed = new HashSet<>();
         for (Member m : members) {
@@ -153,6 +165,7 @@ final class ConflictFamily {
                     + " records naming a missing " + first.getValue() + "; nothing was changed. Keep mine, or settle"
                     + " with the colleague whose change it was which record stands");
         }
+        return removed;
     }
 
     private static boolean names(Map<String, PortableTable> references, Map<String, Object> fields, Set<Ref> refs) {

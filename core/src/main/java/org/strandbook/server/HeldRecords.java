@@ -60,7 +60,7 @@ final class HeldRecords {
     }
 
     private boolean names(Map<String, PortableTable> fieldsToTables, Map<String, Object> fields) {
-        if (fields == null) {
+        if (fields == null || held.isEmpty()) {
             return false;
         }
         for (Map.Entry<String, PortableTable> f : fieldsToTables.entrySet()) {

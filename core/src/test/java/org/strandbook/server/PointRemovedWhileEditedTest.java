@@ -87,7 +87,8 @@ class PointRemovedWhileEditedTest {
     }
 
     private static SyncLedger.Conflict pointConflict(SiteSync.Outcome o) {
-        return o.openConflicts().stream().filter(c -> c.table() == PortableTable.POINT && c.key().equals(P))
+        return o.openConflicts().stream().filter(c -> c.table() == PortableTable.POINT && c.key().equals(P)
+                        && c.field().equals(SiteSync.RECORD))
                 .findFirst().orElseThrow(() -> new AssertionError("no conflict over point " + P + ": "
                         + o.openConflicts()));
     }
@@ -314,6 +315,30 @@ class PointRemovedWhileEditedTest {
                 sync(a);
                 assertEquals(a.records().readAll(), b.records().readAll(), "two laptops that agree");
                 assertTrue(a.audit().verify().intact() && b.audit().verify().intact());
+            }
+        }
+    }
+
+    @Test
+    void aFieldConflictStillOpenOverThePointIsSettledByTheWholeRecordChoice() {
+        try (Workbook a = laptopA()) {
+            sync(a);
+            try (Workbook b = laptopB()) {
+                editService(b);
+                MeasurementPoint p = a.points().get(P).orElseThrow();
+                a.points().save(new MeasurementPoint(p.tag(), "reactor feed, first train", p.location(),
+                        p.analyzerTag(), p.channel(), p.probeTypeCode(), p.bands(), p.toleranceDb(), p.hazardousArea(),
+                        p.hydrogenService(), p.processTemperatureC()));
+                sync(a);
+                assertEquals("service", sync(b).openConflicts().get(0).field());
+                a.points().delete(P);
+                sync(a);
+                SiteSync.resolve(b, pointConflict(sync(b)).id(), false, "j.pell");
+                // design choice: the point removed leaves none of its fields in question
+                assertTrue(b.syncLedger().conflicts().stream().noneMatch(SyncLedger.Conflict::open),
+                        b.syncLedger().conflicts()::toString);
+                sync(b);
+                assertEquals(a.records().readAll(), b.records().readAll(), "two laptops that agree");
             }
         }
     }
