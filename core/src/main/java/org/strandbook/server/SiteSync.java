@@ -658,6 +658,26 @@ public final class SiteSync {
     }
 
     /**
+     * The record ("point AT-4101") whose open whole-record conflict this whole-record conflict waits
+     * with, as a sync held it back; empty for one that stands on its own. Resolving that one resolves
+     * this too.
+     */
+    public static Optional<String> waitsWith(SyncLedger.Conflict c, List<SyncLedger.Conflict> conflicts) {
+        if (!c.field().equals(RECORD)) {
+            return Optional.empty();
+        }
+        Map<String, Object> fields = PortableFields.parse(c.mine().equals("null") ? c.theirs() : c.mine());
+        for (Map.Entry<String, PortableTable> owner : c.table().ownerFields().entrySet()) {
+            Object key = fields.get(owner.getKey());
+            if (key != null && conflicts.stream().anyMatch(x -> x.open() && x.field().equals(RECORD)
+                    && x.table() == owner.getValue() && x.key().equals(key.toString()))) {
+                return Optional.of(owner.getValue().workbookTable() + " " + key);
+            }
+        }
+        return Optional.empty();
+    }
+
+    /**
      * A person's choice for an open conflict, made in the workbook before the next sync carries it
      * out: keeping theirs changes the workbook now (an audited update); keeping mine makes the base
      * the server's value, so that the sync that follows pushes mine as an edit made here (an
