@@ -23,7 +23,7 @@ import org.flywaydb.core.api.FlywayException;
 public final class PlantServer {
 
     /** The newest server schema this Strandbook carries: the highest V&lt;n&gt; script (a test keeps them equal). */
-    static final int SCHEMA_VERSION = 4;
+    static final int SCHEMA_VERSION = 5;
 
     /** Where the migrations live on the classpath. */
     static final String MIGRATIONS = "classpath:org/strandbook/server/migration";
@@ -64,8 +64,19 @@ public final class PlantServer {
                     .load()
                     .migrate();
         } catch (FlywayException e) {
+            // Flyway's own message names only the script; the server's reason is in the SQL error beneath it
+            SQLException sql = null;
+            for (Throwable t = e; t != null && sql == null; t = t.getCause()) {
+                sql = t instanceof SQLException x ? x : null;
+            }
+            String why = ServerException.firstLine(e) + (sql == null ? "" : ": " + ServerException.firstLine(sql));
+            if (sql != null && "42501".equals(sql.getSQLState())) {
+                why += ". The schema is made by the first sync, clone or fleet of the database's owner, which must"
+                        + " be allowed to create the role strandbook_technician (CREATEROLE) unless an administrator"
+                        + " created it first (README, Plant server)";
+            }
             throw new ServerException("cannot bring the plant server " + login.displayUrl() + " to this"
-                    + " Strandbook's schema: " + ServerException.firstLine(e), e);
+                    + " Strandbook's schema: " + why, e);
         }
     }
 

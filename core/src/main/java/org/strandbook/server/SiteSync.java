@@ -64,7 +64,7 @@ public final class SiteSync {
     }
 
     /** The field name a conflict over a whole record (removed on one side, changed on the other) carries. */
-    public static final String RECORD = "(record)";
+    public static final String RECORD = SyncLedger.WHOLE_RECORD;
 
     private final PlantServer server;
     private final Workbook workbook;
@@ -373,9 +373,9 @@ public final class SiteSync {
             }
             return 1;
         }
+        // the server moves the revision and stamps who and when (schema 5): a technician may set only these two
         try (PreparedStatement ps = c.prepareStatement("UPDATE " + t.serverTable() + " SET fields = ?::jsonb,"
-                + " deleted = ?, revision = revision + 1, changed_at = clock_timestamp(), changed_by = session_user"
-                + " WHERE site_id = ? AND record_key = ? AND revision = ?")) {
+                + " deleted = ? WHERE site_id = ? AND record_key = ? AND revision = ?")) {
             ps.setString(1, PortableFields.json(fields == null ? row.fields() : fields));
             ps.setBoolean(2, fields == null);
             ps.setLong(3, siteId);

@@ -43,7 +43,27 @@ public final class SyncLedger {
         public boolean open() {
             return resolvedAt == null;
         }
+
+        /**
+         * One side's value ({@link #mine} or {@link #theirs}) as a person reads it: "(removed)" for
+         * a whole record gone, "(empty)" for a field without value, a whole record as its JSON, a
+         * number with the unit its field's name carries.
+         */
+        public String shown(String side) {
+            boolean whole = field.equals(WHOLE_RECORD);
+            if (side == null || side.equals("null")) {
+                return whole ? "(removed)" : "(empty)";
+            }
+            if (whole) {
+                return side;
+            }
+            Object v = PortableFields.parseValue(side);
+            return v == null ? "(empty)" : FieldUnit.shown(field, v);
+        }
     }
+
+    /** The field a conflict over a whole record (removed on one side, changed on the other) names. */
+    public static final String WHOLE_RECORD = "(record)";
 
     private final Session session;
 
@@ -118,18 +138,30 @@ public final class SyncLedger {
         putBases(table, Map.of(key, base));
     }
 
-    /** Many bases at once: a first sync records one per scan, tens of thousands. */
+    /**
+     * Many bases at once: a first sync records one per scan, tens of thousands. They go in as one
+     * statement over a JSON array in key order, which SQLite unpacks itself (json_each): a statement
+     * per base cost a call into the driver each and b-tree inserts in random key order.
+     */
     public void putBases(PortableTable table, Map<String, Base> bases) {
-        session.write(() -> {
-            PreparedStatement ps = session.prepared(
-                    "INSERT OR REPLACE INTO sync_base (table_name, record_key, fields, revision) VALUES (?, ?, ?, ?)");
-            for (Map.Entry<String, Base> e : bases.entrySet()) {
-                ps.setString(1, table.name());
-                ps.setString(2, e.getKey());
-                ps.setString(3, e.getValue().fieldsJson());
-                ps.setLong(4, e.getValue().revision());
-                ps.executeUpdate();
+        if (bases.isEmpty()) {
+            return;
+        }
+        StringBuilder rows = new StringBuilder(bases.size() * 80).append('[');
+        bases.entrySet().stream().sorted(Map.Entry.comparingByKey()).forEach(e -> {
+            if (rows.length() > 1) {
+                rows.append(',');
             }
+            JsonText.string(rows.append('['), e.getKey()).append(',');
+            JsonText.string(rows, e.getValue().fieldsJson()).append(',').append(e.getValue().revision()).append(']');
+        });
+        rows.append(']');
+        session.write(() -> {
+            PreparedStatement ps = session.prepared("INSERT OR REPLACE INTO sync_base (table_name, record_key, fields,"
+                    + " revision) SELECT ?, value ->> 0, value ->> 1, value ->> 2 FROM json_each(?)");
+            ps.setString(1, table.name());
+            ps.setString(2, rows.toString());
+            ps.executeUpdate();
             return null;
         });
     }

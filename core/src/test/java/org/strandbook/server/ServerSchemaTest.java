@@ -142,6 +142,61 @@ class ServerSchemaTest {
     }
 
     @Test
+    void aTechnicianCannotNameAnotherLoginOrAnotherTimeAsTheAuthorOfARecord() throws SQLException {
+        // column privileges refuse the statement before any row is written (PostgreSQL 15 documentation,
+        // SQL command GRANT: "column privileges"); who and when are the server's word (issue 15: the audit
+        // trail is append-only on the server, not only in application code)
+        long site = siteId("Site A");
+        try (Connection a = as("schema_tech_a")) {
+            for (String forged : new String[] {
+                    "INSERT INTO note (site_id, record_key, fields, added_by) VALUES (" + site + ", 'n-x', '{}', 'schema_tech_b')",
+                    "INSERT INTO note (site_id, record_key, fields, added_at) VALUES (" + site + ", 'n-y', '{}', '2020-01-01Z')",
+                    "INSERT INTO scan (site_id, record_key, fields, spectrum, added_by) VALUES (" + site
+                            + ", 's-x', '{}', '\\x00', 'schema_tech_b')",
+                    "INSERT INTO point (site_id, record_key, fields, changed_by) VALUES (" + site + ", 'AT-4998', '{}', 'x')",
+                    "INSERT INTO point (site_id, record_key, fields, revision) VALUES (" + site + ", 'AT-4997', '{}', 42)",
+                    "INSERT INTO workbook_push (site_id, workbook_id, first_entry_id, last_entry_id, last_entry_hash,"
+                            + " pushed_by) VALUES (" + site + ", 'w', 1, 1, repeat('0', 64), 'schema_tech_b')",
+                    "INSERT INTO point_status (site_id, tag, status, evaluated_at, recorded_by) VALUES (" + site
+                            + ", 'AT-4101', 'PASS', now(), 'schema_tech_b')"}) {
+                assertEquals("42501", refused(a, forged).getSQLState(), forged);
+            }
+        }
+    }
+
+    @Test
+    void anEditCarriesTheEditorsLoginTheServersClockAndTheNextRevisionWhateverTheStatementSays() throws SQLException {
+        // design choice (schema 5): an edit may set only a record's fields and its removal flag; a
+        // trigger stamps the rest, so the revision another laptop compares against always moves
+        try (Connection a = as("schema_tech_a"); Statement st = a.createStatement()) {
+            st.execute("INSERT INTO point (site_id, record_key, fields) SELECT id, 'AT-4102', '{\"service\":\"x\"}'"
+                    + " FROM site WHERE name = 'Site A'");
+            assertEquals("42501", refused(a, "UPDATE point SET changed_by = 'schema_tech_b'"
+                    + " WHERE record_key = 'AT-4102'").getSQLState());
+            assertEquals("42501", refused(a, "UPDATE point SET changed_at = '2020-01-01Z'"
+                    + " WHERE record_key = 'AT-4102'").getSQLState());
+            assertEquals("42501", refused(a, "UPDATE point SET revision = 1 WHERE record_key = 'AT-4102'").getSQLState());
+            st.execute("UPDATE point SET fields = '{\"service\":\"y\"}' WHERE record_key = 'AT-4102'");
+            try (ResultSet rs = st.executeQuery("SELECT revision, changed_by, changed_at <= clock_timestamp()"
+                    + " AND changed_at > clock_timestamp() - interval '1 minute' FROM point WHERE record_key = 'AT-4102'")) {
+                assertTrue(rs.next());
+                assertEquals(2, rs.getLong(1), "the revision moved by one");
+                assertEquals("schema_tech_a", rs.getString(2));
+                assertTrue(rs.getBoolean(3), "stamped by the server's clock just now");
+            }
+        }
+        try (Connection owner = as(LocalPostgres.SUPERUSER); Statement st = owner.createStatement()) {
+            st.execute("UPDATE point SET fields = '{\"service\":\"z\"}', changed_by = 'schema_tech_b', revision = 1"
+                    + " WHERE record_key = 'AT-4102'");
+            try (ResultSet rs = st.executeQuery("SELECT revision, changed_by FROM point WHERE record_key = 'AT-4102'")) {
+                assertTrue(rs.next());
+                assertEquals(3, rs.getLong(1), "even the owner's edit moves the revision");
+                assertEquals(LocalPostgres.SUPERUSER, rs.getString(2), "and names the owner's own login");
+            }
+        }
+    }
+
+    @Test
     void immutableRecordsAndEditableRecordsCannotBeDeleted() throws SQLException {
         try (Connection a = as("schema_tech_a")) {
             assertEquals("42501", refused(a, "UPDATE note SET fields = '{}'").getSQLState());

@@ -4,11 +4,9 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.sql.Connection;
 import java.sql.DriverManager;
-import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
 import java.util.HexFormat;
-import java.util.Locale;
 
 import org.postgresql.PGConnection;
 import org.postgresql.copy.CopyIn;
@@ -29,33 +27,18 @@ final class BareServerCopy {
     static double secondsToCopy(Path workbook, String serverUrl, String user, String password, String table) {
         try (Connection from = DriverManager.getConnection("jdbc:sqlite:" + workbook);
              Connection to = DriverManager.getConnection(serverUrl, user, password == null ? "" : password)) {
-            to.setAutoCommit(false);
-            try (Statement st = to.createStatement()) {
-                st.execute("DROP TABLE IF EXISTS " + table);
-                st.execute("CREATE TABLE " + table + " (site_id bigint NOT NULL, record_key text NOT NULL,"
-                        + " fields jsonb NOT NULL, spectrum bytea NOT NULL, PRIMARY KEY (site_id, record_key))");
-            }
-            to.commit();
+            createBareTable(to, table);
             long start = System.nanoTime();
             CopyIn copy = to.unwrap(PGConnection.class).getCopyAPI()
                     .copyIn("COPY " + table + " (site_id, record_key, fields, spectrum) FROM STDIN");
             HexFormat hex = HexFormat.of();
             StringBuilder line = new StringBuilder();
-            try (Statement read = from.createStatement();
-                 ResultSet rs = read.executeQuery("SELECT s.sha256, s.point_id, s.kind, s.taken_at, s.operator,"
-                         + " s.integration_ms, s.co_added, s.n_points, s.min_nm, s.max_nm, s.source_file, d.data"
-                         + " FROM scan s JOIN scan_spectrum d ON d.scan_id = s.id")) {
-                while (rs.next()) {
+            try (BareScanRows rows = new BareScanRows(from)) {
+                while (rows.next()) {
                     line.setLength(0);
                     // COPY's text format: tab-separated, bytea as \x hex (its backslash doubled)
-                    line.append("1\t").append(rs.getString(1)).append('\t').append(String.format(Locale.ROOT,
-                            "{\"point\":%d,\"kind\":\"%s\",\"taken_at\":\"%s\",\"operator\":\"%s\","
-                                    + "\"integration_ms\":%s,\"co_added\":%d,\"n_points\":%d,\"min_nm\":%s,"
-                                    + "\"max_nm\":%s,\"source_file\":\"%s\",\"sha256\":\"%s\"}",
-                            rs.getLong(2), rs.getString(3), rs.getString(4), rs.getString(5), rs.getDouble(6),
-                            rs.getLong(7), rs.getLong(8), rs.getDouble(9), rs.getDouble(10), rs.getString(11),
-                            rs.getString(1)));
-                    line.append("\t\\\\x").append(hex.formatHex(rs.getBytes(12))).append('\n');
+                    line.append("1\t").append(rows.key()).append('\t').append(rows.fieldsJson());
+                    line.append("\t\\\\x").append(hex.formatHex(rows.spectrum())).append('\n');
                     byte[] bytes = line.toString().getBytes(StandardCharsets.UTF_8);
                     copy.writeToCopy(bytes, 0, bytes.length);
                 }
@@ -70,5 +53,16 @@ final class BareServerCopy {
         } catch (SQLException e) {
             throw new IllegalStateException("the bare copy failed: " + e.getMessage(), e);
         }
+    }
+
+    /** A table of the server's scan shape with nothing on it: no trigger, no policy, no audit. */
+    static void createBareTable(Connection to, String table) throws SQLException {
+        to.setAutoCommit(false);
+        try (Statement st = to.createStatement()) {
+            st.execute("DROP TABLE IF EXISTS " + table);
+            st.execute("CREATE TABLE " + table + " (site_id bigint NOT NULL, record_key text NOT NULL,"
+                    + " fields jsonb NOT NULL, spectrum bytea NOT NULL, PRIMARY KEY (site_id, record_key))");
+        }
+        to.commit();
     }
 }

@@ -86,6 +86,7 @@ public final class SyncBenchCommand implements Callable<Integer> {
             double workbookBytes = Files.size(built);
             double bestPush = Double.MAX_VALUE;
             double bestFloor = Double.MAX_VALUE;
+            double bestCopy = Double.MAX_VALUE;
             double scanBytes = 0;
             double auditBytes = 0;
             for (int t = 0; t < trials; t++) {
@@ -109,13 +110,18 @@ public final class SyncBenchCommand implements Callable<Integer> {
                     scanBytes = bytes(c, "scan");
                     auditBytes = bytes(c, "audit_entry");
                 }
-                double floor = BareServerCopy.secondsToCopy(copy, url, LocalPostgres.SUPERUSER, null, "bench_floor_scan");
+                double floor = BareServerInsert.secondsToInsert(copy, url, LocalPostgres.SUPERUSER, null,
+                        "bench_floor_insert");
+                double copyFloor = BareServerCopy.secondsToCopy(copy, url, LocalPostgres.SUPERUSER, null,
+                        "bench_floor_copy");
                 out.printf(Locale.ROOT, "trial %d: push %.1f s (%.0f scans/s, audit verify, portable form, server"
-                        + " audit trail and sync state included); floor %.1f s (%.0f scans/s)%n", t + 1, push,
-                        scans / push, floor, scans / floor);
+                        + " audit trail and sync state included); floor %.1f s (%.0f scans/s, bare JDBC batch"
+                        + " insert); COPY %.1f s (%.0f scans/s)%n", t + 1, push, scans / push, floor, scans / floor,
+                        copyFloor, scans / copyFloor);
                 out.flush();
                 bestPush = Math.min(bestPush, push);
                 bestFloor = Math.min(bestFloor, floor);
+                bestCopy = Math.min(bestCopy, copyFloor);
                 Files.deleteIfExists(copy);
             }
             double perScan = scanBytes / scans;
@@ -132,7 +138,9 @@ public final class SyncBenchCommand implements Callable<Integer> {
                     + " %.0f years%n", REAL_SPECTRUM_POINTS, realPerScan, SCANS_PER_POINT_YEAR, perPointYear / 1e6,
                     PARTITION_AT_BYTES / 1e9, PARTITION_AT_BYTES / perPointYear,
                     PARTITION_AT_BYTES / perPointYear / (20 * 200));
-            out.printf(Locale.ROOT, "best push %.1f s, best floor %.1f s (best of %d)%n", bestPush, bestFloor, trials);
+            out.printf(Locale.ROOT, "best push %.1f s, best floor %.1f s (bare JDBC batch insert), best COPY %.1f s"
+                    + " (best of %d); against COPY, which a technician's login cannot use under row-level security,"
+                    + " the ratio is %.2f%n", bestPush, bestFloor, bestCopy, trials, bestCopy / bestPush);
             out.printf(Locale.ROOT, "ratio: %.2f%n", bestFloor / bestPush);
             out.flush();
             return CommandLine.ExitCode.OK;

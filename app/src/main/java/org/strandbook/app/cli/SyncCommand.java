@@ -93,8 +93,8 @@ final class SyncCommand implements Callable<Integer> {
                     out.println("reported the status of " + reported + " point(s) for the fleet view");
                 }
                 for (SyncLedger.Conflict c : o.openConflicts()) {
-                    out.println("conflict " + c.id() + ": " + describe(c) + ": mine " + c.mine() + ", theirs "
-                            + c.theirs() + (c.theirsBy().isEmpty() ? "" : " (by " + c.theirsBy() + ")"));
+                    out.println("conflict " + c.id() + ": " + describe(c) + ": mine " + shown(c, c.mine()) + ", theirs "
+                            + shown(c, c.theirs()) + (c.theirsBy().isEmpty() ? "" : " (by " + c.theirsBy() + ")"));
                 }
                 if (!o.openConflicts().isEmpty()) {
                     out.println(o.openConflicts().size() + " conflict(s) wait for a choice: strandbook sync "
@@ -122,6 +122,11 @@ final class SyncCommand implements Callable<Integer> {
 
     private static long openConflicts(Workbook wb) {
         return wb.syncLedger().conflicts().stream().filter(SyncLedger.Conflict::open).count();
+    }
+
+    /** A side's value, text in its quotes (it may hold commas), a number with its unit. */
+    private static String shown(SyncLedger.Conflict c, String side) {
+        return side != null && side.startsWith("\"") ? side : c.shown(side);
     }
 
     private static String describe(SyncLedger.Conflict c) {

@@ -4,7 +4,6 @@ import java.time.Instant;
 import java.util.List;
 
 import org.strandbook.server.SiteSync;
-import org.strandbook.store.PortableFields;
 import org.strandbook.store.SyncLedger;
 
 /**
@@ -29,19 +28,7 @@ public record ConflictRow(long id, String record, String field, String mine, Str
         boolean whole = SiteSync.RECORD.equals(c.field());
         String field = whole ? SiteSync.waitsWith(c, open).map(o -> "whole record, with " + o).orElse("whole record")
                 : c.field();
-        return new ConflictRow(c.id(), c.table().workbookTable() + " " + c.key(), field,
-                readable(c.mine(), whole), readable(c.theirs(), whole), c.theirsBy() == null ? "" : c.theirsBy(),
-                c.foundAt());
-    }
-
-    private static String readable(String json, boolean whole) {
-        if (json == null || json.equals("null")) {
-            return whole ? "(removed)" : "(empty)";
-        }
-        if (whole) {
-            return json;
-        }
-        Object v = PortableFields.parseValue(json);
-        return v == null ? "(empty)" : v.toString();
+        return new ConflictRow(c.id(), c.table().workbookTable() + " " + c.key(), field, c.shown(c.mine()),
+                c.shown(c.theirs()), c.theirsBy() == null ? "" : c.theirsBy(), c.foundAt());
     }
 }
