@@ -8,6 +8,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.nio.file.Path;
 import java.sql.SQLException;
 import java.util.List;
+import java.util.OptionalDouble;
 import java.util.Set;
 import java.util.stream.Collectors;
 
@@ -15,7 +16,14 @@ import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.strandbook.site.Bend;
+import org.strandbook.site.CableSegment;
+import org.strandbook.site.InspectionGrade;
+import org.strandbook.site.Joint;
+import org.strandbook.site.LossBasis;
 import org.strandbook.site.MeasurementPoint;
+import org.strandbook.site.PathDirection;
+import org.strandbook.site.PathElement;
 import org.strandbook.site.PathLeg;
 import org.strandbook.store.DemoSite;
 import org.strandbook.store.PortableTable;
@@ -282,6 +290,32 @@ class PointRemovedWhileEditedTest {
                 b.syncLedger().conflicts()::toString);
         sync(b);
         assertEquals(a.records().readAll(), b.records().readAll(), "two laptops that agree");
+    }
+
+    @Test
+    void theBendsOfASegmentThereWhereAJointIsHereWaitWithItAndComeWithTheirs() {
+        // one position of the send leg holds a different thing on each side: a conflict over the whole element
+        List<PathLeg> legs = DemoSite.legs(P, "C102");
+        List<PathElement> send = legs.get(0).elements();
+        PathLeg there = new PathLeg(P, PathDirection.SEND, List.of(send.get(0),
+                new CableSegment("C102-S9", DemoSite.FIBER, 4.0, List.of(new Bend(40, 1))), send.get(2)));
+        PathLeg here = new PathLeg(P, PathDirection.SEND, List.of(send.get(0), new Joint("J1", DemoSite.CONNECTOR, null,
+                InspectionGrade.DIRTY, OptionalDouble.of(0.9), LossBasis.MEASURED), send.get(2)));
+        a.paths().replaceLegs(P, List.of(there, legs.get(1)));
+        b.paths().replaceLegs(P, List.of(here, legs.get(1)));
+        sync(a);
+        SiteSync.Outcome seen = sync(b);
+        SyncLedger.Conflict element = seen.openConflicts().stream().filter(c -> c.table() == PortableTable.PATH_ELEMENT)
+                .findFirst().orElseThrow();
+        // design choice: the segment's bend is not pulled under this laptop's joint
+        assertEquals(List.of(PortableTable.PATH_ELEMENT, PortableTable.SEGMENT_BEND),
+                seen.openConflicts().stream().map(SyncLedger.Conflict::table).toList());
+        SiteSync.resolve(b, element.id(), false, "j.pell");
+        assertEquals(List.of(there, legs.get(1)), path(b), "the segment comes with its bend");
+        sync(b);
+        sync(a);
+        assertEquals(a.records().readAll(), b.records().readAll(), "two laptops that agree");
+        assertTrue(a.audit().verify().intact() && b.audit().verify().intact());
     }
 
     private static Set<Long> ids(SiteSync.Outcome o) {
