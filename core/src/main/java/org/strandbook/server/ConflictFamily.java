@@ -74,12 +74,11 @@ final class ConflictFamily {
         return json.equals("null") ? null : PortableFields.parse(json);
     }
 
-    /** Carries out the choice inside the caller's workbook transaction; the conflicts resolved. */
-    List<SyncLedger.Conflict> resolve(WorkbookRecords records, SyncLedger ledger, boolean keepMine, String by) {
+    /** Carries out the choice inside the caller's workbook transaction. */
+    void resolve(WorkbookRecords records, SyncLedger ledger, boolean keepMine, String by) {
         Map<PortableTable, Map<String, SyncLedger.Base>> bases = ledger.bases();
         Set<Ref> removed = keepMine ? Set.of() : takeTheirs(records, records.readAll());
         Instant now = Instant.now();
-        List<SyncLedger.Conflict> resolved = new ArrayList<>();
         List<SyncLedger.Conflict> settled = new ArrayList<>(fieldConflicts);
         if (!removed.isEmpty()) {
             // a record removed with its owner leaves no field of it in question
@@ -98,9 +97,7 @@ final class ConflictFamily {
                         b == null ? 0 : b.revision()));
             }
             ledger.resolved(m.conflict().id(), keepMine ? "MINE" : "THEIRS", by, now);
-            resolved.add(m.conflict());
         }
-        return resolved;
     }
 
     /** Writes the server's side of every member here; what it removed. */

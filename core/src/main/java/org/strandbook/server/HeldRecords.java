@@ -51,16 +51,16 @@ final class HeldRecords {
      * key, the same on every side) belongs to a held record.
      */
     boolean ownerHeld(PortableTable table, Map<String, Object> fields) {
-        return names(table.ownerFields(), fields);
+        return !held.isEmpty() && names(table.ownerFields(), fields);
     }
 
     /** Whether a record with these fields names a held record in any of its references. */
     boolean referenceHeld(PortableTable table, Map<String, Object> fields) {
-        return names(table.referenceFields(), fields);
+        return !held.isEmpty() && names(table.referenceFields(), fields);
     }
 
     private boolean names(Map<String, PortableTable> fieldsToTables, Map<String, Object> fields) {
-        if (fields == null || held.isEmpty()) {
+        if (fields == null) {
             return false;
         }
         for (Map.Entry<String, PortableTable> f : fieldsToTables.entrySet()) {
