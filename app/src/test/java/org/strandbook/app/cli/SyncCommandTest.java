@@ -48,6 +48,25 @@ class SyncCommandTest {
     }
 
     @Test
+    void theSitesTrailOnTheServerVerifiesFromTheCommandLineAndATamperedOneExitsOne() throws Exception {
+        assertEquals(0, sync(laptop).exitCode());
+        String[] verify = {"audit", "verify-server", "--server", url, "--server-user", TECH, "--site",
+            DemoSite.site().name()};
+        CliRun ok = CliRun.of(verify);
+        assertEquals(0, ok.exitCode(), ok.err());
+        assertTrue(ok.out().startsWith("server audit trail of site \"" + DemoSite.site().name() + "\" OK: "), ok.out());
+        // what only the database's owner can do, past the triggers
+        try (Connection c = LocalPostgres.shared().superuser(url); Statement st = c.createStatement()) {
+            st.execute("ALTER TABLE point DISABLE TRIGGER USER");
+            st.execute("UPDATE point SET fields = fields || '{\"service\":\"x\"}'");
+            st.execute("ALTER TABLE point ENABLE TRIGGER USER");
+        }
+        CliRun broken = CliRun.of(verify);
+        assertEquals(1, broken.exitCode(), broken.out());
+        assertTrue(broken.out().contains("it was changed past the server's triggers"), broken.out());
+    }
+
+    @Test
     void syncPushesThenFindsNothingNew() {
         CliRun first = sync(laptop);
         assertEquals(0, first.exitCode(), first.err());
