@@ -111,6 +111,32 @@ class SyncCommandTest {
     }
 
     @Test
+    void aPointRemovedThereAndEditedHereListsWhatWaitsWithItAndOneChoiceResolvesThemAll() {
+        assertEquals(0, sync(laptop).exitCode());
+        Path second = dir.resolve("second.strandbook");
+        assertEquals(0, CliRun.of("clone", "--server", url, "--server-user", TECH, "--site", DemoSite.site().name(),
+                second.toString()).exitCode());
+        try (Workbook wb = Workbook.open(laptop, "k.ashdown")) {
+            wb.points().delete(DemoSite.POINT_B);
+        }
+        editService(second, DemoSite.POINT_B, "feed, second train");
+        assertEquals(0, sync(laptop).exitCode());
+        CliRun conflicted = sync(second);
+        // design choice: the point's 2 bands, 6 path elements and 3 bends wait with it, each listed
+        assertTrue(conflicted.out().contains("conflict 1: point AT-102 (record): mine {"), conflicted.out());
+        assertTrue(conflicted.out().contains("12 conflict(s) wait for a choice"), conflicted.out());
+        CliRun resolved = sync(second, "--resolve", "1", "--keep", "mine");
+        assertEquals(0, resolved.exitCode(), resolved.err());
+        assertTrue(resolved.err().contains("with the 11 conflict(s) of the records belonging to it"), resolved.err());
+        assertFalse(resolved.out().contains("wait for a choice"), resolved.out());
+        assertEquals(0, sync(laptop).exitCode());
+        try (Workbook wb = Workbook.open(laptop, "k.ashdown")) {
+            assertEquals(DemoSite.legs(DemoSite.POINT_B, "C102"), wb.paths().legs(DemoSite.POINT_B),
+                    "nothing silently overwritten: the kept point comes back with its whole path");
+        }
+    }
+
+    @Test
     void aCloneOfASignedSiteVerifiesAndItsSiteSignatureStillStands() {
         // the issue: "each side's audit trail stays verifiable"; a site signature pins a row of the
         // trail it was given in, which a clone does not have, and that is not tampering
@@ -157,8 +183,12 @@ class SyncCommandTest {
     }
 
     private static void editService(Path file, String service) {
+        editService(file, DemoSite.POINT_A, service);
+    }
+
+    private static void editService(Path file, String tag, String service) {
         try (Workbook wb = Workbook.open(file, "k.ashdown")) {
-            MeasurementPoint p = wb.points().get(DemoSite.POINT_A).orElseThrow();
+            MeasurementPoint p = wb.points().get(tag).orElseThrow();
             wb.points().save(new MeasurementPoint(p.tag(), service, p.location(), p.analyzerTag(), p.channel(),
                     p.probeTypeCode(), p.bands(), p.toleranceDb(), p.hazardousArea(), p.hydrogenService(),
                     p.processTemperatureC()));
