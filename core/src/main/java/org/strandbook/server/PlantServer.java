@@ -52,7 +52,14 @@ public final class PlantServer {
      * finds the schema in place.
      */
     public void migrate() {
-        if (installedVersion() >= SCHEMA_VERSION) {
+        int installed = installedVersion();
+        if (installed > SCHEMA_VERSION) {
+            // an older program would write as the newer schema no longer allows (schema 5 took columns away)
+            throw new ServerException("the plant server " + login.displayUrl() + " is at schema " + installed
+                    + ", newer than this Strandbook knows (" + SCHEMA_VERSION + "): update Strandbook on this machine"
+                    + " before it syncs there");
+        }
+        if (installed == SCHEMA_VERSION) {
             // Flyway's own start costs a cold command about half a second; a server in date needs none of it
             return;
         }

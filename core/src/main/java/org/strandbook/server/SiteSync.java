@@ -96,13 +96,25 @@ public final class SiteSync {
         final Map<PortableTable, Map<String, SyncLedger.Base>> bases = new EnumMap<>(PortableTable.class);
         final Map<PortableTable, Set<String>> droppedBases = new EnumMap<>(PortableTable.class);
         final List<NewConflict> conflicts = new ArrayList<>();
+        final HeldRecords held;
         int pushed;
         int pulled;
         int changedThere;
         int changedHere;
 
+        Plan(HeldRecords held) {
+            this.held = held;
+        }
+
         void base(PortableTable t, String key, SyncLedger.Base base) {
             bases.computeIfAbsent(t, x -> new LinkedHashMap<>()).put(key, base);
+        }
+
+        void conflict(NewConflict c) {
+            conflicts.add(c);
+            if (c.field().equals(RECORD)) {
+                held.add(c.table(), c.key());
+            }
         }
     }
 
@@ -143,7 +155,7 @@ public final class SiteSync {
             return workbook.inTransaction(ledger::state);
         });
 
-        Plan plan = new Plan();
+        Plan plan = new Plan(new HeldRecords(ledger.conflicts()));
         long serverHead;
         try (Connection c = server.connect()) {
             try {
@@ -297,7 +309,12 @@ public final class SiteSync {
             SyncLedger.Base b = base.get(key);
             Map<String, Object> bf = b == null ? null : PortableFields.parse(b.fieldsJson());
             long revision = row == null ? 0 : row.revision();
-            if (Objects.equals(m, th)) {
+            if (!Objects.equals(m, th) && plan.held.ownerHeld(t, m != null ? m : th != null ? th : bf)) {
+                // what it belongs to is in question: neither side's version travels until a person
+                // chooses, and the base stays as it was
+                plan.conflict(new NewConflict(t, key, RECORD, m == null ? "null" : PortableFields.json(m),
+                        th == null ? "null" : PortableFields.json(th), row == null ? "" : row.changedBy()));
+            } else if (Objects.equals(m, th)) {
                 agree(t, key, m, revision, b, plan);
             } else if (b != null && Objects.equals(th, bf)) {
                 revision = pushRecord(c, siteId, t, key, m, row);
@@ -383,7 +400,7 @@ public final class SiteSync {
         if (m == null || th == null || t.identityFields().stream().anyMatch(f -> !Objects.equals(m.get(f), th.get(f)))) {
             // removed on one side, changed on the other, or two different things under one key: the
             // whole record is the question
-            plan.conflicts.add(new NewConflict(t, key, RECORD, m == null ? "null" : PortableFields.json(m),
+            plan.conflict(new NewConflict(t, key, RECORD, m == null ? "null" : PortableFields.json(m),
                     th == null ? "null" : PortableFields.json(th), theirsBy));
             return;
         }
@@ -408,7 +425,7 @@ public final class SiteSync {
                 agreed.put(f, mv);
             } else {
                 conflicted = true;
-                plan.conflicts.add(new NewConflict(t, key, f, PortableFields.value(mv), PortableFields.value(tv),
+                plan.conflict(new NewConflict(t, key, f, PortableFields.value(mv), PortableFields.value(tv),
                         theirsBy));
             }
         }
@@ -441,7 +458,16 @@ public final class SiteSync {
                 }
             }
         }
-        List<String> toPush = mine.keySet().stream().filter(k -> !theirs.contains(k)).toList();
+        // a record naming one in question waits here until a person has chosen
+        Set<String> heldHere = new HashSet<>();
+        for (Map.Entry<String, Map<String, Object>> r : mine.entrySet()) {
+            if (plan.held.referenceHeld(t, r.getValue())) {
+                heldHere.add(r.getKey());
+                plan.held.add(t, r.getKey());
+            }
+        }
+        List<String> toPush = mine.keySet().stream().filter(k -> !theirs.contains(k) && !heldHere.contains(k))
+                .toList();
         if (!toPush.isEmpty()) {
             progress.step("pushing " + toPush.size() + " " + t.workbookTable() + " record(s)");
             boolean scan = t == PortableTable.SCAN;
@@ -478,17 +504,18 @@ public final class SiteSync {
         Set<String> removed = t == PortableTable.SCAN ? exchangeRemovals(c, siteId, mine, base, theirs, plan) : Set.of();
         List<String> toPull = theirs.stream().filter(k -> !mine.containsKey(k) && !base.containsKey(k)
                 && !removed.contains(k)).sorted().toList();
+        List<String> pulled = List.of();
         if (!toPull.isEmpty()) {
             progress.step("pulling " + toPull.size() + " " + t.workbookTable() + " record(s)");
-            pullImmutable(c, siteId, t, toPull, plan);
+            pulled = pullImmutable(c, siteId, t, toPull, plan);
         }
         SyncLedger.Base seen = new SyncLedger.Base("", 0);
         for (String key : mine.keySet()) {
-            if (!base.containsKey(key)) {
+            if (!base.containsKey(key) && !heldHere.contains(key)) {
                 plan.base(t, key, seen);
             }
         }
-        for (String key : toPull) {
+        for (String key : pulled) {
             plan.base(t, key, seen);
         }
     }
@@ -554,7 +581,8 @@ public final class SiteSync {
         ps.executeUpdate();
     }
 
-    private void pullImmutable(Connection c, long siteId, PortableTable t, List<String> keys, Plan plan)
+    /** Pulls the records with these keys, except those naming a record in question; the keys pulled. */
+    private List<String> pullImmutable(Connection c, long siteId, PortableTable t, List<String> keys, Plan plan)
             throws SQLException {
         boolean scan = t == PortableTable.SCAN;
         String sql = "SELECT record_key, fields::text" + (scan ? ", spectrum" : "") + " FROM " + t.serverTable()
@@ -568,8 +596,12 @@ public final class SiteSync {
                 ps.setArray(2, array);
                 try (ResultSet rs = ps.executeQuery()) {
                     while (rs.next()) {
-                        pulled.add(new LocalChange(t, rs.getString(1), PortableFields.parse(rs.getString(2)),
-                                scan ? rs.getBytes(3) : null));
+                        Map<String, Object> fields = PortableFields.parse(rs.getString(2));
+                        if (plan.held.referenceHeld(t, fields)) {
+                            plan.held.add(t, rs.getString(1));
+                        } else {
+                            pulled.add(new LocalChange(t, rs.getString(1), fields, scan ? rs.getBytes(3) : null));
+                        }
                     }
                 }
             }
@@ -577,6 +609,7 @@ public final class SiteSync {
         }
         plan.puts.addAll(pulled);
         plan.pulled += pulled.size();
+        return pulled.stream().map(LocalChange::key).toList();
     }
 
     /** Notes on the server which of this workbook's audit entries it has now taken. */
@@ -625,52 +658,62 @@ public final class SiteSync {
     }
 
     /**
+     * The record ("point AT-4101") whose open whole-record conflict this whole-record conflict waits
+     * with, as a sync held it back; empty for one that stands on its own. Resolving that one resolves
+     * this too.
+     */
+    public static Optional<String> waitsWith(SyncLedger.Conflict c, List<SyncLedger.Conflict> conflicts) {
+        if (!c.field().equals(RECORD)) {
+            return Optional.empty();
+        }
+        Map<String, Object> fields = PortableFields.parse(c.mine().equals("null") ? c.theirs() : c.mine());
+        for (Map.Entry<String, PortableTable> owner : c.table().ownerFields().entrySet()) {
+            Object key = fields.get(owner.getKey());
+            if (key != null && conflicts.stream().anyMatch(x -> x.open() && x.field().equals(RECORD)
+                    && x.table() == owner.getValue() && x.key().equals(key.toString()))) {
+                return Optional.of(owner.getValue().workbookTable() + " " + key);
+            }
+        }
+        return Optional.empty();
+    }
+
+    /**
      * A person's choice for an open conflict, made in the workbook before the next sync carries it
      * out: keeping theirs changes the workbook now (an audited update); keeping mine makes the base
      * the server's value, so that the sync that follows pushes mine as an edit made here (an
-     * audited update on the server).
+     * audited update on the server). A conflict over a whole record resolves the open whole-record
+     * conflicts of the records belonging to it with the same choice ({@link ConflictFamily}).
      */
     public static SyncLedger.Conflict resolve(Workbook workbook, long conflictId, boolean keepMine, String by) {
         SyncLedger ledger = workbook.syncLedger();
-        SyncLedger.Conflict cf = ledger.conflicts().stream().filter(x -> x.id() == conflictId && x.open()).findFirst()
+        List<SyncLedger.Conflict> all = ledger.conflicts();
+        SyncLedger.Conflict cf = all.stream().filter(x -> x.id() == conflictId && x.open()).findFirst()
                 .orElseThrow(() -> new SyncRefusedException("no open conflict " + conflictId
                         + "; `sync` lists the open ones"));
         WorkbookRecords records = workbook.records();
         workbook.inTransaction(() -> {
+            if (cf.field().equals(RECORD)) {
+                new ConflictFamily(cf, all).resolve(records, ledger, keepMine, by);
+                return;
+            }
             PortableTable t = cf.table();
             Map<String, Object> m = records.readAll().get(t).get(cf.key());
             SyncLedger.Base b = ledger.bases().get(t).get(cf.key());
             long revision = b == null ? 0 : b.revision();
-            if (cf.field().equals(RECORD)) {
-                Map<String, Object> theirs = cf.theirs().equals("null") ? null : PortableFields.parse(cf.theirs());
-                if (!keepMine) {
-                    if (theirs == null) {
-                        records.remove(t, cf.key());
-                    } else {
-                        records.put(t, cf.key(), theirs, null);
-                    }
-                }
-                if (theirs == null) {
-                    ledger.removeBase(t, cf.key());
-                } else {
-                    ledger.putBase(t, cf.key(), new SyncLedger.Base(PortableFields.json(theirs), revision));
-                }
-            } else {
-                Object theirs = PortableFields.parseValue(cf.theirs());
-                Map<String, Object> base = new LinkedHashMap<>(b == null ? m : PortableFields.parse(b.fieldsJson()));
-                if (b == null) {
-                    // never agreed: other fields still in question must not look agreed on my value
-                    ledger.conflicts().stream().filter(x -> x.open() && x.table() == t && x.key().equals(cf.key())
-                            && x.id() != cf.id()).forEach(x -> base.put(x.field(), null));
-                }
-                base.put(cf.field(), theirs);
-                if (!keepMine && m != null) {
-                    Map<String, Object> here = new LinkedHashMap<>(m);
-                    here.put(cf.field(), theirs);
-                    records.put(t, cf.key(), here, null);
-                }
-                ledger.putBase(t, cf.key(), new SyncLedger.Base(PortableFields.json(base), revision));
+            Object theirs = PortableFields.parseValue(cf.theirs());
+            Map<String, Object> base = new LinkedHashMap<>(b == null ? m : PortableFields.parse(b.fieldsJson()));
+            if (b == null) {
+                // never agreed: other fields still in question must not look agreed on my value
+                all.stream().filter(x -> x.open() && x.table() == t && x.key().equals(cf.key())
+                        && x.id() != cf.id()).forEach(x -> base.put(x.field(), null));
             }
+            base.put(cf.field(), theirs);
+            if (!keepMine && m != null) {
+                Map<String, Object> here = new LinkedHashMap<>(m);
+                here.put(cf.field(), theirs);
+                records.put(t, cf.key(), here, null);
+            }
+            ledger.putBase(t, cf.key(), new SyncLedger.Base(PortableFields.json(base), revision));
             ledger.resolved(cf.id(), keepMine ? "MINE" : "THEIRS", by, Instant.now());
         });
         return cf;

@@ -80,6 +80,23 @@ public enum PortableTable {
         return out;
     }
 
+    /** Each portable field that names another record, with the table that record is in. */
+    public Map<String, PortableTable> referenceFields() {
+        Map<String, PortableTable> out = new LinkedHashMap<>();
+        references.forEach((column, table) -> out.put(portableName(column), valueOf(table)));
+        return out;
+    }
+
+    /**
+     * The fields naming the record this one belongs to (a band its point, a path element its
+     * point, a bend its segment): part of its natural key, so it cannot outlive that record.
+     */
+    public Map<String, PortableTable> ownerFields() {
+        Map<String, PortableTable> out = new LinkedHashMap<>(referenceFields());
+        out.keySet().removeIf(f -> keyFields == null || !keyFields.contains(f));
+        return out;
+    }
+
     static String portableName(String idColumn) {
         return idColumn.substring(0, idColumn.length() - "_id".length());
     }

@@ -43,13 +43,15 @@ class ConcurrentPathEditsTest {
     @TempDir
     Path dir;
 
-    private PlantServerLaptops laptops;
     private String url;
 
     @BeforeEach
     void startServer() {
-        laptops = new PlantServerLaptops(dir, TECH);
-        url = laptops.url();
+        url = LocalPostgres.shared().newPlantServer(TECH);
+    }
+
+    private PlantServer server() {
+        return new PlantServer(new ServerLogin(url, TECH, null));
     }
 
     private Workbook laptopA() {
@@ -61,11 +63,12 @@ class ConcurrentPathEditsTest {
     }
 
     private Workbook cloneOf(String file) {
-        return laptops.cloneOf(file, "j.pell");
+        SiteClone.run(server(), DemoSite.site().name(), dir.resolve(file), "j.pell", SyncProgress.SILENT);
+        return Workbook.open(dir.resolve(file), "j.pell");
     }
 
     private SiteSync.Outcome sync(Workbook wb) {
-        return laptops.sync(wb);
+        return new SiteSync(server(), wb, wb.site().get().name(), SyncProgress.SILENT).run();
     }
 
     private static List<String> sendLabels(Workbook wb) {

@@ -53,6 +53,7 @@ class PathHistoryAcrossLaptopsTest {
     @TempDir
     Path dir;
 
+    private TwoLaptops laptops;
     private Workbook a;
     private Workbook b;
 
@@ -62,11 +63,9 @@ class PathHistoryAcrossLaptopsTest {
      */
     @BeforeEach
     void twoOfflineReplacements() {
-        PlantServerLaptops laptops = new PlantServerLaptops(dir, TECH);
-        a = Workbook.create(dir.resolve("a.strandbook"), DemoSite.site(), "k.ashdown");
-        DemoSite.populate(a);
-        laptops.sync(a);
-        b = laptops.cloneOf("b.strandbook", "j.pell");
+        laptops = new TwoLaptops(dir, TECH);
+        a = laptops.a;
+        b = laptops.b;
         a.maintenance().add(new MaintenanceAction(DemoSite.POINT_A, MaintenanceKind.REPLACE_SEGMENT, "C101-S2", D1,
                 "k.ashdown", "re-pulled by the long route", "crushed under a grating", Optional.of(longerS2())));
         b.maintenance().add(new MaintenanceAction(DemoSite.POINT_A, MaintenanceKind.REPLACE_CONNECTOR, "J2", D2,
@@ -78,10 +77,8 @@ class PathHistoryAcrossLaptopsTest {
 
     @AfterEach
     void close() {
-        for (Workbook wb : new Workbook[] {a, b}) {
-            if (wb != null) {
-                wb.close();
-            }
+        if (laptops != null) {
+            laptops.close();
         }
     }
 

@@ -66,6 +66,20 @@ class ServerSchemaTest {
     }
 
     @Test
+    void aServerNewerThanTheProgramIsRefusedBeforeAnythingIsWritten() throws SQLException {
+        // design choice: an older laptop would write as a newer schema no longer allows
+        String newer = LocalPostgres.shared().newPlantServer();
+        try (Connection c = LocalPostgres.shared().superuser(newer); Statement st = c.createStatement()) {
+            st.execute("INSERT INTO flyway_schema_history (installed_rank, version, description, type, script,"
+                    + " installed_by, execution_time, success) VALUES (99, '99', 'from the future', 'SQL', 'V99.sql',"
+                    + " 'x', 0, true)");
+        }
+        ServerException e = assertThrows(ServerException.class,
+                () -> new PlantServer(new ServerLogin(newer, LocalPostgres.SUPERUSER, null)).migrate());
+        assertTrue(e.getMessage().contains("is at schema 99, newer than this Strandbook knows"), e.getMessage());
+    }
+
+    @Test
     void theSchemaVersionTheProgramKnowsIsItsNewestScript() throws SQLException {
         try (Connection c = as(LocalPostgres.SUPERUSER); Statement st = c.createStatement();
              ResultSet rs = st.executeQuery("SELECT max(version::int) FROM flyway_schema_history")) {

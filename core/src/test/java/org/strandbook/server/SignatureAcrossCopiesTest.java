@@ -39,13 +39,15 @@ class SignatureAcrossCopiesTest {
     @TempDir
     Path dir;
 
-    private PlantServerLaptops laptops;
     private String url;
 
     @BeforeEach
     void startServer() {
-        laptops = new PlantServerLaptops(dir, TECH);
-        url = laptops.url();
+        url = LocalPostgres.shared().newPlantServer(TECH);
+    }
+
+    private PlantServer server() {
+        return new PlantServer(new ServerLogin(url, TECH, null));
     }
 
     private Workbook laptop(String file) {
@@ -57,11 +59,12 @@ class SignatureAcrossCopiesTest {
     }
 
     private Workbook cloneOf(String file) {
-        return laptops.cloneOf(file, TECH);
+        SiteClone.run(server(), DemoSite.site().name(), dir.resolve(file), TECH, SyncProgress.SILENT);
+        return Workbook.open(dir.resolve(file), TECH);
     }
 
     private void sync(Workbook wb) {
-        laptops.sync(wb);
+        new SiteSync(server(), wb, wb.site().get().name(), SyncProgress.SILENT).run();
     }
 
     private static SignOff siteApproval(Instant at) {

@@ -57,16 +57,21 @@ final class AuditVerifyCommand implements Callable<Integer> {
             out.flush();
             return StrandbookCommand.EXIT_OK;
         }
+        printFindings(report, out);
+        int problems = (report.chainBreak().isPresent() ? 1 : 0) + report.unrecordedChanges().size() + tampered.size();
+        spec.commandLine().getErr().println("strandbook: audit trail of " + workbook.file() + " is broken ("
+                + problems + " finding(s), " + report.rows() + " rows read)");
+        return StrandbookCommand.EXIT_REJECTED;
+    }
+
+    /** The first broken link and the first rows changed behind the trail's back, a line each. */
+    static void printFindings(AuditReport report, PrintWriter out) {
         report.chainBreak().ifPresent(f -> out.println(f.message()));
         List<AuditFinding> changes = report.unrecordedChanges();
         changes.stream().limit(FINDINGS_SHOWN).forEach(f -> out.println(f.message()));
         if (changes.size() > FINDINGS_SHOWN) {
-            out.println("... and " + (changes.size() - FINDINGS_SHOWN) + " more rows changed without Strandbook");
+            out.println("... and " + (changes.size() - FINDINGS_SHOWN) + " more records changed behind the trail");
         }
         out.flush();
-        int problems = (report.chainBreak().isPresent() ? 1 : 0) + changes.size() + tampered.size();
-        spec.commandLine().getErr().println("strandbook: audit trail of " + workbook.file() + " is broken ("
-                + problems + " finding(s), " + report.rows() + " rows read)");
-        return StrandbookCommand.EXIT_REJECTED;
     }
 }

@@ -3,14 +3,25 @@ package org.strandbook.app.cli;
 import java.time.Instant;
 import java.time.LocalDate;
 import java.time.ZoneOffset;
+import java.time.format.DateTimeFormatter;
 import java.time.format.DateTimeParseException;
+import java.util.Locale;
 
 import org.strandbook.handover.RecordedTime;
 
 /** The {@code --at} time of a record made in the field (see {@link RecordedTime}); a bad one is wrong usage. */
 final class FieldTime {
 
+    /** A moment as the tables print it: to the minute, UTC. */
+    private static final DateTimeFormatter SHOWN = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm", Locale.ROOT)
+            .withZone(ZoneOffset.UTC);
+
     private FieldTime() {
+    }
+
+    /** A moment for a table, to the minute in UTC (the column or line says UTC). */
+    static String shown(Instant at) {
+        return SHOWN.format(at);
     }
 
     /**

@@ -57,7 +57,12 @@ final class FleetCommand implements Callable<Integer> {
                 new String[] {"", "points", "points", "points", "points", "UTC"}).leftAligned(0, 5);
         for (FleetView.SiteCounts s : fleet.sites()) {
             sites.row(s.site(), Long.toString(s.pass()), Long.toString(s.review()), Long.toString(s.fail()),
-                    Long.toString(s.notEvaluated()), s.lastSync() == null ? "never" : s.lastSync().toString());
+                    Long.toString(s.notEvaluated()), s.lastSync() == null ? "never" : FieldTime.shown(s.lastSync()));
+        }
+        if (fleet.sites().isEmpty()) {
+            out.println("no site on this server that your login may read: a site appears at its first sync, and the"
+                    + " server's owner makes each technician a member of the sites they work on (README, Plant server)");
+            return;
         }
         sites.print(out);
         out.println();
@@ -75,7 +80,7 @@ final class FleetCommand implements Callable<Integer> {
             out.println("status changed since " + fleet.since() + ": " + fleet.changes().size() + " point(s)");
             for (FleetView.StatusChange c : fleet.changes()) {
                 out.println("  " + c.site() + " " + c.tag() + ": " + (c.before() == null ? "first reported " + c.after()
-                        : c.before() + " -> " + c.after()) + " (" + c.at() + ")");
+                        : c.before() + " -> " + c.after()) + " (" + FieldTime.shown(c.at()) + " UTC)");
             }
         }
     }

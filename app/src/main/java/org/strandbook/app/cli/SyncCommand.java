@@ -69,10 +69,13 @@ final class SyncCommand implements Callable<Integer> {
         PlantServer server = serverOptions.connect();
         try (Workbook wb = workbook.open()) {
             if (resolution != null) {
+                long openBefore = openConflicts(wb);
                 SyncLedger.Conflict c = SiteSync.resolve(wb, resolution.conflict, resolution.keep == Keep.mine,
                         workbook.user());
+                long withIt = openBefore - 1 - openConflicts(wb);
                 spec.commandLine().getErr().println("conflict " + c.id() + " resolved: keeping "
-                        + resolution.keep + " for " + describe(c));
+                        + resolution.keep + " for " + describe(c) + (withIt == 0 ? "" : ", with the " + withIt
+                        + " conflict(s) of the records belonging to it"));
             }
             String siteName = wb.syncLedger().peek().map(SyncLedger.State::siteName)
                     .orElseGet(() -> wb.site().get().name());
@@ -115,6 +118,10 @@ final class SyncCommand implements Callable<Integer> {
                     + " reported for the fleet view: " + e.getMessage());
             return 0;
         }
+    }
+
+    private static long openConflicts(Workbook wb) {
+        return wb.syncLedger().conflicts().stream().filter(SyncLedger.Conflict::open).count();
     }
 
     /** A side's value, text in its quotes (it may hold commas), a number with its unit. */

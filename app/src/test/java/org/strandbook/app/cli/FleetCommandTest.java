@@ -70,6 +70,22 @@ class FleetCommandTest {
     }
 
     @Test
+    void aServerWithNoSiteTheLoginMayReadSaysSoRatherThanPrintingAnEmptyTable() {
+        // design choice: an empty answer says why, as every refusal does
+        String empty = LocalPostgres.shared().newPlantServer(TECH);
+        CliRun run = CliRun.of("fleet", "--server", empty, "--server-user", TECH);
+        assertEquals(0, run.exitCode(), run.err());
+        assertTrue(run.out().startsWith("no site on this server that your login may read"), run.out());
+    }
+
+    @Test
+    void theLastSyncReadsToTheMinuteInUtc() {
+        CliRun run = CliRun.of("fleet", "--server", url, "--server-user", TECH);
+        assertTrue(run.out().matches("(?s).*Saltmarsh Ridge Works +\\d+ +\\d+ +\\d+ +\\d+ +\\d{4}-\\d{2}-\\d{2}"
+                + " \\d{2}:\\d{2}\\n.*"), run.out());
+    }
+
+    @Test
     void aDateAloneAfterSinceMeansFromTheStartOfThatDayInUtc() {
         // design choice: "changed since 2000-01-01" includes the whole of that day, unlike a record's
         // date alone, which is noon so that it falls on the same day in every time zone

@@ -48,6 +48,25 @@ class SyncCommandTest {
     }
 
     @Test
+    void theSitesTrailOnTheServerVerifiesFromTheCommandLineAndATamperedOneExitsOne() throws Exception {
+        assertEquals(0, sync(laptop).exitCode());
+        String[] verify = {"audit", "verify-server", "--server", url, "--server-user", TECH, "--site",
+            DemoSite.site().name()};
+        CliRun ok = CliRun.of(verify);
+        assertEquals(0, ok.exitCode(), ok.err());
+        assertTrue(ok.out().startsWith("server audit trail of site \"" + DemoSite.site().name() + "\" OK: "), ok.out());
+        // what only the database's owner can do, past the triggers
+        try (Connection c = LocalPostgres.shared().superuser(url); Statement st = c.createStatement()) {
+            st.execute("ALTER TABLE point DISABLE TRIGGER USER");
+            st.execute("UPDATE point SET fields = fields || '{\"service\":\"x\"}'");
+            st.execute("ALTER TABLE point ENABLE TRIGGER USER");
+        }
+        CliRun broken = CliRun.of(verify);
+        assertEquals(1, broken.exitCode(), broken.out());
+        assertTrue(broken.out().contains("it was changed past the server's triggers"), broken.out());
+    }
+
+    @Test
     void syncPushesThenFindsNothingNew() {
         CliRun first = sync(laptop);
         assertEquals(0, first.exitCode(), first.err());
@@ -89,6 +108,32 @@ class SyncCommandTest {
         CliRun unknown = sync(second, "--resolve", "1", "--keep", "theirs");
         assertEquals(1, unknown.exitCode());
         assertTrue(unknown.err().contains("no open conflict 1"), unknown.err());
+    }
+
+    @Test
+    void aPointRemovedThereAndEditedHereListsWhatWaitsWithItAndOneChoiceResolvesThemAll() {
+        assertEquals(0, sync(laptop).exitCode());
+        Path second = dir.resolve("second.strandbook");
+        assertEquals(0, CliRun.of("clone", "--server", url, "--server-user", TECH, "--site", DemoSite.site().name(),
+                second.toString()).exitCode());
+        try (Workbook wb = Workbook.open(laptop, "k.ashdown")) {
+            wb.points().delete(DemoSite.POINT_B);
+        }
+        editService(second, DemoSite.POINT_B, "feed, second train");
+        assertEquals(0, sync(laptop).exitCode());
+        CliRun conflicted = sync(second);
+        // design choice: the point's 2 bands, 6 path elements and 3 bends wait with it, each listed
+        assertTrue(conflicted.out().contains("conflict 1: point AT-102 (record): mine {"), conflicted.out());
+        assertTrue(conflicted.out().contains("12 conflict(s) wait for a choice"), conflicted.out());
+        CliRun resolved = sync(second, "--resolve", "1", "--keep", "mine");
+        assertEquals(0, resolved.exitCode(), resolved.err());
+        assertTrue(resolved.err().contains("with the 11 conflict(s) of the records belonging to it"), resolved.err());
+        assertFalse(resolved.out().contains("wait for a choice"), resolved.out());
+        assertEquals(0, sync(laptop).exitCode());
+        try (Workbook wb = Workbook.open(laptop, "k.ashdown")) {
+            assertEquals(DemoSite.legs(DemoSite.POINT_B, "C102"), wb.paths().legs(DemoSite.POINT_B),
+                    "nothing silently overwritten: the kept point comes back with its whole path");
+        }
     }
 
     @Test
@@ -138,8 +183,12 @@ class SyncCommandTest {
     }
 
     private static void editService(Path file, String service) {
+        editService(file, DemoSite.POINT_A, service);
+    }
+
+    private static void editService(Path file, String tag, String service) {
         try (Workbook wb = Workbook.open(file, "k.ashdown")) {
-            MeasurementPoint p = wb.points().get(DemoSite.POINT_A).orElseThrow();
+            MeasurementPoint p = wb.points().get(tag).orElseThrow();
             wb.points().save(new MeasurementPoint(p.tag(), service, p.location(), p.analyzerTag(), p.channel(),
                     p.probeTypeCode(), p.bands(), p.toleranceDb(), p.hazardousArea(), p.hydrogenService(),
                     p.processTemperatureC()));

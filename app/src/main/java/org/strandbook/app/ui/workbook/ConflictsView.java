@@ -57,9 +57,10 @@ final class ConflictsView {
         heading.textProperty().bind(Bindings.createStringBinding(() -> vm.openConflictsProperty().get() == 0
                 ? "No edit to settle. A field edited both here and on the plant server since the last sync waits here"
                   + " for your choice; nothing is overwritten until you choose."
-                : vm.openConflictsProperty().get() + " field(s) were edited both here and on the plant server. Keep"
-                  + " this workbook's value (sent with the next sync) or take the server's; each choice is recorded"
-                  + " in the audit trail.", vm.openConflictsProperty()));
+                : vm.openConflictsProperty().get() + " edit(s) wait for a choice: a field edited both here and on the"
+                  + " plant server, or a whole record removed on one side and changed on the other (what belongs to"
+                  + " it waits with it and follows its choice). Keep this workbook's value (sent with the next sync)"
+                  + " or take the server's; each choice is recorded in the audit trail.", vm.openConflictsProperty()));
         heading.setWrapText(true);
         heading.setMinHeight(Region.USE_PREF_SIZE);
         // a value too long for its column is read whole here

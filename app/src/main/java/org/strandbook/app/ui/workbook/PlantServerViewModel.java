@@ -19,6 +19,7 @@ import javafx.beans.property.ReadOnlyStringWrapper;
 import org.strandbook.app.ui.task.TaskExecutor;
 import org.strandbook.server.ServerLogin;
 import org.strandbook.server.SiteSync;
+import org.strandbook.store.SyncLedger;
 
 /**
  * The window's side of a plant server: opening a site from it (a clone), syncing the open
@@ -272,8 +273,11 @@ public final class PlantServerViewModel {
     }
 
     private void refreshConflicts() {
-        tasks.submit("Reading the sync state", p -> new SyncStanding(service.syncedServer().orElse(""),
-                service.openConflicts().stream().map(ConflictRow::of).toList()), standing -> {
+        tasks.submit("Reading the sync state", p -> {
+            List<SyncLedger.Conflict> open = service.openConflicts();
+            return new SyncStanding(service.syncedServer().orElse(""),
+                    open.stream().map(c -> ConflictRow.of(c, open)).toList());
+        }, standing -> {
                     server.set(standing.server());
                     conflicts.set(standing.conflicts());
                     openConflicts.set(standing.conflicts().size());
