@@ -12,9 +12,9 @@ import org.postgresql.PGConnection;
 import org.postgresql.copy.CopyIn;
 
 /**
- * The floor of the sync benchmark: the same scan rows read from the workbook file with a bare
- * SELECT and loaded by PostgreSQL's COPY (the fastest bare way in; faster here than a batch of
- * INSERTs, rewritten or not), in one transaction, into a table of the server's scan shape (site,
+ * The sync benchmark's second floor, printed beside the ratio: the same scan rows read from the
+ * workbook file with a bare SELECT and loaded by PostgreSQL's COPY (the fastest bare way in, which
+ * a technician's login cannot take into a table under row-level security), in one transaction, into a table of the server's scan shape (site,
  * key, fields as jsonb, spectrum as bytea, the same primary key) with no trigger, no row-level
  * security, no audit and no bookkeeping: what SQLite and PostgreSQL themselves cost for the copy.
  */

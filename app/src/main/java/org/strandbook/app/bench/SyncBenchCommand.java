@@ -30,12 +30,13 @@ import picocli.CommandLine.Spec;
 /**
  * {@code strandbook bench sync}: the listing bench's workbook (P points, a weekly scan for W weeks:
  * 52,000 scans by default) pushed by a first sync into an empty plant server, against the floor of
- * a bare JDBC copy of the same scan rows into a table of the same shape, in the same run on the same
+ * a bare JDBC batch insert of the same scan rows into a table of the same shape (and, printed beside
+ * it, a bare COPY of them), in the same run on the same
  * server. Reports the server's bytes per scan and what that means for one server's capacity.
  */
 @Command(name = "sync", mixinStandardHelpOptions = true,
         description = "A first sync of P points x W weekly scans into an empty plant server (a scratch PostgreSQL "
-            + "started from the OS package's binaries), against a bare JDBC batch copy of the same rows; bytes per "
+            + "started from the OS package's binaries), against a bare JDBC batch insert of the same rows (and a bare COPY); bytes per "
             + "scan on the server; last line 'ratio: R'.")
 public final class SyncBenchCommand implements Callable<Integer> {
 
