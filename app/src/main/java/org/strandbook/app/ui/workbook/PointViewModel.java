@@ -3,6 +3,7 @@ package org.strandbook.app.ui.workbook;
 import java.time.ZoneOffset;
 import java.time.format.DateTimeFormatter;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Collections;
 import java.util.List;
 import java.util.Locale;
@@ -87,6 +88,8 @@ public final class PointViewModel {
     private final UncertaintyViewModel uncertainty;
     /** The prediction's coverage band as the plots shade it, once worked out. */
     private CoverageBand coverageBand;
+    /** Whether the latest scan went through the path shown today, so that today's coverage band fits its plot. */
+    private boolean measuredOnTodaysPath;
 
     private final ReadOnlyStringWrapper context = new ReadOnlyStringWrapper(this, "context", "No point selected");
     private final ReadOnlyStringWrapper summary = new ReadOnlyStringWrapper(this, "summary", "");
@@ -411,12 +414,16 @@ public final class PointViewModel {
             measuredPlot.clear(measuredTitle(), evaluation.finding());
             return;
         }
-        PredictedBudget budget = prediction.budget().orElse(evaluation.predicted());
+        // the scan is drawn against the path it went through, as the verdict judged it: a replacement
+        // recorded after the scan changes today's path, not the light that scan saw
+        PredictedBudget budget = evaluation.predicted();
+        measuredOnTodaysPath = prediction.budget().map(today -> !today.grid().equals(budget.grid())
+                || Arrays.equals(today.totalLossDb(), budget.totalLossDb())).orElse(false);
         measuredPlot.show(measuredTitle() + evaluation.latest().map(p -> ", scan of "
                         + DAY.format(p.loop().takenAt())).orElse(""),
                 PointCurves.deviation(budget, evaluation.measured().get(),
                         evaluation.diagnosis().map(d -> d.fitted()).orElse(List.of())), ceilingDb());
-        measuredPlot.showBand(coverageBand);
+        measuredPlot.showBand(measuredOnTodaysPath ? coverageBand : null);
     }
 
     /** Shades the prediction's coverage band in both spectral plots, or removes it (null). */
@@ -425,7 +432,9 @@ public final class PointViewModel {
                 "predicted, %.0f %% coverage interval", 100 * spread.coverageProbability()), CurveStyle.GREY,
                 spread.grid().wavelengthsNm(), spread.lowDb(), spread.highDb());
         budgetPlot.showBand(coverageBand);
-        measuredPlot.showBand(evaluation == null || evaluation.measured().isEmpty() ? null : coverageBand);
+        // the band is today's path's: it belongs on the scan's plot only when the scan went through that path
+        measuredPlot.showBand(evaluation == null || evaluation.measured().isEmpty() || !measuredOnTodaysPath ? null
+                : coverageBand);
     }
 
     /**

@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -28,6 +29,8 @@ import org.strandbook.app.ui.task.DirectTaskExecutor;
 import org.strandbook.site.CableSegment;
 import org.strandbook.site.ConnectorType;
 import org.strandbook.site.DecisionRule;
+import org.strandbook.site.MaintenanceAction;
+import org.strandbook.site.MaintenanceKind;
 import org.strandbook.site.MeasurementPoint;
 import org.strandbook.site.PathLeg;
 import org.strandbook.store.Workbook;
@@ -211,6 +214,29 @@ class WorkbookViewModelTest {
         assertFalse(vm.point().measuredPlot().linesProperty().get().isEmpty());
         assertFalse(vm.point().trendPlot().linesProperty().get().isEmpty());
         assertTrue(vm.point().findingProperty().get().contains("OH"), vm.point().findingProperty().get());
+    }
+
+    private static List<?> runsOf(org.strandbook.app.ui.plot.SpectrumPlotModel plot, String label) {
+        return plot.linesProperty().get().stream().filter(l -> l.label().equals(label)).findFirst().orElseThrow()
+                .runs();
+    }
+
+    @Test
+    void aScanIsDrawnAgainstThePathItWentThroughNotOneReplacedAfterIt() {
+        // the verdict judges the scan against the path as it was (design choice, as the evaluation does):
+        // the plot beside it must show that same prediction, not today's
+        vm.selectPoint("AT-4101");
+        List<?> scanBefore = runsOf(vm.point().measuredPlot(), "predicted");
+        List<?> todayBefore = runsOf(vm.point().budgetPlot(), "predicted round trip");
+        vm.point().history().recordMaintenance(new MaintenanceAction("AT-4101", MaintenanceKind.REPLACE_SEGMENT,
+                "C4101-S2", Instant.parse("2026-11-20T09:00:00Z"), "K. Lindqvist", "re-pulled by the long route",
+                "crushed in the tray", Optional.of(new CableSegment("C4101-S2", "LOH-200", 160.0, List.of()))));
+        vm.selectPoint("AT-4102");
+        vm.selectPoint("AT-4101");
+        assertFalse(todayBefore.equals(runsOf(vm.point().budgetPlot(), "predicted round trip")),
+                "today's path is 140 m longer");
+        assertEquals(scanBefore, runsOf(vm.point().measuredPlot(), "predicted"),
+                "the scan of 2026-11-02 went through the 20 m cable");
     }
 
     @Test
