@@ -12,7 +12,9 @@ public enum Cause {
     BROKEN_FIBER("broken fiber or open connector"),
     CORE_SIZE_STEP("a smaller core somewhere in the path"),
     OH_OR_HYDROGEN("OH or hydrogen: the measured range cannot tell them apart"),
-    REFERENCE_OR_RECORDS("the loop loses less than predicted: the reference or the records are wrong");
+    REFERENCE_OR_RECORDS("the loop loses less than predicted: the reference or the records are wrong"),
+    RECORDS_LIST_MORE_LOSS("the loop loses less than predicted where the fiber's loss is high: the records list more"
+            + " fiber than the light went through");
 
     private final String words;
 

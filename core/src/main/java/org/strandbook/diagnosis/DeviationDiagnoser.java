@@ -11,7 +11,6 @@ import java.util.stream.Collectors;
 import org.strandbook.fit.ColumnPair;
 import org.strandbook.fit.CollinearityReport;
 import org.strandbook.fit.LeastSquaresProblem;
-import org.strandbook.fit.NnlsResult;
 import org.strandbook.fit.NonNegativeLeastSquares;
 import org.strandbook.optics.WavelengthGrid;
 import org.strandbook.optics.attenuation.AttenuationShapes;
@@ -72,6 +71,12 @@ public final class DeviationDiagnoser {
      * reference.
      */
     public static final double MIN_USABLE_ENERGY_SHARE = 1.0 / 3;
+    /**
+     * K: the largest change of a halogen lamp's colour temperature between reference and loop scan
+     * the drift term may stand for (design choice). 600 K is a fifth of a 3000 K filament's
+     * temperature: a lamp that far off is failing, not drifting. A fitted tilt beyond it is no lamp.
+     */
+    public static final double MAX_LAMP_DRIFT_K = 600;
 
     private final double minReportDb;
 
@@ -120,19 +125,33 @@ public final class DeviationDiagnoser {
             s[r] = Math.sqrt(noise * noise + MODEL_FLOOR_DB * MODEL_FLOOR_DB);
         }
         List<Column> columns = columns(grid, rows);
-        double[][] a = new double[columns.size()][];
-        List<Integer> signed = new ArrayList<>();
-        for (int j = 0; j < a.length; j++) {
-            a[j] = columns.get(j).values;
-            Signature sig = columns.get(j).signature;
-            if (sig == Signature.REFERENCE_DRIFT || sig == Signature.FLAT_EXCESS) {
-                signed.add(j);
+        double[][] a;
+        LeastSquaresProblem problem;
+        double[] x;
+        while (true) {
+            a = new double[columns.size()][];
+            List<Integer> signed = new ArrayList<>();
+            for (int j = 0; j < a.length; j++) {
+                a[j] = columns.get(j).values;
+                Signature sig = columns.get(j).signature;
+                if (sig == Signature.REFERENCE_DRIFT || sig == Signature.FLAT_EXCESS) {
+                    signed.add(j);
+                }
             }
+            problem = LeastSquaresProblem.ofColumns(a, b).withRowSigmas(s)
+                    .withSignedColumns(signed.stream().mapToInt(Integer::intValue).toArray());
+            x = NonNegativeLeastSquares.withDefaults().solve(problem).coefficients();
+            int drift = indexOf(columns, Signature.REFERENCE_DRIFT);
+            if (drift < 0 || Math.abs(x[drift] / lampDriftDbPerK(grid.firstNm(), grid.lastNm())) <= MAX_LAMP_DRIFT_K) {
+                break;
+            }
+            // a tilt no lamp makes: the signed drift term was pairing with a flat term of the other sign
+            // to draw a curve neither shape has (a shortfall that follows the fiber's own attenuation
+            // read as a flat excess); fitted again without it, that curve is left to the flat term
+            // and the residual, where it shows
+            columns = new ArrayList<>(columns);
+            columns.remove(drift);
         }
-        LeastSquaresProblem problem = LeastSquaresProblem.ofColumns(a, b).withRowSigmas(s)
-                .withSignedColumns(signed.stream().mapToInt(Integer::intValue).toArray());
-        NnlsResult fit = NonNegativeLeastSquares.withDefaults().solve(problem);
-        double[] x = fit.coefficients();
         double[] residual = problem.residual(x);
         columns = creditLampLevel(columns, x, grid, rows, minReportDb);
 
@@ -160,7 +179,8 @@ public final class DeviationDiagnoser {
             double share = totalEffect > 0 ? 100 * effect[j] / totalEffect : 0;
             if (c.signature == Signature.FLAT_EXCESS && x[j] < 0) {
                 FlatExcessRanking.betterThanPredicted(x[j], c.atNm, share, minReportDb,
-                        !measured.negativeLossRanges().isEmpty()).ifPresent(f -> {
+                        !measured.negativeLossRanges().isEmpty(), shortfall(grid, rows, b, predictedLossDb))
+                        .ifPresent(f -> {
                             findings.add(f);
                             peaks.put(f, -f.amountDb());
                         });
@@ -539,6 +559,16 @@ public final class DeviationDiagnoser {
 
     private static String words(Signature s) {
         return s.name().toLowerCase(Locale.ROOT).replace('_', ' ');
+    }
+
+    private static Shortfall shortfall(WavelengthGrid grid, int[] rows, double[] deviationDb, double[] predictedLossDb) {
+        double[] nm = new double[rows.length];
+        double[] predicted = new double[rows.length];
+        for (int r = 0; r < rows.length; r++) {
+            nm[r] = grid.wavelengthNm(rows[r]);
+            predicted[r] = predictedLossDb[rows[r]];
+        }
+        return Shortfall.of(nm, deviationDb, predicted);
     }
 
     private static int[] usableRows(boolean[] usable) {

@@ -40,24 +40,47 @@ final class FlatExcessRanking {
     }
 
     /**
-     * The loop loses {@code -amountDb} less than predicted at every wavelength. Fibers do not gain
-     * light, so the reference or the records are wrong (one-cord method: IEC 61280-4-1, from memory).
+     * The loop loses less than predicted ({@code amountDb} is the fitted flat amount, negative).
+     * Fibers do not gain light, so the reference or the records are wrong (one-cord method: IEC
+     * 61280-4-1, from memory). When the shortfall is one amount everywhere it is stated as such; when
+     * it differs across the range it is stated at both ends, and when it follows the predicted loss
+     * itself the records come first: they list more fiber (or a lossier one) than the light went through.
      */
     static Optional<Finding> betterThanPredicted(double amountDb, double atNm, double share, double minReportDb,
-                                                 boolean negativeLoss) {
+                                                 boolean negativeLoss, Shortfall shortfall) {
         if (-amountDb < Math.max(minReportDb, BETTER_THAN_PREDICTED_DB)) {
             return Optional.empty();
         }
-        String text = String.format(Locale.ROOT, "the loop loses ≈%.1f dB less than predicted at every wavelength:"
-                + " a fiber cannot gain light, so suspect the reference or the records. Check that the reference was"
-                + " taken through the launch cord alone (not a different cord, not through more than the cord), at"
-                + " the loop scan's integration time, and that every joint, cord and probe the records list is"
-                + " really in the path; re-take the reference before trusting this point's verdicts", -amountDb);
+        String check = " Check that the reference was taken through the launch cord alone (not a different cord, not"
+                + " through more than the cord), at the loop scan's integration time, and that every joint, cord and"
+                + " probe the records list is really in the path; re-take the reference before trusting this point's"
+                + " verdicts";
+        String text;
+        Cause cause = Cause.REFERENCE_OR_RECORDS;
+        double amount = amountDb;
+        double at = atNm;
+        if (shortfall.flat(amountDb)) {
+            text = String.format(Locale.ROOT, "the loop loses ≈%.1f dB less than predicted at every wavelength:"
+                    + " a fiber cannot gain light, so suspect the reference or the records.", -amountDb) + check;
+        } else {
+            String range = String.format(Locale.ROOT, "the loop loses less than predicted by ≈%.1f dB at %.0f nm"
+                    + " and ≈%.1f dB at %.0f nm, not by one amount", -shortfall.shortDb(), shortfall.shortNm(),
+                    -shortfall.longDb(), shortfall.longNm());
+            amount = shortfall.worstDb();
+            at = shortfall.worstNm();
+            if (shortfall.followsPredicted()) {
+                cause = Cause.RECORDS_LIST_MORE_LOSS;
+                text = range + ": it falls short where the predicted loss is high, which is the shape of fiber the"
+                        + " light did not go through. Check the recorded cable lengths (a 10\u00D7 slip such as"
+                        + " 1020 m for 102 m) and fiber types first, then the reference." + check;
+            } else {
+                text = range + ": a fiber cannot gain light, so suspect the reference or the records." + check;
+            }
+        }
         if (negativeLoss) {
             text += "; the loss is even below zero in places, which only a bad reference explains";
         }
-        return Optional.of(new Finding(Signature.FLAT_EXCESS, List.of(Cause.REFERENCE_OR_RECORDS), amountDb, atNm,
-                share, "", text));
+        return Optional.of(new Finding(Signature.FLAT_EXCESS, List.of(cause), amount, at, share, "", text));
     }
 
     private static Finding withCoreStep(Finding f, CoreSizeStep step, PathEvidence evidence) {

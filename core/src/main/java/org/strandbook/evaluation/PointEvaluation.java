@@ -108,6 +108,8 @@ public record PointEvaluation(MeasurementPoint point, Status status, PredictedBu
         return Double.isInfinite(f.amountDb()) ? "no light"
                 : f.signature() == Signature.FRINGES
                 ? String.format(Locale.ROOT, "ripple of %.2f dB peak to peak", 2 * f.amountDb())
+                : f.cause() == Cause.RECORDS_LIST_MORE_LOSS
+                ? String.format(Locale.ROOT, "up to ≈%.1f dB under prediction, at %.0f nm", -f.amountDb(), f.atNm())
                 : f.cause() == Cause.REFERENCE_OR_RECORDS
                 ? String.format(Locale.ROOT, "≈%.1f dB under prediction", -f.amountDb())
                 : Double.isNaN(f.atNm()) || f.signature() == Signature.FLAT_EXCESS

@@ -221,6 +221,34 @@ class FindingStatementsTest {
         assertTrue(f.text().contains("re-take the reference"), f.text());
     }
 
+    /**
+     * Intrinsic loss of silica fiber, dB/km: Rayleigh scattering 0.85/λ⁴ plus the infrared absorption
+     * edge 7.81·10¹¹·exp(−48.48/λ), λ in µm (the usual textbook pair for germanosilicate fiber, from
+     * memory) — not the diagnoser's shapes.
+     */
+    private static double silicaDbPerKm(double wavelengthNm) {
+        double um = wavelengthNm / 1000;
+        return 0.85 / Math.pow(um, 4) + 7.81e11 * Math.exp(-48.48 / um);
+    }
+
+    @Test
+    void recordsListingFiberTheLightDidNotCrossAreNamedWithTheShortfallAtBothEnds() {
+        // the records hold 5 km more fiber than the light went through: the prediction carries 5 km of
+        // silica's loss (A = α·L, TIA/EIA-455-46-A) that the measurement lacks, 4.3 dB at 1000 nm and
+        // about 1.4 dB near 1600 nm, so no single amount "at every wavelength" is true
+        double extraKm = 5;
+        double[] predicted = predicted(INGAAS);
+        for (int i = 0; i < predicted.length; i++) {
+            predicted[i] += extraKm * silicaDbPerKm(INGAAS.wavelengthNm(i));
+        }
+        Diagnosis d = DeviationDiagnoser.withDefaults().diagnose(measured(INGAAS, w -> 0.0, 19), predicted, LOW_OH_PATH);
+        Finding f = d.first().orElseThrow();
+        assertEquals(Cause.RECORDS_LIST_MORE_LOSS, f.cause(), f.text());
+        assertFalse(f.text().contains("at every wavelength"), f.text());
+        assertEquals(-extraKm * silicaDbPerKm(f.atNm()), f.amountDb(), 0.3, f.text());
+        assertTrue(f.text().contains("recorded cable lengths"), f.text());
+    }
+
     @Test
     void loopAFewTenthsUnderBudgetIsNoFinding() {
         // connector allowances are conservative; 1.0 dB is the reporting floor for a shortfall (design choice)
